@@ -1,0 +1,38 @@
+import type { RouteRecordRaw } from 'vue-router';
+
+declare module 'vue-router' {
+  interface RouteMeta {
+    /** Only for a signed-in user. */
+    auth?: boolean;
+    /** Only for an admin. */
+    admin?: boolean;
+    /** A page for signed-out visitors (sign in, sign up, reset). */
+    guest?: boolean;
+  }
+}
+
+export const routes: RouteRecordRaw[] = [
+  {
+    path: '/',
+    component: () => import('../layouts/MainLayout.vue'),
+    children: [
+      { path: '', redirect: '/library' },
+      { path: 'library', name: 'library', component: () => import('../pages/LibraryPage.vue'), meta: { auth: true } },
+      { path: 'admin', redirect: '/admin/users' },
+      { path: 'admin/users', name: 'admin-users', component: () => import('../pages/AdminUsersPage.vue'), meta: { auth: true, admin: true } },
+      { path: 'admin/outbox', name: 'admin-outbox', component: () => import('../pages/AdminOutboxPage.vue'), meta: { auth: true, admin: true } },
+    ],
+  },
+  {
+    path: '/',
+    component: () => import('../layouts/AuthLayout.vue'),
+    children: [
+      { path: 'signin', name: 'signin', component: () => import('../pages/SignInPage.vue'), meta: { guest: true } },
+      { path: 'signup', name: 'signup', component: () => import('../pages/SignUpPage.vue'), meta: { guest: true } },
+      { path: 'forgot', name: 'forgot', component: () => import('../pages/ForgotPasswordPage.vue'), meta: { guest: true } },
+      { path: 'reset', name: 'reset', component: () => import('../pages/ResetPasswordPage.vue') },
+    ],
+  },
+  // Always last: anything else is a page we do not have.
+  { path: '/:catchAll(.*)*', name: 'not-found', component: () => import('../pages/NotFoundPage.vue') },
+];
