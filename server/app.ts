@@ -1,0 +1,41 @@
+import express, { type Express } from 'express';
+import compression from 'compression';
+import type { Sequelize } from 'sequelize';
+import type { ServerConfig } from './config';
+import { securityHeaders } from './middleware/security';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { clientApp } from './middleware/client-app';
+import { healthRoutes } from './routes/health';
+
+/** Largest JSON body accepted; a sketch file is a few tens of KB. */
+export const JSON_BODY_LIMIT = '256kb';
+
+/** What the app needs from outside: the open database and the settings. */
+export interface AppContext {
+  sequelize: Sequelize;
+  config: ServerConfig;
+}
+
+/** Builds the Express app (no listening; tests drive it with supertest). */
+export function createApp(ctx: AppContext): Express {
+  const { config } = ctx;
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', config.trustProxy);
+  app.set('query parser', 'simple');
+
+  app.use(securityHeaders({ https: config.cookieSecure }));
+  app.use(compression());
+
+  const api = express.Router();
+  api.use(express.json({ limit: JSON_BODY_LIMIT }));
+  api.use(healthRoutes(ctx.sequelize));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  const client = clientApp(config.distDir);
+  if (client) app.use(client);
+
+  app.use(errorHandler);
+  return app;
+}

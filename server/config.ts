@@ -1,0 +1,77 @@
+import path from 'node:path';
+
+/** Server settings, read once from the environment. Every field has a working default for local use. */
+export interface ServerConfig {
+  /** TCP port the HTTP server listens on. */
+  port: number;
+  /** SQLite database file. */
+  databasePath: string;
+  /** Folder for uploaded files (tracing photos); never served statically. */
+  uploadsDir: string;
+  /** Origin used in links inside e-mails, without a trailing slash. */
+  publicUrl: string;
+  /** When set, mail goes to this SMTP server and the local mail catcher stays off. */
+  smtpUrl: string | null;
+  /** Sender address of outgoing mail. */
+  mailFrom: string;
+  /** Secret that signs the session cookie. */
+  sessionSecret: string;
+  /** Send the session cookie only over HTTPS. */
+  cookieSecure: boolean;
+  /** Express 'trust proxy' setting (hops or a list), or false. */
+  trustProxy: boolean | number | string;
+  /** Session ends after this long without a request (ms). */
+  sessionIdleMs: number;
+  /** Session ends this long after sign-in whatever the activity (ms). */
+  sessionAbsoluteMs: number;
+  /** Failed sign-ins allowed per account, and per address, within `loginWindowMs`. */
+  loginMaxPerAccount: number;
+  loginMaxPerAddress: number;
+  loginWindowMs: number;
+  /** Folder of the built client; served when it exists. */
+  distDir: string;
+}
+
+const MINUTE_MS = 60_000;
+const HOUR_MS = 60 * MINUTE_MS;
+
+function intFrom(value: string | undefined, fallback: number, name: string): number {
+  if (value === undefined || value === '') return fallback;
+  const n = Number(value);
+  if (!Number.isInteger(n) || n < 0) throw new Error(`${name} must be a non-negative whole number, got "${value}"`);
+  return n;
+}
+
+function trustProxyFrom(value: string | undefined): boolean | number | string {
+  if (value === undefined || value === '' || value === '0' || value === 'false') return false;
+  if (value === '1' || value === 'true') return 1;
+  const n = Number(value);
+  return Number.isInteger(n) ? n : value;
+}
+
+/** Reads the configuration from `env` (process.env by default). Throws naming the variable on a bad value. */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
+  const root = process.cwd();
+  const publicUrl = (env.PUBLIC_URL || 'http://localhost:3000').replace(/\/+$/, '');
+  const production = env.NODE_ENV === 'production';
+  const sessionSecret = env.SESSION_SECRET || '';
+  if (production && !sessionSecret) throw new Error('SESSION_SECRET must be set when NODE_ENV=production');
+  return {
+    port: intFrom(env.PORT, 3000, 'PORT'),
+    databasePath: path.resolve(root, env.DATABASE_PATH || 'data/arcwright.sqlite'),
+    uploadsDir: path.resolve(root, env.UPLOADS_DIR || 'data/uploads'),
+    publicUrl,
+    smtpUrl: env.SMTP_URL || null,
+    mailFrom: env.MAIL_FROM || 'Arcwright <no-reply@arcwright.demo.test>',
+    // A fixed development secret keeps sessions across restarts on a laptop; production must set its own.
+    sessionSecret: sessionSecret || 'arcwright-development-secret-change-me',
+    cookieSecure: env.COOKIE_SECURE === '1' || env.COOKIE_SECURE === 'true',
+    trustProxy: trustProxyFrom(env.TRUST_PROXY),
+    sessionIdleMs: intFrom(env.SESSION_IDLE_MINUTES, 120, 'SESSION_IDLE_MINUTES') * MINUTE_MS,
+    sessionAbsoluteMs: intFrom(env.SESSION_ABSOLUTE_HOURS, 24, 'SESSION_ABSOLUTE_HOURS') * HOUR_MS,
+    loginMaxPerAccount: intFrom(env.LOGIN_MAX_PER_ACCOUNT, 5, 'LOGIN_MAX_PER_ACCOUNT'),
+    loginMaxPerAddress: intFrom(env.LOGIN_MAX_PER_ADDRESS, 50, 'LOGIN_MAX_PER_ADDRESS'),
+    loginWindowMs: 15 * MINUTE_MS,
+    distDir: path.resolve(root, env.DIST_DIR || 'dist'),
+  };
+}

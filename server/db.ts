@@ -1,0 +1,67 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { Sequelize, Transaction } from 'sequelize';
+import { initModels } from './models';
+
+/** How long a connection waits for another's write lock before giving up (ms). */
+export const BUSY_TIMEOUT_MS = 10_000;
+
+/** Statements every SQLite connection runs before its first query. */
+const CONNECTION_PRAGMAS = [
+  'PRAGMA journal_mode = WAL',
+  'PRAGMA foreign_keys = ON',
+  `PRAGMA busy_timeout = ${BUSY_TIMEOUT_MS}`,
+  'PRAGMA synchronous = NORMAL',
+];
+
+interface RawSqliteConnection {
+  run(sql: string, cb: (err: Error | null) => void): void;
+}
+
+function runOn(connection: RawSqliteConnection, sql: string): Promise<void> {
+  return new Promise((resolve, reject) => connection.run(sql, (err) => (err ? reject(err) : resolve())));
+}
+
+/**
+ * Sequelize's sqlite dialect opens a fresh connection for every transaction (keyed by the
+ * transaction id) besides its default one, and has no hook for new connections. Its
+ * connection manager's getConnection is the single place they open, so the pragmas are run
+ * there, once per connection, and awaited before the connection is handed out.
+ */
+function applyPragmasOnEveryConnection(sequelize: Sequelize): void {
+  const manager = sequelize.connectionManager as unknown as {
+    getConnection(options?: object): Promise<RawSqliteConnection>;
+  };
+  const original = manager.getConnection.bind(manager);
+  const configured = new WeakMap<RawSqliteConnection, Promise<void>>();
+  manager.getConnection = async (options?: object) => {
+    const connection = await original(options);
+    let ready = configured.get(connection);
+    if (!ready) {
+      ready = (async () => {
+        for (const sql of CONNECTION_PRAGMAS) await runOn(connection, sql);
+      })();
+      configured.set(connection, ready);
+    }
+    await ready;
+    return connection;
+  };
+}
+
+/** Opens (creating when missing) the SQLite file and binds the models to it. Run migrations next. */
+export async function openDatabase(databasePath: string): Promise<Sequelize> {
+  fs.mkdirSync(path.dirname(databasePath), { recursive: true });
+  const sequelize = new Sequelize({
+    dialect: 'sqlite',
+    storage: databasePath,
+    logging: false,
+    // Writers take the lock at BEGIN, so a read-then-write transaction never fails half way
+    // with SQLITE_BUSY when another writer got in between.
+    transactionType: Transaction.TYPES.IMMEDIATE,
+    retry: { max: 3 },
+  });
+  applyPragmasOnEveryConnection(sequelize);
+  initModels(sequelize);
+  await sequelize.authenticate();
+  return sequelize;
+}

@@ -1,0 +1,54 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { ZodError } from 'zod';
+import { HttpError } from './http-error';
+import { zodProblems } from './validate';
+
+const JSON_LIMIT_TEXT = '256 KB';
+
+interface FrameworkError {
+  status?: number;
+  statusCode?: number;
+  type?: string;
+  code?: string;
+  name?: string;
+  message?: string;
+}
+
+/** Maps whatever reached the handler onto a status and a message the caller may see. */
+function describe(err: unknown): { status: number; error: string; details?: unknown } {
+  if (err instanceof HttpError) return { status: err.status, error: err.message, details: err.details };
+  if (err instanceof ZodError) return { status: 400, error: 'invalid request', details: zodProblems(err) };
+  const e = (err ?? {}) as FrameworkError;
+  // body-parser
+  if (e.type === 'entity.too.large') return { status: 413, error: `request body is larger than ${JSON_LIMIT_TEXT}` };
+  if (e.type === 'entity.parse.failed') return { status: 400, error: 'request body is not valid JSON' };
+  if (e.type === 'encoding.unsupported' || e.type === 'charset.unsupported') {
+    return { status: 415, error: 'unsupported request encoding' };
+  }
+  // csrf-sync
+  if (e.code === 'EBADCSRFTOKEN') return { status: 403, error: 'missing or invalid CSRF token' };
+  // multer
+  if (e.name === 'MulterError') {
+    if (e.code === 'LIMIT_FILE_SIZE') return { status: 413, error: 'file is larger than 10 MB' };
+    return { status: 400, error: `upload refused: ${e.message ?? 'bad form'}` };
+  }
+  if (e.name === 'SequelizeUniqueConstraintError') return { status: 409, error: 'that record already exists' };
+  const status = e.status ?? e.statusCode;
+  if (typeof status === 'number' && status >= 400 && status < 500) {
+    return { status, error: e.message || 'bad request' };
+  }
+  return { status: 500, error: 'internal error' };
+}
+
+/** The one error handler: answers `{ error, details? }`, never a stack trace; logs server faults. */
+export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
+  const { status, error, details } = describe(err);
+  if (status >= 500) console.error(`[arcwright] ${req.method} ${req.originalUrl} failed:`, err);
+  if (res.headersSent) return;
+  res.status(status).json(details === undefined ? { error } : { error, details });
+};
+
+/** JSON 404 for any /api path no route answered. */
+export const apiNotFound: RequestHandler = (req, res) => {
+  res.status(404).json({ error: `no such API route: ${req.method} ${req.path}` });
+};

@@ -1,0 +1,17 @@
+import type { ZodError, ZodType } from 'zod';
+import { badRequest } from './http-error';
+
+/** One line per problem, naming the path: "email: Invalid email address". */
+export function zodProblems(err: ZodError): string[] {
+  return err.issues.map((issue) => {
+    const where = issue.path.length ? issue.path.map(String).join('.') : '(body)';
+    return `${where}: ${issue.message}`;
+  });
+}
+
+/** Parses `value` with `schema`, or throws 400 with the problems. */
+export function parseOr400<T>(schema: ZodType<T>, value: unknown, message = 'invalid request'): T {
+  const result = schema.safeParse(value);
+  if (!result.success) throw badRequest(message, zodProblems(result.error));
+  return result.data;
+}

@@ -1,0 +1,31 @@
+import type { QueryInterface, Sequelize } from 'sequelize';
+import { SequelizeStorage, Umzug, type MigrationParams } from 'umzug';
+import * as accounts from './0001-accounts';
+
+/** A migration step: receives the query interface, never the models (they change, migrations do not). */
+export type Migration = (params: MigrationParams<QueryInterface>) => Promise<void>;
+
+interface MigrationModule {
+  up: Migration;
+  down: Migration;
+}
+
+/** Every migration, in order. Add new files at the end; never edit one that has shipped. */
+const steps: [name: string, module: MigrationModule][] = [
+  ['0001-accounts', accounts],
+];
+
+export function createMigrator(sequelize: Sequelize): Umzug<QueryInterface> {
+  return new Umzug<QueryInterface>({
+    migrations: steps.map(([name, module]) => ({ name, up: module.up, down: module.down })),
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'migrations' }),
+    logger: undefined,
+  });
+}
+
+/** Applies every pending migration; returns the names applied. */
+export async function migrate(sequelize: Sequelize): Promise<string[]> {
+  const applied = await createMigrator(sequelize).up();
+  return applied.map((m) => m.name);
+}

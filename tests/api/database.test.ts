@@ -1,0 +1,52 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { QueryTypes } from 'sequelize';
+import { startTestServer, type TestServer } from './helpers';
+import { BUSY_TIMEOUT_MS } from '../../server/db';
+import { User } from '../../server/models';
+import { seedDemoData } from '../../server/seed';
+
+let server: TestServer;
+beforeAll(async () => { server = await startTestServer(); });
+afterAll(async () => { await server.close(); });
+
+type PragmaRow = Record<string, unknown>;
+
+async function readPragmas(opts: object = {}) {
+  const q = (sql: string) => server.sequelize.query<PragmaRow>(sql, { type: QueryTypes.SELECT, ...opts });
+  const [journal] = await q('PRAGMA journal_mode');
+  const [fk] = await q('PRAGMA foreign_keys');
+  const [busy] = await q('PRAGMA busy_timeout');
+  return { journal: journal.journal_mode, foreignKeys: fk.foreign_keys, busy: Object.values(busy)[0] };
+}
+
+describe('SQLite connection settings', () => {
+  it('are in force on the default connection', async () => {
+    expect(await readPragmas()).toEqual({ journal: 'wal', foreignKeys: 1, busy: BUSY_TIMEOUT_MS });
+  });
+
+  it('are in force on the separate connection a transaction opens', async () => {
+    const inside = await server.sequelize.transaction((transaction) => readPragmas({ transaction }));
+    expect(inside).toEqual({ journal: 'wal', foreignKeys: 1, busy: BUSY_TIMEOUT_MS });
+  });
+
+  it('enforce foreign keys inside a transaction', async () => {
+    await expect(
+      server.sequelize.transaction((transaction) =>
+        server.sequelize.query('INSERT INTO class_members (classId, userId, createdAt, updatedAt) VALUES (999999, 999999, 0, 0)', { transaction }),
+      ),
+    ).rejects.toThrow(/FOREIGN KEY/);
+  });
+});
+
+describe('demo seed', () => {
+  it('creates the four demo accounts with their roles, and running it again adds nothing', async () => {
+    await seedDemoData(server.sequelize);
+    const users = await User.findAll({ order: [['email', 'ASC']] });
+    expect(users.map((u) => [u.email, u.role])).toEqual([
+      ['admin@demo.test', 'admin'],
+      ['instructor@demo.test', 'instructor'],
+      ['maker@demo.test', 'member'],
+      ['student@demo.test', 'member'],
+    ]);
+  });
+});
