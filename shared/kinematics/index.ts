@@ -1,0 +1,29 @@
+/**
+ * The kinematics core of Arcwright: pure TypeScript, no framework. Everything the
+ * client, the server and the command line use comes from here.
+ */
+export type {
+  Pose,
+  BodyPoses,
+  HeaveRow,
+  RollRow,
+  SweepEvent,
+  SweepEventKind,
+  SweepLimits,
+  SweepResult,
+  SweepOptions,
+  MemberReading,
+  DrivelineReading,
+  SidePoint,
+} from './types';
+export {
+  sketchSchema,
+  parseSketch,
+  checkSketch,
+  layouts,
+  bodyIds,
+  memberKinds,
+} from '../schema/sketch';
+export type { Sketch, SketchInput, Layout, BodyId, MovingBodyId, MemberKind, SketchPoint, SketchMember } from '../schema/sketch';
+export { SketchValidationError, isSketchValidationError } from '../schema/errors';
+export type { StarterParam, StarterSpec } from './starters/types';

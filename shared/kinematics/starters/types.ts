@@ -1,0 +1,21 @@
+import type { Layout, Sketch } from '../../schema/sketch';
+
+/** One number a starter is built from, with its unit and the range the dialog allows. */
+export interface StarterParam {
+  key: string;
+  label: string;
+  unit: 'mm' | 'deg' | 'N/mm' | '%';
+  default: number;
+  min: number;
+  max: number;
+}
+
+/** A ready layout to begin from: a few parameters in, a complete valid sketch out. */
+export interface StarterSpec {
+  layout: Layout;
+  label: string;
+  description: string;
+  params: StarterParam[];
+  /** Missing parameters take their defaults; values outside [min, max] are clamped. */
+  build(p?: Partial<Record<string, number>>): Sketch;
+}

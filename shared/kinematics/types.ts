@@ -1,0 +1,159 @@
+/**
+ * The sweep result: the contract of sketch-format.md ("Sweep result"), plus the agreed
+ * additions (`bodies` per row, `lengthChange` per member, `ride`, event `sweep`, and a
+ * few fields marked "addition" below). Every number is finite; "does not apply" or
+ * "does not exist" is `null`, never NaN.
+ * Lengths mm, angles degrees, rates N/mm, ratios and percentages plain numbers.
+ */
+import type { Deg, Mm, NPerMm } from '../units';
+import type { MovingBodyId } from '../schema/sketch';
+
+/**
+ * Pose of a moving body relative to its ride position: the translation of the body's
+ * reference point (mm) and the rotation R = Rz(yaw)·Ry(pitch)·Rx(roll) about it (deg),
+ * ISO 8855 signs: roll positive lifts the left side, pitch positive drops the nose,
+ * yaw positive turns the nose left. The axle's reference point is the midpoint of its
+ * wheel centres at ride; an arm's or knuckle's is its wheel centre.
+ */
+export interface Pose {
+  x: Mm;
+  y: Mm;
+  z: Mm;
+  roll: Deg;
+  pitch: Deg;
+  yaw: Deg;
+}
+
+export type BodyPoses = Partial<Record<MovingBodyId, Pose>>;
+
+/** Readings of one member at one row. */
+export interface MemberReading {
+  /** mm, between the member's two points */
+  length: Mm;
+  /** mm, length minus ride length (addition; for links in an over-constrained linkage this is their share of bind) */
+  lengthChange: Mm;
+  /** |d length / d travel| for shocks and springs in heave rows; absent otherwise */
+  motionRatio?: number;
+  /** N/mm, spring rate × motionRatio² (Barton & Fieldhouse §3.9) for springs with a rate, heave rows only (addition) */
+  wheelRate?: NPerMm;
+}
+
+/** Side-view (x–z) point, mm. */
+export interface SidePoint {
+  x: Mm;
+  z: Mm;
+}
+
+export interface DrivelineReading {
+  /** mm, output joint to pinion joint */
+  length: Mm;
+  /** mm, length minus ride length (positive: the slip yoke extends) */
+  plunge: Mm;
+  /** deg, operating angle of the output joint (gearbox shaft to driveshaft, in 3D) */
+  outputAngle: Deg;
+  /** deg, operating angle of the pinion joint (driveshaft to pinion shaft, in 3D) */
+  pinionAngle: Deg;
+}
+
+/** One row of the heave sweep (travel imposed, roll 0). */
+export interface HeaveRow {
+  /** mm, axle reference point above its ride position (bump positive) */
+  travel: Mm;
+  /** pose of the axle (for layouts without one: of the body carrying the left wheel) */
+  pose: Pose;
+  /** poses of every moving body (addition) */
+  bodies: BodyPoses;
+  /** deg, −pitch of the axle (positive when the axle's nose rises); null without an axle */
+  pinionAngleChange: Deg | null;
+  /** mm, pose.y of the axle; null without an axle */
+  lateralShift: Mm | null;
+  /** mm, pose.x of the axle (without an axle: the left wheel centre's x change) */
+  foreAftShift: Mm;
+  /** side-view instant centre of the left side's upper and lower links; null when parallel or not defined */
+  instantCenter: SidePoint | null;
+  /** %, from the left contact patch through the instant centre; null when not defined */
+  antiSquat: number | null;
+  /** mm, z where the lateral rod's rear-view line crosses y = 0 (without a rod: see DEVELOPERS.md); null when not defined */
+  rollCenterHeight: Mm | null;
+  /** mm, largest absolute constraint residual */
+  bind: Mm;
+  members: Record<string, MemberReading>;
+  /** absent when the sketch has no driveline */
+  driveline?: DrivelineReading;
+}
+
+/** One row of the roll (articulation) sweep at ride height. */
+export interface RollRow {
+  /** deg, imposed axle roll (positive lifts the left wheel) */
+  roll: Deg;
+  pose: Pose;
+  bodies: BodyPoses;
+  /** mm, left wheel centre's z change */
+  leftTravel: Mm;
+  /** mm, right wheel centre's z change */
+  rightTravel: Mm;
+  /** %, 100 · yaw / roll; null at roll 0 */
+  rollSteer: number | null;
+  /** mm */
+  bind: Mm;
+  members: Record<string, MemberReading>;
+  driveline?: DrivelineReading;
+}
+
+export type SweepEventKind = 'lock-up' | 'shock-extended' | 'shock-compressed' | 'bind' | 'joint-angle';
+
+export interface SweepEvent {
+  kind: SweepEventKind;
+  /** which sweep the event is in (addition): `at` is mm of travel for heave, deg of roll for roll */
+  sweep: 'heave' | 'roll';
+  /** mm (heave) or deg (roll), interpolated where a limit is crossed between rows */
+  at: number;
+  /** the shock, for shock events */
+  member?: string;
+  /** the joint, for joint-angle events */
+  joint?: 'output' | 'pinion';
+  /** the value that crossed: bind in mm, joint angle in deg, shock length in mm (addition) */
+  value?: number;
+  /** one plain sentence for the flags list (addition) */
+  message: string;
+}
+
+export interface SweepLimits {
+  /** mm, the most droop reached */
+  droop: Mm;
+  /** mm, the most bump reached */
+  bump: Mm;
+  /** deg, the articulation reached both ways (the smaller side) */
+  articulation: Deg;
+  /** deg, the roll reached each way (addition) */
+  rollMin: Deg;
+  rollMax: Deg;
+  events: SweepEvent[];
+}
+
+export interface SweepResult {
+  /** ordered droop → bump */
+  heave: HeaveRow[];
+  /** ordered −roll → +roll */
+  roll: RollRow[];
+  limits: SweepLimits;
+  /** plain sentences for the flags list */
+  warnings: string[];
+  /** the travel-0 row (addition) */
+  ride: HeaveRow;
+}
+
+export interface SweepOptions {
+  /** override the file's sweep settings (e.g. the bench's fixed range, or a coarse drag preview) */
+  sweep?: Partial<{
+    droop: Mm;
+    bump: Mm;
+    step: Mm;
+    roll: Deg;
+    rollStep: Deg;
+    bindThreshold: Mm;
+    jointAngleLimit: Deg;
+  }>;
+  /** skip the roll sweep (roll: []) */
+  heaveOnly?: boolean;
+}

@@ -1,0 +1,279 @@
+/**
+ * Sketch exchange format, version 1 (../shared/design/sketch-format.md, a contract).
+ * One zod schema validates the file for the client, the server and the command line;
+ * the types are inferred from it. Objects are "loose": fields this build does not know
+ * are kept, so a richer document (or a later minor addition) survives a round trip.
+ * Lengths in mm, angles in degrees, rates in N/mm.
+ */
+import { z } from 'zod';
+import { gridCount } from '../kinematics/grid';
+import { SketchValidationError } from './errors';
+
+/** The six layouts a sketch can come from (the starter it was built from). */
+export const layouts = [
+  'four-link-lateral-rod',
+  'triangulated-four-link',
+  'three-link-lateral-rod',
+  'leaf-spring',
+  'trailing-arm',
+  'double-wishbone',
+] as const;
+export type Layout = (typeof layouts)[number];
+
+/** Bodies a point can belong to. The frame is fixed; the others move. */
+export const bodyIds = ['frame', 'axle', 'arm-left', 'arm-right', 'knuckle-left', 'knuckle-right'] as const;
+export type BodyId = (typeof bodyIds)[number];
+export type MovingBodyId = Exclude<BodyId, 'frame'>;
+
+export const memberKinds = ['link', 'lateral-rod', 'tie-rod', 'shackle', 'shock', 'spring', 'hinge'] as const;
+export type MemberKind = (typeof memberKinds)[number];
+
+/** Member kinds that hold a fixed length between their two points (the solver's constraints). */
+export const rigidMemberKinds: readonly MemberKind[] = ['link', 'lateral-rod', 'tie-rod', 'shackle'];
+
+/** Size bounds, so that a document can never make the solver or the server work without end. */
+export const MAX_POINTS = 200;
+export const MAX_MEMBERS = 200;
+/** Heave rows plus roll rows of one sweep. */
+export const MAX_SWEEP_ROWS = 2000;
+/** No coordinate or vehicle dimension beyond 100 m: keeps every derived number finite. */
+export const MAX_COORDINATE_MM = 100_000;
+/** Heave travel either way, mm. */
+export const MAX_TRAVEL_MM = 2000;
+/** Articulation either way, degrees (beyond this the small-part geometry of a sketch means nothing). */
+export const MAX_ROLL_DEG = 45;
+export const MAX_ID_LENGTH = 64;
+export const MAX_NAME_LENGTH = 200;
+/** A member shorter than this is a drawing slip (two pivots on top of each other), not a part. */
+export const MIN_MEMBER_LENGTH_MM = 1;
+
+export const DEFAULT_BIND_THRESHOLD_MM = 1.5;
+/** Common practice for smooth running at road speed (references.md, driveline guides); no published source. */
+export const DEFAULT_JOINT_ANGLE_LIMIT_DEG = 3;
+
+const coordinate = z.number().min(-MAX_COORDINATE_MM).max(MAX_COORDINATE_MM);
+const positiveLength = z.number().positive().max(MAX_COORDINATE_MM);
+const id = z.string().min(1).max(MAX_ID_LENGTH);
+
+export const pointSchema = z.looseObject({
+  id,
+  body: z.enum(bodyIds),
+  x: coordinate,
+  y: coordinate,
+  z: coordinate,
+});
+
+const memberBase = { id, a: id, b: id };
+
+export const memberSchema = z.discriminatedUnion('kind', [
+  z.looseObject({ ...memberBase, kind: z.literal('link'), group: z.enum(['upper', 'lower']).optional() }),
+  z.looseObject({ ...memberBase, kind: z.literal('lateral-rod') }),
+  z.looseObject({ ...memberBase, kind: z.literal('tie-rod') }),
+  z.looseObject({ ...memberBase, kind: z.literal('shackle') }),
+  z.looseObject({
+    ...memberBase,
+    kind: z.literal('shock'),
+    minLength: positiveLength.optional(),
+    maxLength: positiveLength.optional(),
+  }),
+  z.looseObject({ ...memberBase, kind: z.literal('spring'), rate: z.number().positive().max(1e6).optional() }),
+  z.looseObject({ ...memberBase, kind: z.literal('hinge'), body: z.enum(['arm-left', 'arm-right']) }),
+]);
+
+export const vehicleSchema = z.looseObject({
+  wheelbase: positiveLength,
+  cgHeight: positiveLength,
+  track: positiveLength,
+  tireRadius: positiveLength,
+});
+
+export const sweepSettingsSchema = z
+  .looseObject({
+    /** mm, negative */
+    droop: z.number().min(-MAX_TRAVEL_MM).lt(0).default(-150),
+    /** mm, positive */
+    bump: z.number().gt(0).max(MAX_TRAVEL_MM).default(150),
+    /** mm */
+    step: z.number().gt(0).max(MAX_TRAVEL_MM).default(5),
+    /** degrees, each way */
+    roll: z.number().min(0).max(MAX_ROLL_DEG).default(8),
+    /** degrees */
+    rollStep: z.number().gt(0).max(MAX_ROLL_DEG).default(1),
+    /** mm: bind above this raises a flag */
+    bindThreshold: z.number().gt(0).max(1000).default(DEFAULT_BIND_THRESHOLD_MM),
+    /** degrees: a driveline joint operating angle above this raises a flag */
+    jointAngleLimit: z.number().gt(0).max(90).default(DEFAULT_JOINT_ANGLE_LIMIT_DEG),
+  })
+  .prefault({});
+
+const baseSketchSchema = z.looseObject({
+  format: z.literal('arcwright.sketch'),
+  version: z.literal(1),
+  name: z.string().max(MAX_NAME_LENGTH),
+  layout: z.enum(layouts),
+  vehicle: vehicleSchema,
+  points: z.array(pointSchema).max(MAX_POINTS),
+  members: z.array(memberSchema).max(MAX_MEMBERS),
+  wheels: z.looseObject({ left: id, right: id }),
+  driveline: z
+    .looseObject({ output: id, outputAxis: id, pinion: id, pinionAxis: id })
+    .optional(),
+  sweep: sweepSettingsSchema,
+});
+
+type BaseSketch = z.infer<typeof baseSketchSchema>;
+type Path = (string | number)[];
+type Report = (path: Path, message: string) => void;
+
+function distance(p: { x: number; y: number; z: number }, q: { x: number; y: number; z: number }): number {
+  return Math.hypot(p.x - q.x, p.y - q.y, p.z - q.z);
+}
+
+/** The rules that join fields together; each problem names the field it is about. */
+function checkCrossFields(s: BaseSketch, report: Report): void {
+  const points = new Map<string, BaseSketch['points'][number]>();
+  s.points.forEach((p, i) => {
+    if (points.has(p.id)) report(['points', i, 'id'], `duplicate id '${p.id}'`);
+    else points.set(p.id, p);
+  });
+  const memberIds = new Set<string>();
+  s.members.forEach((m, i) => {
+    if (memberIds.has(m.id)) report(['members', i, 'id'], `duplicate id '${m.id}'`);
+    memberIds.add(m.id);
+    const a = points.get(m.a);
+    const b = points.get(m.b);
+    if (!a) report(['members', i, 'a'], `no point '${m.a}'`);
+    if (!b) report(['members', i, 'b'], `no point '${m.b}'`);
+    if (!a || !b) return;
+    if (m.kind === 'hinge') {
+      if (a.body !== 'frame') report(['members', i, 'a'], `a hinge axis point must be on the frame ('${a.id}' is on '${a.body}')`);
+      if (b.body !== 'frame') report(['members', i, 'b'], `a hinge axis point must be on the frame ('${b.id}' is on '${b.body}')`);
+      if (!s.points.some((p) => p.body === m.body)) report(['members', i, 'body'], `no point is on '${m.body}'`);
+    } else if (a.body === b.body) {
+      report(['members', i, 'b'], `joins two points of one body ('${m.a}' and '${m.b}' are both on '${a.body}')`);
+    }
+    const len = distance(a, b);
+    if (len < MIN_MEMBER_LENGTH_MM) {
+      report(['members', i], `zero length: '${m.a}' and '${m.b}' are ${len.toFixed(2)} mm apart (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+    }
+    if (m.kind === 'shock' && m.minLength !== undefined && m.maxLength !== undefined && !(m.minLength < m.maxLength)) {
+      report(['members', i, 'maxLength'], `must be greater than minLength (${m.minLength})`);
+    }
+  });
+
+  const wheel = (side: 'left' | 'right') => {
+    const ref = s.wheels[side];
+    const p = points.get(ref);
+    if (!p) report(['wheels', side], `no point '${ref}'`);
+    else if (p.body === 'frame') report(['wheels', side], `'${ref}' is on the frame; a wheel centre must be on a moving body`);
+    return p;
+  };
+  const wl = wheel('left');
+  const wr = wheel('right');
+  if (wl && wr && wl.id === wr.id) report(['wheels', 'right'], `same point as wheels.left ('${wr.id}')`);
+
+  if (s.driveline) {
+    const d = s.driveline;
+    const at = (key: keyof typeof d & string, onFrame: boolean) => {
+      const ref = d[key] as string;
+      const p = points.get(ref);
+      if (!p) report(['driveline', key], `no point '${ref}'`);
+      else if (onFrame && p.body !== 'frame') report(['driveline', key], `'${ref}' must be on the frame (it is on '${p.body}')`);
+      else if (!onFrame && p.body === 'frame') report(['driveline', key], `'${ref}' must be on a moving body (it is on the frame)`);
+      return p;
+    };
+    const o = at('output', true);
+    const oa = at('outputAxis', true);
+    const pn = at('pinion', false);
+    const pa = at('pinionAxis', false);
+    if (o && oa && distance(o, oa) < MIN_MEMBER_LENGTH_MM) report(['driveline', 'outputAxis'], `must be apart from the output point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+    if (pn && pa && distance(pn, pa) < MIN_MEMBER_LENGTH_MM) report(['driveline', 'pinionAxis'], `must be apart from the pinion point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+    if (pn && pa && pn.body !== pa.body && pa.body !== 'frame') report(['driveline', 'pinionAxis'], `must be on the same body as the pinion ('${pn.body}')`);
+    if (o && pn && distance(o, pn) < MIN_MEMBER_LENGTH_MM) report(['driveline', 'pinion'], `must be apart from the output point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+  }
+
+  const sw = s.sweep;
+  const rows = gridCount(sw.droop, sw.bump, sw.step) + gridCount(-sw.roll, sw.roll, sw.rollStep);
+  if (rows > MAX_SWEEP_ROWS) {
+    report(['sweep'], `at most ${MAX_SWEEP_ROWS} rows a sweep (these settings give ${Number.isFinite(rows) ? rows : 'too many'}); use a larger step`);
+  }
+}
+
+/** The sketch file schema with every cross-field rule. */
+export const sketchSchema = baseSketchSchema.superRefine((s, ctx) => {
+  checkCrossFields(s, (path, message) => ctx.addIssue({ code: 'custom', path, message }));
+});
+
+/** A validated sketch (output of the schema: sweep defaults filled in). */
+export type Sketch = z.infer<typeof sketchSchema>;
+/** A sketch as written in a file (sweep block and its fields optional). */
+export type SketchInput = z.input<typeof sketchSchema>;
+export type SketchPoint = Sketch['points'][number];
+export type SketchMember = Sketch['members'][number];
+export type SweepSettings = Sketch['sweep'];
+export type Vehicle = Sketch['vehicle'];
+export type Driveline = NonNullable<Sketch['driveline']>;
+
+/** "points[3].x" from ['points', 3, 'x']; the document itself is "(document)". */
+export function formatPath(path: readonly PropertyKey[]): string {
+  let out = '';
+  for (const seg of path) {
+    if (typeof seg === 'number') out += `[${seg}]`;
+    else out += out === '' ? String(seg) : `.${String(seg)}`;
+  }
+  return out === '' ? '(document)' : out;
+}
+
+const article = (noun: string) => (/^[aeiou]/.test(noun) ? `an ${noun}` : `a ${noun}`);
+const typeName = (t: string) => (t === 'array' ? 'list' : t);
+const quote = (v: unknown) => (typeof v === 'string' ? `'${v}'` : String(v));
+const quoteList = (vs: readonly unknown[]) =>
+  vs.length === 1 ? `expected ${quote(vs[0])}` : `expected one of ${vs.map(quote).join(', ')}`;
+
+/** One zod issue as one plain line: "<path>: <problem>". */
+function formatIssue(iss: z.core.$ZodIssue): string {
+  const where = formatPath(iss.path);
+  switch (iss.code) {
+    case 'invalid_type': {
+      const expected = article(typeName(String(iss.expected)));
+      const missing = 'input' in iss ? iss.input === undefined : /received undefined/.test(iss.message);
+      return missing ? `${where}: required, expected ${expected}` : `${where}: expected ${expected}`;
+    }
+    case 'invalid_value':
+      return `${where}: ${quoteList(iss.values)}`;
+    case 'invalid_union':
+      if ('options' in iss && Array.isArray((iss as { options?: unknown[] }).options)) {
+        return `${where}: ${quoteList((iss as unknown as { options: unknown[] }).options)}`;
+      }
+      return `${where}: not a valid value`;
+    case 'too_small': {
+      const bound = Number(iss.minimum);
+      if (iss.origin === 'array') return `${where}: at least ${bound} item${bound === 1 ? '' : 's'}`;
+      if (iss.origin === 'string') return bound <= 1 ? `${where}: must not be empty` : `${where}: at least ${bound} characters`;
+      return `${where}: must be ${iss.inclusive ? 'at least' : 'greater than'} ${bound}`;
+    }
+    case 'too_big': {
+      const bound = Number(iss.maximum);
+      if (iss.origin === 'array') return `${where}: at most ${bound} items`;
+      if (iss.origin === 'string') return `${where}: at most ${bound} characters`;
+      return `${where}: must be ${iss.inclusive ? 'at most' : 'less than'} ${bound}`;
+    }
+    default:
+      return `${where}: ${iss.message}`;
+  }
+}
+
+/** Validates a parsed JSON value as a sketch; never throws. */
+export function checkSketch(doc: unknown): { ok: true; sketch: Sketch } | { ok: false; problems: string[] } {
+  const res = sketchSchema.safeParse(doc, { reportInput: true });
+  if (res.success) return { ok: true, sketch: res.data };
+  const problems = [...new Set(res.error.issues.map(formatIssue))];
+  return { ok: false, problems };
+}
+
+/** Validates a parsed JSON value as a sketch; throws SketchValidationError listing every problem. */
+export function parseSketch(doc: unknown): Sketch {
+  const res = checkSketch(doc);
+  if (!res.ok) throw new SketchValidationError(res.problems);
+  return res.sketch;
+}
