@@ -5,7 +5,10 @@ import type { ServerConfig } from './config';
 import { securityHeaders } from './middleware/security';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { clientApp } from './middleware/client-app';
+import { absoluteTimeout, configurePassport, passport, sessionMiddleware } from './middleware/session';
+import { csrf } from './middleware/csrf';
 import { healthRoutes } from './routes/health';
+import { authRoutes } from './routes/auth';
 
 /** Largest JSON body accepted; a sketch file is a few tens of KB. */
 export const JSON_BODY_LIMIT = '256kb';
@@ -30,6 +33,14 @@ export function createApp(ctx: AppContext): Express {
   const api = express.Router();
   api.use(express.json({ limit: JSON_BODY_LIMIT }));
   api.use(healthRoutes(ctx.sequelize));
+  configurePassport();
+  api.use(sessionMiddleware(ctx.sequelize, config));
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use(absoluteTimeout(config));
+  // Every state-changing call below needs the session's X-CSRF-Token.
+  api.use(csrf.csrfSynchronisedProtection);
+  api.use('/auth', authRoutes(config));
   api.use(apiNotFound);
   app.use('/api', api);
 

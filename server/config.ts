@@ -28,6 +28,8 @@ export interface ServerConfig {
   loginMaxPerAccount: number;
   loginMaxPerAddress: number;
   loginWindowMs: number;
+  /** Sign-ups and reset requests allowed per address per hour. */
+  signupMaxPerAddress: number;
   /** Folder of the built client; served when it exists. */
   distDir: string;
 }
@@ -72,6 +74,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     loginMaxPerAccount: intFrom(env.LOGIN_MAX_PER_ACCOUNT, 5, 'LOGIN_MAX_PER_ACCOUNT'),
     loginMaxPerAddress: intFrom(env.LOGIN_MAX_PER_ADDRESS, 50, 'LOGIN_MAX_PER_ADDRESS'),
     loginWindowMs: 15 * MINUTE_MS,
+    signupMaxPerAddress: intFrom(env.SIGNUP_MAX_PER_ADDRESS, 30, 'SIGNUP_MAX_PER_ADDRESS'),
     distDir: path.resolve(root, env.DIST_DIR || 'dist'),
   };
 }

@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import type { Express } from 'express';
+import request from 'supertest';
 import type { Sequelize } from 'sequelize';
 import { loadConfig, type ServerConfig } from '../../server/config';
 import { openDatabase } from '../../server/db';
@@ -41,4 +42,58 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
       fs.rmSync(dir, { recursive: true, force: true });
     },
   };
+}
+
+/** A browser-like caller: keeps its cookie and sends the session's CSRF token on every write. */
+export class Caller {
+  readonly agent: ReturnType<typeof request.agent>;
+  token = '';
+
+  constructor(app: Express) {
+    this.agent = request.agent(app);
+  }
+
+  /** Fetches the CSRF token of the current session (again after sign-in and sign-out). */
+  async refreshToken(): Promise<string> {
+    const res = await this.agent.get('/api/auth/csrf').expect(200);
+    this.token = res.body.token;
+    return this.token;
+  }
+
+  async signIn(email: string, password: string): Promise<this> {
+    await this.refreshToken();
+    await this.post('/api/auth/login').send({ email, password }).expect(200);
+    await this.refreshToken();
+    return this;
+  }
+
+  async signUp(email: string, password: string, name: string): Promise<this> {
+    await this.refreshToken();
+    await this.post('/api/auth/signup').send({ email, password, name }).expect(201);
+    await this.refreshToken();
+    return this;
+  }
+
+  get(url: string) { return this.agent.get(url); }
+  post(url: string) { return this.agent.post(url).set('X-CSRF-Token', this.token); }
+  put(url: string) { return this.agent.put(url).set('X-CSRF-Token', this.token); }
+  patch(url: string) { return this.agent.patch(url).set('X-CSRF-Token', this.token); }
+  delete(url: string) { return this.agent.delete(url).set('X-CSRF-Token', this.token); }
+}
+
+export const demo = {
+  admin: { email: 'admin@demo.test', password: 'demo-admin-2026' },
+  instructor: { email: 'instructor@demo.test', password: 'demo-instructor-2026' },
+  maker: { email: 'maker@demo.test', password: 'demo-maker-2026' },
+  student: { email: 'student@demo.test', password: 'demo-student-2026' },
+} as const;
+
+let counter = 0;
+/** A new member account, signed in. */
+export async function newMember(app: Express, label = 'user'): Promise<Caller & { email: string; password: string }> {
+  counter += 1;
+  const email = `${label}-${counter}-${Date.now()}@example.test`;
+  const password = `pass-${label}-${counter}-long`;
+  const caller = await new Caller(app).signUp(email, password, `${label} ${counter}`);
+  return Object.assign(caller, { email, password });
 }

@@ -1,0 +1,101 @@
+import session from 'express-session';
+import connectSessionSequelize from 'connect-session-sequelize';
+import passport from 'passport';
+import { Strategy as LocalStrategy } from 'passport-local';
+import { Op, type Sequelize } from 'sequelize';
+import type { RequestHandler } from 'express';
+import type { ServerConfig } from '../config';
+import { Session, type PublicUser } from '../models';
+import { activeAccount, checkCredentials } from '../services/accounts';
+
+declare module 'express-session' {
+  interface SessionData {
+    /** When the user signed in (ms since epoch), for the absolute timeout. */
+    signedInAt?: number;
+    passport?: { user?: number };
+  }
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type
+    interface User extends PublicUser {}
+  }
+}
+
+const SESSION_COOKIE = 'arcwright.sid';
+/** How often expired session rows are deleted (ms). */
+const SESSION_SWEEP_MS = 15 * 60_000;
+
+const SequelizeStore = connectSessionSequelize(session.Store);
+
+/** express-session stored in the `sessions` table, with the user id copied into its own column. */
+export function sessionMiddleware(sequelize: Sequelize, config: ServerConfig): RequestHandler {
+  const store = new SequelizeStore({
+    db: sequelize,
+    table: 'Session',
+    expiration: config.sessionIdleMs,
+    checkExpirationInterval: SESSION_SWEEP_MS,
+    extendDefaultFields: (defaults: { data: string; expires: Date }, sess: session.SessionData) => ({
+      data: defaults.data,
+      expires: defaults.expires,
+      userId: sess.passport?.user ?? null,
+    }),
+  });
+  // The store's own timer would keep a finished test process alive; run our own, unref'd.
+  store.stopExpiringSessions();
+  setInterval(() => void store.clearExpiredSessions(), SESSION_SWEEP_MS).unref();
+  // The store reads a row without looking at its expiry; an idle session must not come back.
+  store.get = (sid: string, cb: (err: unknown, s?: session.SessionData | null) => void) => {
+    Session.findOne({ where: { sid, expires: { [Op.gt]: new Date() } } }).then(
+      (row) => cb(null, row?.data ? (JSON.parse(row.data) as session.SessionData) : null),
+      (err) => cb(err),
+    );
+  };
+
+  return session({
+    name: SESSION_COOKIE,
+    secret: config.sessionSecret,
+    store,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    cookie: {
+      httpOnly: true,
+      sameSite: 'lax',
+      // 'auto': Secure whenever the request arrived over HTTPS (behind a trusted proxy too).
+      secure: config.cookieSecure ? true : config.trustProxy ? 'auto' : false,
+      maxAge: config.sessionIdleMs,
+    },
+  });
+}
+
+/** passport with the local (e-mail + password) strategy; the session holds only the user id. */
+export function configurePassport(): void {
+  passport.use(
+    new LocalStrategy({ usernameField: 'email', passwordField: 'password', session: true }, (email, password, done) => {
+      checkCredentials(email, password).then((user) => done(null, user ?? false), done);
+    }),
+  );
+  passport.serializeUser((user, done) => done(null, user.id));
+  passport.deserializeUser((id: number, done) => {
+    // false signs the request out: the account was removed or disabled since sign-in.
+    activeAccount(id).then((user) => done(null, user ?? false), done);
+  });
+}
+
+/** Signs out a session that is older than the absolute limit, whatever its activity. */
+export function absoluteTimeout(config: ServerConfig): RequestHandler {
+  return (req, _res, next) => {
+    const started = req.session?.signedInAt;
+    if (req.user && started && Date.now() - started > config.sessionAbsoluteMs) {
+      req.user = undefined;
+      req.session.destroy((err) => next(err));
+      return;
+    }
+    next();
+  };
+}
+
+export { passport, SESSION_COOKIE };

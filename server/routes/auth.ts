@@ -1,0 +1,68 @@
+import { Router, type NextFunction, type Request, type Response } from 'express';
+import type { ServerConfig } from '../config';
+import type { PublicUser } from '../models';
+import { csrf } from '../middleware/csrf';
+import { unauthorized } from '../middleware/http-error';
+import { parseOr400 } from '../middleware/validate';
+import { loginLimiters, signupLimiter } from '../middleware/rate-limit';
+import { passport, SESSION_COOKIE } from '../middleware/session';
+import { loginBody, signupBody } from '../schemas/auth';
+import { createAccount } from '../services/accounts';
+
+/** Signs `user` in on a fresh session id (passport regenerates the session), starting the absolute clock. */
+function signIn(req: Request, user: PublicUser): Promise<void> {
+  return new Promise((resolve, reject) =>
+    req.login(user, (err) => {
+      if (err) return reject(err);
+      req.session.signedInAt = Date.now();
+      resolve();
+    }),
+  );
+}
+
+function authenticateLocal(req: Request, res: Response, next: NextFunction): Promise<PublicUser | false> {
+  return new Promise((resolve, reject) =>
+    passport.authenticate('local', { session: false }, (err: unknown, user: PublicUser | false) =>
+      err ? reject(err) : resolve(user),
+    )(req, res, next),
+  );
+}
+
+/** /api/auth: sign-up, sign-in, sign-out, who am I, and the CSRF token. */
+export function authRoutes(config: ServerConfig): Router {
+  const router = Router();
+
+  router.get('/csrf', (req, res) => {
+    res.json({ token: csrf.generateToken(req) });
+  });
+
+  router.get('/me', (req, res) => {
+    if (!req.user) throw unauthorized('not signed in');
+    res.json({ user: req.user });
+  });
+
+  router.post('/signup', signupLimiter(config), async (req, res) => {
+    const body = parseOr400(signupBody, req.body);
+    const user = await createAccount(body);
+    await signIn(req, user);
+    res.status(201).json({ user });
+  });
+
+  router.post('/login', ...loginLimiters(config), async (req, res, next) => {
+    req.body = parseOr400(loginBody, req.body);
+    const user = await authenticateLocal(req, res, next);
+    if (!user) throw unauthorized('wrong e-mail or password');
+    await signIn(req, user);
+    res.json({ user });
+  });
+
+  router.post('/logout', (req, res, next) => {
+    req.session.destroy((err) => {
+      if (err) return next(err);
+      res.clearCookie(SESSION_COOKIE, { httpOnly: true, sameSite: 'lax', path: '/' });
+      res.status(204).end();
+    });
+  });
+
+  return router;
+}

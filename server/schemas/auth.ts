@@ -1,0 +1,29 @@
+import { z } from 'zod';
+import { PASSWORD_MAX, PASSWORD_MIN } from '../services/passwords';
+
+/** An e-mail address, trimmed and lower-cased so that one person has one account. */
+export const emailField = z.string().trim().toLowerCase().max(254).pipe(z.email({ message: 'not an e-mail address' }));
+
+export const passwordField = z
+  .string()
+  .min(PASSWORD_MIN, `must be at least ${PASSWORD_MIN} characters`)
+  .max(PASSWORD_MAX, `must be at most ${PASSWORD_MAX} characters`);
+
+export const signupBody = z.strictObject({
+  email: emailField,
+  password: passwordField,
+  name: z.string().trim().min(1, 'must not be empty').max(120),
+});
+
+export const loginBody = z.strictObject({
+  email: emailField,
+  // Any length is checked against the hash, but an absurd one is refused before hashing.
+  password: z.string().min(1, 'must not be empty').max(PASSWORD_MAX),
+});
+
+export const resetRequestBody = z.strictObject({ email: emailField });
+
+export const resetBody = z.strictObject({
+  token: z.string().min(1).max(200),
+  password: passwordField,
+});

@@ -1,0 +1,42 @@
+import { Session, User, toPublicUser, type PublicUser } from '../models';
+import { conflict } from '../middleware/http-error';
+import { decoyHash, hashPassword, verifyPassword } from './passwords';
+
+/** Creates a member account. 409 when the e-mail is taken. */
+export async function createAccount(input: { email: string; password: string; name: string }): Promise<PublicUser> {
+  if (await User.findOne({ where: { email: input.email } })) {
+    throw conflict('an account with this e-mail already exists');
+  }
+  const user = await User.create({
+    email: input.email,
+    name: input.name,
+    role: 'member',
+    passwordHash: await hashPassword(input.password),
+  });
+  return toPublicUser(user);
+}
+
+/**
+ * The account for these credentials, or null. Unknown e-mails are checked against a decoy
+ * hash so the answer takes as long as for a real one; disabled accounts never sign in.
+ */
+export async function checkCredentials(email: string, password: string): Promise<PublicUser | null> {
+  const user = await User.findOne({ where: { email } });
+  if (!user) {
+    await verifyPassword(password, await decoyHash());
+    return null;
+  }
+  const ok = await verifyPassword(password, user.passwordHash);
+  return ok && !user.disabled ? toPublicUser(user) : null;
+}
+
+/** The account a session points at, or null when it is gone or disabled. */
+export async function activeAccount(id: number): Promise<PublicUser | null> {
+  const user = await User.findByPk(id);
+  return user && !user.disabled ? toPublicUser(user) : null;
+}
+
+/** Ends every session of a user (disabled account, new password). Returns how many. */
+export async function endSessionsOf(userId: number): Promise<number> {
+  return Session.destroy({ where: { userId } });
+}
