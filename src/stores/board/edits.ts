@@ -1,0 +1,240 @@
+/**
+ * The board's edits as pure functions: each takes a sketch and returns a new one that shares
+ * every untouched object with it (so history diffs stay small) and never changes its input.
+ * A request that cannot be carried out (unknown id, duplicate name) throws BoardEditError
+ * with a message for the user; nothing is changed then.
+ * Lengths in mm.
+ */
+import type { MemberKind, Sketch } from '../../../shared/schema/sketch';
+import { MAX_ID_LENGTH } from '../../../shared/schema/sketch';
+import type { Mm } from '../../../shared/units';
+
+export type Point = Sketch['points'][number];
+export type Member = Sketch['members'][number];
+export type Axis = 'x' | 'y' | 'z';
+export type Vec3 = { x: Mm; y: Mm; z: Mm };
+export type Delta = Partial<Vec3>;
+
+/** A request the board refuses, with the reason in words for the user. */
+export class BoardEditError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'BoardEditError';
+  }
+}
+
+/** Default stroke limits for a member turned into a shock: a fraction of its length either way. */
+export const NEW_SHOCK_COMPRESSED_FRACTION = 0.8;
+export const NEW_SHOCK_EXTENDED_FRACTION = 1.2;
+
+function pointIndex(doc: Sketch, id: string): number {
+  const i = doc.points.findIndex((p) => p.id === id);
+  if (i < 0) throw new BoardEditError(`There is no pivot '${id}'.`);
+  return i;
+}
+
+function memberIndex(doc: Sketch, id: string): number {
+  const i = doc.members.findIndex((m) => m.id === id);
+  if (i < 0) throw new BoardEditError(`There is no member '${id}'.`);
+  return i;
+}
+
+function checkNewId(taken: Iterable<string>, id: string, what: 'pivot' | 'member'): void {
+  if (id.trim() !== id || id.length === 0) throw new BoardEditError(`A ${what} name must not be empty or start or end with a space.`);
+  if (id.length > MAX_ID_LENGTH) throw new BoardEditError(`A ${what} name has at most ${MAX_ID_LENGTH} characters.`);
+  for (const t of taken) if (t === id) throw new BoardEditError(`There is already a ${what} called '${id}'.`);
+}
+
+export function distance(a: Vec3, b: Vec3): Mm {
+  return Math.hypot(a.x - b.x, a.y - b.y, a.z - b.z);
+}
+
+/** The length of a member between its two pivots at ride, or null when an end is missing. */
+export function memberLength(doc: Sketch, m: Member): Mm | null {
+  const a = doc.points.find((p) => p.id === m.a);
+  const b = doc.points.find((p) => p.id === m.b);
+  return a && b ? distance(a, b) : null;
+}
+
+/**
+ * Moves pivots by the given deltas (mm). With `pairs`, each moved pivot's partner that is not
+ * itself being moved follows with the mirror-image delta (y negated).
+ */
+export function movePoints(doc: Sketch, deltas: ReadonlyMap<string, Delta>, pairs?: ReadonlyMap<string, string>): Sketch {
+  const all = new Map(deltas);
+  if (pairs) {
+    for (const [id, d] of deltas) {
+      const partner = pairs.get(id);
+      if (partner && !deltas.has(partner)) all.set(partner, { x: d.x, y: d.y === undefined ? undefined : -d.y, z: d.z });
+    }
+  }
+  for (const id of all.keys()) pointIndex(doc, id);
+  const points = doc.points.map((p) => {
+    const d = all.get(p.id);
+    if (!d || (!d.x && !d.y && !d.z)) return p;
+    return { ...p, x: p.x + (d.x ?? 0), y: p.y + (d.y ?? 0), z: p.z + (d.z ?? 0) };
+  });
+  return { ...doc, points };
+}
+
+/** Sets one coordinate of a pivot (mm); with `pairs` the partner moves by the mirror-image delta. */
+export function setPointCoordinate(doc: Sketch, id: string, axis: Axis, value: Mm, pairs?: ReadonlyMap<string, string>): Sketch {
+  const p = doc.points[pointIndex(doc, id)];
+  const delta: Delta = { [axis]: value - p[axis] };
+  return movePoints(doc, new Map([[id, delta]]), pairs);
+}
+
+/** Renames a pivot and every reference to it (member ends, wheels, driveline). */
+export function renamePoint(doc: Sketch, from: string, to: string): Sketch {
+  const i = pointIndex(doc, from);
+  if (from === to) return doc;
+  checkNewId(doc.points.map((p) => p.id), to, 'pivot');
+  const ref = (v: string) => (v === from ? to : v);
+  const points = doc.points.slice();
+  points[i] = { ...points[i], id: to };
+  const members = doc.members.map((m) => (m.a === from || m.b === from ? { ...m, a: ref(m.a), b: ref(m.b) } : m));
+  const wheels = doc.wheels.left === from || doc.wheels.right === from ? { ...doc.wheels, left: ref(doc.wheels.left), right: ref(doc.wheels.right) } : doc.wheels;
+  let driveline = doc.driveline;
+  if (driveline && Object.values(driveline).includes(from)) {
+    driveline = Object.fromEntries(Object.entries(driveline).map(([k, v]) => [k, typeof v === 'string' ? ref(v) : v])) as typeof driveline;
+  }
+  return { ...doc, points, members, wheels, ...(driveline ? { driveline } : {}) };
+}
+
+/** Renames a member. */
+export function renameMember(doc: Sketch, from: string, to: string): Sketch {
+  const i = memberIndex(doc, from);
+  if (from === to) return doc;
+  checkNewId(doc.members.map((m) => m.id), to, 'member');
+  const members = doc.members.slice();
+  members[i] = { ...members[i], id: to };
+  return { ...doc, members };
+}
+
+/** What refers to a pivot, in words ("member LLl", "the left wheel"). */
+export function pointReferences(doc: Sketch, id: string): string[] {
+  const refs = doc.members.filter((m) => m.a === id || m.b === id).map((m) => `member ${m.id}`);
+  if (doc.wheels.left === id) refs.push('the left wheel centre');
+  if (doc.wheels.right === id) refs.push('the right wheel centre');
+  for (const [k, v] of Object.entries(doc.driveline ?? {})) if (v === id) refs.push(`the driveline (${k})`);
+  return refs;
+}
+
+/** Adds a pivot. */
+export function addPoint(doc: Sketch, point: Point): Sketch {
+  checkNewId(doc.points.map((p) => p.id), point.id, 'pivot');
+  return { ...doc, points: [...doc.points, point] };
+}
+
+/** Deletes a pivot nothing refers to. */
+export function deletePoint(doc: Sketch, id: string): Sketch {
+  pointIndex(doc, id);
+  const refs = pointReferences(doc, id);
+  if (refs.length) throw new BoardEditError(`Pivot '${id}' is still used by ${refs.join(', ')}.`);
+  return { ...doc, points: doc.points.filter((p) => p.id !== id) };
+}
+
+/** Adds a member, with any new pivots it needs (added first). */
+export function addMember(doc: Sketch, member: Member, newPoints: readonly Point[] = []): Sketch {
+  let out = doc;
+  for (const p of newPoints) out = addPoint(out, p);
+  checkNewId(out.members.map((m) => m.id), member.id, 'member');
+  for (const end of [member.a, member.b]) pointIndex(out, end);
+  if (member.a === member.b) throw new BoardEditError('A member joins two different pivots.');
+  return { ...out, members: [...out.members, member] };
+}
+
+/** Deletes a member; its pivots stay. */
+export function deleteMember(doc: Sketch, id: string): Sketch {
+  memberIndex(doc, id);
+  return { ...doc, members: doc.members.filter((m) => m.id !== id) };
+}
+
+/** Fields that belong to one kind only, dropped when the member changes kind. */
+const KIND_FIELDS: Record<string, readonly string[]> = {
+  link: ['group'],
+  shock: ['minLength', 'maxLength'],
+  spring: ['rate'],
+  hinge: ['body'],
+};
+
+/**
+ * Turns a member into another kind. Fields of the old kind go; a new shock gets stroke limits
+ * around its present length; a hinge needs both ends on the frame and the arm it carries.
+ */
+export function setMemberKind(doc: Sketch, id: string, kind: MemberKind, hingeBody?: 'arm-left' | 'arm-right'): Sketch {
+  const i = memberIndex(doc, id);
+  const old = doc.members[i];
+  if (old.kind === kind) return doc;
+  const kept: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(old)) if (!(KIND_FIELDS[old.kind] ?? []).includes(k)) kept[k] = v;
+  kept.kind = kind;
+  if (kind === 'shock') {
+    const len = memberLength(doc, old) ?? 0;
+    kept.minLength = Math.round(len * NEW_SHOCK_COMPRESSED_FRACTION);
+    kept.maxLength = Math.round(len * NEW_SHOCK_EXTENDED_FRACTION);
+  }
+  if (kind === 'hinge') {
+    const a = doc.points[pointIndex(doc, old.a)];
+    const b = doc.points[pointIndex(doc, old.b)];
+    if (a.body !== 'frame' || b.body !== 'frame') throw new BoardEditError('A hinge axis runs between two frame pivots.');
+    const body = hingeBody ?? (a.y + b.y >= 0 ? 'arm-left' : 'arm-right');
+    kept.body = body;
+  }
+  const members = doc.members.slice();
+  members[i] = kept as Member;
+  return { ...doc, members };
+}
+
+/** Changes the pivots a member joins. */
+export function setMemberEnds(doc: Sketch, id: string, a: string, b: string): Sketch {
+  const i = memberIndex(doc, id);
+  pointIndex(doc, a);
+  pointIndex(doc, b);
+  if (a === b) throw new BoardEditError('A member joins two different pivots.');
+  const m = doc.members[i];
+  if (m.a === a && m.b === b) return doc;
+  const members = doc.members.slice();
+  members[i] = { ...m, a, b };
+  return { ...doc, members };
+}
+
+/** Member fields a user sets in the member table. `undefined` removes the field. */
+export type MemberField = 'minLength' | 'maxLength' | 'rate' | 'group';
+
+export function setMemberField(doc: Sketch, id: string, field: MemberField, value: number | string | undefined): Sketch {
+  const i = memberIndex(doc, id);
+  const m = doc.members[i] as Record<string, unknown>;
+  if (m[field] === value) return doc;
+  const next: Record<string, unknown> = { ...m };
+  if (value === undefined) delete next[field];
+  else next[field] = value;
+  const members = doc.members.slice();
+  members[i] = next as Member;
+  return { ...doc, members };
+}
+
+/** Vehicle dimensions the board edits (mm). */
+export type VehicleField = 'wheelbase' | 'cgHeight' | 'track' | 'tireRadius';
+
+export function setVehicleField(doc: Sketch, field: VehicleField, value: Mm): Sketch {
+  if (doc.vehicle[field] === value) return doc;
+  return { ...doc, vehicle: { ...doc.vehicle, [field]: value } };
+}
+
+/** Sets (or with `undefined`, removes) a top-level field of the document, e.g. `name`, `targets`, `tracing`. */
+export function setDocumentField(doc: Sketch, key: string, value: unknown): Sketch {
+  const current = (doc as Record<string, unknown>)[key];
+  if (current === value) return doc;
+  const next: Record<string, unknown> = { ...doc };
+  if (value === undefined) delete next[key];
+  else next[key] = value;
+  return next as Sketch;
+}
+
+/** A free id from a stem: "LL", "LL2", "LL3", … */
+export function freeId(taken: Iterable<string>, stem: string): string {
+  const set = new Set(taken);
+  if (!set.has(stem)) return stem;
+  for (let n = 2; ; n++) if (!set.has(`${stem}${n}`)) return `${stem}${n}`;
+}
