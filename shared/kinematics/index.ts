@@ -27,3 +27,8 @@ export {
 export type { Sketch, SketchInput, Layout, BodyId, MovingBodyId, MemberKind, SketchPoint, SketchMember } from '../schema/sketch';
 export { SketchValidationError, isSketchValidationError } from '../schema/errors';
 export type { StarterParam, StarterSpec } from './starters/types';
+export { runSweep } from './run';
+export { sweepSketch } from './sweep';
+export { pointsAt } from './points';
+export { poseApply } from './pose';
+export type { Vec3 } from './vec';

@@ -1,0 +1,70 @@
+/**
+ * What a sweep imposes. A row is set by two numbers, heave travel (mm) and roll (deg);
+ * the heave sweep holds roll at 0, the roll sweep holds travel at 0, the grid varies both.
+ * - solid axle: z = travel, roll = roll (sketch-format.md);
+ * - wheel carrier (arm, knuckle): its wheel centre's z = travel ± halfTrack·tan(roll),
+ *   left side up for positive roll, as the axle's wheels would move;
+ * - free bodies: nothing imposed.
+ */
+import { degToRad } from '../units';
+import type { LinkageModel } from './model';
+import { POSE_ROLL, POSE_SIZE, POSE_Z } from './pose';
+
+export interface Drive {
+  /** 1 where a state coordinate is imposed */
+  imposed: Uint8Array;
+  /** indices of the solved coordinates, in state order */
+  free: Int32Array;
+}
+
+export function driveBuild(model: LinkageModel): Drive {
+  const imposed = new Uint8Array(model.stateSize);
+  for (const b of model.bodies) {
+    const o = b.slot * POSE_SIZE;
+    if (b.role === 'axle') {
+      imposed[o + POSE_Z] = 1;
+      imposed[o + POSE_ROLL] = 1;
+    } else if (b.role === 'wheel-carrier') {
+      imposed[o + POSE_Z] = 1;
+    }
+  }
+  const free: number[] = [];
+  for (let i = 0; i < model.stateSize; i++) if (!imposed[i]) free.push(i);
+  return { imposed, free: Int32Array.from(free) };
+}
+
+/** Writes the imposed coordinates for (travel mm, roll deg) into `state` (mm, rad). */
+export function driveApply(model: LinkageModel, state: Float64Array, travel: number, rollDeg: number): void {
+  const roll = degToRad(rollDeg);
+  for (const b of model.bodies) {
+    const o = b.slot * POSE_SIZE;
+    if (b.role === 'axle') {
+      state[o + POSE_Z] = travel;
+      state[o + POSE_ROLL] = roll;
+    } else if (b.role === 'wheel-carrier') {
+      const sign = b.side === 'left' ? 1 : -1;
+      state[o + POSE_Z] = travel + sign * b.halfTrack * Math.tan(roll);
+    }
+  }
+}
+
+/**
+ * Writes d(imposed coordinates)/d(parameter) into `rate` (zero elsewhere): per mm of travel
+ * (`wrt` = 'travel') or per degree of roll (`wrt` = 'roll').
+ */
+export function driveRate(model: LinkageModel, rate: Float64Array, wrt: 'travel' | 'roll', rollDeg: number): void {
+  rate.fill(0);
+  const perDeg = Math.PI / 180;
+  const roll = degToRad(rollDeg);
+  for (const b of model.bodies) {
+    const o = b.slot * POSE_SIZE;
+    if (b.role === 'axle') {
+      if (wrt === 'travel') rate[o + POSE_Z] = 1;
+      else rate[o + POSE_ROLL] = perDeg;
+    } else if (b.role === 'wheel-carrier') {
+      const sign = b.side === 'left' ? 1 : -1;
+      const sec = 1 / Math.cos(roll);
+      rate[o + POSE_Z] = wrt === 'travel' ? 1 : sign * b.halfTrack * sec * sec * perDeg;
+    }
+  }
+}

@@ -1,0 +1,195 @@
+/**
+ * The linkage model the solver works on, built once per sweep from a validated sketch:
+ * a list of moving bodies (each with a slot of six pose unknowns and a reference point),
+ * the points placed on them, and the constraints between them. Layouts differ only in
+ * which bodies and constraints they bring; the solver never looks at `layout`.
+ */
+import type { MovingBodyId, Sketch, SketchMember } from '../schema/sketch';
+import { rigidMemberKinds } from '../schema/sketch';
+import { vec, vecCross, vecDot, vecLength, vecMid, vecScale, vecSub, type Vec3 } from './vec';
+import { POSE_SIZE } from './pose';
+
+/** Frame points have no slot. */
+export const FRAME_SLOT = -1;
+
+/**
+ * How the sweep drives a body:
+ * - `axle`: a solid axle; z (travel) and roll are imposed, x, y, pitch, yaw solved.
+ * - `wheel-carrier`: an arm or knuckle carrying a wheel centre (its reference point);
+ *   z of the wheel centre is imposed, the other five solved.
+ * - `free`: everything solved (e.g. a shackle body carried along by its links).
+ */
+export type BodyRole = 'axle' | 'wheel-carrier' | 'free';
+
+export interface BodyModel {
+  id: MovingBodyId;
+  slot: number;
+  role: BodyRole;
+  /** mm, ride position of the pose origin */
+  reference: Vec3;
+  /** which side a wheel carrier is on (for the roll sweep); null for the axle and free bodies */
+  side: 'left' | 'right' | null;
+  /** mm, |y| of the wheel centre of a wheel carrier: the lever of body roll at that wheel */
+  halfTrack: number;
+}
+
+export interface PointModel {
+  id: string;
+  slot: number;
+  /** mm, position at ride */
+  ride: Vec3;
+  /** mm, ride position minus the body's reference point (world position for frame points) */
+  local: Vec3;
+}
+
+/** A member of fixed length with a spherical joint at each end: one residual, mm. */
+export interface DistanceConstraint {
+  type: 'distance';
+  member: SketchMember;
+  a: PointModel;
+  b: PointModel;
+  /** mm, ride length */
+  length: number;
+}
+
+/**
+ * A hinge: the arm body turns about the frame axis a→b. Five residuals (mm): the arm's copy
+ * of point a stays on a (three), its copy of b stays on the axis line through b (the two
+ * components across the axis), so a consistent hinge adds no spurious redundancy.
+ */
+export interface HingeConstraint {
+  type: 'hinge';
+  member: SketchMember;
+  slot: number;
+  axisA: Vec3;
+  axisB: Vec3;
+  localA: Vec3;
+  localB: Vec3;
+  /** unit vectors across the axis */
+  across1: Vec3;
+  across2: Vec3;
+}
+
+export type Constraint = DistanceConstraint | HingeConstraint;
+
+export const constraintRows = (c: Constraint): number => (c.type === 'distance' ? 1 : 5);
+
+export interface LinkageModel {
+  sketch: Sketch;
+  bodies: BodyModel[];
+  bodyById: Map<MovingBodyId, BodyModel>;
+  points: Map<string, PointModel>;
+  constraints: Constraint[];
+  /** total residual rows */
+  residualCount: number;
+  /** 6 × number of bodies */
+  stateSize: number;
+  wheelLeft: PointModel;
+  wheelRight: PointModel;
+  /** the solid axle, if the sketch has one */
+  axle: BodyModel | null;
+}
+
+function bodyReference(sketch: Sketch, body: MovingBodyId): Vec3 {
+  const pts = sketch.points.filter((p) => p.body === body);
+  const wl = sketch.points.find((p) => p.id === sketch.wheels.left);
+  const wr = sketch.points.find((p) => p.id === sketch.wheels.right);
+  // sketch-format.md: the axle reference point is the midpoint of the two wheel centres.
+  if (wl && wr && wl.body === body && wr.body === body) return vecMid(wl, wr);
+  const wheel = [wl, wr].find((w) => w && w.body === body);
+  if (wheel) return vec(wheel.x, wheel.y, wheel.z);
+  const n = pts.length || 1;
+  return vec(
+    pts.reduce((s, p) => s + p.x, 0) / n,
+    pts.reduce((s, p) => s + p.y, 0) / n,
+    pts.reduce((s, p) => s + p.z, 0) / n,
+  );
+}
+
+/** Moving bodies of a sketch in a fixed order, each with its reference point (mm, ride). */
+export function sketchBodyReferences(sketch: Sketch): Map<MovingBodyId, Vec3> {
+  const out = new Map<MovingBodyId, Vec3>();
+  for (const p of sketch.points) {
+    if (p.body !== 'frame' && !out.has(p.body)) out.set(p.body, bodyReference(sketch, p.body));
+  }
+  return out;
+}
+
+function unitAcross(axis: Vec3): [Vec3, Vec3] {
+  const u = vecScale(axis, 1 / vecLength(axis));
+  // Any vector not parallel to the axis seeds the pair.
+  const seed = Math.abs(u.x) < 0.9 ? vec(1, 0, 0) : vec(0, 1, 0);
+  const e1raw = vecSub(seed, vecScale(u, vecDot(seed, u)));
+  const e1 = vecScale(e1raw, 1 / vecLength(e1raw));
+  return [e1, vecCross(u, e1)];
+}
+
+/** Builds the model of a validated sketch. */
+export function linkageModelBuild(sketch: Sketch): LinkageModel {
+  const refs = sketchBodyReferences(sketch);
+  const wl = sketch.points.find((p) => p.id === sketch.wheels.left)!;
+  const wr = sketch.points.find((p) => p.id === sketch.wheels.right)!;
+  const bodies: BodyModel[] = [];
+  for (const [id, reference] of refs) {
+    const carriesLeft = wl.body === id;
+    const carriesRight = wr.body === id;
+    let role: BodyRole = 'free';
+    let side: BodyModel['side'] = null;
+    let halfTrack = 0;
+    if (carriesLeft && carriesRight) role = 'axle';
+    else if (carriesLeft || carriesRight) {
+      role = 'wheel-carrier';
+      side = carriesLeft ? 'left' : 'right';
+      halfTrack = Math.abs((carriesLeft ? wl : wr).y);
+    }
+    bodies.push({ id, slot: bodies.length, role, reference, side, halfTrack });
+  }
+  const bodyById = new Map(bodies.map((b) => [b.id, b]));
+  const points = new Map<string, PointModel>();
+  for (const p of sketch.points) {
+    const ride = vec(p.x, p.y, p.z);
+    const body = p.body === 'frame' ? undefined : bodyById.get(p.body);
+    points.set(p.id, {
+      id: p.id,
+      slot: body ? body.slot : FRAME_SLOT,
+      ride,
+      local: body ? vecSub(ride, body.reference) : ride,
+    });
+  }
+  const constraints: Constraint[] = [];
+  for (const m of sketch.members) {
+    const a = points.get(m.a)!;
+    const b = points.get(m.b)!;
+    if (rigidMemberKinds.includes(m.kind)) {
+      constraints.push({ type: 'distance', member: m, a, b, length: vecLength(vecSub(a.ride, b.ride)) });
+    } else if (m.kind === 'hinge') {
+      const body = bodyById.get(m.body);
+      if (!body) continue;
+      const [across1, across2] = unitAcross(vecSub(b.ride, a.ride));
+      constraints.push({
+        type: 'hinge',
+        member: m,
+        slot: body.slot,
+        axisA: a.ride,
+        axisB: b.ride,
+        localA: vecSub(a.ride, body.reference),
+        localB: vecSub(b.ride, body.reference),
+        across1,
+        across2,
+      });
+    }
+  }
+  const axle = bodies.find((b) => b.role === 'axle') ?? null;
+  return {
+    sketch,
+    bodies,
+    bodyById,
+    points,
+    constraints,
+    residualCount: constraints.reduce((s, c) => s + constraintRows(c), 0),
+    stateSize: bodies.length * POSE_SIZE,
+    wheelLeft: points.get(wl.id)!,
+    wheelRight: points.get(wr.id)!,
+    axle,
+  };
+}

@@ -1,0 +1,187 @@
+/**
+ * Constraint residuals (mm) and their analytic Jacobian with respect to every pose
+ * coordinate of every body (per mm for translations, per radian for rotations).
+ * - distance (link, lateral rod, tie rod, shackle): r = |pA − pB| − L0,
+ *   ∂r/∂q = u · (∂pA/∂q − ∂pB/∂q), u the unit vector from B to A;
+ * - hinge: the arm's copies of the axis points stay on the frame axis.
+ * A point on a body is p = ref + t + R·local, so ∂p/∂t = I and ∂p/∂angle_k = (∂R/∂angle_k)·local.
+ */
+import type { LinkageModel, PointModel } from './model';
+import { FRAME_SLOT } from './model';
+import { mat3Apply, POSE_ROLL, POSE_SIZE, rotationSetFill, type RotationSet } from './pose';
+
+/** Below this (mm) a member's direction is undefined; only reachable by a wildly wrong trial pose. */
+const DIRECTION_EPSILON_MM = 1e-12;
+
+/** Rotation sets of every body for the given state, reused across calls. */
+export class BodyRotations {
+  readonly sets: RotationSet[];
+  constructor(count: number) {
+    this.sets = Array.from({ length: count }, () => new Float64Array(36));
+  }
+  update(state: Float64Array): void {
+    for (let s = 0; s < this.sets.length; s++) {
+      const o = s * POSE_SIZE;
+      rotationSetFill(this.sets[s], state[o + POSE_ROLL], state[o + POSE_ROLL + 1], state[o + POSE_ROLL + 2]);
+    }
+  }
+}
+
+/** World position (mm) of a point for the state whose rotations are in `rot`; writes out[o..o+2]. */
+export function pointPlace(
+  model: LinkageModel,
+  p: PointModel,
+  state: Float64Array,
+  rot: BodyRotations,
+  out: Float64Array,
+  o: number,
+): void {
+  if (p.slot === FRAME_SLOT) {
+    out[o] = p.ride.x;
+    out[o + 1] = p.ride.y;
+    out[o + 2] = p.ride.z;
+    return;
+  }
+  const body = model.bodies[p.slot];
+  const so = p.slot * POSE_SIZE;
+  mat3Apply(rot.sets[p.slot], 0, p.local.x, p.local.y, p.local.z, out, o);
+  out[o] += body.reference.x + state[so];
+  out[o + 1] += body.reference.y + state[so + 1];
+  out[o + 2] += body.reference.z + state[so + 2];
+}
+
+/**
+ * Velocity of a point (mm per unit parameter) for a state rate `dq` (per-coordinate
+ * derivatives, mm and rad); writes out[o..o+2].
+ */
+export function pointVelocity(
+  p: PointModel,
+  dq: Float64Array,
+  rot: BodyRotations,
+  out: Float64Array,
+  o: number,
+  tmp: Float64Array,
+): void {
+  out[o] = 0;
+  out[o + 1] = 0;
+  out[o + 2] = 0;
+  if (p.slot === FRAME_SLOT) return;
+  const so = p.slot * POSE_SIZE;
+  const rs = rot.sets[p.slot];
+  out[o] = dq[so];
+  out[o + 1] = dq[so + 1];
+  out[o + 2] = dq[so + 2];
+  for (let k = 0; k < 3; k++) {
+    const w = dq[so + POSE_ROLL + k];
+    if (w === 0) continue;
+    mat3Apply(rs, 9 * (k + 1), p.local.x, p.local.y, p.local.z, tmp, 0);
+    out[o] += w * tmp[0];
+    out[o + 1] += w * tmp[1];
+    out[o + 2] += w * tmp[2];
+  }
+}
+
+/**
+ * Adds `sign`·(e · ∂p/∂q) for a body point with local offset (lx, ly, lz) into row `row` of
+ * the Jacobian J (row-major, `cols` columns).
+ */
+function addPointRow(
+  J: Float64Array,
+  row: number,
+  cols: number,
+  slot: number,
+  rs: RotationSet,
+  lx: number,
+  ly: number,
+  lz: number,
+  ex: number,
+  ey: number,
+  ez: number,
+  sign: number,
+  tmp: Float64Array,
+): void {
+  const base = row * cols + slot * POSE_SIZE;
+  J[base] += sign * ex;
+  J[base + 1] += sign * ey;
+  J[base + 2] += sign * ez;
+  for (let k = 0; k < 3; k++) {
+    mat3Apply(rs, 9 * (k + 1), lx, ly, lz, tmp, 0);
+    J[base + 3 + k] += sign * (ex * tmp[0] + ey * tmp[1] + ez * tmp[2]);
+  }
+}
+
+/** Scratch buffers of one evaluator. */
+export interface ResidualWork {
+  rot: BodyRotations;
+  pts: Float64Array;
+  tmp: Float64Array;
+}
+
+export function residualWorkCreate(model: LinkageModel): ResidualWork {
+  return { rot: new BodyRotations(model.bodies.length), pts: new Float64Array(6), tmp: new Float64Array(3) };
+}
+
+/**
+ * Evaluates the residuals r (length model.residualCount, mm) and, when J is given, the
+ * full Jacobian (residualCount × stateSize, row-major) at `state`.
+ */
+export function residualsEvaluate(
+  model: LinkageModel,
+  state: Float64Array,
+  work: ResidualWork,
+  r: Float64Array,
+  J: Float64Array | null,
+): void {
+  const { rot, pts, tmp } = work;
+  rot.update(state);
+  const cols = model.stateSize;
+  if (J) J.fill(0);
+  let row = 0;
+  for (const c of model.constraints) {
+    if (c.type === 'distance') {
+      pointPlace(model, c.a, state, rot, pts, 0);
+      pointPlace(model, c.b, state, rot, pts, 3);
+      const dx = pts[0] - pts[3], dy = pts[1] - pts[4], dz = pts[2] - pts[5];
+      const len = Math.sqrt(dx * dx + dy * dy + dz * dz);
+      r[row] = len - c.length;
+      if (J) {
+        const inv = 1 / Math.max(len, DIRECTION_EPSILON_MM);
+        const ux = dx * inv, uy = dy * inv, uz = dz * inv;
+        if (c.a.slot !== FRAME_SLOT) {
+          addPointRow(J, row, cols, c.a.slot, rot.sets[c.a.slot], c.a.local.x, c.a.local.y, c.a.local.z, ux, uy, uz, 1, tmp);
+        }
+        if (c.b.slot !== FRAME_SLOT) {
+          addPointRow(J, row, cols, c.b.slot, rot.sets[c.b.slot], c.b.local.x, c.b.local.y, c.b.local.z, ux, uy, uz, -1, tmp);
+        }
+      }
+      row += 1;
+    } else {
+      const body = model.bodies[c.slot];
+      const so = c.slot * POSE_SIZE;
+      const rs = rot.sets[c.slot];
+      // Arm's copy of axis point a, placed.
+      mat3Apply(rs, 0, c.localA.x, c.localA.y, c.localA.z, pts, 0);
+      const ax = body.reference.x + state[so] + pts[0] - c.axisA.x;
+      const ay = body.reference.y + state[so + 1] + pts[1] - c.axisA.y;
+      const az = body.reference.z + state[so + 2] + pts[2] - c.axisA.z;
+      mat3Apply(rs, 0, c.localB.x, c.localB.y, c.localB.z, pts, 3);
+      const bx = body.reference.x + state[so] + pts[3] - c.axisB.x;
+      const by = body.reference.y + state[so + 1] + pts[4] - c.axisB.y;
+      const bz = body.reference.z + state[so + 2] + pts[5] - c.axisB.z;
+      r[row] = ax;
+      r[row + 1] = ay;
+      r[row + 2] = az;
+      r[row + 3] = bx * c.across1.x + by * c.across1.y + bz * c.across1.z;
+      r[row + 4] = bx * c.across2.x + by * c.across2.y + bz * c.across2.z;
+      if (J) {
+        const la = c.localA, lb = c.localB, e1 = c.across1, e2 = c.across2;
+        addPointRow(J, row, cols, c.slot, rs, la.x, la.y, la.z, 1, 0, 0, 1, tmp);
+        addPointRow(J, row + 1, cols, c.slot, rs, la.x, la.y, la.z, 0, 1, 0, 1, tmp);
+        addPointRow(J, row + 2, cols, c.slot, rs, la.x, la.y, la.z, 0, 0, 1, 1, tmp);
+        addPointRow(J, row + 3, cols, c.slot, rs, lb.x, lb.y, lb.z, e1.x, e1.y, e1.z, 1, tmp);
+        addPointRow(J, row + 4, cols, c.slot, rs, lb.x, lb.y, lb.z, e2.x, e2.y, e2.z, 1, tmp);
+      }
+      row += 5;
+    }
+  }
+}

@@ -1,0 +1,218 @@
+/**
+ * Turning solved poses into result rows: place the points, then read every metric of
+ * sketch-format.md off them. The plan (which links stand for which group, which rod gives
+ * the roll centre) is made once per sweep.
+ */
+import type { MovingBodyId, SketchMember } from '../schema/sketch';
+import { antiSquatPercent } from './metrics/antiSquat';
+import { drivelineReading } from './metrics/driveline';
+import { leftGroupLink, sideViewCrossing } from './metrics/instantCenter';
+import { rollCenterFromLinkPairs, rollCenterFromRod } from './metrics/rollCenter';
+import type { LinkageModel, PointModel } from './model';
+import { poseFromState, POSE_SIZE } from './pose';
+import { BodyRotations, pointPlace, pointVelocity } from './residuals';
+import type { SolvedRow } from './march';
+import type { BodyPoses, DrivelineReading, HeaveRow, MemberReading, Pose, RollRow } from './types';
+import { vec, type Vec3 } from './vec';
+
+/** Magnitudes below this are round-off of a zero (mm, deg or %) and are written as 0. */
+export const OUTPUT_ZERO_TOLERANCE = 1e-10;
+
+const clean = (v: number) => (Math.abs(v) < OUTPUT_ZERO_TOLERANCE ? 0 : v);
+
+function cleanPose(p: Pose): Pose {
+  return { x: clean(p.x), y: clean(p.y), z: clean(p.z), roll: clean(p.roll), pitch: clean(p.pitch), yaw: clean(p.yaw) };
+}
+
+interface MemberPlan {
+  member: SketchMember;
+  a: PointModel;
+  b: PointModel;
+  rideLength: number;
+}
+
+export interface RowPlan {
+  model: LinkageModel;
+  members: MemberPlan[];
+  upper: MemberPlan | null;
+  lower: MemberPlan | null;
+  rod: MemberPlan | null;
+  upperPair: [MemberPlan, MemberPlan] | null;
+  lowerPair: [MemberPlan, MemberPlan] | null;
+  driveline: { output: PointModel; outputAxis: PointModel; pinion: PointModel; pinionAxis: PointModel; rideLength: number } | null;
+  /** the body whose pose is a row's `pose`: the axle, else the body carrying the left wheel */
+  primarySlot: number;
+  rot: BodyRotations;
+}
+
+export function rowPlanBuild(model: LinkageModel): RowPlan {
+  const { sketch, points } = model;
+  const members: MemberPlan[] = sketch.members
+    .filter((m) => m.kind !== 'hinge')
+    .map((m) => {
+      const a = points.get(m.a)!;
+      const b = points.get(m.b)!;
+      return { member: m, a, b, rideLength: Math.hypot(a.ride.x - b.ride.x, a.ride.y - b.ride.y, a.ride.z - b.ride.z) };
+    });
+  const byId = new Map(members.map((p) => [p.member.id, p]));
+  const pick = (m: SketchMember | null) => (m ? byId.get(m.id) ?? null : null);
+  const pair = (group: 'upper' | 'lower'): [MemberPlan, MemberPlan] | null => {
+    const g = members.filter((p) => p.member.kind === 'link' && p.member.group === group);
+    return g.length === 2 ? [g[0], g[1]] : null;
+  };
+  const d = sketch.driveline;
+  return {
+    model,
+    members,
+    upper: pick(leftGroupLink(sketch, 'upper')),
+    lower: pick(leftGroupLink(sketch, 'lower')),
+    rod: members.find((p) => p.member.kind === 'lateral-rod') ?? null,
+    upperPair: pair('upper'),
+    lowerPair: pair('lower'),
+    driveline: d
+      ? {
+          output: points.get(d.output)!,
+          outputAxis: points.get(d.outputAxis)!,
+          pinion: points.get(d.pinion)!,
+          pinionAxis: points.get(d.pinionAxis)!,
+          rideLength: Math.hypot(
+            points.get(d.output)!.ride.x - points.get(d.pinion)!.ride.x,
+            points.get(d.output)!.ride.y - points.get(d.pinion)!.ride.y,
+            points.get(d.output)!.ride.z - points.get(d.pinion)!.ride.z,
+          ),
+        }
+      : null,
+    primarySlot: model.axle ? model.axle.slot : model.wheelLeft.slot,
+    rot: new BodyRotations(model.bodies.length),
+  };
+}
+
+/** Places points of one row; each call reuses the plan's rotation buffers. */
+class RowPlacer {
+  private readonly buf = new Float64Array(3);
+  private readonly cache = new Map<string, Vec3>();
+  constructor(private readonly plan: RowPlan, private readonly state: Float64Array) {
+    plan.rot.update(state);
+  }
+  at(p: PointModel): Vec3 {
+    let v = this.cache.get(p.id);
+    if (!v) {
+      pointPlace(this.plan.model, p, this.state, this.plan.rot, this.buf, 0);
+      v = vec(this.buf[0], this.buf[1], this.buf[2]);
+      this.cache.set(p.id, v);
+    }
+    return v;
+  }
+}
+
+function bodyPoses(model: LinkageModel, state: Float64Array): BodyPoses {
+  const out: BodyPoses = {};
+  for (const b of model.bodies) out[b.id as MovingBodyId] = cleanPose(poseFromState(state, b.slot));
+  return out;
+}
+
+function memberReadings(plan: RowPlan, at: RowPlacer, rate: Float64Array | null): Record<string, MemberReading> {
+  const out: Record<string, MemberReading> = {};
+  const va = new Float64Array(3), vb = new Float64Array(3), tmp = new Float64Array(3);
+  for (const p of plan.members) {
+    const a = at.at(p.a), b = at.at(p.b);
+    const dx = a.x - b.x, dy = a.y - b.y, dz = a.z - b.z;
+    const length = Math.sqrt(dx * dx + dy * dy + dz * dz);
+    const reading: MemberReading = { length, lengthChange: clean(length - p.rideLength) };
+    const kind = p.member.kind;
+    if (rate && (kind === 'shock' || kind === 'spring')) {
+      // d length / d travel = u · (vA − vB), with the point velocities from the pose sensitivity.
+      pointVelocity(p.a, rate, plan.rot, va, 0, tmp);
+      pointVelocity(p.b, rate, plan.rot, vb, 0, tmp);
+      const mr = Math.abs((dx * (va[0] - vb[0]) + dy * (va[1] - vb[1]) + dz * (va[2] - vb[2])) / length);
+      reading.motionRatio = clean(mr);
+      if (kind === 'spring' && p.member.rate !== undefined) {
+        // Wheel rate k_w = k_s · MR² (Barton & Fieldhouse, Automotive Chassis Engineering, §3.9).
+        reading.wheelRate = clean(p.member.rate * mr * mr);
+      }
+    }
+    out[p.member.id] = reading;
+  }
+  return out;
+}
+
+function drivelineAt(plan: RowPlan, at: RowPlacer): DrivelineReading | undefined {
+  const d = plan.driveline;
+  if (!d) return undefined;
+  const r = drivelineReading(at.at(d.output), at.at(d.outputAxis), at.at(d.pinion), at.at(d.pinionAxis), d.rideLength);
+  return { length: r.length, plunge: clean(r.plunge), outputAngle: clean(r.outputAngle), pinionAngle: clean(r.pinionAngle) };
+}
+
+/** A heave row from a solved row whose `rate` is d(state)/d(travel). */
+export function heaveRowBuild(plan: RowPlan, solved: SolvedRow): HeaveRow {
+  const { model } = plan;
+  const { sketch } = model;
+  const at = new RowPlacer(plan, solved.state);
+  const pose = cleanPose(poseFromState(solved.state, plan.primarySlot));
+  const axle = model.axle;
+  const wl = at.at(model.wheelLeft);
+
+  let instantCenter = null;
+  let parallelSlope: number | null = null;
+  if (plan.upper && plan.lower) {
+    const u1 = at.at(plan.upper.a), u2 = at.at(plan.upper.b);
+    const l1 = at.at(plan.lower.a), l2 = at.at(plan.lower.b);
+    instantCenter = sideViewCrossing(u1, u2, l1, l2);
+    if (!instantCenter && Math.abs(l2.x - l1.x) > 0) parallelSlope = (l2.z - l1.z) / (l2.x - l1.x);
+  }
+  const cp = { x: wl.x, z: solved.travel };
+  const antiSquat =
+    plan.upper && plan.lower
+      ? antiSquatPercent(instantCenter, cp, sketch.vehicle.cgHeight, sketch.vehicle.wheelbase, parallelSlope)
+      : null;
+
+  let rollCenterHeight: number | null = null;
+  if (plan.rod) rollCenterHeight = rollCenterFromRod(at.at(plan.rod.a), at.at(plan.rod.b));
+  else if (plan.upperPair && plan.lowerPair && axle) {
+    const seg = (p: MemberPlan): [Vec3, Vec3] => [at.at(p.a), at.at(p.b)];
+    const refX = axle.reference.x + solved.state[axle.slot * POSE_SIZE];
+    rollCenterHeight = rollCenterFromLinkPairs(
+      [seg(plan.upperPair[0]), seg(plan.upperPair[1])],
+      [seg(plan.lowerPair[0]), seg(plan.lowerPair[1])],
+      refX,
+    );
+  }
+
+  const row: HeaveRow = {
+    travel: solved.travel,
+    pose,
+    bodies: bodyPoses(model, solved.state),
+    pinionAngleChange: axle ? clean(-pose.pitch) : null,
+    lateralShift: axle ? pose.y : null,
+    foreAftShift: axle ? pose.x : clean(wl.x - model.wheelLeft.ride.x),
+    instantCenter: instantCenter ? { x: clean(instantCenter.x), z: clean(instantCenter.z) } : null,
+    antiSquat: antiSquat === null ? null : clean(antiSquat),
+    rollCenterHeight: rollCenterHeight === null ? null : clean(rollCenterHeight),
+    bind: clean(solved.bind),
+    members: memberReadings(plan, at, solved.rate),
+  };
+  const dl = drivelineAt(plan, at);
+  if (dl) row.driveline = dl;
+  return row;
+}
+
+/** A roll row from a solved row (travel 0, roll imposed). */
+export function rollRowBuild(plan: RowPlan, solved: SolvedRow): RollRow {
+  const { model } = plan;
+  const at = new RowPlacer(plan, solved.state);
+  const pose = cleanPose(poseFromState(solved.state, plan.primarySlot));
+  const wl = at.at(model.wheelLeft), wr = at.at(model.wheelRight);
+  const row: RollRow = {
+    roll: solved.roll,
+    pose,
+    bodies: bodyPoses(model, solved.state),
+    leftTravel: clean(wl.z - model.wheelLeft.ride.z),
+    rightTravel: clean(wr.z - model.wheelRight.ride.z),
+    rollSteer: model.axle && solved.roll !== 0 ? clean((100 * pose.yaw) / solved.roll) : null,
+    bind: clean(solved.bind),
+    members: memberReadings(plan, at, null),
+  };
+  const dl = drivelineAt(plan, at);
+  if (dl) row.driveline = dl;
+  return row;
+}
