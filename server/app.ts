@@ -2,6 +2,7 @@ import express, { type Express } from 'express';
 import compression from 'compression';
 import type { Sequelize } from 'sequelize';
 import type { ServerConfig } from './config';
+import type { Mailer } from './services/mail/mailer';
 import { securityHeaders } from './middleware/security';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { clientApp } from './middleware/client-app';
@@ -9,19 +10,24 @@ import { absoluteTimeout, configurePassport, passport, sessionMiddleware } from 
 import { csrf } from './middleware/csrf';
 import { healthRoutes } from './routes/health';
 import { authRoutes } from './routes/auth';
+import { sketchRoutes } from './routes/sketches';
+import { sharedRoutes } from './routes/shared';
+import { uploadRoutes } from './routes/uploads';
+import { adminRoutes } from './routes/admin';
 
 /** Largest JSON body accepted; a sketch file is a few tens of KB. */
 export const JSON_BODY_LIMIT = '256kb';
 
-/** What the app needs from outside: the open database and the settings. */
+/** What the app needs from outside: the open (migrated) database, the settings and the mailer. */
 export interface AppContext {
   sequelize: Sequelize;
   config: ServerConfig;
+  mailer: Mailer;
 }
 
 /** Builds the Express app (no listening; tests drive it with supertest). */
 export function createApp(ctx: AppContext): Express {
-  const { config } = ctx;
+  const { config, mailer } = ctx;
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
@@ -38,9 +44,13 @@ export function createApp(ctx: AppContext): Express {
   api.use(passport.initialize());
   api.use(passport.session());
   api.use(absoluteTimeout(config));
-  // Every state-changing call below needs the session's X-CSRF-Token.
+  // Every state-changing call below (uploads included) needs the session's X-CSRF-Token.
   api.use(csrf.csrfSynchronisedProtection);
-  api.use('/auth', authRoutes(config));
+  api.use('/auth', authRoutes(config, mailer));
+  api.use(uploadRoutes(config));
+  api.use('/sketches', sketchRoutes(config, mailer));
+  api.use('/shared', sharedRoutes());
+  api.use('/admin', adminRoutes());
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -16,6 +16,7 @@ const CONNECTION_PRAGMAS = [
 
 interface RawSqliteConnection {
   run(sql: string, cb: (err: Error | null) => void): void;
+  serialize(): void;
 }
 
 function runOn(connection: RawSqliteConnection, sql: string): Promise<void> {
@@ -27,6 +28,11 @@ function runOn(connection: RawSqliteConnection, sql: string): Promise<void> {
  * transaction id) besides its default one, and has no hook for new connections. Its
  * connection manager's getConnection is the single place they open, so the pragmas are run
  * there, once per connection, and awaited before the connection is handed out.
+ *
+ * Each connection is also put in serialized mode: node-sqlite3 otherwise runs several
+ * statements of one connection at once on libuv's thread pool (4 threads), where they wait
+ * for each other, and a connection waiting for the write lock could occupy every thread the
+ * lock holder needs to finish.
  */
 function applyPragmasOnEveryConnection(sequelize: Sequelize): void {
   const manager = sequelize.connectionManager as unknown as {
@@ -40,11 +46,31 @@ function applyPragmasOnEveryConnection(sequelize: Sequelize): void {
     if (!ready) {
       ready = (async () => {
         for (const sql of CONNECTION_PRAGMAS) await runOn(connection, sql);
+        connection.serialize();
       })();
       configured.set(connection, ready);
     }
     await ready;
     return connection;
+  };
+}
+
+/**
+ * Runs managed transactions one at a time within this process. SQLite has one writer anyway;
+ * queueing here means a waiting transaction waits in JavaScript instead of in SQLite's busy
+ * handler on a pool thread (which could starve the transaction holding the lock). busy_timeout
+ * still covers writers outside the queue (single statements, other processes).
+ * Do not start a transaction inside another one: it would wait for itself.
+ */
+function queueTransactions(sequelize: Sequelize): void {
+  let tail: Promise<unknown> = Promise.resolve();
+  const original = sequelize.transaction.bind(sequelize) as (...args: unknown[]) => Promise<unknown>;
+  (sequelize as unknown as { transaction: (...args: unknown[]) => Promise<unknown> }).transaction = (...args) => {
+    const managed = args.some((a) => typeof a === 'function');
+    if (!managed) return original(...args);
+    const run = tail.then(() => original(...args));
+    tail = run.catch(() => undefined);
+    return run;
   };
 }
 
@@ -61,6 +87,7 @@ export async function openDatabase(databasePath: string): Promise<Sequelize> {
     retry: { max: 3 },
   });
   applyPragmasOnEveryConnection(sequelize);
+  queueTransactions(sequelize);
   initModels(sequelize);
   await sequelize.authenticate();
   return sequelize;

@@ -2,27 +2,40 @@ import { loadConfig } from './config';
 import { openDatabase } from './db';
 import { migrate } from './migrations/umzug';
 import { seedDemoData } from './seed';
+import { setUpMail } from './services/mail';
+import { purgeDeleted } from './services/uploads';
 import { createApp } from './app';
 
-/** Opens the database, migrates, seeds, and listens on PORT. */
+const PURGE_EVERY_MS = 6 * 3600_000;
+
+/** Opens the database, migrates, seeds, starts the mail catcher (unless SMTP_URL), and listens on PORT. */
 async function main(): Promise<void> {
   const config = loadConfig();
   const sequelize = await openDatabase(config.databasePath);
   const applied = await migrate(sequelize);
   if (applied.length) console.log(`[arcwright] migrations applied: ${applied.join(', ')}`);
   await seedDemoData(sequelize);
+  const mail = await setUpMail(config);
+  console.log(mail.catcher ? `[arcwright] mail catcher on 127.0.0.1:${mail.catcher.port} (read it at /admin/outbox)` : '[arcwright] mail via SMTP_URL');
 
-  const app = createApp({ sequelize, config });
+  const purge = () => purgeDeleted(config.uploadsDir).catch((err) => console.error('[arcwright] purge failed:', err));
+  await purge();
+  setInterval(purge, PURGE_EVERY_MS).unref();
+
+  const app = createApp({ sequelize, config, mailer: mail.mailer });
   const server = app.listen(config.port, () => {
     console.log(`[arcwright] listening on http://localhost:${config.port} (database ${config.databasePath})`);
   });
 
+  let closing = false;
   const shutdown = (signal: string) => {
+    if (closing) return;
+    closing = true;
     console.log(`[arcwright] ${signal}: closing`);
-    server.close(() => {
-      void sequelize.close().finally(() => process.exit(0));
-    });
     setTimeout(() => process.exit(0), 5000).unref();
+    server.close(() => {
+      void mail.close().then(() => sequelize.close()).finally(() => process.exit(0));
+    });
   };
   process.on('SIGINT', () => shutdown('SIGINT'));
   process.on('SIGTERM', () => shutdown('SIGTERM'));

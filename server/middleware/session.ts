@@ -28,6 +28,11 @@ const SESSION_COOKIE = 'arcwright.sid';
 /** How often expired session rows are deleted (ms). */
 const SESSION_SWEEP_MS = 15 * 60_000;
 
+/** A session's expiry is pushed forward in the database at most this often (ms). */
+const TOUCH_EVERY_MS = 60_000;
+/** Sessions remembered for touch throttling before the memory is cleared. */
+const TOUCH_MEMORY = 10_000;
+
 const SequelizeStore = connectSessionSequelize(session.Store);
 
 /** express-session stored in the `sessions` table, with the user id copied into its own column. */
@@ -45,13 +50,26 @@ export function sessionMiddleware(sequelize: Sequelize, config: ServerConfig): R
   });
   // The store's own timer would keep a finished test process alive; run our own, unref'd.
   store.stopExpiringSessions();
-  setInterval(() => void store.clearExpiredSessions(), SESSION_SWEEP_MS).unref();
+  const sweepable = store as unknown as { clearExpiredSessions(): Promise<unknown> };
+  setInterval(() => void sweepable.clearExpiredSessions(), SESSION_SWEEP_MS).unref();
   // The store reads a row without looking at its expiry; an idle session must not come back.
   store.get = (sid: string, cb: (err: unknown, s?: session.SessionData | null) => void) => {
     Session.findOne({ where: { sid, expires: { [Op.gt]: new Date() } } }).then(
       (row) => cb(null, row?.data ? (JSON.parse(row.data) as session.SessionData) : null),
       (err) => cb(err),
     );
+  };
+
+  // express-session touches the row on every request (rolling expiry). Once a minute per
+  // session is precise enough for an idle timeout of an hour or more, and saves a write per call.
+  const lastTouch = new Map<string, number>();
+  const touch = store.touch.bind(store);
+  store.touch = (sid: string, data: session.SessionData, cb?: (err?: unknown) => void) => {
+    const now = Date.now();
+    if (now - (lastTouch.get(sid) ?? 0) < TOUCH_EVERY_MS) return cb?.();
+    if (lastTouch.size > TOUCH_MEMORY) lastTouch.clear();
+    lastTouch.set(sid, now);
+    return touch(sid, data, cb);
   };
 
   return session({

@@ -1,6 +1,8 @@
 import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug, type MigrationParams } from 'umzug';
 import * as accounts from './0001-accounts';
+import * as sketches from './0002-sketches';
+import * as mail from './0003-mail';
 
 /** A migration step: receives the query interface, never the models (they change, migrations do not). */
 export type Migration = (params: MigrationParams<QueryInterface>) => Promise<void>;
@@ -13,6 +15,8 @@ interface MigrationModule {
 /** Every migration, in order. Add new files at the end; never edit one that has shipped. */
 const steps: [name: string, module: MigrationModule][] = [
   ['0001-accounts', accounts],
+  ['0002-sketches', sketches],
+  ['0003-mail', mail],
 ];
 
 export function createMigrator(sequelize: Sequelize): Umzug<QueryInterface> {

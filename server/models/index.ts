@@ -4,13 +4,21 @@ import { Shop } from './shop.model';
 import { ClassGroup } from './class-group.model';
 import { ClassMember } from './class-member.model';
 import { Session } from './session.model';
+import { Sketch } from './sketch.model';
+import { SketchRevision } from './sketch-revision.model';
+import { Upload } from './upload.model';
+import { OutboxMessage } from './outbox-message.model';
+import { PasswordReset } from './password-reset.model';
 
-export { User, Shop, ClassGroup, ClassMember, Session };
+export { User, Shop, ClassGroup, ClassMember, Session, Sketch, SketchRevision, Upload, OutboxMessage, PasswordReset };
+export { shareModes, type ShareMode } from './sketch.model';
 export { roles, toPublicUser, type Role, type PublicUser } from './user.model';
 
 /** Binds every model to `sequelize` and declares the associations, in one place. Tables come from migrations. */
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [User, Shop, ClassGroup, ClassMember, Session]) model.initModel(sequelize);
+  for (const model of [
+    User, Shop, ClassGroup, ClassMember, Session, Sketch, SketchRevision, Upload, OutboxMessage, PasswordReset,
+  ]) model.initModel(sequelize);
 
   Shop.hasMany(User, { foreignKey: 'shopId', as: 'members' });
   User.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });
@@ -18,4 +26,15 @@ export function initModels(sequelize: Sequelize): void {
   ClassGroup.belongsTo(User, { foreignKey: 'instructorId', as: 'instructor' });
   ClassGroup.belongsToMany(User, { through: ClassMember, foreignKey: 'classId', otherKey: 'userId', as: 'students' });
   User.belongsToMany(ClassGroup, { through: ClassMember, foreignKey: 'userId', otherKey: 'classId', as: 'classes' });
+
+  User.hasMany(Sketch, { foreignKey: 'ownerId', as: 'sketches' });
+  Sketch.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });
+  Sketch.belongsTo(ClassGroup, { foreignKey: 'shareClassId', as: 'shareClass' });
+  Sketch.hasMany(SketchRevision, { foreignKey: 'sketchId', as: 'revisions' });
+  SketchRevision.belongsTo(Sketch, { foreignKey: 'sketchId' });
+  Sketch.hasMany(Upload, { foreignKey: 'sketchId', as: 'uploads' });
+  Upload.belongsTo(Sketch, { foreignKey: 'sketchId' });
+
+  User.hasMany(PasswordReset, { foreignKey: 'userId' });
+  PasswordReset.belongsTo(User, { foreignKey: 'userId' });
 }

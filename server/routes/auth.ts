@@ -4,10 +4,12 @@ import type { PublicUser } from '../models';
 import { csrf } from '../middleware/csrf';
 import { unauthorized } from '../middleware/http-error';
 import { parseOr400 } from '../middleware/validate';
-import { loginLimiters, signupLimiter } from '../middleware/rate-limit';
+import { loginLimiters, resetRequestLimiters, signupLimiter } from '../middleware/rate-limit';
 import { passport, SESSION_COOKIE } from '../middleware/session';
-import { loginBody, signupBody } from '../schemas/auth';
+import { loginBody, resetBody, resetRequestBody, signupBody } from '../schemas/auth';
 import { createAccount } from '../services/accounts';
+import type { Mailer } from '../services/mail/mailer';
+import { requestPasswordReset, resetPassword } from '../services/password-reset';
 
 /** Signs `user` in on a fresh session id (passport regenerates the session), starting the absolute clock. */
 function signIn(req: Request, user: PublicUser): Promise<void> {
@@ -29,7 +31,7 @@ function authenticateLocal(req: Request, res: Response, next: NextFunction): Pro
 }
 
 /** /api/auth: sign-up, sign-in, sign-out, who am I, and the CSRF token. */
-export function authRoutes(config: ServerConfig): Router {
+export function authRoutes(config: ServerConfig, mailer: Mailer): Router {
   const router = Router();
 
   router.get('/csrf', (req, res) => {
@@ -62,6 +64,18 @@ export function authRoutes(config: ServerConfig): Router {
       res.clearCookie(SESSION_COOKIE, { httpOnly: true, sameSite: 'lax', path: '/' });
       res.status(204).end();
     });
+  });
+
+  router.post('/reset-request', ...resetRequestLimiters(config), async (req, res) => {
+    const { email } = parseOr400(resetRequestBody, req.body);
+    await requestPasswordReset(email, config, mailer);
+    res.status(202).json({ status: 'if an account has this e-mail, a reset link is on its way' });
+  });
+
+  router.post('/reset', async (req, res) => {
+    const { token, password } = parseOr400(resetBody, req.body);
+    await resetPassword(token, password);
+    res.status(204).end();
   });
 
   return router;

@@ -9,12 +9,17 @@ import { openDatabase } from '../../server/db';
 import { migrate } from '../../server/migrations/umzug';
 import { seedDemoData } from '../../server/seed';
 import { createApp } from '../../server/app';
+import { setUpMail, type MailSetup } from '../../server/services/mail';
+import { OutboxMessage } from '../../server/models';
 
 export interface TestServer {
   app: Express;
   sequelize: Sequelize;
   config: ServerConfig;
+  mail: MailSetup;
   dir: string;
+  /** Messages in the outbox to `to`, newest first, once every queued mail has gone out. */
+  mailTo(to: string): Promise<OutboxMessage[]>;
   close(): Promise<void>;
 }
 
@@ -34,10 +39,16 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
   const sequelize = await openDatabase(config.databasePath);
   await migrate(sequelize);
   await seedDemoData(sequelize);
-  const app = createApp({ sequelize, config });
+  const mail = await setUpMail(config, { retryDelayMs: 20 });
+  const app = createApp({ sequelize, config, mailer: mail.mailer });
   return {
-    app, sequelize, config, dir,
+    app, sequelize, config, mail, dir,
+    async mailTo(to: string) {
+      await mail.mailer.idle();
+      return OutboxMessage.findAll({ where: { to }, order: [['id', 'DESC']] });
+    },
     async close() {
+      await mail.close();
       await sequelize.close();
       fs.rmSync(dir, { recursive: true, force: true });
     },

@@ -1,0 +1,39 @@
+import { z } from 'zod';
+import { layouts } from '../../shared/schema/sketch';
+import { shareModes } from '../models';
+import { emailField } from './auth';
+
+/** Longest sketch name (characters); the same bound as the sketch file's `name`. */
+export const SKETCH_NAME_MAX = 200;
+export const PAGE_SIZE_MAX = 100;
+
+const nameField = z.string().trim().min(1, 'must not be empty').max(SKETCH_NAME_MAX);
+
+export const createSketchBody = z.strictObject({
+  name: nameField.optional(),
+  document: z.unknown(),
+});
+
+export const updateSketchBody = z.strictObject({
+  document: z.unknown(),
+  name: nameField.optional(),
+  version: z.int('must be a whole number').positive(),
+});
+
+export const shareBody = z.strictObject({
+  mode: z.enum(shareModes),
+  email: emailField.optional(),
+});
+
+const flag = z.enum(['0', '1']).default('0').transform((v) => v === '1');
+
+export const listQuery = z.object({
+  q: z.string().trim().max(SKETCH_NAME_MAX).default(''),
+  layout: z.enum(layouts).optional(),
+  sort: z.enum(['name', 'layout', 'updatedAt']).default('updatedAt'),
+  order: z.enum(['asc', 'desc']).default('desc'),
+  page: z.coerce.number().int().min(1).max(100_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(PAGE_SIZE_MAX).default(20),
+  deleted: flag,
+});
+export type ListQuery = z.infer<typeof listQuery>;

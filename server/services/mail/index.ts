@@ -1,0 +1,30 @@
+import type { ServerConfig } from '../../config';
+import { startMailCatcher, type MailCatcher } from './catcher';
+import { catcherMailer, smtpMailer, type Mailer, type MailerOptions } from './mailer';
+
+export interface MailSetup {
+  mailer: Mailer;
+  /** The local catcher, when SMTP_URL is not set. */
+  catcher: MailCatcher | null;
+  close(): Promise<void>;
+}
+
+/** SMTP_URL when set; otherwise the in-process catcher that files every message in the outbox. */
+export async function setUpMail(config: ServerConfig, retry: Partial<Pick<MailerOptions, 'attempts' | 'retryDelayMs'>> = {}): Promise<MailSetup> {
+  const options = { from: config.mailFrom, ...retry };
+  if (config.smtpUrl) {
+    const mailer = smtpMailer(config.smtpUrl, options);
+    return { mailer, catcher: null, close: async () => mailer.close() };
+  }
+  const catcher = await startMailCatcher();
+  const mailer = catcherMailer(catcher.port, options);
+  return {
+    mailer,
+    catcher,
+    async close() {
+      await mailer.idle();
+      mailer.close();
+      await catcher.close();
+    },
+  };
+}

@@ -1,0 +1,83 @@
+import type { ServerConfig } from '../../config';
+import type { PublicUser } from '../../models';
+import type { MailMessage } from './mailer';
+
+const PRODUCT = 'Arcwright';
+
+/** Header text on one line: a name typed by a user must not start a new header. */
+function oneLine(s: string): string {
+  return s.replace(/[\r\n\t]+/g, ' ').trim();
+}
+
+function escapeHtml(s: string): string {
+  return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+}
+
+/** Wraps paragraphs (already escaped) and one button link in the product's plain mail layout. */
+function layout(paragraphs: string[], link: { label: string; url: string }, footer: string): string {
+  const url = escapeHtml(link.url);
+  return [
+    '<!doctype html><html><body style="font-family:Roboto,Arial,sans-serif;color:#1d2733;max-width:560px">',
+    `<h2 style="color:#2f5d8a;margin-bottom:8px">${PRODUCT}</h2>`,
+    ...paragraphs.map((p) => `<p>${p}</p>`),
+    `<p><a href="${url}" style="display:inline-block;padding:10px 16px;background:#2f5d8a;color:#fff;text-decoration:none;border-radius:4px">${escapeHtml(link.label)}</a></p>`,
+    `<p style="font-size:13px;color:#5b6773">Or paste this address into your browser: ${url}</p>`,
+    `<p style="font-size:12px;color:#5b6773">${footer}</p>`,
+    '</body></html>',
+  ].join('\n');
+}
+
+/** The password-reset mail: a single-use link valid for `validMinutes`. */
+export function passwordResetMail(config: ServerConfig, to: { email: string; name: string }, token: string, validMinutes: number): MailMessage {
+  const url = `${config.publicUrl}/reset?token=${encodeURIComponent(token)}`;
+  const footer = 'If you did not ask for this, ignore this mail: your password stays as it is.';
+  return {
+    to: to.email,
+    subject: `${PRODUCT}: reset your password`,
+    text: [
+      `Hello ${to.name},`,
+      '',
+      `Someone (we hope you) asked to reset the password of your ${PRODUCT} account.`,
+      `Open this link within ${validMinutes} minutes to choose a new one. It works once.`,
+      '',
+      url,
+      '',
+      footer,
+    ].join('\n'),
+    html: layout(
+      [
+        `Hello ${escapeHtml(to.name)},`,
+        `Someone (we hope you) asked to reset the password of your ${PRODUCT} account. Open the link within ${validMinutes} minutes to choose a new one. It works once.`,
+      ],
+      { label: 'Choose a new password', url },
+      footer,
+    ),
+  };
+}
+
+/** "A sketch was shared with you": the read-only link the owner chose to send. */
+export function shareNoticeMail(
+  config: ServerConfig,
+  args: { to: string; from: PublicUser; sketchName: string; url: string },
+): MailMessage {
+  const footer = `You get this mail because ${args.from.name} entered your address in ${PRODUCT}. The link opens the sketch read-only; sign in to copy it into your own library.`;
+  return {
+    to: args.to,
+    subject: oneLine(`${args.from.name} shared the sketch "${args.sketchName}" with you`),
+    text: [
+      'Hello,',
+      '',
+      `${args.from.name} shared the ${PRODUCT} sketch "${args.sketchName}" with you.`,
+      '',
+      args.url,
+      '',
+      footer,
+      `(${config.publicUrl})`,
+    ].join('\n'),
+    html: layout(
+      [`Hello,`, `${escapeHtml(args.from.name)} shared the ${PRODUCT} sketch <strong>${escapeHtml(args.sketchName)}</strong> with you.`],
+      { label: 'Open the sketch', url: args.url },
+      escapeHtml(footer),
+    ),
+  };
+}

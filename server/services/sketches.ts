@@ -1,0 +1,265 @@
+import { randomBytes } from 'node:crypto';
+import { Op, fn, col, where as sqlWhere, type Transaction, type WhereOptions } from 'sequelize';
+import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/sketch';
+import { Sketch, SketchRevision, User, type PublicUser, type ShareMode } from '../models';
+import { badRequest, conflict, notFound } from '../middleware/http-error';
+import type { ListQuery } from '../schemas/sketches';
+
+/** A soft-deleted sketch can be restored for this long (ms); then it is purged. */
+export const RESTORE_WINDOW_MS = 30 * 24 * 3600_000;
+const SHARE_TOKEN_BYTES = 24;
+
+export interface SketchSummary {
+  id: number;
+  name: string;
+  layout: string;
+  version: number;
+  updatedAt: string;
+  createdAt: string;
+  owner: { id: number; name: string };
+  mine: boolean;
+  share: ShareMode;
+  deletedAt: string | null;
+}
+
+export interface SketchDetail extends SketchSummary {
+  document: SketchDocument;
+  canEdit: boolean;
+  shareToken: string | null;
+}
+
+const withOwner = { model: User, as: 'owner', attributes: ['id', 'name'] };
+
+function summaryOf(row: Sketch, viewer: PublicUser | null): SketchSummary {
+  return {
+    id: row.id,
+    name: row.name,
+    layout: row.layout,
+    version: row.version,
+    updatedAt: row.updatedAt.toISOString(),
+    createdAt: row.createdAt.toISOString(),
+    owner: { id: row.ownerId, name: row.owner?.name ?? '' },
+    mine: viewer?.id === row.ownerId,
+    share: row.share,
+    deletedAt: row.deletedAt ? row.deletedAt.toISOString() : null,
+  };
+}
+
+function detailOf(row: Sketch, viewer: PublicUser | null): SketchDetail {
+  const summary = summaryOf(row, viewer);
+  return {
+    ...summary,
+    document: JSON.parse(row.document) as SketchDocument,
+    canEdit: summary.mine && !row.deletedAt,
+    shareToken: summary.mine ? row.shareToken : null,
+  };
+}
+
+/**
+ * Validates a sketch file, applying `name` over the file's own name first (the stored name is
+ * always the document's). 400 with one line per problem; `prefix` names where the file sat in the body.
+ */
+export function validDocument(doc: unknown, name: string | undefined, prefix = ''): SketchDocument {
+  const withName = name !== undefined && doc && typeof doc === 'object' && !Array.isArray(doc) ? { ...doc, name } : doc;
+  const checked = checkSketch(withName);
+  if (!checked.ok) {
+    const problems = prefix
+      ? checked.problems.map((p) => (p.startsWith('(document)') ? prefix + p.slice('(document)'.length) : `${prefix}.${p}`))
+      : checked.problems;
+    throw badRequest('not a valid sketch', problems);
+  }
+  return checked.sketch;
+}
+
+function transaction<T>(work: (t: Transaction) => Promise<T>): Promise<T> {
+  return Sketch.sequelize!.transaction(work);
+}
+
+/** The caller's own live sketch, inside `t`, or 404 (someone else's sketch looks exactly like a missing one). */
+async function ownSketch(user: PublicUser, id: number, t?: Transaction, opts: { deleted?: boolean } = {}): Promise<Sketch> {
+  const row = await Sketch.findOne({
+    where: { id, ownerId: user.id, deletedAt: opts.deleted ? { [Op.ne]: null } : null },
+    include: [withOwner],
+    transaction: t,
+  });
+  if (!row) throw notFound('no such sketch');
+  return row;
+}
+
+async function addRevision(row: Sketch, authorId: number, t: Transaction): Promise<void> {
+  const last = await SketchRevision.max<number, SketchRevision>('rev', { where: { sketchId: row.id }, transaction: t });
+  await SketchRevision.create(
+    { sketchId: row.id, rev: (last ?? 0) + 1, version: row.version, name: row.name, document: row.document, authorId },
+    { transaction: t },
+  );
+}
+
+async function insertSketch(owner: PublicUser, doc: SketchDocument): Promise<SketchDetail> {
+  const id = await transaction(async (t) => {
+    const row = await Sketch.create(
+      { ownerId: owner.id, name: doc.name, layout: doc.layout, document: JSON.stringify(doc) },
+      { transaction: t },
+    );
+    await addRevision(row, owner.id, t);
+    return row.id;
+  });
+  return getSketch(owner, id);
+}
+
+/** The caller's sketches (and, with classes, those shared with them), filtered, sorted and paged. */
+export async function listSketches(user: PublicUser, query: ListQuery) {
+  const conditions: WhereOptions[] = [{ ownerId: user.id }];
+  if (query.deleted) conditions.push({ deletedAt: { [Op.gt]: new Date(Date.now() - RESTORE_WINDOW_MS) } });
+  else conditions.push({ deletedAt: null });
+  if (query.layout) conditions.push({ layout: query.layout });
+  // instr() rather than LIKE, so that % and _ in the search text are plain characters.
+  if (query.q) conditions.push(sqlWhere(fn('instr', fn('lower', col('Sketch.name')), query.q.toLowerCase()), Op.gt, 0));
+  const sortColumn = query.sort === 'name' ? fn('lower', col('Sketch.name')) : col(`Sketch.${query.sort}`);
+  const direction = query.order.toUpperCase();
+  const { rows, count } = await Sketch.findAndCountAll({
+    where: { [Op.and]: conditions },
+    include: [withOwner],
+    order: [[sortColumn, direction], ['id', direction]],
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+  });
+  return { items: rows.map((r) => summaryOf(r, user)), total: count, page: query.page, pageSize: query.pageSize };
+}
+
+export async function getSketch(user: PublicUser, id: number): Promise<SketchDetail> {
+  return detailOf(await ownSketch(user, id), user);
+}
+
+export function createSketch(user: PublicUser, doc: SketchDocument): Promise<SketchDetail> {
+  return insertSketch(user, doc);
+}
+
+/**
+ * Saves a new version if `version` is still the current one. The check and the write happen
+ * in one IMMEDIATE transaction, so two saves of the same version cannot both succeed.
+ */
+export async function updateSketch(user: PublicUser, id: number, doc: SketchDocument, version: number): Promise<SketchDetail> {
+  await transaction(async (t) => {
+    const row = await ownSketch(user, id, t);
+    if (row.version !== version) {
+      throw conflict(`the sketch was saved elsewhere since version ${version}`, { version: row.version });
+    }
+    row.set({ name: doc.name, layout: doc.layout, document: JSON.stringify(doc), version: row.version + 1 });
+    await row.save({ transaction: t });
+    await addRevision(row, user.id, t);
+  });
+  return getSketch(user, id);
+}
+
+export async function deleteSketch(user: PublicUser, id: number): Promise<void> {
+  await transaction(async (t) => {
+    const row = await ownSketch(user, id, t);
+    await row.update({ deletedAt: new Date() }, { transaction: t });
+  });
+}
+
+export async function undeleteSketch(user: PublicUser, id: number): Promise<SketchDetail> {
+  await transaction(async (t) => {
+    const row = await ownSketch(user, id, t, { deleted: true });
+    if (Date.now() - row.deletedAt!.getTime() > RESTORE_WINDOW_MS) throw notFound('no such sketch');
+    await row.update({ deletedAt: null }, { transaction: t });
+  });
+  return getSketch(user, id);
+}
+
+export async function listRevisions(user: PublicUser, id: number) {
+  await ownSketch(user, id);
+  const rows = await SketchRevision.findAll({
+    where: { sketchId: id },
+    attributes: ['rev', 'version', 'name', 'createdAt'],
+    order: [['rev', 'DESC']],
+  });
+  return { items: rows.map((r) => ({ rev: r.rev, version: r.version, name: r.name, createdAt: r.createdAt.toISOString() })) };
+}
+
+async function revisionOf(sketchId: number, rev: number, t?: Transaction): Promise<SketchRevision> {
+  const row = await SketchRevision.findOne({ where: { sketchId, rev }, transaction: t });
+  if (!row) throw notFound('no such revision');
+  return row;
+}
+
+export async function getRevision(user: PublicUser, id: number, rev: number) {
+  await ownSketch(user, id);
+  const r = await revisionOf(id, rev);
+  return { rev: r.rev, version: r.version, name: r.name, createdAt: r.createdAt.toISOString(), document: JSON.parse(r.document) as unknown };
+}
+
+/** Makes a new version whose document is that of revision `rev`; the history keeps everything in between. */
+export async function restoreRevision(user: PublicUser, id: number, rev: number): Promise<SketchDetail> {
+  await transaction(async (t) => {
+    const row = await ownSketch(user, id, t);
+    const r = await revisionOf(id, rev, t);
+    const doc = JSON.parse(r.document) as SketchDocument;
+    row.set({ name: r.name, layout: doc.layout, document: r.document, version: row.version + 1 });
+    await row.save({ transaction: t });
+    await addRevision(row, user.id, t);
+  });
+  return getSketch(user, id);
+}
+
+function copyName(name: string): string {
+  const suffix = ' (copy)';
+  return name.slice(0, 200 - suffix.length) + suffix;
+}
+
+async function copyOf(user: PublicUser, source: Sketch): Promise<SketchDetail> {
+  const doc = JSON.parse(source.document) as SketchDocument;
+  return insertSketch(user, { ...doc, name: copyName(source.name) });
+}
+
+export async function copySketch(user: PublicUser, id: number): Promise<SketchDetail> {
+  return copyOf(user, await ownSketch(user, id));
+}
+
+/** The sketch file and a file name for it. */
+export async function exportSketch(user: PublicUser, id: number) {
+  const row = await ownSketch(user, id);
+  const base = row.name.replace(/[^A-Za-z0-9 ._-]+/g, '').trim().replace(/\s+/g, '-').slice(0, 80) || 'sketch';
+  return { fileName: `${base}.arcwright.json`, document: JSON.parse(row.document) as unknown };
+}
+
+/**
+ * Sets who may open the sketch. Turning the link on makes a new random token (the old link
+ * stays dead); sharing again while it is on keeps the link others already have.
+ */
+export async function setShare(user: PublicUser, id: number, mode: ShareMode) {
+  return transaction(async (t) => {
+    const row = await ownSketch(user, id, t);
+    if (mode === 'private') {
+      await row.update({ share: 'private', shareToken: null }, { transaction: t });
+    } else if (row.share !== 'link' || !row.shareToken) {
+      await row.update({ share: 'link', shareToken: randomBytes(SHARE_TOKEN_BYTES).toString('base64url') }, { transaction: t });
+    }
+    return { share: row.share, shareToken: row.shareToken, name: row.name };
+  });
+}
+
+async function sharedSketch(token: string): Promise<Sketch> {
+  const row = await Sketch.findOne({ where: { shareToken: token, share: 'link', deletedAt: null }, include: [withOwner] });
+  if (!row) throw notFound('this link is not shared (any more)');
+  return row;
+}
+
+/** A sketch opened by its share link, read-only for everyone (the owner edits through /api/sketches). */
+export async function getShared(viewer: PublicUser | null, token: string): Promise<SketchDetail> {
+  const detail = detailOf(await sharedSketch(token), viewer);
+  return { ...detail, canEdit: false, shareToken: null };
+}
+
+export async function copyShared(user: PublicUser, token: string): Promise<SketchDetail> {
+  return copyOf(user, await sharedSketch(token));
+}
+
+/** The sketch an upload belongs to, if `viewer` (or the holder of `shareToken`) may see it. */
+export async function maySeeSketch(viewer: PublicUser | null, sketchId: number, shareToken?: string): Promise<boolean> {
+  const row = await Sketch.findOne({ where: { id: sketchId, deletedAt: null }, attributes: ['ownerId', 'share', 'shareToken'] });
+  if (!row) return false;
+  if (viewer && row.ownerId === viewer.id) return true;
+  return row.share === 'link' && !!shareToken && row.shareToken === shareToken;
+}
+
