@@ -27,6 +27,7 @@ export {
 export type { Sketch, SketchInput, Layout, BodyId, MovingBodyId, MemberKind, SketchPoint, SketchMember } from '../schema/sketch';
 export { SketchValidationError, isSketchValidationError } from '../schema/errors';
 export type { StarterParam, StarterSpec } from './starters/types';
+export { starters } from './starters';
 export { runSweep } from './run';
 export { sweepSketch } from './sweep';
 export { pointsAt } from './points';

@@ -1,0 +1,14 @@
+import type { Layout } from '../../schema/sketch';
+import { fourLinkLateralRod } from './fourLinkLateralRod';
+import { threeLinkLateralRod } from './threeLinkLateralRod';
+import { triangulatedFourLink } from './triangulatedFourLink';
+import type { StarterSpec } from './types';
+
+/** Starters by layout; only the layouts that exist so far are present. */
+export const starters: Partial<Record<Layout, StarterSpec>> = {
+  'four-link-lateral-rod': fourLinkLateralRod,
+  'triangulated-four-link': triangulatedFourLink,
+  'three-link-lateral-rod': threeLinkLateralRod,
+};
+
+export type { StarterParam, StarterSpec } from './types';
