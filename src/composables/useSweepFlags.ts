@@ -1,0 +1,176 @@
+/**
+ * Flags: the warnings a sweep raised (lock-up, bind, shock limits, joint angles) and the
+ * targets it misses, each with where it starts and, where there is one, the member
+ * concerned so a click can select it. Built from the result's structured events; the
+ * words are written here in the user's units.
+ */
+import type { HeaveRow, RollRow, SweepEvent, SweepResult } from '../../shared/kinematics';
+import type { Sketch } from '../../shared/schema/sketch';
+import type { LengthUnit } from '../../shared/units';
+import { metricSpecs, type TargetCheck } from './useTargets';
+import { showAngle, showLength, showPosition, showQuantity, quantityUnit, toDisplay, fixed } from './useSweepFormat';
+
+export type FlagKind = SweepEvent['kind'] | 'target' | 'warning';
+
+export interface Flag {
+  /** stable within one result (for v-for keys and tests) */
+  key: string;
+  kind: FlagKind;
+  /** 'negative' stops the design (lock-up, bind, shock limits), 'warning' asks for a look */
+  severity: 'negative' | 'warning' | 'info';
+  title: string;
+  detail: string;
+  /** where it starts */
+  sweep?: 'heave' | 'roll';
+  at?: number;
+  where?: string;
+  /** member to select on click */
+  member?: string;
+}
+
+/** A member whose length change is smaller than this carries no share of bind worth naming (mm). */
+export const BIND_MEMBER_MIN_MM = 0.01;
+
+const RIGID_KINDS = new Set(['link', 'lateral-rod', 'tie-rod', 'shackle']);
+
+function nearestRow<T>(rows: T[], pos: (r: T) => number, at: number): T | undefined {
+  let best: T | undefined;
+  let bestD = Infinity;
+  for (const r of rows) {
+    const d = Math.abs(pos(r) - at);
+    if (d < bestD) {
+      bestD = d;
+      best = r;
+    }
+  }
+  return best;
+}
+
+/** The rigid member that stretches or shrinks most at a row: the one taking the bind (or stopping the sweep). */
+export function mostStrainedMember(sketch: Sketch | null, row: HeaveRow | RollRow | undefined): string | undefined {
+  if (!row) return undefined;
+  const kinds = new Map((sketch?.members ?? []).map((m) => [m.id, m.kind] as const));
+  let best: string | undefined;
+  let bestAbs = BIND_MEMBER_MIN_MM;
+  for (const [id, reading] of Object.entries(row.members)) {
+    const kind = kinds.get(id);
+    if (kind !== undefined && !RIGID_KINDS.has(kind)) continue;
+    const abs = Math.abs(reading.lengthChange);
+    if (abs > bestAbs) {
+      bestAbs = abs;
+      best = id;
+    }
+  }
+  return best;
+}
+
+function eventRow(result: SweepResult, e: SweepEvent): HeaveRow | RollRow | undefined {
+  return e.sweep === 'roll'
+    ? nearestRow(result.roll, (r) => r.roll, e.at)
+    : nearestRow(result.heave, (r) => r.travel, e.at);
+}
+
+function eventFlag(result: SweepResult, sketch: Sketch | null, e: SweepEvent, i: number, u: LengthUnit): Flag {
+  const where = showPosition(e.sweep, e.at, u);
+  const base = { key: `event-${i}-${e.kind}`, kind: e.kind, sweep: e.sweep, at: e.at, where } as const;
+  switch (e.kind) {
+    case 'lock-up': {
+      const member = mostStrainedMember(sketch, eventRow(result, e));
+      return {
+        ...base,
+        severity: 'negative',
+        title: 'Lock-up',
+        detail: `The linkage cannot move further than ${where}; the sweep stops there.${member ? ` Most strained: ${member}.` : ''}`,
+        member,
+      };
+    }
+    case 'bind': {
+      const member = mostStrainedMember(sketch, eventRow(result, e));
+      const amount = e.value !== undefined ? ` (${showLength(e.value, u).text})` : '';
+      return {
+        ...base,
+        severity: 'negative',
+        title: 'Bind',
+        detail: `From ${where} the links must stretch or shrink${amount} for the axle to move; bushings take that.${member ? ` Most: ${member}.` : ''}`,
+        member,
+      };
+    }
+    case 'shock-extended':
+    case 'shock-compressed': {
+      const out = e.kind === 'shock-extended';
+      const len = e.value !== undefined ? ` at ${showLength(e.value, u).text}` : '';
+      return {
+        ...base,
+        severity: 'negative',
+        title: out ? 'Shock tops out' : 'Shock bottoms out',
+        detail: `${e.member ?? 'A shock'} reaches its ${out ? 'longest' : 'shortest'} length${len} from ${where}.`,
+        member: e.member,
+      };
+    }
+    case 'joint-angle': {
+      const joint = e.joint === 'output' ? 'Output joint' : e.joint === 'pinion' ? 'Pinion joint' : 'A driveline joint';
+      const angle = e.value !== undefined ? ` (${showAngle(e.value, undefined, false, 1).text})` : '';
+      return {
+        ...base,
+        severity: 'warning',
+        title: 'Joint angle',
+        detail: `${joint} operating angle${angle} passes the limit from ${where}.`,
+      };
+    }
+    default:
+      return { ...base, severity: 'warning', title: 'Sweep', detail: (e as SweepEvent).message };
+  }
+}
+
+function bandText(check: TargetCheck, u: LengthUnit): string {
+  const q = metricSpecs[check.metric].quantity;
+  const unit = quantityUnit(q, u);
+  const d = (v: number) => fixed(toDisplay(v, q, u), q === 'length' && u === 'in' ? 2 : 1);
+  const { min, max } = check.band;
+  if (min !== undefined && max !== undefined) {
+    if (metricSpecs[check.metric].symmetric && Math.abs(min + max) < 1e-9) return `within ±${d(max)} ${unit}`;
+    return `${d(min)}–${d(max)} ${unit}`;
+  }
+  if (min !== undefined) return `at least ${d(min)} ${unit}`;
+  return `at most ${d(max!)} ${unit}`;
+}
+
+function targetFlag(check: TargetCheck, u: LengthUnit): Flag | null {
+  if (check.status === 'met') return null;
+  const spec = metricSpecs[check.metric];
+  const wanted = bandText(check, u);
+  const key = `target-${check.metric}`;
+  if (check.status === 'unknown') {
+    return { key, kind: 'target', severity: 'info', title: `Target not checked: ${spec.label}`, detail: `${spec.label} is not defined anywhere in the sweep, so ${wanted} cannot be checked.` };
+  }
+  const value = showQuantity(check.value, spec.quantity, u, spec.symmetric).text;
+  if (check.sweep === 'limits') {
+    return { key, kind: 'target', severity: 'warning', title: `Target missed: ${spec.label}`, detail: `Reaches ${value}; wanted ${wanted}.` };
+  }
+  const where = showPosition(check.sweep as 'heave' | 'roll', check.at!, u);
+  const worst = check.worst !== undefined && check.worst !== check.value ? ` (worst ${showQuantity(check.worst, spec.quantity, u, spec.symmetric).text})` : '';
+  return {
+    key,
+    kind: 'target',
+    severity: 'warning',
+    title: `Target missed: ${spec.label}`,
+    detail: `${value} at ${where}${worst}; wanted ${wanted}.`,
+    sweep: check.sweep as 'heave' | 'roll',
+    at: check.at,
+    where,
+  };
+}
+
+const SEVERITY_ORDER = { negative: 0, warning: 1, info: 2 } as const;
+
+/** Every flag of a result, the design-stopping ones first, then by distance from ride. */
+export function buildFlags(result: SweepResult | null, sketch: Sketch | null, checks: TargetCheck[], u: LengthUnit): Flag[] {
+  if (!result) return [];
+  const flags: Flag[] = result.limits.events.map((e, i) => eventFlag(result, sketch, e, i, u));
+  for (const c of checks) {
+    const f = targetFlag(c, u);
+    if (f) flags.push(f);
+  }
+  result.warnings.forEach((w, i) => flags.push({ key: `warning-${i}`, kind: 'warning', severity: 'info', title: 'Note', detail: w }));
+  return flags.sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity] || Math.abs(a.at ?? 0) - Math.abs(b.at ?? 0));
+}

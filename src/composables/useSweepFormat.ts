@@ -1,0 +1,90 @@
+/**
+ * How the board writes sweep numbers: lengths in the user's unit, angles in degrees,
+ * anti-squat and roll steer in %. A number that does not exist is "—" with the reason
+ * beside it, never "NaN".
+ */
+import { formatLength, mmToUnit, unitToMm, type LengthUnit, type Mm } from '../../shared/units';
+import type { MetricQuantity } from './useTargets';
+
+/** Shown for a number that does not exist; the reason goes to the tooltip. */
+export const MISSING = '—';
+
+export interface Shown {
+  text: string;
+  /** why the number is missing (tooltip); absent when it is shown */
+  reason?: string;
+}
+
+const MINUS = '\u2212';
+
+/** Fixed digits with a true minus sign, and no "-0.0". */
+export function fixed(v: number, digits: number, signed = false): string {
+  let s = v.toFixed(digits);
+  if (/^-0(\.0+)?$/.test(s)) s = s.slice(1);
+  if (s.startsWith('-')) return MINUS + s.slice(1);
+  return signed && v > 0 && Number(s) !== 0 ? `+${s}` : s;
+}
+
+function missing(reason: string): Shown {
+  return { text: MISSING, reason };
+}
+
+/** A length in mm shown in the user's unit. */
+export function showLength(v: Mm | null | undefined, u: LengthUnit, reason = 'not defined here', signed = false): Shown {
+  if (v === null || v === undefined || !Number.isFinite(v)) return missing(reason);
+  if (!signed) return { text: formatLength(v, u) };
+  return { text: `${fixed(mmToUnit(v, u), u === 'in' ? 2 : 1, true)} ${u}` };
+}
+
+/** An angle in degrees. */
+export function showAngle(v: number | null | undefined, reason = 'not defined here', signed = false, digits = 2): Shown {
+  if (v === null || v === undefined || !Number.isFinite(v)) return missing(reason);
+  return { text: `${fixed(v, digits, signed)}°` };
+}
+
+/** A percentage (anti-squat, roll steer). */
+export function showPercent(v: number | null | undefined, reason = 'not defined here', signed = false): Shown {
+  if (v === null || v === undefined || !Number.isFinite(v)) return missing(reason);
+  return { text: `${fixed(v, 1, signed)} %` };
+}
+
+/** A plain ratio (motion ratio). */
+export function showRatio(v: number | null | undefined, reason = 'not defined here'): Shown {
+  if (v === null || v === undefined || !Number.isFinite(v)) return missing(reason);
+  return { text: fixed(v, 3) };
+}
+
+/** A rate in N/mm (wheel rate); shown in N/mm in both unit systems, as the file stores it. */
+export function showRate(v: number | null | undefined, reason = 'not defined here'): Shown {
+  if (v === null || v === undefined || !Number.isFinite(v)) return missing(reason);
+  return { text: `${fixed(v, 1)} N/mm` };
+}
+
+/** A value of a target metric (file unit) in the user's unit. */
+export function showQuantity(v: number | null | undefined, q: MetricQuantity, u: LengthUnit, signed = false): Shown {
+  if (q === 'length') return showLength(v, u, undefined, signed);
+  if (q === 'angle') return showAngle(v, undefined, signed, 1);
+  return showPercent(v, undefined, signed);
+}
+
+/** The display unit of a metric's quantity. */
+export function quantityUnit(q: MetricQuantity, u: LengthUnit): string {
+  return q === 'length' ? u : q === 'angle' ? '°' : '%';
+}
+
+/** A file value (mm, deg, %) in the display unit, as a number (for plots and inputs). */
+export function toDisplay(v: number, q: MetricQuantity, u: LengthUnit): number {
+  return q === 'length' ? mmToUnit(v, u) : v;
+}
+
+/** A display value back to the file unit. */
+export function fromDisplay(v: number, q: MetricQuantity, u: LengthUnit): number {
+  return q === 'length' ? unitToMm(v, u) : v;
+}
+
+/** Where on the sweep: "+45.0 mm bump", "−120.0 mm droop", "ride height", "+6.0° roll". */
+export function showPosition(sweep: 'heave' | 'roll', at: number, u: LengthUnit): string {
+  if (sweep === 'roll') return Math.abs(at) < 1e-9 ? 'no roll' : `${fixed(at, 1, true)}° roll`;
+  if (Math.abs(at) < 1e-9) return 'ride height';
+  return `${showLength(at, u, undefined, true).text} ${at > 0 ? 'bump' : 'droop'}`;
+}

@@ -1,0 +1,158 @@
+/**
+ * Travel plots as data: which quantities are plotted against travel or roll, in the user's
+ * units, with the target bands to shade and the shocks' stroke limits. Pure, so the chart
+ * components only draw; no chart library is imported here.
+ */
+import type { HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
+import type { Sketch } from '../../shared/schema/sketch';
+import type { LengthUnit } from '../../shared/units';
+import { mmToUnit } from '../../shared/units';
+import { metricSpecs, bandIsSet, type TargetCheck, type TargetMetric, type Targets } from './useTargets';
+import { quantityUnit, toDisplay } from './useSweepFormat';
+
+export interface PlotPoint {
+  x: number;
+  /** null where the sweep does not define the quantity (a gap in the line, never a zero) */
+  y: number | null;
+}
+
+export interface PlotSeries {
+  label: string;
+  points: PlotPoint[];
+  color: string;
+  /** dashed: a limit, not a computed curve */
+  dash?: number[];
+}
+
+/** A target band in plot units; open ends are undefined. */
+export interface PlotBand {
+  yMin?: number;
+  yMax?: number;
+  xMin?: number;
+  xMax?: number;
+  missed: boolean;
+}
+
+export interface PlotSpec {
+  key: string;
+  title: string;
+  sweep: 'heave' | 'roll';
+  /** axis titles with units */
+  xTitle: string;
+  yTitle: string;
+  series: PlotSeries[];
+  bands: PlotBand[];
+  /** why the plot has nothing to draw (shown instead of an empty chart) */
+  emptyReason?: string;
+}
+
+/** Our palette for curves (style: workshop steel blue, signal orange, and their companions). */
+export const PLOT_COLORS = ['#2f5d7c', '#e07a1f', '#5b7f6a', '#8e5ba8', '#b5443a', '#3a87ad', '#a0812d', '#4d4d4d'];
+
+type AnyRow = HeaveRow & RollRow;
+
+interface CurveDef {
+  key: string;
+  title: string;
+  sweep: 'heave' | 'roll';
+  metric?: TargetMetric;
+  quantity: 'length' | 'angle' | 'percent';
+  read: (r: AnyRow) => number | null;
+  emptyReason: string;
+}
+
+const CURVES: CurveDef[] = [
+  { key: 'pinion', title: 'Pinion angle change', sweep: 'heave', metric: 'pinionAngleChange', quantity: 'angle', read: (r) => r.pinionAngleChange, emptyReason: 'No axle: this layout has no pinion angle to change.' },
+  { key: 'lateral', title: 'Lateral shift', sweep: 'heave', metric: 'lateralShift', quantity: 'length', read: (r) => r.lateralShift, emptyReason: 'No axle: this layout has no lateral shift.' },
+  { key: 'antisquat', title: 'Anti-squat', sweep: 'heave', metric: 'antiSquat', quantity: 'percent', read: (r) => r.antiSquat, emptyReason: 'No side-view instant centre anywhere in the travel (links parallel, or no upper and lower pair).' },
+  { key: 'foreaft', title: 'Fore-aft shift', sweep: 'heave', metric: 'foreAftShift', quantity: 'length', read: (r) => r.foreAftShift, emptyReason: 'Not defined for this layout.' },
+  { key: 'bind', title: 'Bind in roll', sweep: 'roll', metric: 'bind', quantity: 'length', read: (r) => r.bind, emptyReason: 'No roll sweep (articulation set to 0).' },
+  { key: 'rollsteer', title: 'Roll steer', sweep: 'roll', metric: 'rollSteer', quantity: 'percent', read: (r) => r.rollSteer, emptyReason: 'No roll sweep (articulation set to 0).' },
+];
+
+/** The plot order on the board: travel quantities, the shocks, then the roll quantities. */
+const ORDER = ['pinion', 'lateral', 'antisquat', 'foreaft', 'shocks', 'bind', 'rollsteer'];
+
+function axisTitle(sweep: 'heave' | 'roll', u: LengthUnit): string {
+  return sweep === 'heave' ? `travel (${u})` : 'roll (°)';
+}
+
+function xOf(sweep: 'heave' | 'roll', r: AnyRow, u: LengthUnit): number {
+  return sweep === 'heave' ? mmToUnit(r.travel, u) : r.roll;
+}
+
+function bandsFor(metric: TargetMetric | undefined, targets: Targets, checks: TargetCheck[], u: LengthUnit): PlotBand[] {
+  if (!metric) return [];
+  const band = targets[metric];
+  if (!bandIsSet(band)) return [];
+  const q = metricSpecs[metric].quantity;
+  const window = (v: number | undefined) => (v === undefined ? undefined : metricSpecs[metric].sweep === 'heave' ? mmToUnit(v, u) : v);
+  const check = checks.find((c) => c.metric === metric);
+  return [
+    {
+      yMin: band.min === undefined ? undefined : toDisplay(band.min, q, u),
+      yMax: band.max === undefined ? undefined : toDisplay(band.max, q, u),
+      xMin: window(band.from),
+      xMax: window(band.to),
+      missed: check?.status === 'missed',
+    },
+  ];
+}
+
+function curvePlot(def: CurveDef, result: SweepResult, targets: Targets, checks: TargetCheck[], u: LengthUnit): PlotSpec {
+  const rows = (def.sweep === 'heave' ? result.heave : result.roll) as AnyRow[];
+  const points = rows.map((r) => {
+    const v = def.read(r);
+    return { x: xOf(def.sweep, r, u), y: v === null || !Number.isFinite(v) ? null : toDisplay(v, def.quantity, u) };
+  });
+  const empty = points.every((p) => p.y === null);
+  return {
+    key: def.key,
+    title: def.title,
+    sweep: def.sweep,
+    xTitle: axisTitle(def.sweep, u),
+    yTitle: quantityUnit(def.quantity, u),
+    series: empty ? [] : [{ label: def.title, points, color: PLOT_COLORS[0] }],
+    bands: bandsFor(def.metric, targets, checks, u),
+    emptyReason: empty ? (rows.length === 0 ? 'No rows in this sweep.' : def.emptyReason) : undefined,
+  };
+}
+
+/** Shock lengths over travel, each with its stroke limits as dashed lines in the same colour. */
+function shockPlot(result: SweepResult, sketch: Sketch | null, u: LengthUnit): PlotSpec {
+  const shocks = (sketch?.members ?? []).filter((m) => m.kind === 'shock');
+  const series: PlotSeries[] = [];
+  const xs = result.heave.map((r) => mmToUnit(r.travel, u));
+  const xEnds = xs.length ? [xs[0], xs[xs.length - 1]] : [];
+  shocks.forEach((m, i) => {
+    const color = PLOT_COLORS[(i + 1) % PLOT_COLORS.length];
+    const points = result.heave.map((r, k) => {
+      const len = r.members[m.id]?.length;
+      return { x: xs[k], y: len === undefined || !Number.isFinite(len) ? null : mmToUnit(len, u) };
+    });
+    series.push({ label: m.id, points, color });
+    for (const [which, v] of [['shortest', m.minLength], ['longest', m.maxLength]] as const) {
+      if (v === undefined || xEnds.length < 2) continue;
+      series.push({ label: `${m.id} ${which}`, points: xEnds.map((x) => ({ x, y: mmToUnit(v, u) })), color, dash: [6, 4] });
+    }
+  });
+  return {
+    key: 'shocks',
+    title: 'Shock lengths and stroke limits',
+    sweep: 'heave',
+    xTitle: axisTitle('heave', u),
+    yTitle: u,
+    series,
+    bands: [],
+    emptyReason: shocks.length === 0 ? 'No shocks in this sketch.' : result.heave.length === 0 ? 'No rows in this sweep.' : undefined,
+  };
+}
+
+/** Every travel plot of a result, in board order. */
+export function buildPlots(result: SweepResult | null, sketch: Sketch | null, targets: Targets, checks: TargetCheck[], u: LengthUnit): PlotSpec[] {
+  if (!result) return [];
+  const plots = new Map<string, PlotSpec>();
+  for (const def of CURVES) plots.set(def.key, curvePlot(def, result, targets, checks, u));
+  plots.set('shocks', shockPlot(result, sketch, u));
+  return ORDER.map((k) => plots.get(k)!).filter(Boolean);
+}

@@ -1,0 +1,151 @@
+/**
+ * Latest-wins sweep runner. Every edit asks for a sweep; during a drag that is one request
+ * per pointer move. Only one request is ever in the worker: a newer request replaces the
+ * one waiting (the stale one is dropped, never run), and an answer older than the one
+ * already shown is thrown away. Where a Web Worker cannot be made (unit tests, very old
+ * browsers, a worker that fails to load) the same computation runs on the main thread,
+ * coalesced to one run per macrotask.
+ */
+import { computeSweep, type SweepAnswer, type SweepRequest } from '../workers/sweep.protocol';
+
+export type RunnerMode = 'worker' | 'main-thread';
+
+export interface SweepRunner {
+  /** Ask for a sweep of this document (copied now; later edits to it do not leak in). */
+  request(doc: unknown): void;
+  /** Resolves once nothing is running or waiting (for tests and benchmarks). */
+  whenIdle(): Promise<void>;
+  readonly mode: RunnerMode;
+  /** How many requests were superseded before they ran (a measure of latest-wins at work). */
+  readonly dropped: number;
+  dispose(): void;
+}
+
+export interface RunnerOptions {
+  /** false forces the main-thread path */
+  useWorker?: boolean;
+  /** makes the worker; the default is Vite's module worker for src/workers/sweep.worker.ts */
+  createWorker?: () => Worker;
+}
+
+function defaultWorker(): Worker {
+  return new Worker(new URL('../workers/sweep.worker.ts', import.meta.url), { type: 'module' });
+}
+
+/** A plain copy: structured clone cannot take Vue's reactive proxies, JSON can and drops nothing a sketch holds. */
+function snapshot(doc: unknown): unknown {
+  return doc === undefined ? undefined : JSON.parse(JSON.stringify(doc));
+}
+
+export function createSweepRunner(onAnswer: (answer: SweepAnswer) => void, options: RunnerOptions = {}): SweepRunner {
+  let nextId = 0;
+  let lastApplied = 0;
+  let inFlight: SweepRequest | null = null;
+  let waiting: SweepRequest | null = null;
+  let dropped = 0;
+  let idleWaiters: Array<() => void> = [];
+  let worker: Worker | null = null;
+  let mainTimer: ReturnType<typeof setTimeout> | null = null;
+  let disposed = false;
+
+  const wantWorker = options.useWorker ?? typeof Worker !== 'undefined';
+  if (wantWorker) {
+    try {
+      worker = (options.createWorker ?? defaultWorker)();
+      worker.onmessage = (e: MessageEvent<SweepAnswer>) => settle(e.data);
+      // A worker that cannot load its module reports here; from then on run on the main thread.
+      worker.onerror = (e) => {
+        e.preventDefault?.();
+        fallBackToMainThread();
+      };
+    } catch {
+      worker = null;
+    }
+  }
+
+  function isIdle() {
+    return !inFlight && !waiting && mainTimer === null;
+  }
+
+  function notifyIdle() {
+    if (!isIdle()) return;
+    const waiters = idleWaiters;
+    idleWaiters = [];
+    waiters.forEach((w) => w());
+  }
+
+  function apply(answer: SweepAnswer) {
+    if (disposed || answer.id <= lastApplied) return; // older than what is shown: stale
+    lastApplied = answer.id;
+    onAnswer(answer);
+  }
+
+  function settle(answer: SweepAnswer) {
+    apply(answer);
+    inFlight = null;
+    const next = waiting;
+    waiting = null;
+    if (next) send(next);
+    else notifyIdle();
+  }
+
+  function send(req: SweepRequest) {
+    if (worker) {
+      inFlight = req;
+      worker.postMessage(req);
+    } else {
+      waiting = req;
+      scheduleMainThread();
+    }
+  }
+
+  function scheduleMainThread() {
+    if (mainTimer !== null) return;
+    mainTimer = setTimeout(() => {
+      mainTimer = null;
+      const req = waiting;
+      waiting = null;
+      if (req) apply(computeSweep(req));
+      notifyIdle();
+    }, 0);
+  }
+
+  function fallBackToMainThread() {
+    worker?.terminate();
+    worker = null;
+    const redo = waiting ?? inFlight;
+    inFlight = null;
+    waiting = null;
+    if (redo) send(redo);
+    else notifyIdle();
+  }
+
+  return {
+    request(doc: unknown) {
+      if (disposed) return;
+      const req: SweepRequest = { id: ++nextId, doc: snapshot(doc) };
+      if (waiting) dropped++;
+      if (worker && inFlight) waiting = req; // replaces (drops) any older waiting request
+      else send(req);
+    },
+    whenIdle() {
+      return isIdle() ? Promise.resolve() : new Promise<void>((resolve) => idleWaiters.push(resolve));
+    },
+    get mode(): RunnerMode {
+      return worker ? 'worker' : 'main-thread';
+    },
+    get dropped() {
+      return dropped;
+    },
+    dispose() {
+      disposed = true;
+      worker?.terminate();
+      worker = null;
+      if (mainTimer !== null) clearTimeout(mainTimer);
+      mainTimer = null;
+      inFlight = null;
+      waiting = null;
+      notifyIdle();
+    },
+  };
+}

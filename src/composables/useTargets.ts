@@ -1,0 +1,161 @@
+/**
+ * Targets: bands the designer wants a sweep quantity to stay within (anti-squat 60–90 %,
+ * pinion angle change within ±3°, ...). Kept in the sketch document as the optional
+ * `targets` field so they save, export and travel with the sketch. Values are in the
+ * file's units: % for anti-squat and roll steer, degrees for angles, mm for lengths.
+ */
+import { z } from 'zod';
+import type { HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
+import type { Deg, Mm } from '../../shared/units';
+
+/** A band on one metric; either end may be open. `from`/`to` limit the check to part of the sweep. */
+export interface TargetBand {
+  min?: number;
+  max?: number;
+  /** start of the window checked: mm of travel (heave metrics) or deg of roll (roll metrics) */
+  from?: number;
+  /** end of the window checked, same unit as `from` */
+  to?: number;
+}
+
+export const targetMetrics = [
+  'antiSquat',
+  'pinionAngleChange',
+  'lateralShift',
+  'foreAftShift',
+  'rollCenterHeight',
+  'bind',
+  'rollSteer',
+  'articulation',
+] as const;
+export type TargetMetric = (typeof targetMetrics)[number];
+export type Targets = Partial<Record<TargetMetric, TargetBand>>;
+
+/** What kind of number a metric is, so the UI can convert and label it. */
+export type MetricQuantity = 'length' | 'angle' | 'percent';
+
+export interface MetricSpec {
+  label: string;
+  quantity: MetricQuantity;
+  /** the sweep whose rows the metric is read from; articulation is one number of the whole sweep */
+  sweep: 'heave' | 'roll' | 'limits';
+  /** true where a band is naturally symmetric about zero ("within ±3°") */
+  symmetric: boolean;
+  read?: (row: HeaveRow & RollRow) => number | null;
+}
+
+export const metricSpecs: Record<TargetMetric, MetricSpec> = {
+  antiSquat: { label: 'Anti-squat', quantity: 'percent', sweep: 'heave', symmetric: false, read: (r) => r.antiSquat },
+  pinionAngleChange: { label: 'Pinion angle change', quantity: 'angle', sweep: 'heave', symmetric: true, read: (r) => r.pinionAngleChange },
+  lateralShift: { label: 'Lateral shift', quantity: 'length', sweep: 'heave', symmetric: true, read: (r) => r.lateralShift },
+  foreAftShift: { label: 'Fore-aft shift', quantity: 'length', sweep: 'heave', symmetric: true, read: (r) => r.foreAftShift },
+  rollCenterHeight: { label: 'Roll centre height', quantity: 'length', sweep: 'heave', symmetric: false, read: (r) => r.rollCenterHeight },
+  bind: { label: 'Bind in roll', quantity: 'length', sweep: 'roll', symmetric: false, read: (r) => r.bind },
+  rollSteer: { label: 'Roll steer', quantity: 'percent', sweep: 'roll', symmetric: true, read: (r) => r.rollSteer },
+  articulation: { label: 'Articulation', quantity: 'angle', sweep: 'limits', symmetric: false },
+};
+
+/**
+ * Bands to start from when a designer has none. Common practice, no published source:
+ * these are the examples the product brief gives, not recommendations for any vehicle.
+ */
+export const startingTargets: Targets = {
+  antiSquat: { min: 60, max: 90 },
+  pinionAngleChange: { min: -3, max: 3 },
+  lateralShift: { min: -15, max: 15 },
+  articulation: { min: 8 },
+};
+
+const finite = z.number().finite();
+const bandSchema = z
+  .object({ min: finite.optional(), max: finite.optional(), from: finite.optional(), to: finite.optional() })
+  .refine((b) => b.min === undefined || b.max === undefined || b.min <= b.max, { message: 'min must not be above max' })
+  .refine((b) => b.from === undefined || b.to === undefined || b.from <= b.to, { message: 'from must not be after to' });
+
+/** The document's `targets` field (checked here too, so a hand-edited file cannot break the board). */
+export const targetsSchema = z.object(Object.fromEntries(targetMetrics.map((m) => [m, bandSchema.optional()])) as Record<TargetMetric, z.ZodOptional<typeof bandSchema>>);
+
+/** The targets of a document, or none when the field is absent or malformed. */
+export function readTargets(doc: unknown): Targets {
+  const raw = (doc as { targets?: unknown } | null | undefined)?.targets;
+  if (raw === undefined) return {};
+  const res = targetsSchema.safeParse(raw);
+  return res.success ? (res.data as Targets) : {};
+}
+
+/** True when a band says something (at least one end). */
+export function bandIsSet(b: TargetBand | undefined): b is TargetBand {
+  return !!b && (b.min !== undefined || b.max !== undefined);
+}
+
+/** Tolerance on a band's edge: a value this close to the edge counts as inside (solver residuals are far smaller). */
+export const BAND_EDGE_TOLERANCE = 1e-6;
+
+export interface TargetCheck {
+  metric: TargetMetric;
+  band: TargetBand;
+  /** 'unknown' when the metric has no value anywhere in the window (e.g. no instant centre) */
+  status: 'met' | 'missed' | 'unknown';
+  /** where the value first leaves the band: mm of travel or deg of roll (absent for articulation) */
+  at?: Mm | Deg;
+  /** the value there (or the articulation reached), in the metric's file unit */
+  value?: number;
+  /** the worst value in the window, file unit */
+  worst?: number;
+  sweep: MetricSpec['sweep'];
+}
+
+function inBand(v: number, b: TargetBand): boolean {
+  return (b.min === undefined || v >= b.min - BAND_EDGE_TOLERANCE) && (b.max === undefined || v <= b.max + BAND_EDGE_TOLERANCE);
+}
+
+/** How far outside the band a value lies (0 inside). */
+function excess(v: number, b: TargetBand): number {
+  if (b.min !== undefined && v < b.min) return b.min - v;
+  if (b.max !== undefined && v > b.max) return v - b.max;
+  return 0;
+}
+
+/**
+ * Rows ordered from ride outwards, so "where it starts" is the miss closest to ride height:
+ * the first point a designer meets when the suspension leaves ride.
+ */
+function outwardFromRide<T>(rows: T[], pos: (r: T) => number): T[] {
+  return [...rows].sort((a, b) => Math.abs(pos(a)) - Math.abs(pos(b)));
+}
+
+/** Checks one band against a sweep result. */
+export function checkTarget(result: SweepResult, metric: TargetMetric, band: TargetBand): TargetCheck {
+  const spec = metricSpecs[metric];
+  if (spec.sweep === 'limits') {
+    const value = result.limits.articulation;
+    return { metric, band, sweep: spec.sweep, status: inBand(value, band) ? 'met' : 'missed', value, worst: value };
+  }
+  const rows = (spec.sweep === 'heave' ? result.heave : result.roll) as Array<HeaveRow & RollRow>;
+  const pos = (r: HeaveRow & RollRow) => (spec.sweep === 'heave' ? r.travel : r.roll);
+  const inWindow = rows.filter((r) => (band.from === undefined || pos(r) >= band.from) && (band.to === undefined || pos(r) <= band.to));
+  let first: { at: number; value: number } | undefined;
+  let worst: number | undefined;
+  let worstExcess = -1;
+  let seen = 0;
+  for (const r of outwardFromRide(inWindow, pos)) {
+    const v = spec.read!(r);
+    if (v === null || !Number.isFinite(v)) continue;
+    seen++;
+    const e = excess(v, band);
+    if (e > worstExcess) {
+      worstExcess = e;
+      worst = v;
+    }
+    if (!first && !inBand(v, band)) first = { at: pos(r), value: v };
+  }
+  if (seen === 0) return { metric, band, sweep: spec.sweep, status: 'unknown' };
+  return first
+    ? { metric, band, sweep: spec.sweep, status: 'missed', at: first.at, value: first.value, worst }
+    : { metric, band, sweep: spec.sweep, status: 'met', worst };
+}
+
+/** Checks every band that is set. */
+export function checkTargets(result: SweepResult, targets: Targets): TargetCheck[] {
+  return targetMetrics.filter((m) => bandIsSet(targets[m])).map((m) => checkTarget(result, m, targets[m]!));
+}

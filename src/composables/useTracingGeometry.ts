@@ -1,0 +1,131 @@
+/**
+ * A tracing: a reference photo behind a view, placed in the view's plane (mm) and scaled from
+ * two clicked points whose real distance the user types. Kept in the sketch document as the
+ * optional `tracing` field, one image per view, so it saves with the sketch:
+ *   tracing: { side?: TracingImage, rear?: TracingImage }
+ * The image is drawn upright and unmirrored on screen; only its centre (mm) and its scale
+ * (mm per image pixel) are stored. Pure functions only; the canvas converts with
+ * canvasTransform, the one place mm become stage pixels.
+ */
+import { z } from 'zod';
+import type { Mm } from '../../shared/units';
+import { planeToScreen, screenToPlane, type PlanePoint, type ViewKind, type ViewTransform } from './canvasTransform';
+
+export interface TracingImage {
+  /** upload id (POST /api/sketches/:id/uploads) */
+  upload: number;
+  /** where the bytes are served, '/api/uploads/:id' */
+  url: string;
+  /** image size in its own pixels */
+  width: number;
+  height: number;
+  /** the image's centre in the view's plane, mm (h = x in the side view, y in the rear view; v = z) */
+  centre: PlanePoint;
+  /** mm per image pixel */
+  mmPerPx: number;
+  /** 0 (invisible) to 1 (opaque) */
+  opacity: number;
+  /** a locked photo cannot be moved by dragging */
+  locked: boolean;
+}
+
+export type Tracing = Partial<Record<ViewKind, TracingImage>>;
+
+/** Photos the uploads route takes (contracts: PNG or JPEG up to 10 MB). */
+export const TRACING_MIME_TYPES = ['image/png', 'image/jpeg'] as const;
+export const MAX_TRACING_BYTES = 10 * 1024 * 1024;
+/** Opacity a new photo starts with: visible but behind the linkage. */
+export const DEFAULT_TRACING_OPACITY = 0.5;
+/** Two scale points closer than this on the photo (image px) cannot give a trustworthy scale. */
+export const MIN_SCALE_PICK_PX = 4;
+/** Scales outside this range (mm per image px) come from a slip, not from a photo of a vehicle. */
+export const MIN_MM_PER_PX = 0.001;
+export const MAX_MM_PER_PX = 1000;
+
+const coordinate = z.number().finite().min(-100_000).max(100_000);
+export const tracingImageSchema = z.object({
+  upload: z.number().int().positive(),
+  url: z.string().min(1).max(500),
+  width: z.number().positive(),
+  height: z.number().positive(),
+  centre: z.object({ h: coordinate, v: coordinate }),
+  mmPerPx: z.number().min(MIN_MM_PER_PX).max(MAX_MM_PER_PX),
+  opacity: z.number().min(0).max(1),
+  locked: z.boolean(),
+});
+
+/** The document's tracing for a view, or null when absent or malformed (a bad field never breaks the board). */
+export function readTracing(doc: unknown, view: ViewKind): TracingImage | null {
+  const raw = (doc as { tracing?: Record<string, unknown> } | null | undefined)?.tracing?.[view];
+  if (raw === undefined) return null;
+  const res = tracingImageSchema.safeParse(raw);
+  return res.success ? res.data : null;
+}
+
+/** The whole `tracing` field with one view's image replaced (null removes it; an empty field is dropped). */
+export function withTracing(doc: unknown, view: ViewKind, img: TracingImage | null): Tracing | undefined {
+  const current = ((doc as { tracing?: Tracing } | null | undefined)?.tracing ?? {}) as Tracing;
+  const next: Tracing = { ...current };
+  if (img) next[view] = img;
+  else delete next[view];
+  return Object.keys(next).length ? next : undefined;
+}
+
+/** Why a file cannot be a tracing, or null when it can. */
+export function photoProblem(file: { type: string; size: number; name: string }): string | null {
+  if (!(TRACING_MIME_TYPES as readonly string[]).includes(file.type)) return `“${file.name}” is not a PNG or JPEG photo.`;
+  if (file.size > MAX_TRACING_BYTES) return `“${file.name}” is ${(file.size / 1024 / 1024).toFixed(1)} MB; a tracing may be up to 10 MB.`;
+  if (file.size === 0) return `“${file.name}” is empty.`;
+  return null;
+}
+
+/**
+ * Where a fresh photo goes before it is scaled: as wide as 1.6 wheelbases (a side photo of a
+ * whole vehicle; the rear view: 1.6 tracks), centred over the middle of the wheelbase, its
+ * bottom edge on the ground. The user then sets the true scale from two points.
+ */
+export function initialPlacement(view: ViewKind, width: number, height: number, vehicle: { wheelbase: Mm; track: Mm } | undefined): Pick<TracingImage, 'centre' | 'mmPerPx'> {
+  const span = view === 'side' ? (vehicle?.wheelbase ?? 3000) : (vehicle?.track ?? 1600);
+  const mmPerPx = Math.min(MAX_MM_PER_PX, Math.max(MIN_MM_PER_PX, (1.6 * span) / width));
+  const centreH = view === 'side' ? span / 2 : 0;
+  return { centre: { h: centreH, v: (height * mmPerPx) / 2 }, mmPerPx };
+}
+
+/** The image's rectangle on the stage (px): top-left corner and size. */
+export function imageRect(img: TracingImage, t: ViewTransform): { x: number; y: number; width: number; height: number } {
+  const c = planeToScreen(t, img.centre);
+  const width = img.width * img.mmPerPx * t.scale;
+  const height = img.height * img.mmPerPx * t.scale;
+  return { x: c.px - width / 2, y: c.py - height / 2, width, height };
+}
+
+/** The image's centre (mm) when its top-left corner sits at stage (x, y), e.g. after a drag. */
+export function centreForRect(img: TracingImage, t: ViewTransform, x: number, y: number): PlanePoint {
+  const width = img.width * img.mmPerPx * t.scale;
+  const height = img.height * img.mmPerPx * t.scale;
+  return screenToPlane(t, { px: x + width / 2, py: y + height / 2 });
+}
+
+/** A plane point (mm) as a pixel of the image (px from its top-left corner, y down). */
+export function planeToImagePx(img: TracingImage, p: PlanePoint): { u: number; w: number } {
+  // h grows to the screen's left in both views (canvasTransform), and the image is drawn upright.
+  return { u: img.width / 2 - (p.h - img.centre.h) / img.mmPerPx, w: img.height / 2 - (p.v - img.centre.v) / img.mmPerPx };
+}
+
+export type ScaleOutcome = { ok: true; image: TracingImage } | { ok: false; error: string };
+
+/**
+ * The image rescaled so that the two picked points (plane mm at the present scale) lie
+ * `realMm` apart; the first point stays where it is on the vehicle, so a user who picks a
+ * known point first (a wheel centre) keeps it in place.
+ */
+export function rescaleFromPicks(img: TracingImage, a: PlanePoint, b: PlanePoint, realMm: Mm): ScaleOutcome {
+  if (!(Number.isFinite(realMm) && realMm > 0)) return { ok: false, error: 'The real distance must be a length above zero.' };
+  const shownMm = Math.hypot(b.h - a.h, b.v - a.v);
+  if (shownMm / img.mmPerPx < MIN_SCALE_PICK_PX) return { ok: false, error: 'The two points are too close together on the photo; pick points further apart.' };
+  const k = realMm / shownMm;
+  const mmPerPx = img.mmPerPx * k;
+  if (mmPerPx < MIN_MM_PER_PX || mmPerPx > MAX_MM_PER_PX) return { ok: false, error: 'That distance gives an impossible scale for this photo; check the number and its unit.' };
+  const centre = { h: a.h + (img.centre.h - a.h) * k, v: a.v + (img.centre.v - a.v) * k };
+  return { ok: true, image: { ...img, mmPerPx, centre } };
+}

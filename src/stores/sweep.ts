@@ -1,0 +1,208 @@
+/**
+ * The live sweep of the open sketch. Every change of the board's sketch (each pointer move
+ * of a drag included) asks for a new sweep; the runner keeps it latest-wins in a Web Worker.
+ * The store holds the last result, the problems of an invalid sketch, the travel and roll
+ * slider positions, the row and body poses at the slider (for the readout and the ghost),
+ * the targets and the flags. It applies no sketch edits itself: targets go through the
+ * board store, the one place that edits the document.
+ */
+import { defineStore } from 'pinia';
+import { computed, ref, shallowRef, watch } from 'vue';
+import type { BodyPoses, HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
+import type { Sketch } from '../../shared/schema/sketch';
+import type { Deg, Mm } from '../../shared/units';
+import { createSweepRunner, type SweepRunner, type RunnerOptions } from '../composables/useSweepRunner';
+import type { SweepAnswer } from '../workers/sweep.protocol';
+import { checkTargets, readTargets, type Targets } from '../composables/useTargets';
+import { buildFlags } from '../composables/useSweepFlags';
+import type { CursorRow } from '../composables/useSweepReadout';
+import { useBoardStore, type EditResult } from './board';
+import { usePrefsStore } from './prefs';
+
+/** The parts of a document the sweep reads; targets, tracing and the name do not need a new sweep. */
+const SWEPT_FIELDS = ['layout', 'vehicle', 'points', 'members', 'wheels', 'driveline', 'sweep'] as const;
+
+function nearest<T>(rows: readonly T[], pos: (r: T) => number, at: number): T | null {
+  let best: T | null = null;
+  let bestD = Infinity;
+  for (const r of rows) {
+    const d = Math.abs(pos(r) - at);
+    if (d < bestD) {
+      bestD = d;
+      best = r;
+    }
+  }
+  return best;
+}
+
+let runnerOptions: RunnerOptions = {};
+/** Tests choose the main-thread path (or a fake worker) before the store is first used. */
+export function configureSweepRunner(options: RunnerOptions): void {
+  runnerOptions = options;
+}
+
+export const useSweepStore = defineStore('sweep', () => {
+  const board = useBoardStore();
+  const prefs = usePrefsStore();
+
+  /** The last successful sweep. Kept (marked stale) while the sketch has problems, so the plots do not blank mid-edit. */
+  const result = shallowRef<SweepResult | null>(null);
+  /** Problems of the sketch as it is now, one line each naming the field; null when it sweeps. */
+  const error = shallowRef<string[] | null>(null);
+  /** True when the result shown is from an earlier, valid version of the sketch. */
+  const stale = computed(() => error.value !== null && result.value !== null);
+  /** True while a newer sweep has been asked for than the one shown. */
+  const pending = ref(false);
+  /** ms runSweep took for the result shown. */
+  const lastMs = ref(0);
+  /** Slider position in heave, mm of travel (0 = ride). */
+  const travel = ref<Mm>(0);
+  /** Slider position in roll, deg (0 = no roll). */
+  const roll = ref<Deg>(0);
+  /** Which slider the user moved last: the readout and the ghost follow it. */
+  const cursorSweep = ref<'heave' | 'roll'>('heave');
+
+  let asked = 0;
+  let answered = 0;
+  let runner: SweepRunner | null = null;
+
+  function onAnswer(a: SweepAnswer) {
+    answered = a.id;
+    pending.value = answered < asked;
+    lastMs.value = a.ms;
+    if (a.ok) {
+      result.value = Object.freeze(a.result);
+      error.value = null;
+    } else {
+      error.value = a.problems;
+    }
+  }
+
+  function ensureRunner(): SweepRunner {
+    runner ??= createSweepRunner(onAnswer, runnerOptions);
+    return runner;
+  }
+
+  /** Asks for a sweep of this document (latest wins). */
+  function run(doc: unknown) {
+    if (doc === null || doc === undefined) {
+      result.value = null;
+      error.value = null;
+      return;
+    }
+    asked++;
+    pending.value = true;
+    ensureRunner().request(doc);
+  }
+
+  /** Resolves when the sweep of the latest document is shown. */
+  function whenIdle(): Promise<void> {
+    return runner ? runner.whenIdle() : Promise.resolve();
+  }
+
+  const sketch = computed(() => (board.sketch ?? null) as Sketch | null);
+
+  watch(
+    SWEPT_FIELDS.map((k) => () => (sketch.value as Record<string, unknown> | null)?.[k]),
+    () => run(sketch.value),
+    { immediate: true, deep: true },
+  );
+
+  const heaveRow = computed<HeaveRow | null>(() => (result.value ? nearest(result.value.heave, (r) => r.travel, travel.value) : null));
+  const rollRow = computed<RollRow | null>(() => (result.value ? nearest(result.value.roll, (r) => r.roll, roll.value) : null));
+
+  /** The row the readout shows and the ghost draws: of the slider moved last. */
+  const rowAtCursor = computed<CursorRow | null>(() => {
+    if (cursorSweep.value === 'roll' && rollRow.value) return { sweep: 'roll', row: rollRow.value };
+    return heaveRow.value ? { sweep: 'heave', row: heaveRow.value } : null;
+  });
+
+  /** Poses of every moving body at the cursor, for the ghost drawing. */
+  const bodiesAtCursor = computed<BodyPoses>(() => rowAtCursor.value?.row.bodies ?? {});
+
+  /** The cursor as plots use it: heave plots at the travel, roll plots at the roll (roll sweeps run at ride). */
+  const cursor = computed(() => ({
+    sweep: cursorSweep.value,
+    at: cursorSweep.value === 'roll' ? roll.value : travel.value,
+    travel: cursorSweep.value === 'roll' ? 0 : travel.value,
+    roll: cursorSweep.value === 'roll' ? roll.value : 0,
+  }));
+
+  /** True when the cursor sits past where the sweep stopped (lock-up): the row shown is the last one reached. */
+  const cursorBeyondReach = computed(() => {
+    const r = result.value;
+    if (!r) return false;
+    if (cursorSweep.value === 'roll') return roll.value < r.limits.rollMin - 1e-9 || roll.value > r.limits.rollMax + 1e-9;
+    return travel.value < r.limits.droop - 1e-9 || travel.value > r.limits.bump + 1e-9;
+  });
+
+  /** The targets, kept in the document's optional `targets` field (so they save and export with it). */
+  const targets = computed<Targets>(() => readTargets(sketch.value));
+
+  const targetChecks = computed(() => (result.value ? checkTargets(result.value, targets.value) : []));
+
+  const flags = computed(() => buildFlags(result.value, sketch.value, targetChecks.value, prefs.units));
+
+  function setTravel(v: Mm) {
+    travel.value = v;
+    roll.value = 0;
+    cursorSweep.value = 'heave';
+  }
+
+  function setRoll(v: Deg) {
+    roll.value = v;
+    travel.value = 0;
+    cursorSweep.value = 'roll';
+  }
+
+  /** Back to ride height, no roll. */
+  function toRide() {
+    travel.value = 0;
+    roll.value = 0;
+    cursorSweep.value = 'heave';
+  }
+
+  /** Replaces the targets (empty bands dropped; a band with only a window is kept but checks nothing), as one undo step. */
+  function setTargets(next: Targets): EditResult {
+    const clean: Targets = {};
+    for (const [k, band] of Object.entries(next)) {
+      if (band && Object.values(band).some((v) => v !== undefined)) clean[k as keyof Targets] = { ...band };
+    }
+    return board.setDocumentField('targets', Object.keys(clean).length ? clean : undefined, { label: 'Change targets' });
+  }
+
+  function dispose() {
+    runner?.dispose();
+    runner = null;
+  }
+
+  return {
+    result,
+    error,
+    stale,
+    pending,
+    lastMs,
+    travel,
+    roll,
+    cursorSweep,
+    cursor,
+    cursorBeyondReach,
+    heaveRow,
+    rollRow,
+    rowAtCursor,
+    bodiesAtCursor,
+    targets,
+    targetChecks,
+    flags,
+    run,
+    whenIdle,
+    setTravel,
+    setRoll,
+    toRide,
+    setTargets,
+    dispose,
+    /** for tests and the benchmark: how the sweep runs and how many requests latest-wins dropped */
+    runnerMode: () => runner?.mode ?? null,
+    droppedRequests: () => runner?.dropped ?? 0,
+  };
+});
