@@ -33,3 +33,4 @@ export { sweepSketch } from './sweep';
 export { pointsAt } from './points';
 export { poseApply } from './pose';
 export type { Vec3 } from './vec';
+export { heaveRowsCsv } from './csv';

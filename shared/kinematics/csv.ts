@@ -1,0 +1,53 @@
+/**
+ * The heave rows of a sweep as CSV (RFC 4180: comma separated, CRLF line ends, quoted
+ * where needed). One column per number, named by its path in the JSON result; units as in
+ * the result (mm, deg, %, N/mm). A null (not defined) is an empty cell.
+ */
+import type { HeaveRow, SweepResult } from './types';
+
+type Column = { name: string; get: (r: HeaveRow) => number | null | undefined };
+
+function quote(cell: string): string {
+  return /[",\r\n]/.test(cell) ? `"${cell.replace(/"/g, '""')}"` : cell;
+}
+
+/** Numbers as JavaScript prints them (shortest exact form), nulls empty. */
+function cell(v: number | null | undefined): string {
+  return v === null || v === undefined || !Number.isFinite(v) ? '' : String(v);
+}
+
+function columns(result: SweepResult): Column[] {
+  const first = result.ride;
+  const cols: Column[] = [
+    { name: 'travel', get: (r) => r.travel },
+    ...(['x', 'y', 'z', 'roll', 'pitch', 'yaw'] as const).map((k) => ({ name: `pose.${k}`, get: (r: HeaveRow) => r.pose[k] })),
+    { name: 'pinionAngleChange', get: (r) => r.pinionAngleChange },
+    { name: 'lateralShift', get: (r) => r.lateralShift },
+    { name: 'foreAftShift', get: (r) => r.foreAftShift },
+    { name: 'instantCenter.x', get: (r) => r.instantCenter?.x ?? null },
+    { name: 'instantCenter.z', get: (r) => r.instantCenter?.z ?? null },
+    { name: 'antiSquat', get: (r) => r.antiSquat },
+    { name: 'rollCenterHeight', get: (r) => r.rollCenterHeight },
+    { name: 'bind', get: (r) => r.bind },
+  ];
+  for (const [id, m] of Object.entries(first.members)) {
+    cols.push({ name: `members.${id}.length`, get: (r) => r.members[id]?.length });
+    cols.push({ name: `members.${id}.lengthChange`, get: (r) => r.members[id]?.lengthChange });
+    if (m.motionRatio !== undefined) cols.push({ name: `members.${id}.motionRatio`, get: (r) => r.members[id]?.motionRatio });
+    if (m.wheelRate !== undefined) cols.push({ name: `members.${id}.wheelRate`, get: (r) => r.members[id]?.wheelRate });
+  }
+  if (first.driveline) {
+    for (const k of ['length', 'plunge', 'outputAngle', 'pinionAngle'] as const) {
+      cols.push({ name: `driveline.${k}`, get: (r) => r.driveline?.[k] });
+    }
+  }
+  return cols;
+}
+
+/** The heave rows of `result` as one CSV text with a header line. */
+export function heaveRowsCsv(result: SweepResult): string {
+  const cols = columns(result);
+  const lines = [cols.map((c) => quote(c.name)).join(',')];
+  for (const r of result.heave) lines.push(cols.map((c) => cell(c.get(r))).join(','));
+  return lines.join('\r\n') + '\r\n';
+}
