@@ -14,6 +14,7 @@ import { sketchRoutes } from './routes/sketches';
 import { sharedRoutes } from './routes/shared';
 import { uploadRoutes } from './routes/uploads';
 import { adminRoutes } from './routes/admin';
+import { sweepRoutes } from './routes/sweep';
 
 /** Largest JSON body accepted; a sketch file is a few tens of KB. */
 export const JSON_BODY_LIMIT = '256kb';
@@ -51,6 +52,7 @@ export function createApp(ctx: AppContext): Express {
   api.use('/sketches', sketchRoutes(config, mailer));
   api.use('/shared', sharedRoutes());
   api.use('/admin', adminRoutes());
+  api.use(sweepRoutes());
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -1,7 +1,11 @@
 import type { Sequelize } from 'sequelize';
-import { ClassGroup, ClassMember, Shop, User } from '../models';
+import { starters } from '../../shared/kinematics';
+import { checkSketch } from '../../shared/schema/sketch';
+import { ClassGroup, ClassMember, Shop, Sketch, User, toPublicUser } from '../models';
 import { hashPassword } from '../services/passwords';
+import { createSketch } from '../services/sketches';
 import { demoAccounts, demoClass, demoShop } from './demo-data';
+import { demoSketches } from './demo-sketches';
 
 /**
  * Creates the demo shop, class and accounts when missing. Safe to run on every start:
@@ -38,4 +42,18 @@ export async function seedDemoData(sequelize: Sequelize): Promise<void> {
       await ClassMember.findOrCreate({ where: { classId: klass.id, userId: student.id }, transaction });
     }
   });
+  await seedDemoSketches();
+}
+
+/** One sketch per entry of demoSketches, unless its owner already has a sketch of that name. */
+async function seedDemoSketches(): Promise<void> {
+  for (const entry of demoSketches) {
+    const starter = starters[entry.layout];
+    const owner = await User.findOne({ where: { email: entry.owner } });
+    if (!starter || !owner) continue;
+    if (await Sketch.count({ where: { ownerId: owner.id, name: entry.name } })) continue;
+    const checked = checkSketch({ ...starter.build(entry.params), name: entry.name });
+    if (!checked.ok) throw new Error(`demo sketch "${entry.name}" is not valid: ${checked.problems.join('; ')}`);
+    await createSketch(toPublicUser(owner), checked.sketch);
+  }
 }

@@ -1,0 +1,21 @@
+import type { Layout } from '../../shared/schema/sketch';
+
+/**
+ * Demo sketches built from the starters, with invented vehicle names. `owner` is a demo
+ * account's e-mail; `params` override the starter's defaults (mm, deg).
+ */
+export interface DemoSketch {
+  owner: string;
+  layout: Layout;
+  name: string;
+  params?: Record<string, number>;
+}
+
+export const demoSketches: DemoSketch[] = [
+  { owner: 'maker@demo.test', layout: 'four-link-lateral-rod', name: 'Kettle Creek shop truck, rear four-link' },
+  { owner: 'maker@demo.test', layout: 'triangulated-four-link', name: 'Gravel Hopper buggy, rear triangulated', params: { wheelbase: 2900, track: 1650, tireRadius: 430 } },
+  { owner: 'maker@demo.test', layout: 'three-link-lateral-rod', name: 'Marsh Wren crawler, rear three-link' },
+  { owner: 'instructor@demo.test', layout: 'four-link-lateral-rod', name: 'Chassis 210 starter: four-link with lateral rod' },
+  { owner: 'instructor@demo.test', layout: 'three-link-lateral-rod', name: 'Chassis 210 starter: three-link' },
+  { owner: 'student@demo.test', layout: 'four-link-lateral-rod', name: 'Lab 2 variant: lower link angle 10°', params: { lowerAngle: 10 } },
+];

@@ -1,0 +1,118 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import fs from 'node:fs';
+import path from 'node:path';
+import zlib from 'node:zlib';
+import request from 'supertest';
+import { newMember, startTestServer, type Caller, type TestServer } from './helpers';
+import { sketchFile } from './fixtures';
+import { Upload } from '../../server/models';
+
+let server: TestServer;
+let alice: Caller;
+let bob: Caller;
+let sketchId: number;
+
+/** A real 1×1 PNG (signature, IHDR, IDAT, IEND), built here so the test needs no binary fixture. */
+function tinyPng(): Buffer {
+  const crcTable = Array.from({ length: 256 }, (_, n) => {
+    let c = n;
+    for (let k = 0; k < 8; k++) c = c & 1 ? 0xedb88320 ^ (c >>> 1) : c >>> 1;
+    return c >>> 0;
+  });
+  const crc = (buf: Buffer) => {
+    let c = 0xffffffff;
+    for (const b of buf) c = crcTable[(c ^ b) & 0xff] ^ (c >>> 8);
+    return (c ^ 0xffffffff) >>> 0;
+  };
+  const chunk = (type: string, data: Buffer) => {
+    const len = Buffer.alloc(4); len.writeUInt32BE(data.length);
+    const td = Buffer.concat([Buffer.from(type, 'ascii'), data]);
+    const c = Buffer.alloc(4); c.writeUInt32BE(crc(td));
+    return Buffer.concat([len, td, c]);
+  };
+  const ihdr = Buffer.from([0, 0, 0, 1, 0, 0, 0, 1, 8, 2, 0, 0, 0]);
+  const idat = zlib.deflateSync(Buffer.from([0, 255, 0, 0]));
+  return Buffer.concat([Buffer.from([137, 80, 78, 71, 13, 10, 26, 10]), chunk('IHDR', ihdr), chunk('IDAT', idat), chunk('IEND', Buffer.alloc(0))]);
+}
+
+/** The first bytes of a JPEG (SOI + JFIF APP0): enough for detection from the bytes. */
+const jpegBytes = Buffer.concat([
+  Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01, 0x01, 0x00, 0x00, 0x01, 0x00, 0x01, 0x00, 0x00]),
+  Buffer.alloc(64), Buffer.from([0xff, 0xd9]),
+]);
+
+beforeAll(async () => {
+  server = await startTestServer();
+  alice = await newMember(server.app, 'alice');
+  bob = await newMember(server.app, 'bob');
+  sketchId = (await alice.post('/api/sketches').send({ name: 'Traced rear', document: sketchFile() })).body.id;
+});
+afterAll(async () => { await server.close(); });
+
+describe('uploads', () => {
+  it('stores a PNG under a server-made name and serves it to the owner with nosniff', async () => {
+    const png = tinyPng();
+    const res = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', png, { filename: '../../evil.html', contentType: 'text/html' });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ mime: 'image/png', size: png.length });
+    expect(res.body.url).toBe(`/api/uploads/${res.body.id}`);
+    const row = await Upload.findByPk(res.body.id);
+    expect(row!.storedName).toBe(`${res.body.id}.png`);
+    expect(fs.existsSync(path.join(server.config.uploadsDir, row!.storedName))).toBe(true);
+
+    const got = await alice.get(res.body.url);
+    expect(got.status).toBe(200);
+    expect(got.headers['content-type']).toBe('image/png');
+    expect(got.headers['x-content-type-options']).toBe('nosniff');
+    expect(Buffer.compare(got.body as Buffer, png)).toBe(0);
+  });
+
+  it('accepts a JPEG, detected from its bytes', async () => {
+    const res = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', jpegBytes, { filename: 'photo.png', contentType: 'image/png' });
+    expect(res.status).toBe(201);
+    expect(res.body.mime).toBe('image/jpeg');
+  });
+
+  it('refuses files that are not PNG or JPEG, whatever their name says', async () => {
+    const before = await Upload.count();
+    const html = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', Buffer.from('<script>alert(1)</script>'), { filename: 'x.png', contentType: 'image/png' });
+    expect(html.status).toBe(415);
+    const gif = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', Buffer.from('GIF89a\x01\x00\x01\x00\x00\x00\x00;'), { filename: 'x.gif' });
+    expect(gif.status).toBe(415);
+    expect(await Upload.count()).toBe(before);
+  });
+
+  it('refuses a missing file, a wrong field, two files and a file over 10 MB', async () => {
+    expect((await alice.post(`/api/sketches/${sketchId}/uploads`).field('note', 'x')).status).toBe(400);
+    expect((await alice.post(`/api/sketches/${sketchId}/uploads`).attach('photo', tinyPng(), 'a.png')).status).toBe(400);
+    const two = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', tinyPng(), 'a.png').attach('file', tinyPng(), 'b.png');
+    expect(two.status).toBe(400);
+    const big = Buffer.concat([tinyPng(), Buffer.alloc(10 * 1024 * 1024)]);
+    const tooBig = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', big, 'big.png');
+    expect(tooBig.status).toBe(413);
+    expect(tooBig.body.error).toMatch(/10 MB/);
+  });
+
+  it('needs the CSRF token', async () => {
+    const res = await alice.agent.post(`/api/sketches/${sketchId}/uploads`).attach('file', tinyPng(), 'a.png');
+    expect(res.status).toBe(403);
+  });
+
+  it("refuses uploads to someone else's sketch and hides the file from them (404), and from guests", async () => {
+    expect((await bob.post(`/api/sketches/${sketchId}/uploads`).attach('file', tinyPng(), 'a.png')).status).toBe(404);
+    const up = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', tinyPng(), 'a.png');
+    expect((await bob.get(up.body.url)).status).toBe(404);
+    expect((await request(server.app).get(up.body.url)).status).toBe(404);
+    expect((await request(server.app).get('/api/uploads/not-a-uuid')).status).toBe(404);
+  });
+
+  it('serves the file to a guest holding the share token, until the link is revoked', async () => {
+    const up = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', tinyPng(), 'a.png');
+    const share = await alice.post(`/api/sketches/${sketchId}/share`).send({ mode: 'link' });
+    const url = `${up.body.url}?share=${share.body.shareToken}`;
+    expect((await request(server.app).get(url)).status).toBe(200);
+    expect((await request(server.app).get(`${up.body.url}?share=wrong-token-value-123`)).status).toBe(404);
+    await alice.post(`/api/sketches/${sketchId}/share`).send({ mode: 'private' }).expect(200);
+    expect((await request(server.app).get(url)).status).toBe(404);
+  });
+});
