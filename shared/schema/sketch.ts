@@ -237,7 +237,7 @@ function formatIssue(iss: z.core.$ZodIssue): string {
     case 'invalid_type': {
       const expected = article(typeName(String(iss.expected)));
       const missing = 'input' in iss ? iss.input === undefined : /received undefined/.test(iss.message);
-      return missing ? `${where}: required, expected ${expected}` : `${where}: expected ${expected}`;
+      return missing && iss.path.length > 0 ? `${where}: required, expected ${expected}` : `${where}: expected ${expected}`;
     }
     case 'invalid_value':
       return `${where}: ${quoteList(iss.values)}`;
