@@ -102,10 +102,12 @@ export const useSweepStore = defineStore('sweep', () => {
 
   const sketch = computed(() => (board.sketch ?? null) as Sketch | null);
 
+  // The board's documents are immutable (every edit builds a new one sharing untouched parts),
+  // so comparing the swept parts by reference sees every edit that matters and skips the rest.
   watch(
     SWEPT_FIELDS.map((k) => () => (sketch.value as Record<string, unknown> | null)?.[k]),
     () => run(sketch.value),
-    { immediate: true, deep: true },
+    { immediate: true },
   );
 
   const heaveRow = computed<HeaveRow | null>(() => (result.value ? nearest(result.value.heave, (r) => r.travel, travel.value) : null));
