@@ -79,7 +79,8 @@ export function solidAxleBase(p: Params): { points: PointIn[]; members: MemberIn
   // Shocks behind the axle, outboard of the springs, nearly upright.
   const shY = Math.min(half - 200, p.lowerSpread / 2 + 60);
   const shAz = wc - 150;
-  const shFz = p.rideHeight + 280;
+  // At least 380 mm between the shock's eyes, so its stroke covers the sweep whatever the frame height.
+  const shFz = Math.max(p.rideHeight + 280, shAz + 380);
   points.push(...pair('SH', 'frame', -140, shY, shFz), ...pair('SH', 'axle', -110, shY, shAz));
   const shRide = Math.hypot(30, shFz - shAz);
   const shMin = Math.round((shRide - 150 - SHOCK_MARGIN_MM) / 5) * 5;
@@ -90,7 +91,8 @@ export function solidAxleBase(p: Params): { points: PointIn[]; members: MemberIn
   );
 
   // Coil springs seated on the axle tube above the lower links.
-  points.push(...pair('SP', 'frame', -60, p.lowerSpread / 2, p.rideHeight + 120), ...pair('SP', 'axle', -60, p.lowerSpread / 2, wc + 15));
+  const spFz = Math.max(p.rideHeight + 120, wc + 15 + 200);
+  points.push(...pair('SP', 'frame', -60, p.lowerSpread / 2, spFz), ...pair('SP', 'axle', -60, p.lowerSpread / 2, wc + 15));
   members.push(
     { id: 'SPl', kind: 'spring', a: 'SP.fl', b: 'SP.al', rate: p.springRate },
     { id: 'SPr', kind: 'spring', a: 'SP.fr', b: 'SP.ar', rate: p.springRate },

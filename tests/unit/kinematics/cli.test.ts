@@ -1,0 +1,74 @@
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { sweepCommand } from '../../../shared/cli/sweep';
+import { heaveRowsCsv, runSweep } from '../../../shared/kinematics';
+import { exampleSketch } from './helpers';
+
+const dir = mkdtempSync(path.join(tmpdir(), 'arcwright-sweep-'));
+const write = (name: string, text: string) => {
+  writeFileSync(path.join(dir, name), text);
+  return name;
+};
+const good = write('good.json', JSON.stringify(exampleSketch()));
+
+describe('sweep command', () => {
+  it('prints the sweep result as JSON and exits 0', () => {
+    const out = sweepCommand([good], dir);
+    expect(out.code).toBe(0);
+    expect(out.stderr).toBeUndefined();
+    expect(JSON.parse(out.stdout!)).toEqual(JSON.parse(JSON.stringify(runSweep(exampleSketch()))));
+  });
+
+  it('prints the heave rows as CSV with --csv', () => {
+    const out = sweepCommand([good, '--csv'], dir);
+    expect(out.code).toBe(0);
+    const lines = out.stdout!.trimEnd().split('\r\n');
+    expect(lines).toHaveLength(1 + 49);
+    const header = lines[0].split(',');
+    expect(header.slice(0, 2)).toEqual(['travel', 'pose.x']);
+    expect(header).toContain('members.SPl.wheelRate');
+    expect(header).toContain('driveline.pinionAngle');
+    expect(lines[1].split(',')[0]).toBe('-130');
+    expect(lines.every((l) => l.split(',').length === header.length)).toBe(true);
+  });
+
+  it('refuses bad input with one line per problem and nothing on stdout', () => {
+    const cases: [string[], RegExp][] = [
+      [['missing.json'], /^missing\.json: no such file$/],
+      [[write('text.json', 'not json at all')], /^text\.json: not JSON/],
+      [[write('bad.json', JSON.stringify({ ...exampleSketch(), points: 'none' }))], /^bad\.json: points: expected a list$/],
+      [[], /^no sketch file given$/],
+      [[good, '--xml'], /^unknown option '--xml'$/],
+    ];
+    for (const [args, first] of cases) {
+      const out = sweepCommand(args, dir);
+      expect(out.code).toBe(2);
+      expect(out.stdout).toBeUndefined();
+      expect(out.stderr![0]).toMatch(first);
+    }
+    const many = sweepCommand([write('many.json', JSON.stringify({ ...exampleSketch(), name: 3, layout: 'x' }))], dir);
+    expect(many.stderr).toEqual(["many.json: name: expected a string", expect.stringMatching(/^many\.json: layout: expected one of/)]);
+  });
+
+  it('behaves the same as a process: exit code 2, no stack trace, empty stdout', () => {
+    const root = path.resolve(__dirname, '../../..');
+    const run = spawnSync(process.execPath, [path.join(root, 'node_modules/tsx/dist/cli.mjs'), path.join(root, 'shared/cli/sweep.ts'), 'missing.json'], {
+      cwd: dir,
+      encoding: 'utf8',
+      env: { ...process.env, INIT_CWD: dir },
+    });
+    expect(run.status).toBe(2);
+    expect(run.stdout).toBe('');
+    expect(run.stderr).toBe('missing.json: no such file\n');
+    const ok = spawnSync(process.execPath, [path.join(root, 'node_modules/tsx/dist/cli.mjs'), path.join(root, 'shared/cli/sweep.ts'), good, '--csv'], {
+      cwd: dir,
+      encoding: 'utf8',
+      env: { ...process.env, INIT_CWD: dir },
+    });
+    expect(ok.status).toBe(0);
+    expect(ok.stdout).toBe(heaveRowsCsv(runSweep(exampleSketch())));
+  }, 30000);
+});
