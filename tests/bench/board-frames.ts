@@ -1,0 +1,278 @@
+/**
+ * Board benchmark (a benchmark that prints figures, not a timed test):
+ *
+ * 1. Frame time while dragging a pivot: starts the real server on a free port with a fresh
+ *    database, opens the four-link starter on the board in headless Chromium, drags the left
+ *    upper link's frame pivot along a scripted path (one pointer move per ~16 ms, as a hand
+ *    would) and samples requestAnimationFrame throughout. Prints the 95th-percentile frame
+ *    time (target ≤ 16.7 ms, one frame at 60 Hz) with the median and the worst.
+ * 2. The board route's JavaScript: every script the browser fetches to open the board (the
+ *    entry, the route's chunks, the lazily loaded plot chunk and the sweep worker), gzipped
+ *    from dist/ (target ≤ 350 KB gzip in total).
+ *
+ * Run with `npm run bench:board` (builds first). `--out FILE` also writes the figures as Markdown.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import { mkdtempSync, readFileSync, writeFileSync, existsSync, rmSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { gzipSync } from 'node:zlib';
+import { chromium, type BrowserContext, type Page } from '@playwright/test';
+import { starters } from '../../shared/kinematics';
+
+const ROOT = resolve(import.meta.dirname, '../..');
+const DIST = join(ROOT, 'dist');
+const CHROMIUM = '/usr/lib/chromium/chromium';
+const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+const MAKER = { email: 'maker@demo.test', password: 'demo-maker-2026' };
+
+/** One frame at 60 Hz (ms): the frame-time target. */
+const FRAME_TARGET_MS = 1000 / 60;
+/** The board route's JavaScript budget (KB gzip). */
+const BUNDLE_TARGET_KB = 350;
+/** Pointer moves in the scripted drag and the pause between them (ms): about four seconds of dragging. */
+const DRAG_STEPS = 240;
+const DRAG_STEP_MS = 16;
+/** The pivot dragged: the four-link starter's left upper link, frame end. */
+const DRAG_PIVOT = 'UL.fl';
+
+function arg(name: string): string | undefined {
+  const i = process.argv.indexOf(name);
+  return i >= 0 ? process.argv[i + 1] : undefined;
+}
+
+function freePort(): Promise<number> {
+  return new Promise((res, rej) => {
+    const s = createServer().listen(0, '127.0.0.1', () => {
+      const addr = s.address();
+      s.close(() => (typeof addr === 'object' && addr ? res(addr.port) : rej(new Error('no port'))));
+    });
+  });
+}
+
+async function waitForHealth(url: string, server: ChildProcess, timeoutMs = 60_000): Promise<void> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    if (server.exitCode !== null) throw new Error(`the server exited with code ${server.exitCode}`);
+    try {
+      const res = await fetch(`${url}/api/health`);
+      if (res.ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error('the server did not answer /api/health in time');
+}
+
+function percentile(sorted: number[], p: number): number {
+  if (!sorted.length) return Number.NaN;
+  const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
+  return sorted[i];
+}
+
+/** Signs in through the API with the page's own cookies and creates the four-link starter sketch. */
+async function newStarterSketch(context: BrowserContext, base: string): Promise<number> {
+  const csrf = async () => ((await (await context.request.get(`${base}/api/auth/csrf`)).json()) as { token: string }).token;
+  const login = await context.request.post(`${base}/api/auth/login`, { data: MAKER, headers: { 'X-CSRF-Token': await csrf() } });
+  if (!login.ok()) throw new Error(`sign-in failed: ${login.status()} ${await login.text()}`);
+  const spec = starters['four-link-lateral-rod'];
+  if (!spec) throw new Error('the four-link starter is missing');
+  const document = { ...spec.build(), name: 'Bench: four-link drag' };
+  const made = await context.request.post(`${base}/api/sketches`, { data: { name: document.name, document }, headers: { 'X-CSRF-Token': await csrf() } });
+  if (!made.ok()) throw new Error(`creating the sketch failed: ${made.status()} ${await made.text()}`);
+  return ((await made.json()) as { id: number }).id;
+}
+
+async function openBoard(page: Page, base: string, id: number): Promise<void> {
+  await page.goto(`${base}/sketches/${id}`);
+  await page.waitForFunction((pivot) => !!window.arcwrightBoard?.side?.pivotAt(pivot), DRAG_PIVOT, { timeout: 30_000 });
+  // The plots are loaded lazily: wait until they have drawn, so the drag measures the whole board.
+  await page.locator('[data-test="plot-pinion"] canvas').waitFor({ state: 'visible', timeout: 30_000 });
+  await page.waitForTimeout(500);
+}
+
+interface FrameFigures {
+  frames: number;
+  p50: number;
+  p95: number;
+  max: number;
+  over: number;
+  idleP95: number;
+  moved: boolean;
+  readoutChanged: boolean;
+}
+
+/** Starts recording requestAnimationFrame timestamps in the page; waits `ms` before returning. */
+async function sampleFrames(page: Page, ms: number): Promise<void> {
+  await page.evaluate(() => {
+    const w = window as unknown as { __frames: number[]; __sampling: boolean };
+    w.__frames = [];
+    w.__sampling = true;
+    const tick = (t: number) => {
+      w.__frames.push(t);
+      if (w.__sampling) requestAnimationFrame(tick);
+    };
+    requestAnimationFrame(tick);
+  });
+  if (ms > 0) await page.waitForTimeout(ms);
+}
+
+/** Stops recording; the gaps between consecutive frames (ms). */
+async function stopSampling(page: Page): Promise<number[]> {
+  const stamps = await page.evaluate(() => {
+    const w = window as unknown as { __frames: number[]; __sampling: boolean };
+    w.__sampling = false;
+    return w.__frames;
+  });
+  const gaps: number[] = [];
+  for (let i = 1; i < stamps.length; i++) gaps.push(stamps[i] - stamps[i - 1]);
+  return gaps;
+}
+
+async function measureDrag(page: Page): Promise<FrameFigures> {
+  // Idle baseline: what the headless browser's frames look like with nothing happening.
+  await sampleFrames(page, 1500);
+  const idle = (await stopSampling(page)).sort((a, b) => a - b);
+
+  const start = await page.evaluate((pivot) => window.arcwrightBoard!.side!.pivotAt(pivot), DRAG_PIVOT);
+  if (!start) throw new Error(`pivot ${DRAG_PIVOT} is not on the side view`);
+  const readoutBefore = await page.locator('[data-test="readout-antisquat"]').innerText();
+
+  await page.mouse.move(start.x, start.y);
+  await page.mouse.down();
+  await sampleFrames(page, 0);
+  for (let i = 1; i <= DRAG_STEPS; i++) {
+    const t = (i / DRAG_STEPS) * Math.PI * 2;
+    // A loop forward and up and back: the instant centre and every curve change all the way.
+    await page.mouse.move(start.x - 70 * Math.sin(t), start.y - 45 * (1 - Math.cos(t / 2)));
+    await page.waitForTimeout(DRAG_STEP_MS);
+  }
+  const gaps = (await stopSampling(page)).sort((a, b) => a - b);
+  await page.mouse.up();
+  await page.waitForTimeout(600);
+  const end = await page.evaluate((pivot) => window.arcwrightBoard!.side!.pivotAt(pivot), DRAG_PIVOT);
+  const readoutAfter = await page.locator('[data-test="readout-antisquat"]').innerText();
+  return {
+    frames: gaps.length,
+    p50: percentile(gaps, 50),
+    p95: percentile(gaps, 95),
+    max: gaps.at(-1) ?? Number.NaN,
+    over: gaps.filter((g) => g > FRAME_TARGET_MS * 1.5).length,
+    idleP95: percentile(idle, 95),
+    // The loop ends at sin(2π) = 0 horizontally but 90 px higher: the pivot must have moved.
+    moved: !!end && Math.hypot(end.x - start.x, end.y - start.y) > 10,
+    readoutChanged: readoutBefore !== readoutAfter,
+  };
+}
+
+interface BundleFigures {
+  files: Array<{ file: string; raw: number; gzip: number }>;
+  totalGzipKb: number;
+  totalRawKb: number;
+}
+
+/** Gzips, from dist/, every script the page fetched (level 9, as a server with compression would at best). */
+function bundleFigures(urls: Set<string>): BundleFigures {
+  const files = [...urls]
+    .map((u) => new URL(u).pathname)
+    .filter((p) => p.endsWith('.js'))
+    .map((p) => {
+      const path = join(DIST, p);
+      const bytes = readFileSync(path);
+      return { file: p, raw: bytes.length, gzip: gzipSync(bytes, { level: 9 }).length };
+    })
+    .sort((a, b) => b.gzip - a.gzip);
+  return {
+    files,
+    totalGzipKb: files.reduce((s, f) => s + f.gzip, 0) / 1024,
+    totalRawKb: files.reduce((s, f) => s + f.raw, 0) / 1024,
+  };
+}
+
+const ms = (v: number) => `${v.toFixed(1)} ms`;
+const kb = (v: number) => `${v.toFixed(1)} KB`;
+
+async function main() {
+  if (!existsSync(join(DIST, 'index.html'))) throw new Error('dist/ has no build: run `npx vite build` first (npm run bench:board does)');
+  const port = await freePort();
+  const base = `http://127.0.0.1:${port}`;
+  const dir = mkdtempSync(join(tmpdir(), 'arcwright-bench-'));
+  const server = spawn(process.execPath, [join(ROOT, 'node_modules/tsx/dist/cli.mjs'), 'server/index.ts'], {
+    cwd: ROOT,
+    env: {
+      ...process.env,
+      NODE_ENV: 'production',
+      PORT: String(port),
+      DATABASE_PATH: join(dir, 'bench.sqlite'),
+      UPLOADS_DIR: join(dir, 'uploads'),
+      PUBLIC_URL: base,
+      SESSION_SECRET: 'bench-only-secret',
+      LOGIN_RATE_LIMIT: '1000',
+    },
+    stdio: ['ignore', 'ignore', 'pipe'],
+  });
+  let serverErr = '';
+  server.stderr?.on('data', (d) => (serverErr += String(d)));
+  const userDataDir = mkdtempSync(join(tmpdir(), 'arcwright-bench-profile-'));
+  let context: BrowserContext | null = null;
+  try {
+    await waitForHealth(base, server);
+    context = await chromium.launchPersistentContext(userDataDir, {
+      executablePath: CHROMIUM,
+      args: CHROMIUM_ARGS,
+      headless: true,
+      viewport: { width: 1440, height: 900 },
+    });
+    const scripts = new Set<string>();
+    context.on('request', (r) => {
+      if (r.url().startsWith(base) && r.url().endsWith('.js')) scripts.add(r.url());
+    });
+    const id = await newStarterSketch(context, base);
+    const page = context.pages()[0] ?? (await context.newPage());
+    page.on('worker', (w) => scripts.add(w.url()));
+    await openBoard(page, base, id);
+    const bundle = bundleFigures(scripts);
+    const frames = await measureDrag(page);
+    await page.screenshot({ path: join(ROOT, 'tests/e2e/artifacts/bench-board-after-drag.png') });
+
+    const lines = [
+      `Board frame time while dragging ${DRAG_PIVOT} of the four-link starter (${DRAG_STEPS} pointer moves, ${frames.frames} frames sampled):`,
+      `  p95 ${ms(frames.p95)} (target <= ${ms(FRAME_TARGET_MS)}) ${frames.p95 <= FRAME_TARGET_MS + 0.05 ? 'MET' : 'NOT MET'}`,
+      `  median ${ms(frames.p50)}, worst ${ms(frames.max)}, frames over 25 ms: ${frames.over}; idle p95 ${ms(frames.idleP95)}`,
+      `  pivot moved: ${frames.moved ? 'yes' : 'NO'}; readout anti-squat changed: ${frames.readoutChanged ? 'yes' : 'NO'}`,
+      `Board route JavaScript (every script fetched to open the board, plots and worker included), gzip -9 from dist/:`,
+      `  total ${kb(bundle.totalGzipKb)} gzip (${kb(bundle.totalRawKb)} raw) (target <= ${BUNDLE_TARGET_KB} KB) ${bundle.totalGzipKb <= BUNDLE_TARGET_KB ? 'MET' : 'NOT MET'}`,
+      ...bundle.files.map((f) => `    ${f.file}  ${kb(f.gzip / 1024)} gzip  (${kb(f.raw / 1024)} raw)`),
+    ];
+    console.log(lines.join('\n'));
+    const out = arg('--out');
+    if (out) {
+      const when = new Date().toISOString();
+      const md = [
+        '# Board benchmark figures',
+        '',
+        `Measured ${when} with \`npm run bench:board\` (tests/bench/board-frames.ts): headless Debian Chromium`,
+        `(${CHROMIUM_ARGS.join(' ')}, fresh profile), real server on a free port with a fresh database, viewport 1440×900.`,
+        '',
+        '```',
+        ...lines,
+        '```',
+        '',
+      ].join('\n');
+      writeFileSync(out, md);
+      console.log(`(written to ${out})`);
+    }
+  } finally {
+    await context?.close().catch(() => undefined);
+    server.kill('SIGTERM');
+    rmSync(userDataDir, { recursive: true, force: true });
+    if (server.exitCode && serverErr) console.error(serverErr);
+  }
+}
+
+main().catch((err) => {
+  console.error(`bench:board failed: ${err instanceof Error ? err.message : String(err)}`);
+  process.exit(1);
+});
