@@ -52,7 +52,7 @@ export function createApp(ctx: AppContext): Express {
   api.use('/sketches', sketchRoutes(config, mailer));
   api.use('/shared', sharedRoutes());
   api.use('/admin', adminRoutes());
-  api.use(sweepRoutes());
+  api.use(sweepRoutes(config));
   api.use(apiNotFound);
   app.use('/api', api);
 

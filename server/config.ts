@@ -30,6 +30,8 @@ export interface ServerConfig {
   loginWindowMs: number;
   /** Sign-ups and reset requests allowed per address per hour. */
   signupMaxPerAddress: number;
+  /** Sweeps (POST /api/sweep) allowed per address per minute. */
+  sweepMaxPerMinute: number;
   /** Folder of the built client; served when it exists. */
   distDir: string;
 }
@@ -75,6 +77,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     loginMaxPerAddress: intFrom(env.LOGIN_MAX_PER_ADDRESS, 50, 'LOGIN_MAX_PER_ADDRESS'),
     loginWindowMs: 15 * MINUTE_MS,
     signupMaxPerAddress: intFrom(env.SIGNUP_MAX_PER_ADDRESS, 30, 'SIGNUP_MAX_PER_ADDRESS'),
+    sweepMaxPerMinute: intFrom(env.SWEEP_MAX_PER_MINUTE, 120, 'SWEEP_MAX_PER_MINUTE'),
     distDir: path.resolve(root, env.DIST_DIR || 'dist'),
   };
 }

@@ -18,8 +18,11 @@ function emailKey(req: Request): string {
   return typeof email === 'string' ? email.trim().toLowerCase() : '(none)';
 }
 
-/** Failed sign-ins per account and per address; successful ones do not count. */
-export function loginLimiters(config: ServerConfig): RequestHandler[] {
+/**
+ * Failed sign-ins per address, then per account; successful ones do not count. Mount the
+ * account limiter after body validation, so that it keys on a real e-mail.
+ */
+export function loginLimiters(config: ServerConfig): { perAddress: RequestHandler; perAccount: RequestHandler } {
   const common = {
     windowMs: config.loginWindowMs,
     skipSuccessfulRequests: true,
@@ -27,10 +30,10 @@ export function loginLimiters(config: ServerConfig): RequestHandler[] {
     legacyHeaders: false,
     handler: tooMany('too many sign-in attempts'),
   };
-  return [
-    rateLimit({ ...common, limit: config.loginMaxPerAddress, keyGenerator: addressKey }),
-    rateLimit({ ...common, limit: config.loginMaxPerAccount, keyGenerator: emailKey }),
-  ];
+  return {
+    perAddress: rateLimit({ ...common, limit: config.loginMaxPerAddress, keyGenerator: addressKey }),
+    perAccount: rateLimit({ ...common, limit: config.loginMaxPerAccount, keyGenerator: emailKey }),
+  };
 }
 
 /** Sign-ups and reset e-mails per address (and reset e-mails per account), to stop mail floods. */
@@ -41,10 +44,13 @@ export function signupLimiter(config: ServerConfig): RequestHandler {
   });
 }
 
-export function resetRequestLimiters(config: ServerConfig): RequestHandler[] {
+/** Reset mails per account per hour. */
+const RESETS_PER_ACCOUNT = 5;
+
+export function resetRequestLimiters(config: ServerConfig): { perAddress: RequestHandler; perAccount: RequestHandler } {
   const common = { windowMs: HOUR_MS, standardHeaders: 'draft-8' as const, legacyHeaders: false };
-  return [
-    rateLimit({ ...common, limit: config.signupMaxPerAddress, keyGenerator: addressKey, handler: tooMany('too many reset requests') }),
-    rateLimit({ ...common, limit: 5, keyGenerator: emailKey, handler: tooMany('too many reset requests for this account') }),
-  ];
+  return {
+    perAddress: rateLimit({ ...common, limit: config.signupMaxPerAddress, keyGenerator: addressKey, handler: tooMany('too many reset requests') }),
+    perAccount: rateLimit({ ...common, limit: RESETS_PER_ACCOUNT, keyGenerator: emailKey, handler: tooMany('too many reset requests for this account') }),
+  };
 }

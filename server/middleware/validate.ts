@@ -1,3 +1,4 @@
+import type { RequestHandler } from 'express';
 import type { ZodError, ZodType } from 'zod';
 import { badRequest } from './http-error';
 
@@ -14,4 +15,12 @@ export function parseOr400<T>(schema: ZodType<T>, value: unknown, message = 'inv
   const result = schema.safeParse(value);
   if (!result.success) throw badRequest(message, zodProblems(result.error));
   return result.data;
+}
+
+/** Middleware: replaces req.body with its parsed form, or answers 400 with the problems. */
+export function validBody<T>(schema: ZodType<T>): RequestHandler {
+  return (req, _res, next) => {
+    req.body = parseOr400(schema, req.body);
+    next();
+  };
 }

@@ -3,7 +3,7 @@ import type { ServerConfig } from '../config';
 import type { PublicUser } from '../models';
 import { csrf } from '../middleware/csrf';
 import { unauthorized } from '../middleware/http-error';
-import { parseOr400 } from '../middleware/validate';
+import { parseOr400, validBody } from '../middleware/validate';
 import { loginLimiters, resetRequestLimiters, signupLimiter } from '../middleware/rate-limit';
 import { passport, SESSION_COOKIE } from '../middleware/session';
 import { loginBody, resetBody, resetRequestBody, signupBody } from '../schemas/auth';
@@ -50,8 +50,8 @@ export function authRoutes(config: ServerConfig, mailer: Mailer): Router {
     res.status(201).json({ user });
   });
 
-  router.post('/login', ...loginLimiters(config), async (req, res, next) => {
-    req.body = parseOr400(loginBody, req.body);
+  const login = loginLimiters(config);
+  router.post('/login', login.perAddress, validBody(loginBody), login.perAccount, async (req, res, next) => {
     const user = await authenticateLocal(req, res, next);
     if (!user) throw unauthorized('wrong e-mail or password');
     await signIn(req, user);
@@ -66,8 +66,9 @@ export function authRoutes(config: ServerConfig, mailer: Mailer): Router {
     });
   });
 
-  router.post('/reset-request', ...resetRequestLimiters(config), async (req, res) => {
-    const { email } = parseOr400(resetRequestBody, req.body);
+  const resets = resetRequestLimiters(config);
+  router.post('/reset-request', resets.perAddress, validBody(resetRequestBody), resets.perAccount, async (req, res) => {
+    const { email } = req.body as { email: string };
     await requestPasswordReset(email, config, mailer);
     res.status(202).json({ status: 'if an account has this e-mail, a reset link is on its way' });
   });

@@ -1,17 +1,16 @@
 import { Router } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import { isSketchValidationError, runSweep } from '../../shared/kinematics';
+import type { ServerConfig } from '../config';
 import { badRequest } from '../middleware/http-error';
 
-/** Sweeps per address per minute: each one is up to a second or so of CPU on the one event loop. */
-const SWEEPS_PER_MINUTE = 120;
-
 /** POST /api/sweep: the body is a sketch file; the answer is the sweep result, as the command line prints it. */
-export function sweepRoutes(): Router {
+export function sweepRoutes(config: ServerConfig): Router {
   const router = Router();
   const limiter = rateLimit({
     windowMs: 60_000,
-    limit: SWEEPS_PER_MINUTE,
+    // Each sweep is CPU on the one event loop (tens of ms for a typical sketch), so cap them.
+    limit: config.sweepMaxPerMinute,
     keyGenerator: (req) => ipKeyGenerator(req.ip ?? 'unknown'),
     standardHeaders: 'draft-8',
     legacyHeaders: false,
