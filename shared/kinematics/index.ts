@@ -34,3 +34,5 @@ export { pointsAt } from './points';
 export { poseApply } from './pose';
 export type { Vec3 } from './vec';
 export { heaveRowsCsv } from './csv';
+export { sweepEnvelope } from './envelope';
+export type { EnvelopeCell, EnvelopeSettings } from './envelope';

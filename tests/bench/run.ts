@@ -1,0 +1,60 @@
+/**
+ * `npm run bench`: median time of a full sweep of each starter (61 heave rows −150..+150 mm
+ * by 5 and 17 roll rows ±8° by 1) and of a 21 × 21 heave × roll envelope. Targets: a full
+ * sweep ≤ 1 ms median (the board re-sweeps on every pointer move), the envelope ≤ 40 ms.
+ * A benchmark, not a test: it prints figures and never fails on time.
+ */
+import os from 'node:os';
+import { parseSketch, runSweep, starters, sweepEnvelope, sweepSketch } from '../../shared/kinematics';
+
+const FULL = { droop: -150, bump: 150, step: 5, roll: 8, rollStep: 1 };
+const GRID = { droop: -150, bump: 150, step: 15, roll: 8, rollStep: 0.8 };
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+}
+
+/** Runs `f` for warm-up, then `n` timed runs; returns the median and the 90th percentile in ms. */
+function time(f: () => unknown, n: number, warm = Math.max(20, n >> 2)): { median: number; p90: number } {
+  for (let i = 0; i < warm; i++) f();
+  const t: number[] = [];
+  for (let i = 0; i < n; i++) {
+    const t0 = performance.now();
+    f();
+    t.push(performance.now() - t0);
+  }
+  t.sort((a, b) => a - b);
+  return { median: median(t), p90: t[Math.floor(t.length * 0.9)] };
+}
+
+const rows: string[][] = [];
+for (const spec of Object.values(starters)) {
+  const doc = { ...spec!.build(), sweep: FULL };
+  const sketch = parseSketch(doc);
+  const check = runSweep(doc);
+  const full = time(() => runSweep(doc), 400);
+  const solveOnly = time(() => sweepSketch(sketch), 400);
+  const grid = time(() => sweepEnvelope(sketch, GRID), 40, 5);
+  const cells = sweepEnvelope(sketch, GRID).flat();
+  rows.push([
+    spec!.layout,
+    `${check.heave.length}+${check.roll.length}`,
+    full.median.toFixed(3),
+    full.p90.toFixed(3),
+    solveOnly.median.toFixed(3),
+    `${cells.filter((c) => c.pose).length}/${cells.length}`,
+    grid.median.toFixed(2),
+    grid.p90.toFixed(2),
+  ]);
+}
+
+const head = ['starter', 'rows', 'full sweep median ms', 'p90 ms', 'without validation ms', 'grid cells', '21×21 grid median ms', 'p90 ms'];
+const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
+const line = (cells: string[]) => `| ${cells.map((c, i) => c.padEnd(widths[i])).join(' | ')} |`;
+console.log(`Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}`);
+console.log(line(head));
+console.log(`|${widths.map((w) => '-'.repeat(w + 2)).join('|')}|`);
+for (const r of rows) console.log(line(r));
+console.log('targets: full sweep ≤ 1 ms median, grid ≤ 40 ms median');
