@@ -47,6 +47,8 @@ export function sweepEnvelope(sketch: Sketch, s: EnvelopeSettings): EnvelopeCell
   if (!ride) return travels.map(empty);
   const { rank } = solver.rankAnalysis();
   ctx.redundancy = Math.max(0, solver.m - rank);
+  // Every free coordinate located: plain QR of J needs no Tikhonov rows.
+  solver.regularize = rank < solver.n;
 
   const heaveRows = new Map<number, SolvedRow>([[0, ride]]);
   for (const side of [hp.up, hp.down]) for (const r of march(ctx, ride, 'travel', side).rows) heaveRows.set(r.travel, r);

@@ -7,6 +7,8 @@
 
 /** Two grid values closer than this (in the sweep's own unit) count as one. */
 export const GRID_MERGE_TOLERANCE = 1e-9;
+/** Grid values are rounded to 1e-9 of their unit (far below any step a sketch can ask for). */
+const GRID_ROUNDING = 1e9;
 
 /**
  * Outward marching order from 0: the positive side first, then the negative side,
@@ -38,7 +40,7 @@ function side(limit: number, step: number): number[] {
   const n = sideCount(limit, step);
   for (let k = 1; k <= n; k++) out.push(Math.min(k * step, limit));
   // Round multiples of the step so that rows read 5, 10, … rather than 15.000000000000002.
-  return out.map((v) => (Math.abs(v - limit) <= GRID_MERGE_TOLERANCE ? limit : Number(v.toPrecision(12))));
+  return out.map((v) => (Math.abs(v - limit) <= GRID_MERGE_TOLERANCE ? limit : Math.round(v * GRID_ROUNDING) / GRID_ROUNDING));
 }
 
 /** The outward plan for a sweep from `lo` (≤ 0) to `hi` (≥ 0) by `step` (> 0). */

@@ -70,14 +70,26 @@ function scaledDistance(drive: Drive, a: Float64Array, b: Float64Array): number 
   return d;
 }
 
-/** Solves the row at parameter value `to` from a solved row; null if it fails. */
-function stepTo(ctx: MarchContext, from: SolvedRow, param: MarchParameter, to: number): SolvedRow | null {
+const paramOf = (row: SolvedRow, param: MarchParameter) => (param === 'travel' ? row.travel : row.roll);
+
+/**
+ * Solves the row at parameter value `to` from a solved row; null if it fails. With the row
+ * before `from` given, the predictor is second order (the change of the sensitivity between
+ * the two rows estimates the path's curvature), which saves a Newton step a row.
+ */
+function stepTo(ctx: MarchContext, from: SolvedRow, param: MarchParameter, to: number, before: SolvedRow | null = null): SolvedRow | null {
   const { model, drive, solver } = ctx;
   const travel = param === 'travel' ? to : from.travel;
   const roll = param === 'roll' ? to : from.roll;
-  const delta = to - (param === 'travel' ? from.travel : from.roll);
+  const delta = to - paramOf(from, param);
   const state = new Float64Array(from.state);
-  for (const c of drive.free) state[c] += from.rate[c] * delta;
+  const span = before ? paramOf(from, param) - paramOf(before, param) : 0;
+  if (before && span !== 0) {
+    const k = (0.5 * delta * delta) / span;
+    for (const c of drive.free) state[c] += from.rate[c] * delta + (from.rate[c] - before.rate[c]) * k;
+  } else {
+    for (const c of drive.free) state[c] += from.rate[c] * delta;
+  }
   driveApply(model, state, travel, roll);
   const predicted = new Float64Array(state);
   const outcome = solver.solve(state);
@@ -126,8 +138,9 @@ export function rowRateFor(ctx: MarchContext, row: SolvedRow, param: MarchParame
 export function march(ctx: MarchContext, start: SolvedRow, param: MarchParameter, values: readonly number[]): MarchOutcome {
   const rows: SolvedRow[] = [];
   let prev = start;
+  let before: SolvedRow | null = null;
   for (const v of values) {
-    let next = stepTo(ctx, prev, param, v);
+    let next = stepTo(ctx, prev, param, v, before);
     if (!next) {
       // Retry in sub-steps: near a toggle the predictor overshoots before the linkage is at its limit.
       const from = param === 'travel' ? prev.travel : prev.roll;
@@ -139,6 +152,7 @@ export function march(ctx: MarchContext, start: SolvedRow, param: MarchParameter
     }
     if (!next) return { rows, lockedAt: v };
     rows.push(next);
+    before = prev;
     prev = next;
   }
   return { rows, lockedAt: null };

@@ -35,6 +35,8 @@ export interface BodyModel {
 
 export interface PointModel {
   id: string;
+  /** position in the sketch's point list */
+  index: number;
   slot: number;
   /** mm, position at ride */
   ride: Vec3;
@@ -151,6 +153,7 @@ export function linkageModelBuild(sketch: Sketch): LinkageModel {
     const body = p.body === 'frame' ? undefined : bodyById.get(p.body);
     points.set(p.id, {
       id: p.id,
+      index: points.size,
       slot: body ? body.slot : FRAME_SLOT,
       ride,
       local: body ? vecSub(ride, body.reference) : ride,

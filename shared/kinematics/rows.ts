@@ -43,6 +43,7 @@ export interface RowPlan {
   /** the body whose pose is a row's `pose`: the axle, else the body carrying the left wheel */
   primarySlot: number;
   rot: BodyRotations;
+  scratch: { va: Float64Array; vb: Float64Array; tmp: Float64Array };
 }
 
 export function rowPlanBuild(model: LinkageModel): RowPlan {
@@ -84,22 +85,24 @@ export function rowPlanBuild(model: LinkageModel): RowPlan {
       : null,
     primarySlot: model.axle ? model.axle.slot : model.wheelLeft.slot,
     rot: new BodyRotations(model.bodies.length),
+    scratch: { va: new Float64Array(3), vb: new Float64Array(3), tmp: new Float64Array(3) },
   };
 }
 
-/** Places points of one row; each call reuses the plan's rotation buffers. */
+/** Places points of one row, each once; reuses the plan's rotation buffers. */
 class RowPlacer {
   private readonly buf = new Float64Array(3);
-  private readonly cache = new Map<string, Vec3>();
+  private readonly placed: (Vec3 | undefined)[];
   constructor(private readonly plan: RowPlan, private readonly state: Float64Array) {
     plan.rot.update(state);
+    this.placed = new Array(plan.model.points.size);
   }
   at(p: PointModel): Vec3 {
-    let v = this.cache.get(p.id);
+    let v = this.placed[p.index];
     if (!v) {
       pointPlace(this.plan.model, p, this.state, this.plan.rot, this.buf, 0);
       v = vec(this.buf[0], this.buf[1], this.buf[2]);
-      this.cache.set(p.id, v);
+      this.placed[p.index] = v;
     }
     return v;
   }
@@ -113,7 +116,7 @@ function bodyPoses(model: LinkageModel, state: Float64Array): BodyPoses {
 
 function memberReadings(plan: RowPlan, at: RowPlacer, rate: Float64Array | null): Record<string, MemberReading> {
   const out: Record<string, MemberReading> = {};
-  const va = new Float64Array(3), vb = new Float64Array(3), tmp = new Float64Array(3);
+  const { va, vb, tmp } = plan.scratch;
   for (const p of plan.members) {
     const a = at.at(p.a), b = at.at(p.b);
     const dx = a.x - b.x, dy = a.y - b.y, dz = a.z - b.z;

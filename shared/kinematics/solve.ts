@@ -18,10 +18,10 @@ import { residualsEvaluate, residualWorkCreate, type ResidualWork } from './resi
 export const SOLVE_MAX_ITERATIONS = 40;
 /**
  * Converged when the largest step (rotations counted at ROTATION_SCALE_MM lever) is below
- * this. Far below the 0.1 mm / 0.02° the results are promised to, and still reached in one
- * or two extra Newton steps thanks to quadratic convergence.
+ * this; the step is still applied, and Newton's quadratic convergence leaves the pose within
+ * about (1e-6 mm)² / (link length) of the solution — far below the 0.1 mm / 0.02° promised.
  */
-export const SOLVE_STEP_TOLERANCE_MM = 1e-8;
+export const SOLVE_STEP_TOLERANCE_MM = 1e-6;
 /** A radian of rotation counts as this many mm when comparing steps: about half an axle's track. */
 export const ROTATION_SCALE_MM = 1000;
 /**
@@ -53,6 +53,21 @@ export interface SolveOutcome {
 
 const isRotation = (stateIndex: number) => stateIndex % POSE_SIZE >= POSE_ROLL;
 
+/**
+ * A Matrix whose clone copies row arrays directly. ml-matrix's decompositions clone their
+ * input (QR its matrix, solve its right-hand side) through a generator over every entry,
+ * which dominates the time of the small systems solved here; the algebra stays ml-matrix's.
+ */
+class WorkMatrix extends Matrix {
+  override clone(): this {
+    const out = new WorkMatrix(this.rows, this.columns) as this;
+    const from = (this as unknown as { data: Float64Array[] }).data;
+    const to = (out as unknown as { data: Float64Array[] }).data;
+    for (let i = 0; i < this.rows; i++) to[i].set(from[i]);
+    return out;
+  }
+}
+
 /** One solver per linkage and drive; all buffers are reused between rows. */
 export class PoseSolver {
   readonly m: number;
@@ -66,8 +81,16 @@ export class PoseSolver {
   private JTrial: Float64Array;
   private readonly trial: Float64Array;
   private readonly step: Float64Array;
-  private readonly A: Matrix;
-  private readonly b: Matrix;
+  private readonly Aaug: WorkMatrix;
+  private readonly baug: WorkMatrix;
+  private readonly Aplain: WorkMatrix;
+  private readonly bplain: WorkMatrix;
+  private rows = 0;
+  /**
+   * Whether the Tikhonov rows are needed even without damping: true until the rank at ride
+   * shows every free coordinate is located (then plain QR of J is both right and cheaper).
+   */
+  regularize = true;
   private readonly colNorm: Float64Array;
   private qr: QrDecomposition | null = null;
   private qrIsUndamped = false;
@@ -84,8 +107,10 @@ export class PoseSolver {
     this.JTrial = new Float64Array(this.m * model.stateSize);
     this.trial = new Float64Array(model.stateSize);
     this.step = new Float64Array(this.n);
-    this.A = new Matrix(this.m + this.n, this.n);
-    this.b = new Matrix(this.m + this.n, 1);
+    this.Aaug = new WorkMatrix(this.m + this.n, this.n);
+    this.baug = new WorkMatrix(this.m + this.n, 1);
+    this.Aplain = new WorkMatrix(Math.max(this.m, 1), this.n);
+    this.bplain = new WorkMatrix(Math.max(this.m, 1), 1);
     this.colNorm = new Float64Array(this.n);
   }
 
@@ -106,9 +131,12 @@ export class PoseSolver {
     return c;
   }
 
-  /** Fills A with [J_free; damping rows] and factors it. False when J is all zero. */
+  /** Fills A with [J_free; damping rows] (or J_free alone) and factors it. False when J is all zero or singular. */
   private factor(damping: number): boolean {
-    const { m, n, free, J, A, colNorm } = this;
+    const { m, n, free, J, colNorm } = this;
+    const augmented = damping > 0 || this.regularize || m < n;
+    const A = augmented ? this.Aaug : this.Aplain;
+    this.rows = augmented ? m + n : m;
     const cols = this.model.stateSize;
     let maxNorm = 0;
     for (let j = 0; j < n; j++) {
@@ -123,21 +151,29 @@ export class PoseSolver {
       if (s > maxNorm) maxNorm = s;
     }
     if (!(maxNorm > 0)) return false;
-    const mu = REGULARIZATION_RELATIVE * maxNorm;
-    for (let j = 0; j < n; j++) {
-      for (let k = 0; k < n; k++) A.set(m + j, k, 0);
-      A.set(m + j, j, Math.sqrt(damping * colNorm[j] + mu));
+    if (augmented) {
+      const mu = this.regularize || m < n ? REGULARIZATION_RELATIVE * maxNorm : 0;
+      for (let j = 0; j < n; j++) {
+        for (let k = 0; k < n; k++) A.set(m + j, k, 0);
+        A.set(m + j, j, Math.sqrt(damping * colNorm[j] + mu));
+      }
     }
     this.qr = new QrDecomposition(A);
     this.qrIsUndamped = damping === 0;
+    if (!this.qr.isFullRank()) {
+      // Only an exactly singular J without damping rows gets here (a linkage at a toggle).
+      this.qr = null;
+      return false;
+    }
     return true;
   }
 
   /** Solves the factored system for the right-hand side [rhs; 0]; writes the n unknowns. */
   private back(rhs: Float64Array, sign: number, out: Float64Array): void {
-    const { m, n, b } = this;
+    const { m, n } = this;
+    const b = this.rows > m ? this.baug : this.bplain;
     for (let i = 0; i < m; i++) b.set(i, 0, sign * rhs[i]);
-    for (let j = 0; j < n; j++) b.set(m + j, 0, 0);
+    for (let i = m; i < this.rows; i++) b.set(i, 0, 0);
     const x = this.qr!.solve(b);
     for (let j = 0; j < n; j++) out[j] = x.get(j, 0);
   }
@@ -156,7 +192,14 @@ export class PoseSolver {
     let cost = this.cost(this.r);
     let damping = 0;
     for (let it = 1; it <= SOLVE_MAX_ITERATIONS; it++) {
-      if (!this.factor(damping)) return { converged: true, iterations: it, maxResidual: this.maxAbs(this.r) };
+      if (!this.factor(damping)) {
+        if (damping === 0 && !this.regularize) {
+          // Singular without damping rows: retry this iteration damped.
+          damping = DAMPING_START;
+          continue;
+        }
+        return { converged: true, iterations: it, maxResidual: this.maxAbs(this.r) };
+      }
       this.back(this.r, -1, step);
       let size = 0;
       for (let j = 0; j < n; j++) {

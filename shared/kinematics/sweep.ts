@@ -91,6 +91,8 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
   };
   const { rank, nullSpace } = solver.rankAnalysis();
   ctx.redundancy = Math.max(0, solver.m - rank);
+  // Every free coordinate located: plain QR of J needs no Tikhonov rows.
+  solver.regularize = rank < solver.n;
   warnings.push(...unlocatedWarnings(model, nullSpace));
   if (model.axle && !(plan.upper && plan.lower)) {
     warnings.push('No upper and lower link groups on the left side: no instant centre or anti-squat.');
