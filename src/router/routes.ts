@@ -11,6 +11,9 @@ declare module 'vue-router' {
   }
 }
 
+/** One loader for the board's three addresses, so moving between them keeps the page. */
+const BoardPage = () => import('../pages/BoardPage.vue');
+
 export const routes: RouteRecordRaw[] = [
   {
     path: '/',
@@ -18,6 +21,10 @@ export const routes: RouteRecordRaw[] = [
     children: [
       { path: '', redirect: '/library' },
       { path: 'library', name: 'library', component: () => import('../pages/LibraryPage.vue'), meta: { auth: true } },
+      { path: 'sketches/new', name: 'board-new', component: BoardPage, meta: { auth: true } },
+      { path: 'sketches/:id(\\d+)', name: 'board', component: BoardPage, meta: { auth: true } },
+      // Read-only links work signed out too.
+      { path: 'shared/:token', name: 'board-shared', component: BoardPage },
       { path: 'admin', redirect: '/admin/users' },
       { path: 'admin/users', name: 'admin-users', component: () => import('../pages/AdminUsersPage.vue'), meta: { auth: true, admin: true } },
       { path: 'admin/outbox', name: 'admin-outbox', component: () => import('../pages/AdminOutboxPage.vue'), meta: { auth: true, admin: true } },

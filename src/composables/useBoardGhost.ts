@@ -1,0 +1,22 @@
+/**
+ * The linkage at the slider position, for the ghost drawing: every point of the shown sketch
+ * placed by the body poses of the sweep row at the cursor (the sweep store's), or null while
+ * the sliders sit at ride height (then the ghost would only cover the linkage itself).
+ */
+import { computed } from 'vue';
+import { pointsAt } from '../../shared/kinematics';
+import { useBoardStore } from '../stores/board';
+import { useSweepStore } from '../stores/sweep';
+import type { Vec3 } from './canvasTransform';
+
+export function useBoardGhost() {
+  const board = useBoardStore();
+  const sweep = useSweepStore();
+  const atRide = computed(() => sweep.cursor.travel === 0 && sweep.cursor.roll === 0);
+  const ghost = computed<Record<string, Vec3> | null>(() => {
+    const sketch = board.sketch;
+    if (!sketch || atRide.value || !sweep.rowAtCursor) return null;
+    return pointsAt(sketch, sweep.bodiesAtCursor);
+  });
+  return { ghost, row: computed(() => sweep.rowAtCursor), atRide };
+}

@@ -1,0 +1,16 @@
+/** Member kinds as the board names them, and the id stem a new member of each kind gets. */
+import type { MemberKind } from '../../shared/schema/sketch';
+
+export const KIND_OPTIONS: { value: MemberKind; label: string; stem: string }[] = [
+  { value: 'link', label: 'link', stem: 'L' },
+  { value: 'lateral-rod', label: 'lateral rod', stem: 'LR' },
+  { value: 'tie-rod', label: 'tie rod', stem: 'TR' },
+  { value: 'shackle', label: 'shackle', stem: 'SK' },
+  { value: 'shock', label: 'shock', stem: 'SH' },
+  { value: 'spring', label: 'spring', stem: 'SP' },
+  { value: 'hinge', label: 'hinge axis', stem: 'H' },
+];
+
+export function kindLabel(kind: string): string {
+  return KIND_OPTIONS.find((k) => k.value === kind)?.label ?? kind;
+}

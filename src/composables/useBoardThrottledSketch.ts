@@ -1,0 +1,44 @@
+/**
+ * The shown sketch for panels that need not follow every pointer move (the tables): updated at
+ * most once an animation frame, and while a pivot is being dragged at most every
+ * DRAG_TABLE_INTERVAL_MS, so a drag redraws the canvas, not a table of inputs.
+ */
+import { onBeforeUnmount, shallowRef, watch } from 'vue';
+import type { Sketch } from '../../shared/schema/sketch';
+import { useBoardStore } from '../stores/board';
+
+/** Table refresh interval during a drag, ms: often enough to read, rare enough to cost nothing. */
+export const DRAG_TABLE_INTERVAL_MS = 150;
+
+export function useBoardThrottledSketch() {
+  const board = useBoardStore();
+  const shown = shallowRef<Sketch | null>(board.sketch);
+  let frame = 0;
+  let lastAt = 0;
+  let timer: ReturnType<typeof setTimeout> | null = null;
+
+  function apply() {
+    frame = 0;
+    timer = null;
+    lastAt = performance.now();
+    shown.value = board.sketch;
+  }
+
+  function schedule() {
+    if (frame || timer) return;
+    if (board.dragging) {
+      const wait = Math.max(0, DRAG_TABLE_INTERVAL_MS - (performance.now() - lastAt));
+      timer = setTimeout(() => (frame = requestAnimationFrame(apply)), wait);
+    } else frame = requestAnimationFrame(apply);
+  }
+
+  watch(() => board.sketch, schedule);
+  // The end of a drag shows the final numbers at once.
+  watch(() => board.dragging, (d) => !d && schedule());
+
+  onBeforeUnmount(() => {
+    if (frame) cancelAnimationFrame(frame);
+    if (timer) clearTimeout(timer);
+  });
+  return shown;
+}
