@@ -1,3 +1,4 @@
+/* eslint-disable @typescript-eslint/no-explicit-any -- these tests poke at untyped JSON documents on purpose */
 /** Property tests: valid sketches never give NaN, Infinity or a throw; broken ones always a validation error. */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

@@ -1,3 +1,4 @@
+/* eslint-disable @typescript-eslint/no-explicit-any -- these tests poke at untyped JSON documents on purpose */
 import { describe, expect, it } from 'vitest';
 import { checkSketch, parseSketch, MAX_POINTS, type SketchInput } from '../../../shared/schema/sketch';
 import { SketchValidationError, isSketchValidationError } from '../../../shared/schema/errors';
