@@ -74,6 +74,54 @@ function queueTransactions(sequelize: Sequelize): void {
   };
 }
 
+/**
+ * The dialect opens (and after commit closes) a new SQLite connection for every transaction.
+ * As transactions are queued, one spare connection kept open serves nearly all of them;
+ * a transaction that finds it busy (an unmanaged one, or a savepoint's parent elsewhere) gets
+ * a connection of its own as before. A connection is only ever used by one transaction at a time.
+ */
+function reuseTransactionConnection(sequelize: Sequelize): void {
+  const manager = sequelize.connectionManager as unknown as {
+    getConnection(options?: { uuid?: string }): Promise<RawSqliteConnection>;
+    releaseConnection(connection: RawSqliteConnection, force?: boolean): unknown;
+    connections: Record<string, RawSqliteConnection>;
+  };
+  const getConnection = manager.getConnection.bind(manager);
+  const releaseConnection = manager.releaseConnection.bind(manager);
+  let spare: RawSqliteConnection | null = null;
+  let spareInUse = false;
+  const SPARE_KEY = 'arcwright-spare-transaction-connection';
+
+  manager.getConnection = async (options) => {
+    if (!options?.uuid || options.uuid === 'default' || spareInUse) return getConnection(options);
+    spareInUse = true;
+    try {
+      spare ??= await getConnection({ ...options, uuid: SPARE_KEY });
+    } catch (err) {
+      spareInUse = false;
+      throw err;
+    }
+    return spare;
+  };
+  manager.releaseConnection = (connection, force) => {
+    if (connection === spare && !force) {
+      spareInUse = false;
+      return;
+    }
+    return releaseConnection(connection, force);
+  };
+  const close = sequelize.close.bind(sequelize);
+  sequelize.close = async () => {
+    if (spare) {
+      const s = spare as unknown as { close(cb: (err: Error | null) => void): void };
+      await new Promise<void>((resolve) => s.close(() => resolve()));
+      delete manager.connections[SPARE_KEY];
+      spare = null;
+    }
+    return close();
+  };
+}
+
 /** Opens (creating when missing) the SQLite file and binds the models to it. Run migrations next. */
 export async function openDatabase(databasePath: string): Promise<Sequelize> {
   fs.mkdirSync(path.dirname(databasePath), { recursive: true });
@@ -87,6 +135,7 @@ export async function openDatabase(databasePath: string): Promise<Sequelize> {
     retry: { max: 3 },
   });
   applyPragmasOnEveryConnection(sequelize);
+  reuseTransactionConnection(sequelize);
   queueTransactions(sequelize);
   initModels(sequelize);
   await sequelize.authenticate();

@@ -86,10 +86,10 @@ async function ownSketch(user: PublicUser, id: number, t?: Transaction, opts: { 
   return row;
 }
 
+/** Records the sketch's current state as revision number `version` (every version change makes exactly one). */
 async function addRevision(row: Sketch, authorId: number, t: Transaction): Promise<void> {
-  const last = await SketchRevision.max<number, SketchRevision>('rev', { where: { sketchId: row.id }, transaction: t });
   await SketchRevision.create(
-    { sketchId: row.id, rev: (last ?? 0) + 1, version: row.version, name: row.name, document: row.document, authorId },
+    { sketchId: row.id, rev: row.version, version: row.version, name: row.name, document: row.document, authorId },
     { transaction: t },
   );
 }
@@ -104,6 +104,17 @@ async function insertSketch(owner: PublicUser, doc: SketchDocument): Promise<Ske
     return row.id;
   });
   return getSketch(owner, id);
+}
+
+/** Runs `change` on the caller's own sketch inside one transaction and answers its new state. */
+async function changeOwn(
+  user: PublicUser, id: number, change: (row: Sketch, t: Transaction) => Promise<void>, opts: { deleted?: boolean } = {},
+): Promise<SketchDetail> {
+  return transaction(async (t) => {
+    const row = await ownSketch(user, id, t, opts);
+    await change(row, t);
+    return detailOf(row, user);
+  });
 }
 
 /** The caller's sketches (and, with classes, those shared with them), filtered, sorted and paged. */
@@ -138,9 +149,8 @@ export function createSketch(user: PublicUser, doc: SketchDocument): Promise<Ske
  * Saves a new version if `version` is still the current one. The check and the write happen
  * in one IMMEDIATE transaction, so two saves of the same version cannot both succeed.
  */
-export async function updateSketch(user: PublicUser, id: number, doc: SketchDocument, version: number): Promise<SketchDetail> {
-  await transaction(async (t) => {
-    const row = await ownSketch(user, id, t);
+export function updateSketch(user: PublicUser, id: number, doc: SketchDocument, version: number): Promise<SketchDetail> {
+  return changeOwn(user, id, async (row, t) => {
     if (row.version !== version) {
       throw conflict(`the sketch was saved elsewhere since version ${version}`, { version: row.version });
     }
@@ -148,7 +158,6 @@ export async function updateSketch(user: PublicUser, id: number, doc: SketchDocu
     await row.save({ transaction: t });
     await addRevision(row, user.id, t);
   });
-  return getSketch(user, id);
 }
 
 export async function deleteSketch(user: PublicUser, id: number): Promise<void> {
@@ -158,13 +167,11 @@ export async function deleteSketch(user: PublicUser, id: number): Promise<void> 
   });
 }
 
-export async function undeleteSketch(user: PublicUser, id: number): Promise<SketchDetail> {
-  await transaction(async (t) => {
-    const row = await ownSketch(user, id, t, { deleted: true });
+export function undeleteSketch(user: PublicUser, id: number): Promise<SketchDetail> {
+  return changeOwn(user, id, async (row, t) => {
     if (Date.now() - row.deletedAt!.getTime() > RESTORE_WINDOW_MS) throw notFound('no such sketch');
     await row.update({ deletedAt: null }, { transaction: t });
-  });
-  return getSketch(user, id);
+  }, { deleted: true });
 }
 
 export async function listRevisions(user: PublicUser, id: number) {
@@ -190,16 +197,14 @@ export async function getRevision(user: PublicUser, id: number, rev: number) {
 }
 
 /** Makes a new version whose document is that of revision `rev`; the history keeps everything in between. */
-export async function restoreRevision(user: PublicUser, id: number, rev: number): Promise<SketchDetail> {
-  await transaction(async (t) => {
-    const row = await ownSketch(user, id, t);
+export function restoreRevision(user: PublicUser, id: number, rev: number): Promise<SketchDetail> {
+  return changeOwn(user, id, async (row, t) => {
     const r = await revisionOf(id, rev, t);
     const doc = JSON.parse(r.document) as SketchDocument;
     row.set({ name: r.name, layout: doc.layout, document: r.document, version: row.version + 1 });
     await row.save({ transaction: t });
     await addRevision(row, user.id, t);
   });
-  return getSketch(user, id);
 }
 
 function copyName(name: string): string {

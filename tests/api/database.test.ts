@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { QueryTypes } from 'sequelize';
+import { QueryTypes, Transaction } from 'sequelize';
 import { startTestServer, type TestServer } from './helpers';
 import { BUSY_TIMEOUT_MS } from '../../server/db';
 import { User } from '../../server/models';
@@ -27,6 +27,21 @@ describe('SQLite connection settings', () => {
   it('are in force on the separate connection a transaction opens', async () => {
     const inside = await server.sequelize.transaction((transaction) => readPragmas({ transaction }));
     expect(inside).toEqual({ journal: 'wal', foreignKeys: 1, busy: BUSY_TIMEOUT_MS });
+  });
+
+  it('are in force on a connection opened while the reused transaction connection is busy', async () => {
+    const both = await server.sequelize.transaction(async (outer) => {
+      // A second, unmanaged transaction meanwhile gets a fresh connection of its own.
+      const inner = await server.sequelize.transaction({ type: Transaction.TYPES.DEFERRED });
+      try {
+        const innerConnection = (inner as unknown as { connection: unknown }).connection;
+        const outerConnection = (outer as unknown as { connection: unknown }).connection;
+        return { distinct: innerConnection !== outerConnection, pragmas: await readPragmas({ transaction: inner }) };
+      } finally {
+        await inner.commit();
+      }
+    });
+    expect(both).toEqual({ distinct: true, pragmas: { journal: 'wal', foreignKeys: 1, busy: BUSY_TIMEOUT_MS } });
   });
 
   it('enforce foreign keys inside a transaction', async () => {

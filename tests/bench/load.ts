@@ -7,6 +7,9 @@
  * checks that no request failed and that every acknowledged save is in the database as a
  * revision with the exact name that save sent. Prints requests per second and latency
  * percentiles. Exits 1 on any error or missing save.
+ *
+ * Settings: LOAD_CLIENTS (50), LOAD_SECONDS (20), LOAD_PROFILE=<dir> to write a V8 CPU profile
+ * of the server there.
  */
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
@@ -42,13 +45,20 @@ async function waitForHealth(base: string, timeoutMs: number): Promise<void> {
   throw new Error('server did not answer /api/health in time');
 }
 
+/** The fields of the answers this script reads. */
+interface ApiAnswer {
+  token: string;
+  id: number;
+  version: number;
+}
+
 /** A client with its own cookie jar (one session cookie) and CSRF token. */
 class Client {
   cookie = '';
   token = '';
   constructor(readonly base: string) {}
 
-  async call(method: string, url: string, body?: unknown): Promise<{ status: number; json: any }> {
+  async call(method: string, url: string, body?: unknown): Promise<{ status: number; json: ApiAnswer }> {
     const headers: Record<string, string> = { cookie: this.cookie };
     if (body !== undefined) headers['content-type'] = 'application/json';
     if (method !== 'GET') headers['x-csrf-token'] = this.token;
@@ -56,7 +66,7 @@ class Client {
     const set = res.headers.getSetCookie().find((c) => c.startsWith('arcwright.sid='));
     if (set) this.cookie = set.split(';')[0];
     const text = await res.text();
-    return { status: res.status, json: text ? JSON.parse(text) : null };
+    return { status: res.status, json: (text ? JSON.parse(text) : {}) as ApiAnswer };
   }
 
   async refreshToken() {
@@ -78,7 +88,9 @@ async function main() {
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
   const dbPath = path.join(dir, 'load.sqlite');
-  const server = spawn(process.execPath, [path.join(root, 'node_modules/tsx/dist/cli.mjs'), 'server/index.ts'], {
+  const profile = process.env.LOAD_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.LOAD_PROFILE}`] : [];
+  // `node --import tsx` rather than the tsx command, so the server is this one process (and can be profiled).
+  const server = spawn(process.execPath, [...profile, '--import', 'tsx', 'server/index.ts'], {
     cwd: root,
     env: {
       ...process.env, PORT: String(port), DATABASE_PATH: dbPath, UPLOADS_DIR: path.join(dir, 'uploads'),
@@ -156,7 +168,7 @@ async function main() {
     const sorted = [...latencies].sort((a, b) => a - b);
     console.log(`requests: ${latencies.length} in ${elapsedS.toFixed(1)} s = ${(latencies.length / elapsedS).toFixed(0)} req/s`);
     console.log(`latency ms: p50 ${percentile(sorted, 50).toFixed(1)}, p95 ${percentile(sorted, 95).toFixed(1)}, p99 ${percentile(sorted, 99).toFixed(1)}, max ${sorted.at(-1)?.toFixed(1)}`);
-    console.log(`acknowledged saves: ${acked}; found in the database: ${acked - missing + (missing ? 0 : 0)}; missing: ${missing}; errors: ${errors.length}`);
+    console.log(`acknowledged saves: ${acked}; missing from the database: ${missing}; failed requests: ${errors.length}`);
     if (errors.length) console.log('first errors:', errors.slice(0, 5));
     fs.rmSync(dir, { recursive: true, force: true });
     process.exit(errors.length || missing || !acked ? 1 : 0);
