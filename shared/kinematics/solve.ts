@@ -22,6 +22,13 @@ export const SOLVE_MAX_ITERATIONS = 40;
  * about (1e-6 mm)² / (link length) of the solution — far below the 0.1 mm / 0.02° promised.
  */
 export const SOLVE_STEP_TOLERANCE_MM = 1e-6;
+/**
+ * After an undamped step shorter than this (mm) the next step reuses the factorisation of the
+ * previous Jacobian (a chord, or simplified Newton, step): J has changed by about
+ * (step / link length), so the iteration still converges by orders of magnitude a step and
+ * stops on SOLVE_STEP_TOLERANCE_MM as before, one QR cheaper.
+ */
+export const CHORD_STEP_MM = 0.1;
 /** A radian of rotation counts as this many mm when comparing steps: about half an axle's track. */
 export const ROTATION_SCALE_MM = 1000;
 /**
@@ -191,8 +198,11 @@ export class PoseSolver {
     }
     let cost = this.cost(this.r);
     let damping = 0;
+    let chord = false;
     for (let it = 1; it <= SOLVE_MAX_ITERATIONS; it++) {
-      if (!this.factor(damping)) {
+      if (chord && damping === 0 && this.qr !== null && this.qrIsUndamped) {
+        // Reuse the last factorisation (see CHORD_STEP_MM).
+      } else if (!this.factor(damping)) {
         if (damping === 0 && !this.regularize) {
           // Singular without damping rows: retry this iteration damped.
           damping = DAMPING_START;
@@ -207,6 +217,7 @@ export class PoseSolver {
         if (!Number.isFinite(s)) return { converged: false, iterations: it, maxResidual: this.maxAbs(this.r) };
         if (s > size) size = s;
       }
+      chord = damping === 0 && size < CHORD_STEP_MM;
       if (size < SOLVE_STEP_TOLERANCE_MM) {
         // A damped step is short by construction; only an undamped short step means a minimum.
         if (damping > 0) {
@@ -234,6 +245,7 @@ export class PoseSolver {
       } else if (flat) {
         return { converged: true, iterations: it, maxResidual: this.maxAbs(this.r) };
       } else {
+        chord = false;
         damping = damping === 0 ? DAMPING_START : damping * DAMPING_FACTOR;
         if (damping > DAMPING_MAX) break;
       }
