@@ -13,11 +13,16 @@ export const DEMO = {
   student: { email: 'student@demo.test', password: 'demo-student-2026' },
 } as const;
 
+/** The text box of a Quasar field, whether its data-test sits on the input or on the field around it. */
+export function inputOf(page: Page, testId: string) {
+  return page.locator(`input[data-test="${testId}"], [data-test="${testId}"] input`).first();
+}
+
 /** Signs in through the sign-in page, as a user would, and waits for the library. */
 export async function signIn(page: Page, who: { email: string; password: string }): Promise<void> {
   await page.goto('/signin');
-  await page.getByTestId('email').locator('input').fill(who.email);
-  await page.getByTestId('password').locator('input').fill(who.password);
+  await inputOf(page, 'email').fill(who.email);
+  await inputOf(page, 'password').fill(who.password);
   await page.getByTestId('submit').click();
   await expect(page).toHaveURL(/\/library/);
 }

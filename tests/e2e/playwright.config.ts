@@ -43,6 +43,7 @@ export default defineConfig({
   reporter: [['list']],
   use: {
     baseURL: `http://127.0.0.1:${port}`,
+    testIdAttribute: 'data-test',
     // Playwright starts each browser with a fresh, empty profile directory of its own.
     launchOptions: { executablePath: '/usr/lib/chromium/chromium', args: CHROMIUM_ARGS },
     viewport: { width: 1440, height: 900 },
