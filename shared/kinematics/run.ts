@@ -2,7 +2,7 @@
  * The one entry the command line, the API and the board call: validate, then sweep.
  */
 import { SketchValidationError } from '../schema/errors';
-import { formatPath, parseSketch, sweepSettingsSchema } from '../schema/sketch';
+import { formatIssue, parseSketch, sweepSettingsSchema } from '../schema/sketch';
 import { sweepSketch } from './sweep';
 import type { SweepOptions, SweepResult } from './types';
 
@@ -18,7 +18,7 @@ export function runSweep(doc: unknown, options: SweepOptions = {}): SweepResult 
     const merged = sweepSettingsSchema.safeParse({ ...sketch.sweep, ...options.sweep });
     if (!merged.success) {
       throw new SketchValidationError(
-        merged.error.issues.map((i) => `options.${formatPath(['sweep', ...i.path])}: ${i.message}`),
+        merged.error.issues.map((i) => `options.${formatIssue({ ...i, path: ['sweep', ...i.path] })}`),
       );
     }
     return sweepSketch({ ...sketch, sweep: merged.data }, { heaveOnly: options.heaveOnly });

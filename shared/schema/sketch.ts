@@ -231,7 +231,7 @@ const quoteList = (vs: readonly unknown[]) =>
   vs.length === 1 ? `expected ${quote(vs[0])}` : `expected one of ${vs.map(quote).join(', ')}`;
 
 /** One zod issue as one plain line: "<path>: <problem>". */
-function formatIssue(iss: z.core.$ZodIssue): string {
+export function formatIssue(iss: z.core.$ZodIssue): string {
   const where = formatPath(iss.path);
   switch (iss.code) {
     case 'invalid_type': {
