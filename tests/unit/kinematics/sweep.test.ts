@@ -104,7 +104,20 @@ describe('runSweep options and input', () => {
 
   it('throws SketchValidationError for bad input and bad overrides', () => {
     expect(() => runSweep({})).toThrow(SketchValidationError);
-    expect(() => runSweep(exampleSketch(), { sweep: { step: -1 } })).toThrow(SketchValidationError);
+    let caught: unknown;
+    try {
+      runSweep(exampleSketch(), { sweep: { step: -1 } });
+    } catch (e) {
+      caught = e;
+    }
+    expect(caught).toBeInstanceOf(SketchValidationError);
+    expect((caught as SketchValidationError).problems).toEqual(['options.sweep.step: must be greater than 0']);
+  });
+
+  it('pointsAt leaves points of bodies without a pose at ride', () => {
+    const sketch = parseSketch(exampleSketch());
+    const pts = pointsAt(sketch, {});
+    for (const p of sketch.points) expect(pts[p.id]).toEqual({ x: p.x, y: p.y, z: p.z });
   });
 });
 
