@@ -111,6 +111,8 @@ describe('fuzzed write routes', () => {
       const seen = new Map<number, number>();
       await fc.assert(
         fc.asyncProperty(route.body, async (body) => {
+          // Mail queued by an earlier accepted call must land before the snapshot, not during the next call.
+          await server.mail.mailer.idle();
           const before = await snapshot();
           const caller = route.caller();
           const req = caller[route.method](route.path());
@@ -120,8 +122,10 @@ describe('fuzzed write routes', () => {
           seen.set(res.status, (seen.get(res.status) ?? 0) + 1);
           expect(res.status, JSON.stringify(res.body)).toBeLessThan(500);
           expect(typeof res.body.error === 'string' || res.status < 400).toBe(true);
-          if (res.status >= 400) expect(await snapshot()).toBe(before);
-          else if (route.refreshAfterSuccess) await caller.refreshToken();
+          if (res.status >= 400) {
+            await server.mail.mailer.idle();
+            expect(await snapshot()).toBe(before);
+          } else if (route.refreshAfterSuccess) await caller.refreshToken();
         }),
         { numRuns: RUNS_PER_ROUTE },
       );

@@ -1,0 +1,31 @@
+import { describe, expect, it } from 'vitest';
+import path from 'node:path';
+import { loadConfig } from '../../../server/config';
+
+describe('server configuration', () => {
+  it('has working defaults', () => {
+    const c = loadConfig({});
+    expect(c.port).toBe(3000);
+    expect(c.databasePath).toBe(path.resolve('data/arcwright.sqlite'));
+    expect(c.uploadsDir).toBe(path.resolve('data/uploads'));
+    expect(c.publicUrl).toBe('http://localhost:3000');
+    expect(c.smtpUrl).toBeNull();
+    expect(c.cookieSecure).toBe(false);
+    expect(c.trustProxy).toBe(false);
+  });
+
+  it('reads the environment and drops a trailing slash from PUBLIC_URL', () => {
+    const c = loadConfig({ PORT: '8080', PUBLIC_URL: 'https://arcwright.example.test/', COOKIE_SECURE: '1', TRUST_PROXY: '2', SMTP_URL: 'smtp://mail.example.test:25' });
+    expect(c).toMatchObject({ port: 8080, publicUrl: 'https://arcwright.example.test', cookieSecure: true, trustProxy: 2, smtpUrl: 'smtp://mail.example.test:25' });
+  });
+
+  it('names the variable when a value is bad', () => {
+    expect(() => loadConfig({ PORT: 'eighty' })).toThrow(/PORT/);
+    expect(() => loadConfig({ SESSION_IDLE_MINUTES: '-5' })).toThrow(/SESSION_IDLE_MINUTES/);
+  });
+
+  it('insists on SESSION_SECRET in production', () => {
+    expect(() => loadConfig({ NODE_ENV: 'production' })).toThrow(/SESSION_SECRET/);
+    expect(loadConfig({ NODE_ENV: 'production', SESSION_SECRET: 's3cret-value' }).sessionSecret).toBe('s3cret-value');
+  });
+});
