@@ -90,3 +90,67 @@ export function lineAtX(p: ScreenPoint, q: ScreenPoint, x: Px): ScreenPoint | nu
   const t = (x - p.px) / dx;
   return lerp(p, q, t);
 }
+
+export interface LabelBox {
+  x: Px;
+  y: Px;
+  width: Px;
+  height: Px;
+}
+
+/** Approximate width of a label in the board's 10 px font, px per character (Roboto averages about 0.56 em). */
+export const LABEL_CHAR_PX = 5.6;
+export const LABEL_HEIGHT_PX = 12;
+
+function overlaps(a: LabelBox, b: LabelBox): boolean {
+  return a.x < b.x + b.width && b.x < a.x + a.width && a.y < b.y + b.height && b.y < a.y + a.height;
+}
+
+/**
+ * Places name labels beside their handles without covering each other: each tries four spots
+ * round its handle (right-above first) and is left out when all four are taken. `priority`
+ * labels (selected pivots) go first, so they always show.
+ */
+export function placeLabels(items: readonly { id: string; at: ScreenPoint; text: string; priority?: boolean }[], handles: readonly ScreenPoint[] = []): Map<string, LabelBox> {
+  const placed = new Map<string, LabelBox>();
+  const taken: LabelBox[] = handles.map((h) => ({ x: h.px - 6, y: h.py - 6, width: 12, height: 12 }));
+  const order = [...items].sort((a, b) => Number(!!b.priority) - Number(!!a.priority));
+  for (const it of order) {
+    const width = it.text.length * LABEL_CHAR_PX + 2;
+    const spots: LabelBox[] = [
+      { x: it.at.px + 8, y: it.at.py - 15, width, height: LABEL_HEIGHT_PX },
+      { x: it.at.px - 8 - width, y: it.at.py - 15, width, height: LABEL_HEIGHT_PX },
+      { x: it.at.px + 8, y: it.at.py + 4, width, height: LABEL_HEIGHT_PX },
+      { x: it.at.px - 8 - width, y: it.at.py + 4, width, height: LABEL_HEIGHT_PX },
+    ];
+    const spot = spots.find((s) => !taken.some((t) => overlaps(s, t)));
+    if (spot || it.priority) {
+      const box = spot ?? spots[0];
+      placed.set(it.id, box);
+      taken.push(box);
+    }
+  }
+  return placed;
+}
+
+/**
+ * Where the segment from p to q, with p inside the box [x0, x1] × [y0, y1], leaves it; null when q
+ * is inside too (Liang–Barsky clipping, for the label of an instant centre off the view).
+ */
+export function exitPoint(p: ScreenPoint, q: ScreenPoint, x0: Px, y0: Px, x1: Px, y1: Px): ScreenPoint | null {
+  if (q.px >= x0 && q.px <= x1 && q.py >= y0 && q.py <= y1) return null;
+  const dx = q.px - p.px;
+  const dy = q.py - p.py;
+  let tMax = 1;
+  const edges: [number, number][] = [
+    [-dx, p.px - x0],
+    [dx, x1 - p.px],
+    [-dy, p.py - y0],
+    [dy, y1 - p.py],
+  ];
+  for (const [den, num] of edges) {
+    if (den > 0) tMax = Math.min(tMax, num / den);
+  }
+  if (!(tMax >= 0)) return null;
+  return { px: p.px + dx * tMax, py: p.py + dy * tMax };
+}

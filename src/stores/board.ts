@@ -164,6 +164,8 @@ export const useBoardStore = defineStore('board', () => {
 
   let drag: DragState | null = null;
   const dragging = ref(false);
+  /** The view the drag is in (its tooltip shows there only). */
+  const dragView = ref<ViewKind | null>(null);
 
   function mirrorPairs(): ReadonlyMap<string, string> | undefined {
     return mirrorLinked.value ? pairs.value : undefined;
@@ -306,6 +308,7 @@ export const useBoardStore = defineStore('board', () => {
     if (!selectedPoints.value.includes(grabbed)) select(grabbed);
     drag = { view, grabbed, ids: [...selectedPoints.value], start: doc };
     dragging.value = true;
+    dragView.value = view;
     return true;
   }
 
@@ -328,6 +331,7 @@ export const useBoardStore = defineStore('board', () => {
     const { start, ids } = drag;
     drag = null;
     dragging.value = false;
+    dragView.value = null;
     const end = document.value;
     if (!end || end === start) return;
     const label = ids.length === 1 ? `Move ${ids[0]}` : `Move ${ids.length} pivots`;
@@ -343,6 +347,7 @@ export const useBoardStore = defineStore('board', () => {
     document.value = drag.start;
     drag = null;
     dragging.value = false;
+    dragView.value = null;
   }
 
   // ---- saving -----------------------------------------------------------------------
@@ -476,6 +481,7 @@ export const useBoardStore = defineStore('board', () => {
     clearTimer();
     drag = null;
     dragging.value = false;
+    dragView.value = null;
     history.clear();
     historyTick.value++;
     meta.value = stripDocument(detail);
@@ -573,6 +579,7 @@ export const useBoardStore = defineStore('board', () => {
     clearTimer();
     drag = null;
     dragging.value = false;
+    dragView.value = null;
   }
 
   /** Creates a sketch from a starter layout with its default sizes; resolves to the new sketch. */
@@ -587,7 +594,7 @@ export const useBoardStore = defineStore('board', () => {
   return {
     // state
     meta, sharedToken, document, viewing, loading, loadError, sketch, canEdit, readOnly, sketchId, pairs, problems,
-    selectedPoints, selectedMember, mirrorLinked, snapOn, snapStep, snapStepMm, dragging,
+    selectedPoints, selectedMember, mirrorLinked, snapOn, snapStep, snapStepMm, dragging, dragView,
     canUndo, canRedo, undoLabel, redoLabel,
     saveState, saveError, conflictVersion, lastSavedAt, dirty, hasUnsavedChanges,
     revisions, revisionsLoading,

@@ -6,8 +6,8 @@ import { usePrefsStore } from '../../../src/stores/prefs';
 import { MM_PER_INCH } from '../../../shared/units';
 import { detailOf, fourLink } from './fixture';
 
-/** Coordinates after arithmetic on mm: a millionth of a mm is far below anything a user sees. */
-const MM_TOL = 1e-6;
+/** Decimal places for toBeCloseTo on mm after float arithmetic: 1e-9 mm, far below anything a user sees. */
+const MM_DIGITS = 9;
 
 function point(board: ReturnType<typeof useBoardStore>, id: string) {
   const p = board.document!.points.find((q) => q.id === id);
@@ -88,8 +88,8 @@ describe('board store: edits', () => {
     board.dragTo({ h: 800, v: 600 });
     board.endDrag();
     // 800 mm = 31.50 in → 31.5 in; 600 mm = 23.62 in → 23.5 in.
-    expect(point(board, 'UL.fl').x).toBeCloseTo(31.5 * MM_PER_INCH, 6);
-    expect(point(board, 'UL.fl').z).toBeCloseTo(23.5 * MM_PER_INCH, 6);
+    expect(point(board, 'UL.fl').x).toBeCloseTo(31.5 * MM_PER_INCH, MM_DIGITS);
+    expect(point(board, 'UL.fl').z).toBeCloseTo(23.5 * MM_PER_INCH, MM_DIGITS);
   });
 
   it('a drag that ends where it began records nothing; Escape cancels a drag', () => {
@@ -111,9 +111,9 @@ describe('board store: edits', () => {
     board.nudge('side', 1, 0, true);
     board.nudge('side', 0, 1);
     // Right on the side view is rearward (−x): front is drawn to the left.
-    expect(point(board, 'LL.al').x).toBeCloseTo(30 - 1 - 10, 9);
-    expect(point(board, 'LL.al').z).toBeCloseTo(236, 9);
-    expect(point(board, 'LL.ar').x).toBeCloseTo(19, 9);
+    expect(point(board, 'LL.al').x).toBeCloseTo(30 - 1 - 10, MM_DIGITS);
+    expect(point(board, 'LL.al').z).toBeCloseTo(236, MM_DIGITS);
+    expect(point(board, 'LL.ar').x).toBeCloseTo(19, MM_DIGITS);
     board.undo();
     expect(board.document).toEqual(fourLink());
   });
