@@ -44,6 +44,30 @@ export interface SidePoint {
   z: Mm;
 }
 
+/** Front-view (y–z) point, mm (addition, double-wishbone layouts). */
+export interface FrontPoint {
+  y: Mm;
+  z: Mm;
+}
+
+/**
+ * The left knuckle's steering (kingpin) axis, from the lower to the upper ball joint, at one
+ * heave row (addition, double-wishbone layouts; the readout shows the ride row's).
+ */
+export interface KingpinReading {
+  /** deg, front-view angle of the axis from the vertical, positive when its top leans inboard */
+  inclination: Deg;
+  /** deg, side-view angle of the axis from the vertical, positive when its top leans rearward */
+  caster: Deg;
+  /**
+   * mm, in the ground plane, from where the axis meets the ground to the contact patch (below
+   * the wheel centre), positive when the axis meets the ground inboard of the patch
+   */
+  scrubRadius: Mm;
+  /** mm, mechanical trail: how far ahead of the contact patch the axis meets the ground */
+  trail: Mm;
+}
+
 export interface DrivelineReading {
   /** mm, output joint to pinion joint */
   length: Mm;
@@ -80,6 +104,24 @@ export interface HeaveRow {
   members: Record<string, MemberReading>;
   /** absent when the sketch has no driveline */
   driveline?: DrivelineReading;
+  /** deg, left wheel, rear view, positive when the top leans out (addition: arms and knuckles; metrics/wheel.ts) */
+  camberChange?: Deg;
+  /** deg, left wheel, top view, positive toe-in; on a knuckle this is the bump steer (addition: arms and knuckles) */
+  toeChange?: Deg;
+  /** mm, change of the left wheel centre's distance from y = 0 (addition: arms and knuckles) */
+  trackChange?: Mm;
+  /** deg, change of the left kingpin axis' side-view angle, positive when its top moves rearward (addition: double wishbone) */
+  casterChange?: Deg | null;
+  /** front-view instant centre of the left knuckle (sketch-format.md construction); null when the wishbone lines are parallel (addition: double wishbone) */
+  frontViewInstantCenter?: FrontPoint | null;
+  /** the left kingpin axis at this row (addition: double wishbone); null when the ball joints are level */
+  kingpin?: KingpinReading | null;
+  /**
+   * %, anti-dive of the left front wheel under braking, from the contact patch through the side-view
+   * instant centre (`instantCenter`) with the vehicle's front brake share (addition: double wishbone;
+   * metrics/antiDive.ts names the formula); null when not defined
+   */
+  antiDive?: number | null;
 }
 
 /** One row of the roll (articulation) sweep at ride height. */
@@ -98,6 +140,13 @@ export interface RollRow {
   bind: Mm;
   members: Record<string, MemberReading>;
   driveline?: DrivelineReading;
+  /**
+   * deg, change from ride of each wheel's camber relative to the ground (tilted by the roll in
+   * the frame's axes), positive when the top leans out (addition: double wishbone)
+   */
+  camberToGround?: { left: Deg; right: Deg };
+  /** roll centre in the frame's axes: where the two contact-patch lines through the front-view instant centres cross; null when they do not (addition: double wishbone) */
+  rollCenter?: FrontPoint | null;
 }
 
 export type SweepEventKind = 'lock-up' | 'shock-extended' | 'shock-compressed' | 'bind' | 'joint-angle';

@@ -80,11 +80,16 @@ export const memberSchema = z.discriminatedUnion('kind', [
   z.looseObject({ ...memberBase, kind: z.literal('hinge'), body: z.enum(['arm-left', 'arm-right']) }),
 ]);
 
+/** Share of the braking force on the front axle when a file gives none (%; common practice for road vehicles, no published source). */
+export const DEFAULT_FRONT_BRAKE_SHARE_PERCENT = 65;
+
 export const vehicleSchema = z.looseObject({
   wheelbase: positiveLength,
   cgHeight: positiveLength,
   track: positiveLength,
   tireRadius: positiveLength,
+  /** %, share of the braking force on the front axle, for anti-dive (addition; default DEFAULT_FRONT_BRAKE_SHARE_PERCENT) */
+  frontBrakeShare: z.number().min(0).max(100).optional(),
 });
 
 export const sweepSettingsSchema = z
