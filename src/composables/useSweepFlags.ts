@@ -5,7 +5,7 @@
  * words are written here in the user's units.
  */
 import type { HeaveRow, RollRow, SweepEvent, SweepResult } from '../../shared/kinematics';
-import type { Sketch } from '../../shared/schema/sketch';
+import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
 import { metricSpecs, type TargetCheck } from './useTargets';
 import { showAngle, showLength, showPosition, showQuantity, quantityUnit, toDisplay, fixed } from './useSweepFormat';
@@ -47,9 +47,9 @@ function nearestRow<T>(rows: T[], pos: (r: T) => number, at: number): T | undefi
 }
 
 /** The rigid member that stretches or shrinks most at a row: the one taking the bind (or stopping the sweep). */
-export function mostStrainedMember(sketch: Sketch | null, row: HeaveRow | RollRow | undefined): string | undefined {
+export function mostStrainedMember(members: readonly SketchMember[], row: HeaveRow | RollRow | undefined): string | undefined {
   if (!row) return undefined;
-  const kinds = new Map((sketch?.members ?? []).map((m) => [m.id, m.kind] as const));
+  const kinds = new Map(members.map((m) => [m.id, m.kind] as const));
   let best: string | undefined;
   let bestAbs = BIND_MEMBER_MIN_MM;
   for (const [id, reading] of Object.entries(row.members)) {
@@ -70,12 +70,12 @@ function eventRow(result: SweepResult, e: SweepEvent): HeaveRow | RollRow | unde
     : nearestRow(result.heave, (r) => r.travel, e.at);
 }
 
-function eventFlag(result: SweepResult, sketch: Sketch | null, e: SweepEvent, i: number, u: LengthUnit): Flag {
+function eventFlag(result: SweepResult, members: readonly SketchMember[], e: SweepEvent, i: number, u: LengthUnit): Flag {
   const where = showPosition(e.sweep, e.at, u);
   const base = { key: `event-${i}-${e.kind}`, kind: e.kind, sweep: e.sweep, at: e.at, where } as const;
   switch (e.kind) {
     case 'lock-up': {
-      const member = mostStrainedMember(sketch, eventRow(result, e));
+      const member = mostStrainedMember(members, eventRow(result, e));
       return {
         ...base,
         severity: 'negative',
@@ -85,13 +85,13 @@ function eventFlag(result: SweepResult, sketch: Sketch | null, e: SweepEvent, i:
       };
     }
     case 'bind': {
-      const member = mostStrainedMember(sketch, eventRow(result, e));
-      const amount = e.value !== undefined ? ` (${showLength(e.value, u).text})` : '';
+      const member = mostStrainedMember(members, eventRow(result, e));
+      const amount = e.value !== undefined ? ` more than ${showLength(e.value, u).text}` : '';
       return {
         ...base,
         severity: 'negative',
         title: 'Bind',
-        detail: `From ${where} the links must stretch or shrink${amount} for the axle to move; bushings take that.${member ? ` Most: ${member}.` : ''}`,
+        detail: `From ${where} on, the links must stretch or shrink${amount} for the axle to move; the bushings have to take that.${member ? ` Most: ${member}.` : ''}`,
         member,
       };
     }
@@ -109,12 +109,12 @@ function eventFlag(result: SweepResult, sketch: Sketch | null, e: SweepEvent, i:
     }
     case 'joint-angle': {
       const joint = e.joint === 'output' ? 'Output joint' : e.joint === 'pinion' ? 'Pinion joint' : 'A driveline joint';
-      const angle = e.value !== undefined ? ` (${showAngle(e.value, undefined, false, 1).text})` : '';
+      const limit = e.value !== undefined ? showAngle(e.value, undefined, false, 1).text : 'its limit';
       return {
         ...base,
         severity: 'warning',
         title: 'Joint angle',
-        detail: `${joint} operating angle${angle} passes the limit from ${where}.`,
+        detail: `${joint} operating angle is over ${limit} from ${where} on.`,
       };
     }
     default:
@@ -164,9 +164,9 @@ function targetFlag(check: TargetCheck, u: LengthUnit): Flag | null {
 const SEVERITY_ORDER = { negative: 0, warning: 1, info: 2 } as const;
 
 /** Every flag of a result, the design-stopping ones first, then by distance from ride. */
-export function buildFlags(result: SweepResult | null, sketch: Sketch | null, checks: TargetCheck[], u: LengthUnit): Flag[] {
+export function buildFlags(result: SweepResult | null, members: readonly SketchMember[], checks: TargetCheck[], u: LengthUnit): Flag[] {
   if (!result) return [];
-  const flags: Flag[] = result.limits.events.map((e, i) => eventFlag(result, sketch, e, i, u));
+  const flags: Flag[] = result.limits.events.map((e, i) => eventFlag(result, members, e, i, u));
   for (const c of checks) {
     const f = targetFlag(c, u);
     if (f) flags.push(f);

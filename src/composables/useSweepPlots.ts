@@ -4,7 +4,7 @@
  * components only draw; no chart library is imported here.
  */
 import type { HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
-import type { Sketch } from '../../shared/schema/sketch';
+import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
 import { mmToUnit } from '../../shared/units';
 import { metricSpecs, bandIsSet, type TargetCheck, type TargetMetric, type Targets } from './useTargets';
@@ -44,6 +44,8 @@ export interface PlotSpec {
   bands: PlotBand[];
   /** why the plot has nothing to draw (shown instead of an empty chart) */
   emptyReason?: string;
+  /** true for a change from ride (shown with its sign: +1.2 mm), false for an amount (anti-squat, a length) */
+  signed: boolean;
 }
 
 /** Our palette for curves (style: workshop steel blue, signal orange, and their companions). */
@@ -59,15 +61,16 @@ interface CurveDef {
   quantity: 'length' | 'angle' | 'percent';
   read: (r: AnyRow) => number | null;
   emptyReason: string;
+  signed: boolean;
 }
 
 const CURVES: CurveDef[] = [
-  { key: 'pinion', title: 'Pinion angle change', sweep: 'heave', metric: 'pinionAngleChange', quantity: 'angle', read: (r) => r.pinionAngleChange, emptyReason: 'No axle: this layout has no pinion angle to change.' },
-  { key: 'lateral', title: 'Lateral shift', sweep: 'heave', metric: 'lateralShift', quantity: 'length', read: (r) => r.lateralShift, emptyReason: 'No axle: this layout has no lateral shift.' },
-  { key: 'antisquat', title: 'Anti-squat', sweep: 'heave', metric: 'antiSquat', quantity: 'percent', read: (r) => r.antiSquat, emptyReason: 'No side-view instant centre anywhere in the travel (links parallel, or no upper and lower pair).' },
-  { key: 'foreaft', title: 'Fore-aft shift', sweep: 'heave', metric: 'foreAftShift', quantity: 'length', read: (r) => r.foreAftShift, emptyReason: 'Not defined for this layout.' },
-  { key: 'bind', title: 'Bind in roll', sweep: 'roll', metric: 'bind', quantity: 'length', read: (r) => r.bind, emptyReason: 'No roll sweep (articulation set to 0).' },
-  { key: 'rollsteer', title: 'Roll steer', sweep: 'roll', metric: 'rollSteer', quantity: 'percent', read: (r) => r.rollSteer, emptyReason: 'No roll sweep (articulation set to 0).' },
+  { key: 'pinion', title: 'Pinion angle change', sweep: 'heave', metric: 'pinionAngleChange', quantity: 'angle', read: (r) => r.pinionAngleChange, emptyReason: 'No axle: this layout has no pinion angle to change.', signed: true },
+  { key: 'lateral', title: 'Lateral shift', sweep: 'heave', metric: 'lateralShift', quantity: 'length', read: (r) => r.lateralShift, emptyReason: 'No axle: this layout has no lateral shift.', signed: true },
+  { key: 'antisquat', title: 'Anti-squat', sweep: 'heave', metric: 'antiSquat', quantity: 'percent', read: (r) => r.antiSquat, emptyReason: 'Anti-squat is not defined anywhere in the travel (no upper and lower link pair).', signed: false },
+  { key: 'foreaft', title: 'Fore-aft shift', sweep: 'heave', metric: 'foreAftShift', quantity: 'length', read: (r) => r.foreAftShift, emptyReason: 'Not defined for this layout.', signed: true },
+  { key: 'bind', title: 'Bind in roll', sweep: 'roll', metric: 'bind', quantity: 'length', read: (r) => r.bind, emptyReason: 'No roll sweep (articulation set to 0).', signed: false },
+  { key: 'rollsteer', title: 'Roll steer', sweep: 'roll', metric: 'rollSteer', quantity: 'percent', read: (r) => r.rollSteer, emptyReason: 'No roll sweep (articulation set to 0).', signed: true },
 ];
 
 /** The plot order on the board: travel quantities, the shocks, then the roll quantities. */
@@ -115,12 +118,13 @@ function curvePlot(def: CurveDef, result: SweepResult, targets: Targets, checks:
     series: empty ? [] : [{ label: def.title, points, color: PLOT_COLORS[0] }],
     bands: bandsFor(def.metric, targets, checks, u),
     emptyReason: empty ? (rows.length === 0 ? 'No rows in this sweep.' : def.emptyReason) : undefined,
+    signed: def.signed,
   };
 }
 
 /** Shock lengths over travel, each with its stroke limits as dashed lines in the same colour. */
-function shockPlot(result: SweepResult, sketch: Sketch | null, u: LengthUnit): PlotSpec {
-  const shocks = (sketch?.members ?? []).filter((m) => m.kind === 'shock');
+function shockPlot(result: SweepResult, members: readonly SketchMember[], u: LengthUnit): PlotSpec {
+  const shocks = members.filter((m) => m.kind === 'shock');
   const series: PlotSeries[] = [];
   const xs = result.heave.map((r) => mmToUnit(r.travel, u));
   const xEnds = xs.length ? [xs[0], xs[xs.length - 1]] : [];
@@ -145,14 +149,15 @@ function shockPlot(result: SweepResult, sketch: Sketch | null, u: LengthUnit): P
     series,
     bands: [],
     emptyReason: shocks.length === 0 ? 'No shocks in this sketch.' : result.heave.length === 0 ? 'No rows in this sweep.' : undefined,
+    signed: false,
   };
 }
 
 /** Every travel plot of a result, in board order. */
-export function buildPlots(result: SweepResult | null, sketch: Sketch | null, targets: Targets, checks: TargetCheck[], u: LengthUnit): PlotSpec[] {
+export function buildPlots(result: SweepResult | null, members: readonly SketchMember[], targets: Targets, checks: TargetCheck[], u: LengthUnit): PlotSpec[] {
   if (!result) return [];
   const plots = new Map<string, PlotSpec>();
   for (const def of CURVES) plots.set(def.key, curvePlot(def, result, targets, checks, u));
-  plots.set('shocks', shockPlot(result, sketch, u));
+  plots.set('shocks', shockPlot(result, members, u));
   return ORDER.map((k) => plots.get(k)!).filter(Boolean);
 }

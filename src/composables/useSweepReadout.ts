@@ -3,7 +3,7 @@
  * the user's units. A number the sweep does not define shows "—" with the reason.
  */
 import type { HeaveRow, RollRow } from '../../shared/kinematics';
-import type { Sketch, SketchMember } from '../../shared/schema/sketch';
+import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
 import { showAngle, showLength, showPercent, showPosition, showRate, showRatio, type Shown } from './useSweepFormat';
 
@@ -19,12 +19,24 @@ export interface ReadoutLine extends Shown {
 
 export type CursorRow = { sweep: 'heave'; row: HeaveRow } | { sweep: 'roll'; row: RollRow };
 
+/**
+ * What the readout, flags and plots need of the sketch besides the sweep: its members and
+ * whether it has an axle. Kept apart from the points so that dragging a pivot, which changes
+ * only points, does not redo their work before the new sweep arrives.
+ */
+export interface SweepContext {
+  members: readonly SketchMember[];
+  hasAxle: boolean;
+}
+
+export const EMPTY_CONTEXT: SweepContext = { members: [], hasAxle: false };
+
 /** Reasons, in the user's words, for numbers the sweep leaves out. */
-function reasons(sketch: Sketch | null) {
-  const members = sketch?.members ?? [];
+function reasons(ctx: SweepContext) {
+  const members = ctx.members;
   const grouped = members.some((m) => m.kind === 'link' && m.group === 'upper') && members.some((m) => m.kind === 'link' && m.group === 'lower');
   const hasRod = members.some((m) => m.kind === 'lateral-rod');
-  const hasAxle = (sketch?.points ?? []).some((p) => p.body === 'axle');
+  const hasAxle = ctx.hasAxle;
   return {
     ic: grouped
       ? 'upper and lower links parallel in side view: no instant centre'
@@ -42,9 +54,9 @@ interface IndependentFields {
   casterChange?: number | null;
 }
 
-function memberLines(sketch: Sketch | null, members: Record<string, { length: number; lengthChange: number; motionRatio?: number; wheelRate?: number }>, sweep: 'heave' | 'roll', u: LengthUnit): ReadoutLine[] {
+function memberLines(ctx: SweepContext, members: Record<string, { length: number; lengthChange: number; motionRatio?: number; wheelRate?: number }>, sweep: 'heave' | 'roll', u: LengthUnit): ReadoutLine[] {
   const lines: ReadoutLine[] = [];
-  const shown: SketchMember[] = (sketch?.members ?? []).filter((m) => m.kind === 'shock' || m.kind === 'spring');
+  const shown = ctx.members.filter((m) => m.kind === 'shock' || m.kind === 'spring');
   for (const m of shown) {
     const r = members[m.id];
     if (!r) continue;
@@ -80,9 +92,9 @@ function drivelineLines(d: HeaveRow['driveline'], u: LengthUnit): ReadoutLine[] 
 }
 
 /** The readout lines for the row at the cursor. */
-export function readoutLines(cursor: CursorRow | null, sketch: Sketch | null, u: LengthUnit): ReadoutLine[] {
+export function readoutLines(cursor: CursorRow | null, ctx: SweepContext, u: LengthUnit): ReadoutLine[] {
   if (!cursor) return [];
-  const why = reasons(sketch);
+  const why = reasons(ctx);
   if (cursor.sweep === 'heave') {
     const r = cursor.row;
     const ind = r as HeaveRow & IndependentFields;
@@ -101,7 +113,7 @@ export function readoutLines(cursor: CursorRow | null, sketch: Sketch | null, u:
     if (ind.toeChange !== undefined) lines.push({ key: 'toe', label: 'Toe change (bump steer)', group: 'axle', ...showAngle(ind.toeChange, undefined, true, 3) });
     if (ind.trackChange !== undefined) lines.push({ key: 'track', label: 'Track change', group: 'axle', ...showLength(ind.trackChange, u, undefined, true) });
     if (ind.casterChange !== undefined) lines.push({ key: 'caster', label: 'Caster change', group: 'axle', ...showAngle(ind.casterChange, undefined, true) });
-    return [...lines, ...memberLines(sketch, r.members, 'heave', u), ...drivelineLines(r.driveline, u)];
+    return [...lines, ...memberLines(ctx, r.members, 'heave', u), ...drivelineLines(r.driveline, u)];
   }
   const r = cursor.row;
   return [
@@ -110,7 +122,7 @@ export function readoutLines(cursor: CursorRow | null, sketch: Sketch | null, u:
     { key: 'right', label: 'Right wheel travel', group: 'axle', ...showLength(r.rightTravel, u, undefined, true) },
     { key: 'rollsteer', label: 'Roll steer', group: 'geometry', ...showPercent(r.rollSteer, 'no roll: roll steer is a ratio to the roll angle', true) },
     { key: 'bind', label: 'Bind', group: 'geometry', ...showLength(r.bind, u) },
-    ...memberLines(sketch, r.members, 'roll', u),
+    ...memberLines(ctx, r.members, 'roll', u),
     ...drivelineLines(r.driveline, u),
   ];
 }

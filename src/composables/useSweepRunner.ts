@@ -6,7 +6,17 @@
  * browsers, a worker that fails to load) the same computation runs on the main thread,
  * coalesced to one run per macrotask.
  */
-import { computeSweep, type SweepAnswer, type SweepRequest } from '../workers/sweep.protocol';
+import type { SweepAnswer, SweepRequest } from '../workers/sweep.protocol';
+
+type Compute = (req: SweepRequest) => SweepAnswer;
+
+/**
+ * The main-thread path loads the solver only when it is needed: in the browser the worker
+ * carries it, so the board's own chunk stays free of it.
+ */
+async function loadCompute(): Promise<Compute> {
+  return (await import('../workers/sweep.protocol')).computeSweep;
+}
 
 export type RunnerMode = 'worker' | 'main-thread';
 
@@ -46,6 +56,8 @@ export function createSweepRunner(onAnswer: (answer: SweepAnswer) => void, optio
   let idleWaiters: Array<() => void> = [];
   let worker: Worker | null = null;
   let mainTimer: ReturnType<typeof setTimeout> | null = null;
+  let mainRunning = false;
+  let compute: Compute | null = null;
   let disposed = false;
 
   const wantWorker = options.useWorker ?? typeof Worker !== 'undefined';
@@ -64,7 +76,7 @@ export function createSweepRunner(onAnswer: (answer: SweepAnswer) => void, optio
   }
 
   function isIdle() {
-    return !inFlight && !waiting && mainTimer === null;
+    return !inFlight && !waiting && mainTimer === null && !mainRunning;
   }
 
   function notifyIdle() {
@@ -100,14 +112,24 @@ export function createSweepRunner(onAnswer: (answer: SweepAnswer) => void, optio
   }
 
   function scheduleMainThread() {
-    if (mainTimer !== null) return;
-    mainTimer = setTimeout(() => {
-      mainTimer = null;
+    if (mainTimer !== null || mainRunning) return;
+    mainTimer = setTimeout(() => void runMainThread(), 0);
+  }
+
+  async function runMainThread() {
+    mainTimer = null;
+    mainRunning = true;
+    try {
+      compute ??= await loadCompute();
       const req = waiting;
       waiting = null;
-      if (req) apply(computeSweep(req));
-      notifyIdle();
-    }, 0);
+      if (req) apply(compute(req));
+    } finally {
+      mainRunning = false;
+    }
+    // A request that came while the solver loaded or ran goes next (latest wins).
+    if (waiting && !disposed) scheduleMainThread();
+    else notifyIdle();
   }
 
   function fallBackToMainThread() {

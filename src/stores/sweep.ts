@@ -15,7 +15,8 @@ import { createSweepRunner, type SweepRunner, type RunnerOptions } from '../comp
 import type { SweepAnswer } from '../workers/sweep.protocol';
 import { checkTargets, readTargets, type Targets } from '../composables/useTargets';
 import { buildFlags } from '../composables/useSweepFlags';
-import type { CursorRow } from '../composables/useSweepReadout';
+import { EMPTY_CONTEXT, type CursorRow, type SweepContext } from '../composables/useSweepReadout';
+import { sweepRange } from '../composables/useSweepRange';
 import { useBoardStore, type EditResult } from './board';
 import { usePrefsStore } from './prefs';
 
@@ -65,8 +66,30 @@ export const useSweepStore = defineStore('sweep', () => {
   let asked = 0;
   let answered = 0;
   let runner: SweepRunner | null = null;
+  /** An answer waiting for the next animation frame; a newer one replaces it. */
+  let queued: SweepAnswer | null = null;
+  let frame = 0;
+  let appliedWaiters: Array<() => void> = [];
 
+  /**
+   * Answers from the worker are shown at most once per animation frame: during a drag the
+   * worker can answer faster than the page paints, and a result nobody sees is work for nothing.
+   */
   function onAnswer(a: SweepAnswer) {
+    if (runner?.mode !== 'worker' || typeof requestAnimationFrame !== 'function') {
+      applyAnswer(a);
+      return;
+    }
+    queued = a;
+    frame ||= requestAnimationFrame(() => {
+      frame = 0;
+      const q = queued;
+      queued = null;
+      if (q) applyAnswer(q);
+    });
+  }
+
+  function applyAnswer(a: SweepAnswer) {
     answered = a.id;
     pending.value = answered < asked;
     lastMs.value = a.ms;
@@ -76,6 +99,9 @@ export const useSweepStore = defineStore('sweep', () => {
     } else {
       error.value = a.problems;
     }
+    const waiters = appliedWaiters;
+    appliedWaiters = [];
+    waiters.forEach((w) => w());
   }
 
   function ensureRunner(): SweepRunner {
@@ -96,11 +122,22 @@ export const useSweepStore = defineStore('sweep', () => {
   }
 
   /** Resolves when the sweep of the latest document is shown. */
-  function whenIdle(): Promise<void> {
-    return runner ? runner.whenIdle() : Promise.resolve();
+  async function whenIdle(): Promise<void> {
+    if (runner) await runner.whenIdle();
+    if (queued) await new Promise<void>((resolve) => appliedWaiters.push(resolve));
   }
 
   const sketch = computed(() => (board.sketch ?? null) as Sketch | null);
+
+  // The board's documents are immutable, so these keep their identity while a drag changes
+  // only points: what depends on them is not redone until a new sweep arrives.
+  const members = computed(() => sketch.value?.members ?? EMPTY_CONTEXT.members);
+  const hasAxle = computed(() => (sketch.value?.points ?? []).some((p) => p.body === 'axle'));
+  /** Members and layout facts the readout, flags and plots read besides the sweep. */
+  const context = computed<SweepContext>(() => ({ members: members.value, hasAxle: hasAxle.value }));
+  const sweepBlock = computed(() => sketch.value?.sweep);
+  /** The sweep range of the sketch (defaults filled in), for the sliders. */
+  const range = computed(() => sweepRange({ sweep: sweepBlock.value }));
 
   // The board's documents are immutable (every edit builds a new one sharing untouched parts),
   // so comparing the swept parts by reference sees every edit that matters and skips the rest.
@@ -138,12 +175,13 @@ export const useSweepStore = defineStore('sweep', () => {
     return travel.value < r.limits.droop - 1e-9 || travel.value > r.limits.bump + 1e-9;
   });
 
+  const targetsField = computed(() => (sketch.value as { targets?: unknown } | null)?.targets);
   /** The targets, kept in the document's optional `targets` field (so they save and export with it). */
-  const targets = computed<Targets>(() => readTargets(sketch.value));
+  const targets = computed<Targets>(() => readTargets({ targets: targetsField.value }));
 
   const targetChecks = computed(() => (result.value ? checkTargets(result.value, targets.value) : []));
 
-  const flags = computed(() => buildFlags(result.value, sketch.value, targetChecks.value, prefs.units));
+  const flags = computed(() => buildFlags(result.value, members.value, targetChecks.value, prefs.units));
 
   function setTravel(v: Mm) {
     travel.value = v;
@@ -176,6 +214,9 @@ export const useSweepStore = defineStore('sweep', () => {
   function dispose() {
     runner?.dispose();
     runner = null;
+    if (frame) cancelAnimationFrame(frame);
+    frame = 0;
+    queued = null;
   }
 
   return {
@@ -193,6 +234,8 @@ export const useSweepStore = defineStore('sweep', () => {
     rollRow,
     rowAtCursor,
     bodiesAtCursor,
+    context,
+    range,
     targets,
     targetChecks,
     flags,

@@ -3,7 +3,10 @@
  * runs inside the worker and, where workers are unavailable, on the main thread, so both
  * paths give the very result runSweep computes.
  */
-import { runSweep, isSketchValidationError } from '../../shared/kinematics';
+// Straight from the modules, not the kinematics index: the board's eager code imports the index,
+// and going through it would pull the solver into the board's own chunk.
+import { runSweep } from '../../shared/kinematics/run';
+import { isSketchValidationError } from '../../shared/schema/errors';
 import type { SweepResult } from '../../shared/kinematics';
 
 export interface SweepRequest {

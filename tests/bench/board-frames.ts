@@ -104,28 +104,25 @@ interface FrameFigures {
   readoutChanged: boolean;
 }
 
-/** Starts recording requestAnimationFrame timestamps in the page; waits `ms` before returning. */
+/**
+ * Starts recording requestAnimationFrame timestamps in the page; waits `ms` before returning.
+ * Sent as source text: functions compiled by tsx carry a helper the page does not have.
+ */
+const START_SAMPLING = `(() => {
+  window.__frames = [];
+  window.__sampling = true;
+  const tick = (t) => { window.__frames.push(t); if (window.__sampling) requestAnimationFrame(tick); };
+  requestAnimationFrame(tick);
+})()`;
+
 async function sampleFrames(page: Page, ms: number): Promise<void> {
-  await page.evaluate(() => {
-    const w = window as unknown as { __frames: number[]; __sampling: boolean };
-    w.__frames = [];
-    w.__sampling = true;
-    const tick = (t: number) => {
-      w.__frames.push(t);
-      if (w.__sampling) requestAnimationFrame(tick);
-    };
-    requestAnimationFrame(tick);
-  });
+  await page.evaluate(START_SAMPLING);
   if (ms > 0) await page.waitForTimeout(ms);
 }
 
 /** Stops recording; the gaps between consecutive frames (ms). */
 async function stopSampling(page: Page): Promise<number[]> {
-  const stamps = await page.evaluate(() => {
-    const w = window as unknown as { __frames: number[]; __sampling: boolean };
-    w.__sampling = false;
-    return w.__frames;
-  });
+  const stamps = (await page.evaluate('(() => { window.__sampling = false; return window.__frames; })()')) as number[];
   const gaps: number[] = [];
   for (let i = 1; i < stamps.length; i++) gaps.push(stamps[i] - stamps[i - 1]);
   return gaps;

@@ -118,7 +118,7 @@ describe('flags for missed targets', () => {
   it('say what was wanted and where it is first missed, in the user’s units', () => {
     const r = result([-100, -50, 0, 50, 100].map((t) => heave(t, { lateralShift: t / 5 })));
     const checks = checkTargets(r, { lateralShift: { min: -15, max: 15 } });
-    const [flag] = buildFlags(r, null, checks, 'mm');
+    const [flag] = buildFlags(r, [], checks, 'mm');
     expect(flag.title).toBe('Target missed: Lateral shift');
     expect(flag.detail).toBe('\u221220.0 mm at \u2212100.0 mm droop; wanted within ±15.0 mm.');
   });
