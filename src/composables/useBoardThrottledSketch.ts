@@ -33,8 +33,16 @@ export function useBoardThrottledSketch() {
   }
 
   watch(() => board.sketch, schedule);
-  // The end of a drag shows the final numbers at once.
-  watch(() => board.dragging, (d) => !d && schedule());
+  // The end of a drag shows the final numbers on the next frame, not after the drag interval.
+  watch(
+    () => board.dragging,
+    (d) => {
+      if (d) return;
+      if (timer) clearTimeout(timer);
+      timer = null;
+      if (!frame) frame = requestAnimationFrame(apply);
+    },
+  );
 
   onBeforeUnmount(() => {
     if (frame) cancelAnimationFrame(frame);
