@@ -3,9 +3,9 @@ import {
 } from 'sequelize';
 import type { User } from './user.model';
 
-export const shareModes = ['private', 'link'] as const;
-/** Who may open a sketch besides its owner: nobody, or anyone with the link ('class' comes with classes). */
-export type ShareMode = (typeof shareModes)[number];
+import { shareModes, type ShareMode } from '../../shared/schema/sketchRequests';
+
+export { shareModes, type ShareMode };
 
 /** One suspension sketch; `document` holds the sketch file (JSON text), `version` counts saves. */
 export class Sketch extends Model<InferAttributes<Sketch>, InferCreationAttributes<Sketch>> {

@@ -2,8 +2,9 @@ import {
   DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize,
 } from 'sequelize';
 
-export const roles = ['admin', 'instructor', 'member'] as const;
-export type Role = (typeof roles)[number];
+import { roles, type Role } from '../../shared/schema/accounts';
+
+export { roles, type Role };
 
 /** An account. The e-mail is stored lower-cased; the password only as a scrypt hash. */
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { currentUser, requireRole } from '../middleware/require-user';
 import { idParam } from '../middleware/params';
 import { parseOr400 } from '../middleware/validate';
-import { adminUserPatch } from '../schemas/admin';
+import { adminUserPatch } from '../../shared/schema/accounts';
 import * as admin from '../services/admin';
 
 /** /api/admin: accounts and the mail log, for admins only (403 for everyone else). */

@@ -6,7 +6,7 @@ import { unauthorized } from '../middleware/http-error';
 import { parseOr400, validBody } from '../middleware/validate';
 import { loginLimiters, resetRequestLimiters, signupLimiter } from '../middleware/rate-limit';
 import { passport, SESSION_COOKIE } from '../middleware/session';
-import { loginBody, resetBody, resetRequestBody, signupBody } from '../schemas/auth';
+import { loginBody, resetBody, resetRequestBody, signupBody } from '../../shared/schema/accounts';
 import { createAccount } from '../services/accounts';
 import type { Mailer } from '../services/mail/mailer';
 import { requestPasswordReset, resetPassword } from '../services/password-reset';

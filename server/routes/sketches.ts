@@ -3,7 +3,7 @@ import type { ServerConfig } from '../config';
 import { requireUser, currentUser } from '../middleware/require-user';
 import { idParam } from '../middleware/params';
 import { parseOr400 } from '../middleware/validate';
-import { createSketchBody, listQuery, shareBody, updateSketchBody } from '../schemas/sketches';
+import { createSketchBody, listQuery, shareBody, updateSketchBody } from '../../shared/schema/sketchRequests';
 import * as sketches from '../services/sketches';
 import type { Mailer } from '../services/mail/mailer';
 import { shareNoticeMail } from '../services/mail/messages';

@@ -11,10 +11,6 @@ const SALT_BYTES = 16;
 /** scrypt needs 128·N·r bytes; Node's default cap (32 MiB) is exactly at the edge. */
 const MAX_MEM_BYTES = 64 * 1024 * 1024;
 
-/** Limits on a password (characters). No composition rules (NIST SP 800-63B §5.1.1.2). */
-export const PASSWORD_MIN = 8;
-export const PASSWORD_MAX = 256;
-
 function derive(password: string, salt: Buffer, opts: ScryptOptions, bytes: number): Promise<Buffer> {
   return new Promise((resolve, reject) =>
     scrypt(password.normalize('NFKC'), salt, bytes, { ...opts, maxmem: MAX_MEM_BYTES }, (err, key) =>

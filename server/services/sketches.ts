@@ -3,7 +3,7 @@ import { Op, fn, col, where as sqlWhere, type Transaction, type WhereOptions } f
 import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/sketch';
 import { Sketch, SketchRevision, User, type PublicUser, type ShareMode } from '../models';
 import { badRequest, conflict, notFound } from '../middleware/http-error';
-import type { ListQuery } from '../schemas/sketches';
+import type { ListQuery } from '../../shared/schema/sketchRequests';
 
 /** A soft-deleted sketch can be restored for this long (ms); then it is purged. */
 export const RESTORE_WINDOW_MS = 30 * 24 * 3600_000;

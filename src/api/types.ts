@@ -1,7 +1,8 @@
 /** Shapes the HTTP API answers with (the server's contract, mirrored for the client). */
 import type { Sketch } from '../../shared/schema/sketch';
+import type { Role } from '../../shared/schema/accounts';
 
-export type Role = 'admin' | 'instructor' | 'member';
+export type { Role };
 
 export interface User {
   id: number;

@@ -1,5 +1,12 @@
 import { z } from 'zod';
-import { PASSWORD_MAX, PASSWORD_MIN } from '../services/passwords';
+
+/** Account roles: new sign-ups are members. */
+export const roles = ['admin', 'instructor', 'member'] as const;
+export type Role = (typeof roles)[number];
+
+/** Limits on a password (characters). No composition rules (NIST SP 800-63B §5.1.1.2). */
+export const PASSWORD_MIN = 8;
+export const PASSWORD_MAX = 256;
 
 /** An e-mail address, trimmed and lower-cased so that one person has one account. */
 export const emailField = z.string().trim().toLowerCase().max(254).pipe(z.email({ message: 'not an e-mail address' }));
@@ -27,3 +34,10 @@ export const resetBody = z.strictObject({
   token: z.string().min(1).max(200),
   password: passwordField,
 });
+
+export const adminUserPatch = z
+  .strictObject({
+    role: z.enum(roles).optional(),
+    disabled: z.boolean().optional(),
+  })
+  .refine((p) => p.role !== undefined || p.disabled !== undefined, { message: 'give role or disabled' });

@@ -1,7 +1,10 @@
 import { z } from 'zod';
-import { layouts } from '../../shared/schema/sketch';
-import { shareModes } from '../models';
-import { emailField } from './auth';
+import { layouts } from './sketch';
+import { emailField } from './accounts';
+
+/** Who may open a sketch besides its owner: nobody, or anyone with the link ('class' comes with classes). */
+export const shareModes = ['private', 'link'] as const;
+export type ShareMode = (typeof shareModes)[number];
 
 /** Longest sketch name (characters); the same bound as the sketch file's `name`. */
 export const SKETCH_NAME_MAX = 200;
