@@ -65,8 +65,6 @@ export default defineConfig({
       UPLOADS_DIR: join(dir, 'uploads'),
       PUBLIC_URL: `http://127.0.0.1:${port}`,
       SESSION_SECRET: 'e2e-only-secret-not-for-production',
-      // Many sign-ins in one run: the per-address limit is the real one, but raised for the suite.
-      LOGIN_RATE_LIMIT: '1000',
     },
   },
 });
