@@ -122,6 +122,18 @@ export interface HeaveRow {
    * metrics/antiDive.ts names the formula); null when not defined
    */
   antiDive?: number | null;
+  /**
+   * deg, the left shackle's side-view angle from the vertical through its frame hanger,
+   * positive when the spring eye lies rearward of the hanger (addition: leaf springs)
+   */
+  shackleAngle?: Deg;
+  /** half-shaft readings per side (addition: independent wheels with a frame-mounted drive unit) */
+  halfShafts?: HalfShaftReadings;
+  /**
+   * N, axial load of every link and lateral rod (tension positive) by statics at this row from
+   * the axle torque (addition: solid axles on links; loads.ts)
+   */
+  linkLoads?: Record<string, number>;
 }
 
 /** One row of the roll (articulation) sweep at ride height. */
@@ -147,9 +159,19 @@ export interface RollRow {
   camberToGround?: { left: Deg; right: Deg };
   /** roll centre in the frame's axes: where the two contact-patch lines through the front-view instant centres cross; null when they do not (addition: double wishbone) */
   rollCenter?: FrontPoint | null;
+  /** half-shaft readings per side (addition: independent wheels with a frame-mounted drive unit) */
+  halfShafts?: HalfShaftReadings;
 }
 
-export type SweepEventKind = 'lock-up' | 'shock-extended' | 'shock-compressed' | 'bind' | 'joint-angle';
+export type SweepEventKind =
+  | 'lock-up'
+  | 'shock-extended'
+  | 'shock-compressed'
+  | 'bind'
+  | 'joint-angle'
+  // addition: a link's axial load changes sign within the heave sweep / passes sweep.linkLoadLimit
+  | 'load-reversal'
+  | 'load-limit';
 
 export interface SweepEvent {
   kind: SweepEventKind;
@@ -160,7 +182,9 @@ export interface SweepEvent {
   /** the shock, for shock events */
   member?: string;
   /** the joint, for joint-angle events */
-  joint?: 'output' | 'pinion';
+  joint?: 'output' | 'pinion' | 'half-shaft-inner' | 'half-shaft-outer';
+  /** the side of a half-shaft joint event (addition) */
+  side?: 'left' | 'right';
   /** the value that crossed: bind in mm, joint angle in deg, shock length in mm (addition) */
   value?: number;
   /** one plain sentence for the flags list (addition) */
@@ -190,6 +214,10 @@ export interface SweepResult {
   warnings: string[];
   /** the travel-0 row (addition) */
   ride: HeaveRow;
+  /** leaf springs: the axle's wind-up at ride height under the axle torque (addition; windUp.ts) */
+  windUp?: WindUpReading;
+  /** solid axles on links: axial link loads by statics from the axle torque (addition; loads.ts) */
+  loads?: LinkLoadSummary;
 }
 
 export interface SweepOptions {
@@ -202,7 +230,97 @@ export interface SweepOptions {
     rollStep: Deg;
     bindThreshold: Mm;
     jointAngleLimit: Deg;
+    /** N·m */
+    axleTorque: number;
+    /** N */
+    linkLoadLimit: number;
   }>;
   /** skip the roll sweep (roll: []) */
   heaveOnly?: boolean;
+}
+
+/** One half-shaft at one row (addition): the frame-mounted drive unit's inner joint to the wheel's outer joint. */
+export interface HalfShaftReading {
+  /** mm, inner joint to outer joint */
+  length: Mm;
+  /** mm, length minus ride length (positive: the shaft must extend) */
+  plunge: Mm;
+  /** deg, operating angle of the inner joint (drive unit output axis to shaft, in 3-D) */
+  innerAngle: Deg;
+  /** deg, operating angle of the outer joint (shaft to the wheel's spin axis, in 3-D) */
+  outerAngle: Deg;
+}
+
+export interface HalfShaftReadings {
+  left?: HalfShaftReading;
+  right?: HalfShaftReading;
+}
+
+/** One leaf spring's part in the wind-up (addition). */
+export interface LeafSpringWindUp {
+  side: 'left' | 'right';
+  /** member ids of the spring's front and rear halves */
+  front: string;
+  rear: string;
+  /** N/mm, vertical rate of the whole spring at its seat (sum of the halves' rates) */
+  verticalRate: NPerMm;
+  /** mm, cantilever lengths, seat to front eye and seat to rear eye (side view, at ride) */
+  frontLength: Mm;
+  rearLength: Mm;
+  /** N·m per degree, this spring's wind-up rate Σ k_i·L_i² (windUp.ts) */
+  rate: number;
+}
+
+/**
+ * Axle wind-up of a leaf-sprung axle at ride height (addition; windUp.ts): the axle torque
+ * turns the axle housing against the springs' bending by `angle`; the linkage is then solved
+ * with that pitch imposed, so shocks and the driveshaft show what the wind-up does to them.
+ */
+export interface WindUpReading {
+  /** N·m, axle torque (positive driving forward) */
+  torque: number;
+  /** N·m per degree, the axle's wind-up rate (both springs) */
+  rate: number;
+  /** deg, wind-up angle of the axle housing, positive when the pinion nose rises (= pinionAngleChange) */
+  angle: Deg;
+  springs: LeafSpringWindUp[];
+  /** pose of the axle wound up at ride height */
+  pose: Pose;
+  /** poses of every moving body wound up (for drawing) */
+  bodies: BodyPoses;
+  /** mm, length change from ride of every shock and spring under the wind-up */
+  members: Record<string, { lengthChange: Mm }>;
+  /** the driveline wound up, when the sketch has one */
+  driveline?: DrivelineReading;
+  /** largest residual of the wound-up solve (mm); above the bind threshold the linkage fights the wind-up */
+  bind: Mm;
+}
+
+/** One link's axial load over the heave sweep (addition; loads.ts). Newtons, tension positive. */
+export interface LinkLoadReading {
+  /** N, at ride height */
+  ride: number;
+  /** N, smallest and largest over the heave rows */
+  min: number;
+  max: number;
+  /** the load changes sign within the heave sweep */
+  reverses: boolean;
+  /** |load| passes sweep.linkLoadLimit somewhere in the heave sweep */
+  overLimit: boolean;
+}
+
+/** Link loads by statics from the axle torque (addition; loads.ts). */
+export interface LinkLoadSummary {
+  /** N·m, axle torque used (positive driving forward) */
+  torque: number;
+  /** N, total tractive force at the two contact patches, torque / tyre radius */
+  tractiveForce: number;
+  /** N, the flag limit; null when none is set */
+  limit: number | null;
+  /**
+   * more links than the coordinates they locate: the split among them depends on bushing
+   * stiffness; the loads shown are the least-squares split (equal axial stiffness)
+   */
+  indeterminate: boolean;
+  members: Record<string, LinkLoadReading>;
 }

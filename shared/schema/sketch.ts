@@ -21,11 +21,21 @@ export const layouts = [
 export type Layout = (typeof layouts)[number];
 
 /** Bodies a point can belong to. The frame is fixed; the others move. */
-export const bodyIds = ['frame', 'axle', 'arm-left', 'arm-right', 'knuckle-left', 'knuckle-right'] as const;
+export const bodyIds = [
+  'frame',
+  'axle',
+  'arm-left',
+  'arm-right',
+  'knuckle-left',
+  'knuckle-right',
+  // Leaf-spring layouts (addition): the shackle carrying each spring's swinging eye.
+  'shackle-left',
+  'shackle-right',
+] as const;
 export type BodyId = (typeof bodyIds)[number];
 export type MovingBodyId = Exclude<BodyId, 'frame'>;
 
-export const memberKinds = ['link', 'lateral-rod', 'tie-rod', 'shackle', 'shock', 'spring', 'hinge'] as const;
+export const memberKinds = ['link', 'lateral-rod', 'tie-rod', 'shackle', 'shock', 'spring', 'hinge', 'leaf-half'] as const;
 export type MemberKind = (typeof memberKinds)[number];
 
 /** Member kinds that hold a fixed length between their two points (the solver's constraints). */
@@ -48,6 +58,13 @@ export const MAX_NAME_LENGTH = 200;
 export const MIN_MEMBER_LENGTH_MM = 1;
 
 export const DEFAULT_BIND_THRESHOLD_MM = 1.5;
+/**
+ * N·m, drive torque at the axle for wind-up and link loads when the file gives none: about a
+ * light truck in first gear (350 N·m × 3.3 × 3.5). Common practice, no published source.
+ */
+export const DEFAULT_AXLE_TORQUE_NM = 4000;
+/** N·m, the largest axle torque a file may ask for (a heavy truck's first gear is well below). */
+export const MAX_AXLE_TORQUE_NM = 200_000;
 /** Common practice for smooth running at road speed (references.md, driveline guides); no published source. */
 export const DEFAULT_JOINT_ANGLE_LIMIT_DEG = 3;
 
@@ -78,6 +95,11 @@ export const memberSchema = z.discriminatedUnion('kind', [
   }),
   z.looseObject({ ...memberBase, kind: z.literal('spring'), rate: z.number().positive().max(1e6).optional() }),
   z.looseObject({ ...memberBase, kind: z.literal('hinge'), body: z.enum(['arm-left', 'arm-right']) }),
+  // Leaf-spring layouts (addition; DEVELOPERS notes): one half of a leaf spring as the SAE
+  // three-link model's equivalent link, from its eye `a` (frame hanger or shackle) to its
+  // pivot `b` on the axle, bending about `seat` (the axle point at the spring's seat centre);
+  // `rate` (N/mm) is this half's share of the spring's vertical rate at the seat.
+  z.looseObject({ ...memberBase, kind: z.literal('leaf-half'), seat: id, rate: z.number().positive().max(1e6).optional() }),
 ]);
 
 /** Share of the braking force on the front axle when a file gives none (%; common practice for road vehicles, no published source). */
@@ -108,6 +130,13 @@ export const sweepSettingsSchema = z
     bindThreshold: z.number().gt(0).max(1000).default(DEFAULT_BIND_THRESHOLD_MM),
     /** degrees: a driveline joint operating angle above this raises a flag */
     jointAngleLimit: z.number().gt(0).max(90).default(DEFAULT_JOINT_ANGLE_LIMIT_DEG),
+    /**
+     * N·m, drive torque at the axle (positive driving forward) for wind-up and link loads
+     * (addition; optional so hand-built sketches stay valid; the core reads DEFAULT_AXLE_TORQUE_NM when absent)
+     */
+    axleTorque: z.number().min(-MAX_AXLE_TORQUE_NM).max(MAX_AXLE_TORQUE_NM).optional(),
+    /** N, a link whose axial load exceeds this (either sign) is flagged; no limit when absent (addition) */
+    linkLoadLimit: z.number().gt(0).max(1e8).optional(),
   })
   .prefault({});
 
@@ -122,6 +151,18 @@ const baseSketchSchema = z.looseObject({
   wheels: z.looseObject({ left: id, right: id }),
   driveline: z
     .looseObject({ output: id, outputAxis: id, pinion: id, pinionAxis: id })
+    .optional(),
+  /**
+   * Half-shafts from a frame-mounted drive unit to independent wheels (addition, trailing
+   * arms): `inner` and `innerAxis` are frame points (the inner joint, and a point on the drive
+   * unit's output axis inboard of it); `outer` and `outerAxis` are points of the wheel's
+   * carrier (the outer joint, and a point on the wheel's spin axis outboard of it).
+   */
+  halfShafts: z
+    .looseObject({
+      left: z.looseObject({ inner: id, innerAxis: id, outer: id, outerAxis: id }).optional(),
+      right: z.looseObject({ inner: id, innerAxis: id, outer: id, outerAxis: id }).optional(),
+    })
     .optional(),
   sweep: sweepSettingsSchema,
 });
@@ -156,6 +197,16 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
       if (!s.points.some((p) => p.body === m.body)) report(['members', i, 'body'], `no point is on '${m.body}'`);
     } else if (a.body === b.body) {
       report(['members', i, 'b'], `joins two points of one body ('${m.a}' and '${m.b}' are both on '${a.body}')`);
+    }
+    if (m.kind === 'leaf-half') {
+      if (a.body !== 'frame' && !a.body.startsWith('shackle-')) {
+        report(['members', i, 'a'], `a leaf spring's eye must be on the frame or a shackle ('${a.id}' is on '${a.body}')`);
+      }
+      if (b.body !== 'axle') report(['members', i, 'b'], `a leaf spring's pivot must be on the axle ('${b.id}' is on '${b.body}')`);
+      const seat = points.get(m.seat);
+      if (!seat) report(['members', i, 'seat'], `no point '${m.seat}'`);
+      else if (seat.body !== 'axle') report(['members', i, 'seat'], `a leaf spring's seat must be on the axle ('${seat.id}' is on '${seat.body}')`);
+      else if (distance(a, seat) < MIN_MEMBER_LENGTH_MM) report(['members', i, 'seat'], `must be apart from the eye '${m.a}' (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
     }
     const len = distance(a, b);
     if (len < MIN_MEMBER_LENGTH_MM) {
@@ -197,6 +248,24 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
     if (o && pn && distance(o, pn) < MIN_MEMBER_LENGTH_MM) report(['driveline', 'pinion'], `must be apart from the output point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
   }
 
+  for (const side of ['left', 'right'] as const) {
+    const h = s.halfShafts?.[side];
+    if (!h) continue;
+    const at = (key: 'inner' | 'innerAxis' | 'outer' | 'outerAxis') => {
+      const p = points.get(h[key]);
+      if (!p) report(['halfShafts', side, key], `no point '${h[key]}'`);
+      return p;
+    };
+    const inner = at('inner'), innerAxis = at('innerAxis'), outer = at('outer'), outerAxis = at('outerAxis');
+    if (inner && inner.body !== 'frame') report(['halfShafts', side, 'inner'], `'${inner.id}' must be on the frame (it is on '${inner.body}')`);
+    if (innerAxis && innerAxis.body !== 'frame') report(['halfShafts', side, 'innerAxis'], `'${innerAxis.id}' must be on the frame (it is on '${innerAxis.body}')`);
+    if (outer && outer.body === 'frame') report(['halfShafts', side, 'outer'], `'${outer.id}' must be on a moving body (it is on the frame)`);
+    if (outer && outerAxis && outerAxis.body !== outer.body) report(['halfShafts', side, 'outerAxis'], `must be on the same body as the outer joint ('${outer.body}')`);
+    if (inner && innerAxis && distance(inner, innerAxis) < MIN_MEMBER_LENGTH_MM) report(['halfShafts', side, 'innerAxis'], `must be apart from the inner joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+    if (outer && outerAxis && distance(outer, outerAxis) < MIN_MEMBER_LENGTH_MM) report(['halfShafts', side, 'outerAxis'], `must be apart from the outer joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+    if (inner && outer && distance(inner, outer) < MIN_MEMBER_LENGTH_MM) report(['halfShafts', side, 'outer'], `must be apart from the inner joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+  }
+
   const sw = s.sweep;
   const rows = gridCount(sw.droop, sw.bump, sw.step) + gridCount(-sw.roll, sw.roll, sw.rollStep);
   if (rows > MAX_SWEEP_ROWS) {
@@ -218,6 +287,7 @@ export type SketchMember = Sketch['members'][number];
 export type SweepSettings = Sketch['sweep'];
 export type Vehicle = Sketch['vehicle'];
 export type Driveline = NonNullable<Sketch['driveline']>;
+export type HalfShaft = NonNullable<NonNullable<Sketch['halfShafts']>['left']>;
 
 /** "points[3].x" from ['points', 3, 'x']; the document itself is "(document)". */
 export function formatPath(path: readonly PropertyKey[]): string {
