@@ -14,6 +14,8 @@ import { BodyRotations, pointPlace, pointVelocity } from './residuals';
 import type { SolvedRow } from './march';
 import type { BodyPoses, DrivelineReading, HeaveRow, MemberReading, Pose, RollRow } from './types';
 import { vec, type Vec3 } from './vec';
+import { wishbonePlanBuild, type WishbonePlan } from './wishbone';
+import { wishboneHeaveFields, wishboneRollFields } from './wishboneRows';
 
 /** Magnitudes below this are round-off of a zero (mm, deg or %) and are written as 0. */
 export const OUTPUT_ZERO_TOLERANCE = 1e-10;
@@ -44,6 +46,8 @@ export interface RowPlan {
   primarySlot: number;
   rot: BodyRotations;
   scratch: { va: Float64Array; vb: Float64Array; tmp: Float64Array };
+  /** knuckles on double wishbones (their rows get the wishboneRows.ts fields); null otherwise */
+  wishbone: WishbonePlan | null;
 }
 
 export function rowPlanBuild(model: LinkageModel): RowPlan {
@@ -86,6 +90,7 @@ export function rowPlanBuild(model: LinkageModel): RowPlan {
     primarySlot: model.axle ? model.axle.slot : model.wheelLeft.slot,
     rot: new BodyRotations(model.bodies.length),
     scratch: { va: new Float64Array(3), vb: new Float64Array(3), tmp: new Float64Array(3) },
+    wishbone: wishbonePlanBuild(model),
   };
 }
 
@@ -196,6 +201,7 @@ export function heaveRowBuild(plan: RowPlan, solved: SolvedRow): HeaveRow {
   };
   const dl = drivelineAt(plan, at);
   if (dl) row.driveline = dl;
+  if (plan.wishbone) Object.assign(row, wishboneHeaveFields(plan.wishbone, (p) => at.at(p), solved.state, solved.travel));
   return row;
 }
 
@@ -217,5 +223,6 @@ export function rollRowBuild(plan: RowPlan, solved: SolvedRow): RollRow {
   };
   const dl = drivelineAt(plan, at);
   if (dl) row.driveline = dl;
+  if (plan.wishbone) Object.assign(row, wishboneRollFields(plan.wishbone, (p) => at.at(p), solved.state, solved.roll));
   return row;
 }

@@ -13,6 +13,7 @@ import { pointVelocity, BodyRotations } from './residuals';
 import { heaveRowBuild, rollRowBuild, rowPlanBuild } from './rows';
 import { PoseSolver } from './solve';
 import { sweepEvents } from './events';
+import { wishboneNotes } from './wishboneNotes';
 import type { HeaveRow, RollRow, SweepEvent, SweepResult } from './types';
 
 /** A null-space motion that moves no point of its body faster than this (mm per unit) is idle (a shackle spinning on its own axis). */
@@ -108,6 +109,7 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
   if (up.lockedAt !== null) events.push(lockUpEvent('heave', up.lockedAt, up.rows.at(-1)?.travel ?? 0));
   if (down.lockedAt !== null) events.push(lockUpEvent('heave', down.lockedAt, down.rows.at(-1)?.travel ?? 0));
   events.push(...sweepEvents(sketch, 'heave', heave));
+  warnings.push(...wishboneNotes(model, plan.wishbone, heave));
 
   let roll: RollRow[] = [];
   let rollMin = 0;

@@ -1,4 +1,5 @@
 import type { Layout } from '../../schema/sketch';
+import { doubleWishbone } from './doubleWishbone';
 import { fourLinkLateralRod } from './fourLinkLateralRod';
 import { threeLinkLateralRod } from './threeLinkLateralRod';
 import { triangulatedFourLink } from './triangulatedFourLink';
@@ -9,6 +10,7 @@ export const starters: Partial<Record<Layout, StarterSpec>> = {
   'four-link-lateral-rod': fourLinkLateralRod,
   'triangulated-four-link': triangulatedFourLink,
   'three-link-lateral-rod': threeLinkLateralRod,
+  'double-wishbone': doubleWishbone,
 };
 
 export type { StarterParam, StarterSpec } from './types';

@@ -121,8 +121,11 @@ describe('runSweep options and input', () => {
   });
 });
 
+/** The solid-axle starters share this block's numbers; other layouts have their own tests. */
+const SOLID_AXLE_LAYOUTS: readonly string[] = ['four-link-lateral-rod', 'triangulated-four-link', 'three-link-lateral-rod'];
+
 describe('starters', () => {
-  for (const spec of Object.values(starters)) {
+  for (const spec of Object.values(starters).filter((x) => SOLID_AXLE_LAYOUTS.includes(x!.layout))) {
     const s = spec!;
     describe(s.layout, () => {
       const result = runSweep(s.build());

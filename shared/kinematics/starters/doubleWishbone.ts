@@ -1,0 +1,126 @@
+/**
+ * Double-wishbone front starter: on each side a knuckle on an upper and a lower wishbone
+ * (two links each, from two frame pivots to one ball joint), a tie rod from the rack end to the
+ * steering arm, and a coil-over (a shock with a spring on the same two eyes) from the frame to
+ * the knuckle. Geometry is invented and plausible for a mid-size pickup front: a short upper
+ * and long lower arm (camber gain in bump), a low roll centre, a little caster and anti-dive,
+ * and the tie rod placed on the line the wishbones ask for (next to no bump steer).
+ */
+import { degToRad } from '../../units';
+import { parseSketch, type SketchInput } from '../../schema/sketch';
+import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from './common';
+import type { StarterParam, StarterSpec } from './types';
+
+/** Fore-aft spacing of each wishbone's two inner pivots (mm). */
+const LOWER_PIVOT_SPACING_MM = 360;
+const UPPER_PIVOT_SPACING_MM = 260;
+/** The steering arm's outer end, inboard of the wheel centre (mm). */
+const TIE_ROD_OUTER_INSET_MM = 125;
+/** Coil-over eyes: the top on the frame, the bottom on the knuckle, inboard of the wheel centre (mm) and behind it. */
+const COIL_TOP_INSET_MM = 230;
+const COIL_TOP_RISE_MM = 470;
+const COIL_BOTTOM_INSET_MM = 95;
+const COIL_BOTTOM_ABOVE_LOWER_JOINT_MM = 70;
+const COIL_X_MM = -45;
+/** Shock stroke either side of the default sweep's range (mm). */
+const SHOCK_MARGIN_MM = 15;
+const SWEEP = { droop: -120, bump: 120, step: 5, roll: 6, rollStep: 1 };
+
+const params: StarterParam[] = [
+  { key: 'track', label: 'Track', unit: 'mm', default: 1620, min: 1200, max: 2200 },
+  { key: 'tireRadius', label: 'Tyre radius', unit: 'mm', default: 385, min: 250, max: 600 },
+  { key: 'wheelbase', label: 'Wheelbase', unit: 'mm', default: 3100, min: 2000, max: 5000 },
+  { key: 'cgHeight', label: 'Centre of gravity height', unit: 'mm', default: 680, min: 300, max: 1500 },
+  { key: 'frontBrakeShare', label: 'Braking on the front axle', unit: '%', default: 65, min: 40, max: 90 },
+  { key: 'lowerArmLength', label: 'Lower wishbone length (front view)', unit: 'mm', default: 400, min: 250, max: 600 },
+  { key: 'upperArmLength', label: 'Upper wishbone length (front view)', unit: 'mm', default: 270, min: 150, max: 500 },
+  { key: 'lowerPivotHeight', label: 'Lower wishbone inner pivot height', unit: 'mm', default: 255, min: 100, max: 450 },
+  { key: 'upperPivotHeight', label: 'Upper wishbone inner pivot height', unit: 'mm', default: 600, min: 400, max: 900 },
+  { key: 'lowerJointHeight', label: 'Lower ball joint height', unit: 'mm', default: 225, min: 80, max: 400 },
+  { key: 'upperJointHeight', label: 'Upper ball joint height', unit: 'mm', default: 615, min: 420, max: 900 },
+  { key: 'lowerJointInset', label: 'Lower ball joint inboard of the wheel centre', unit: 'mm', default: 55, min: 0, max: 200 },
+  { key: 'upperJointInset', label: 'Upper ball joint inboard of the wheel centre', unit: 'mm', default: 115, min: 0, max: 250 },
+  { key: 'caster', label: 'Caster (upper ball joint rearward)', unit: 'deg', default: 4, min: -2, max: 10 },
+  { key: 'upperAxisAngle', label: 'Upper pivot axis, side view (front end up)', unit: 'deg', default: 5, min: -10, max: 15 },
+  { key: 'lowerAxisAngle', label: 'Lower pivot axis, side view (front end up)', unit: 'deg', default: 0, min: -10, max: 15 },
+  { key: 'tieRodX', label: 'Tie rod fore-aft (ahead of the axle line +)', unit: 'mm', default: -140, min: -250, max: 250 },
+  { key: 'tieRodOuterHeight', label: 'Tie rod outer end height', unit: 'mm', default: 300, min: 120, max: 600 },
+  { key: 'tieRodInnerHeight', label: 'Tie rod inner end (rack) height', unit: 'mm', default: 315.8, min: 120, max: 650 },
+  { key: 'rackHalfLength', label: 'Rack end from the centreline', unit: 'mm', default: 367.8, min: 150, max: 700 },
+  { key: 'springRate', label: 'Coil-over spring rate', unit: 'N/mm', default: 60, min: 5, max: 300 },
+];
+
+/** A left point and its mirror on the right: ids `<id>.l` / `<id>.r`. */
+function mirrored(id: string, body: 'frame' | 'knuckle', x: number, y: number, z: number): PointIn[] {
+  return [
+    { id: `${id}.l`, body: body === 'frame' ? 'frame' : 'knuckle-left', x: r1(x), y: r1(y), z: r1(z) },
+    { id: `${id}.r`, body: body === 'frame' ? 'frame' : 'knuckle-right', x: r1(x), y: r1(-y), z: r1(z) },
+  ];
+}
+
+/** A wishbone's inner pivots: spaced fore-aft about the axle line, the axis tilted `angleDeg` front end up. */
+function innerPivots(id: string, y: number, z: number, spacing: number, angleDeg: number): PointIn[] {
+  const half = spacing / 2;
+  const rise = half * Math.tan(degToRad(angleDeg));
+  return [...mirrored(`${id}.f`, 'frame', half, y, z + rise), ...mirrored(`${id}.r`, 'frame', -half, y, z - rise)];
+}
+
+function build(p: Params): SketchInput {
+  const wcY = p.track / 2;
+  const wcZ = p.tireRadius;
+  const lbjY = wcY - p.lowerJointInset;
+  const ubjY = wcY - p.upperJointInset;
+  const ubjX = -(p.upperJointHeight - p.lowerJointHeight) * Math.tan(degToRad(p.caster));
+  const coilBottomZ = p.lowerJointHeight + COIL_BOTTOM_ABOVE_LOWER_JOINT_MM;
+  const coilTopZ = coilBottomZ + COIL_TOP_RISE_MM;
+  const points: PointIn[] = [
+    ...mirrored('WC', 'knuckle', 0, wcY, wcZ),
+    ...innerPivots('LW', lbjY - p.lowerArmLength, p.lowerPivotHeight, LOWER_PIVOT_SPACING_MM, p.lowerAxisAngle),
+    ...mirrored('LW.bj', 'knuckle', 0, lbjY, p.lowerJointHeight),
+    ...innerPivots('UW', ubjY - p.upperArmLength, p.upperPivotHeight, UPPER_PIVOT_SPACING_MM, p.upperAxisAngle),
+    ...mirrored('UW.bj', 'knuckle', ubjX, ubjY, p.upperJointHeight),
+    ...mirrored('TR.i', 'frame', p.tieRodX, p.rackHalfLength, p.tieRodInnerHeight),
+    ...mirrored('TR.o', 'knuckle', p.tieRodX, wcY - TIE_ROD_OUTER_INSET_MM, p.tieRodOuterHeight),
+    ...mirrored('CO.t', 'frame', COIL_X_MM, wcY - COIL_TOP_INSET_MM, coilTopZ),
+    ...mirrored('CO.b', 'knuckle', COIL_X_MM, wcY - COIL_BOTTOM_INSET_MM, coilBottomZ),
+  ];
+  const coilRide = Math.hypot(COIL_TOP_INSET_MM - COIL_BOTTOM_INSET_MM, COIL_TOP_RISE_MM);
+  const shMin = Math.max(1, Math.round((coilRide + SWEEP.droop * 1.1 - SHOCK_MARGIN_MM) / 5) * 5);
+  const shMax = Math.round((coilRide + SWEEP.bump * 1.1 + SHOCK_MARGIN_MM) / 5) * 5;
+  const members: MemberIn[] = [];
+  for (const s of ['l', 'r']) {
+    members.push(
+      { id: `LWF${s}`, kind: 'link', group: 'lower', a: `LW.f.${s}`, b: `LW.bj.${s}` },
+      { id: `LWR${s}`, kind: 'link', group: 'lower', a: `LW.r.${s}`, b: `LW.bj.${s}` },
+      { id: `UWF${s}`, kind: 'link', group: 'upper', a: `UW.f.${s}`, b: `UW.bj.${s}` },
+      { id: `UWR${s}`, kind: 'link', group: 'upper', a: `UW.r.${s}`, b: `UW.bj.${s}` },
+      { id: `TR${s}`, kind: 'tie-rod', a: `TR.i.${s}`, b: `TR.o.${s}` },
+      { id: `SH${s}`, kind: 'shock', a: `CO.t.${s}`, b: `CO.b.${s}`, minLength: shMin, maxLength: shMax },
+      { id: `SP${s}`, kind: 'spring', a: `CO.t.${s}`, b: `CO.b.${s}`, rate: p.springRate },
+    );
+  }
+  return {
+    format: 'arcwright.sketch',
+    version: 1,
+    name: 'New double-wishbone front',
+    layout: 'double-wishbone',
+    vehicle: { wheelbase: p.wheelbase, cgHeight: p.cgHeight, track: p.track, tireRadius: p.tireRadius, frontBrakeShare: p.frontBrakeShare },
+    points,
+    members,
+    wheels: { left: 'WC.l', right: 'WC.r' },
+    sweep: { ...SWEEP },
+  };
+}
+
+/** Independent front: upper and lower wishbones, rack-and-pinion tie rods, coil-overs on the knuckles. */
+export const doubleWishbone: StarterSpec = {
+  layout: 'double-wishbone',
+  label: 'Double wishbone front',
+  description:
+    'An upper and a lower wishbone on each side hold the knuckle; a tie rod from the rack steers it and a coil-over from the frame carries it. ' +
+    'Read camber gain, bump steer, roll centre, caster change and anti-dive through the travel. The coil-over is mounted on the knuckle.',
+  params,
+  build(given) {
+    return parseSketch(build(paramsResolve(params, given)));
+  },
+};
