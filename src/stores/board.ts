@@ -88,8 +88,17 @@ export const useBoardStore = defineStore('board', () => {
   const canEdit = computed(() => meta.value?.canEdit === true && sharedToken.value === null);
   const readOnly = computed(() => !canEdit.value || viewing.value !== null);
   const sketchId = computed(() => meta.value?.id ?? null);
-  /** Left/right partners of the shown document's pivots. */
-  const pairs = computed(() => findPairs(sketch.value?.points ?? []));
+  /**
+   * Left/right partners of the shown document's pivots. The same Map while the pairing is the
+   * same, so that a drag (which rarely changes it) does not refresh everything that reads it.
+   */
+  let lastPairs: { key: string; map: Map<string, string> } = { key: '', map: new Map() };
+  const pairs = computed(() => {
+    const map = findPairs(sketch.value?.points ?? []);
+    const key = [...map].map(([a, b]) => `${a}>${b}`).join('|');
+    if (key !== lastPairs.key) lastPairs = { key, map };
+    return lastPairs.map;
+  });
   /** Validation of the working document (problems block saving, never editing). */
   const problems = computed<string[]>(() => {
     if (!document.value) return [];
