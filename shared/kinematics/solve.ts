@@ -7,12 +7,15 @@
  * linkage leaves a coordinate unlocated (rank-deficient J) and vanish from the answer at a
  * minimum (there Jᵀr = 0, so δ = 0 whatever the damping); over-constrained linkages
  * (more residuals than unknowns) need nothing special: QR gives their least-squares step.
+ * Bodies that no constraint joins (the two knuckles of a double wishbone) are solved block by
+ * block, each side on its own (solveBlocks.ts).
  */
-import { Matrix, QrDecomposition, SingularValueDecomposition } from 'ml-matrix';
+import { Matrix, SingularValueDecomposition } from 'ml-matrix';
 import type { Drive } from './drive';
 import type { LinkageModel } from './model';
 import { POSE_ROLL, POSE_SIZE } from './pose';
 import { residualsEvaluate, residualWorkCreate, type ResidualWork } from './residuals';
+import { BlockedLeastSquares, solveBlocksBuild } from './solveBlocks';
 
 /** A step of the Newton loop this far from converged means it is not converging. */
 export const SOLVE_MAX_ITERATIONS = 40;
@@ -60,21 +63,6 @@ export interface SolveOutcome {
 
 const isRotation = (stateIndex: number) => stateIndex % POSE_SIZE >= POSE_ROLL;
 
-/**
- * A Matrix whose clone copies row arrays directly. ml-matrix's decompositions clone their
- * input (QR its matrix, solve its right-hand side) through a generator over every entry,
- * which dominates the time of the small systems solved here; the algebra stays ml-matrix's.
- */
-class WorkMatrix extends Matrix {
-  override clone(): this {
-    const out = new WorkMatrix(this.rows, this.columns) as this;
-    const from = (this as unknown as { data: Float64Array[] }).data;
-    const to = (out as unknown as { data: Float64Array[] }).data;
-    for (let i = 0; i < this.rows; i++) to[i].set(from[i]);
-    return out;
-  }
-}
-
 /** One solver per linkage and drive; all buffers are reused between rows. */
 export class PoseSolver {
   readonly m: number;
@@ -88,18 +76,14 @@ export class PoseSolver {
   private JTrial: Float64Array;
   private readonly trial: Float64Array;
   private readonly step: Float64Array;
-  private readonly Aaug: WorkMatrix;
-  private readonly baug: WorkMatrix;
-  private readonly Aplain: WorkMatrix;
-  private readonly bplain: WorkMatrix;
-  private rows = 0;
+  /** the step's linear least squares, one block per group of bodies the constraints join (solveBlocks.ts) */
+  private readonly ls: BlockedLeastSquares;
   /**
    * Whether the Tikhonov rows are needed even without damping: true until the rank at ride
    * shows every free coordinate is located (then plain QR of J is both right and cheaper).
    */
   regularize = true;
-  private readonly colNorm: Float64Array;
-  private qr: QrDecomposition | null = null;
+  private factored = false;
   private qrIsUndamped = false;
 
   constructor(model: LinkageModel, drive: Drive) {
@@ -114,11 +98,7 @@ export class PoseSolver {
     this.JTrial = new Float64Array(this.m * model.stateSize);
     this.trial = new Float64Array(model.stateSize);
     this.step = new Float64Array(this.n);
-    this.Aaug = new WorkMatrix(this.m + this.n, this.n);
-    this.baug = new WorkMatrix(this.m + this.n, 1);
-    this.Aplain = new WorkMatrix(Math.max(this.m, 1), this.n);
-    this.bplain = new WorkMatrix(Math.max(this.m, 1), 1);
-    this.colNorm = new Float64Array(this.n);
+    this.ls = new BlockedLeastSquares(solveBlocksBuild(model, drive.free));
   }
 
   /** Residuals (mm) at the last solved state. */
@@ -138,51 +118,17 @@ export class PoseSolver {
     return c;
   }
 
-  /** Fills A with [J_free; damping rows] (or J_free alone) and factors it. False when J is all zero or singular. */
+  /** Fills [J_free; damping rows] (or J_free alone), block by block, and factors it. False when J is all zero or singular. */
   private factor(damping: number): boolean {
-    const { m, n, free, J, colNorm } = this;
-    const augmented = damping > 0 || this.regularize || m < n;
-    const A = augmented ? this.Aaug : this.Aplain;
-    this.rows = augmented ? m + n : m;
-    const cols = this.model.stateSize;
-    let maxNorm = 0;
-    for (let j = 0; j < n; j++) {
-      const c = free[j];
-      let s = 0;
-      for (let i = 0; i < m; i++) {
-        const v = J[i * cols + c];
-        A.set(i, j, v);
-        s += v * v;
-      }
-      colNorm[j] = s;
-      if (s > maxNorm) maxNorm = s;
-    }
-    if (!(maxNorm > 0)) return false;
-    if (augmented) {
-      const mu = this.regularize || m < n ? REGULARIZATION_RELATIVE * maxNorm : 0;
-      for (let j = 0; j < n; j++) {
-        for (let k = 0; k < n; k++) A.set(m + j, k, 0);
-        A.set(m + j, j, Math.sqrt(damping * colNorm[j] + mu));
-      }
-    }
-    this.qr = new QrDecomposition(A);
+    this.factored = this.ls.factor(this.J, this.model.stateSize, this.free, damping, this.regularize, REGULARIZATION_RELATIVE);
     this.qrIsUndamped = damping === 0;
-    if (!this.qr.isFullRank()) {
-      // Only an exactly singular J without damping rows gets here (a linkage at a toggle).
-      this.qr = null;
-      return false;
-    }
-    return true;
+    // Only an exactly singular J without damping rows fails here (a linkage at a toggle).
+    return this.factored;
   }
 
   /** Solves the factored system for the right-hand side [rhs; 0]; writes the n unknowns. */
   private back(rhs: Float64Array, sign: number, out: Float64Array): void {
-    const { m, n } = this;
-    const b = this.rows > m ? this.baug : this.bplain;
-    for (let i = 0; i < m; i++) b.set(i, 0, sign * rhs[i]);
-    for (let i = m; i < this.rows; i++) b.set(i, 0, 0);
-    const x = this.qr!.solve(b);
-    for (let j = 0; j < n; j++) out[j] = x.get(j, 0);
+    this.ls.solve(rhs, sign, out);
   }
 
   /**
@@ -193,14 +139,14 @@ export class PoseSolver {
     const { model, free, n, work, step } = this;
     residualsEvaluate(model, state, work, this.r, this.J);
     if (n === 0 || this.m === 0) {
-      this.qr = null;
+      this.factored = false;
       return { converged: true, iterations: 0, maxResidual: this.maxAbs(this.r) };
     }
     let cost = this.cost(this.r);
     let damping = 0;
     let chord = false;
     for (let it = 1; it <= SOLVE_MAX_ITERATIONS; it++) {
-      if (chord && damping === 0 && this.qr !== null && this.qrIsUndamped) {
+      if (chord && damping === 0 && this.factored && this.qrIsUndamped) {
         // Reuse the last factorisation (see CHORD_STEP_MM).
       } else if (!this.factor(damping)) {
         if (damping === 0 && !this.regularize) {
@@ -270,7 +216,7 @@ export class PoseSolver {
       for (let c = 0; c < cols; c++) if (rate[c] !== 0) s += this.J[i * cols + c] * rate[c];
       rhs[i] = s;
     }
-    if (!this.qrIsUndamped || this.qr === null) {
+    if (!this.qrIsUndamped || !this.factored) {
       if (!this.factor(0)) return;
     }
     this.back(rhs, -1, this.step);
