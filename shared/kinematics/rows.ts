@@ -14,6 +14,8 @@ import { BodyRotations, pointPlace, pointVelocity } from './residuals';
 import type { SolvedRow } from './march';
 import type { BodyPoses, DrivelineReading, HeaveRow, MemberReading, Pose, RollRow } from './types';
 import { vec, type Vec3 } from './vec';
+import { halfShaftPlanBuild, halfShaftReadings, type HalfShaftPlan } from './halfShaft';
+import { trailingArmHeaveFields, trailingArmPlanBuild, trailingArmRollFields, type TrailingArmPlan } from './trailingArm';
 import { wishbonePlanBuild, type WishbonePlan } from './wishbone';
 import { wishboneHeaveFields, wishboneRollFields } from './wishboneRows';
 
@@ -46,6 +48,10 @@ export interface RowPlan {
   primarySlot: number;
   rot: BodyRotations;
   scratch: { va: Float64Array; vb: Float64Array; tmp: Float64Array };
+  /** wheels on hinged arms (their rows get the trailingArm.ts fields); null otherwise */
+  trailingArm: TrailingArmPlan | null;
+  /** the sketch's half-shafts, if any */
+  halfShafts: HalfShaftPlan[];
   /** knuckles on double wishbones (their rows get the wishboneRows.ts fields); null otherwise */
   wishbone: WishbonePlan | null;
 }
@@ -90,6 +96,8 @@ export function rowPlanBuild(model: LinkageModel): RowPlan {
     primarySlot: model.axle ? model.axle.slot : model.wheelLeft.slot,
     rot: new BodyRotations(model.bodies.length),
     scratch: { va: new Float64Array(3), vb: new Float64Array(3), tmp: new Float64Array(3) },
+    trailingArm: trailingArmPlanBuild(model),
+    halfShafts: halfShaftPlanBuild(sketch, points),
     wishbone: wishbonePlanBuild(model),
   };
 }
@@ -201,6 +209,9 @@ export function heaveRowBuild(plan: RowPlan, solved: SolvedRow): HeaveRow {
   };
   const dl = drivelineAt(plan, at);
   if (dl) row.driveline = dl;
+  if (plan.trailingArm) Object.assign(row, trailingArmHeaveFields(plan.trailingArm, (p) => at.at(p), solved.state, solved.travel, clean));
+  const hs = halfShaftReadings(plan.halfShafts, (p) => at.at(p), clean);
+  if (hs) row.halfShafts = hs;
   if (plan.wishbone) Object.assign(row, wishboneHeaveFields(plan.wishbone, (p) => at.at(p), solved.state, solved.travel));
   return row;
 }
@@ -223,6 +234,9 @@ export function rollRowBuild(plan: RowPlan, solved: SolvedRow): RollRow {
   };
   const dl = drivelineAt(plan, at);
   if (dl) row.driveline = dl;
+  if (plan.trailingArm) Object.assign(row, trailingArmRollFields(plan.trailingArm, (p) => at.at(p), solved.state, solved.roll, clean));
+  const hs = halfShaftReadings(plan.halfShafts, (p) => at.at(p), clean);
+  if (hs) row.halfShafts = hs;
   if (plan.wishbone) Object.assign(row, wishboneRollFields(plan.wishbone, (p) => at.at(p), solved.state, solved.roll));
   return row;
 }

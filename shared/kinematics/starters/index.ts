@@ -2,6 +2,7 @@ import type { Layout } from '../../schema/sketch';
 import { doubleWishbone } from './doubleWishbone';
 import { fourLinkLateralRod } from './fourLinkLateralRod';
 import { threeLinkLateralRod } from './threeLinkLateralRod';
+import { trailingArm } from './trailingArm';
 import { triangulatedFourLink } from './triangulatedFourLink';
 import type { StarterSpec } from './types';
 
@@ -11,6 +12,7 @@ export const starters: Partial<Record<Layout, StarterSpec>> = {
   'triangulated-four-link': triangulatedFourLink,
   'three-link-lateral-rod': threeLinkLateralRod,
   'double-wishbone': doubleWishbone,
+  'trailing-arm': trailingArm,
 };
 
 export type { StarterParam, StarterSpec } from './types';
