@@ -110,6 +110,46 @@ test('rear-view drags mirror the partner unless left and right are unlinked; sna
   await snap(page, 'board-rear-unlinked');
 });
 
+test('wheel zoom and fit; arrow keys nudge the selected pivot (Shift ten times); leaving saves first', async ({ page }) => {
+  await page.goto('/sketches/new?starter=four-link-lateral-rod');
+  await expect(page).toHaveURL(/\/sketches\/\d+$/);
+  await boardReady(page);
+  const scale = () => page.evaluate(() => window.arcwrightBoard!.side!.transform().scale);
+  const fitted = await scale();
+  const box = (await $(page, 'canvas-side').boundingBox())!;
+  await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+  await page.mouse.wheel(0, -300);
+  await expect.poll(scale).toBeGreaterThan(fitted * 1.3);
+  await $(page, 'fit-side').click();
+  await expect.poll(scale).toBeCloseTo(fitted, 6);
+
+  // Click a handle to select it, then nudge: up is +z; right in the side view is rearward (−x).
+  const at = await pivotAt(page, 'side', 'LL.al');
+  await page.mouse.click(at.x, at.y);
+  const z0 = Number(await cell(page, 'LL.al', 'z').inputValue());
+  const x0 = Number(await cell(page, 'LL.al', 'x').inputValue());
+  await page.keyboard.press('ArrowUp');
+  await page.keyboard.press('Shift+ArrowRight');
+  await settled(page);
+  // Snap is on at 5 mm: a nudge is one step, with Shift ten.
+  await expect(cell(page, 'LL.al', 'z')).toHaveValue(String(z0 + 5));
+  await expect(cell(page, 'LL.al', 'x')).toHaveValue(String(x0 - 50));
+  await expect(cell(page, 'LL.ar', 'z')).toHaveValue(String(z0 + 5));
+  // Nudges in a row undo as one step.
+  await page.keyboard.press('Control+z');
+  await expect(cell(page, 'LL.al', 'z')).toHaveValue(String(z0));
+  await expect(cell(page, 'LL.al', 'x')).toHaveValue(String(x0));
+
+  // An edit and straight away back to the library: it is saved on the way out.
+  const url = page.url();
+  await page.keyboard.press('ArrowUp');
+  await page.getByLabel('Back to the library').click();
+  await expect(page).toHaveURL(/\/library/);
+  await page.goto(url);
+  await boardReady(page);
+  await expect(cell(page, 'LL.al', 'z')).toHaveValue(String(z0 + 5));
+});
+
 test('a save refused as stale shows the conflict, keeps the edit, and can save it as a copy', async ({ page }) => {
   await page.goto('/sketches/new?starter=four-link-lateral-rod');
   await expect(page).toHaveURL(/\/sketches\/\d+$/);
