@@ -86,6 +86,19 @@ describe('pivot table', () => {
     expect(wrapper.find('[data-test="pivot-row-UpperAxle.l"]').exists()).toBe(true);
   });
 
+  it('vehicle sizes are edited in the user unit and refuse zero', async () => {
+    const { wrapper, board } = await mountOnBoard(BoardPivotTable);
+    mounted = wrapper;
+    await wrapper.get('[data-test="vehicle-toggle"]').trigger('click');
+    await nextFrame();
+    const before = board.document;
+    await type(wrapper.get('[data-test="vehicle-tireRadius"]'), '0');
+    expect(wrapper.get('[data-test="vehicle-tireRadius-error"]').text()).toMatch(/more than 0/);
+    expect(board.document).toBe(before);
+    await type(wrapper.get('[data-test="vehicle-tireRadius"]'), '420');
+    expect(board.document!.vehicle.tireRadius).toBe(420);
+  });
+
   it('is read-only for a sketch the user cannot edit', async () => {
     const { wrapper } = await mountOnBoard(BoardPivotTable, undefined, { canEdit: false });
     mounted = wrapper;
