@@ -36,6 +36,30 @@ function columns(result: SweepResult): Column[] {
     if (m.motionRatio !== undefined) cols.push({ name: `members.${id}.motionRatio`, get: (r) => r.members[id]?.motionRatio });
     if (m.wheelRate !== undefined) cols.push({ name: `members.${id}.wheelRate`, get: (r) => r.members[id]?.wheelRate });
   }
+  // Independent wheels (addition): present when the ride row carries them.
+  const optional: Column[] = [
+    { name: 'camberChange', get: (r) => r.camberChange },
+    { name: 'toeChange', get: (r) => r.toeChange },
+    { name: 'trackChange', get: (r) => r.trackChange },
+    { name: 'casterChange', get: (r) => r.casterChange },
+    { name: 'frontViewInstantCenter.y', get: (r) => r.frontViewInstantCenter?.y ?? null },
+    { name: 'frontViewInstantCenter.z', get: (r) => r.frontViewInstantCenter?.z ?? null },
+    { name: 'antiDive', get: (r) => r.antiDive },
+    { name: 'kingpin.inclination', get: (r) => r.kingpin?.inclination ?? null },
+    { name: 'kingpin.caster', get: (r) => r.kingpin?.caster ?? null },
+    { name: 'kingpin.scrubRadius', get: (r) => r.kingpin?.scrubRadius ?? null },
+    { name: 'kingpin.trail', get: (r) => r.kingpin?.trail ?? null },
+  ];
+  const present: Record<string, boolean> = {
+    camberChange: first.camberChange !== undefined,
+    toeChange: first.toeChange !== undefined,
+    trackChange: first.trackChange !== undefined,
+    casterChange: first.casterChange !== undefined,
+    frontViewInstantCenter: first.frontViewInstantCenter !== undefined,
+    antiDive: first.antiDive !== undefined,
+    kingpin: first.kingpin !== undefined,
+  };
+  cols.push(...optional.filter((c) => present[c.name.split('.')[0]]));
   if (first.driveline) {
     for (const k of ['length', 'plunge', 'outputAngle', 'pinionAngle'] as const) {
       cols.push({ name: `driveline.${k}`, get: (r) => r.driveline?.[k] });
