@@ -39,3 +39,9 @@ export function markCautionSeen(user: string): void {
     // storage blocked: dismissed for this visit only
   }
 }
+
+/**
+ * Whether the full caution is open. Shared, because the board menu's item asks for it while the
+ * dialog itself belongs to the board's own caution (a dialog inside a menu would close with it).
+ */
+export const cautionDialogOpen = ref(false);

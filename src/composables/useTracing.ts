@@ -21,7 +21,7 @@ import type { Mm } from '../../shared/units';
 
 /** What the uploads route answers. */
 interface UploadAnswer {
-  id: number;
+  id: string | number;
   url: string;
   mime: string;
   size: number;
@@ -45,7 +45,10 @@ export const useTracingStore = defineStore('tracing', () => {
   /** The points picked so far (plane mm at the photo's present scale). */
   const picks = ref<PlanePoint[]>([]);
 
-  const image = (view: ViewKind) => computed(() => readTracing(board.sketch, view));
+  // Parsed again only when the document's tracing field itself changes (documents are immutable,
+  // so a pivot drag keeps it): the photo layer is not redrawn on every pointer move.
+  const field = computed(() => (board.sketch as { tracing?: unknown } | null)?.tracing);
+  const image = (view: ViewKind) => computed(() => readTracing({ tracing: field.value }, view));
   const side = image('side');
   const rear = image('rear');
 

@@ -12,8 +12,8 @@ import type { Mm } from '../../shared/units';
 import { planeToScreen, screenToPlane, type PlanePoint, type ViewKind, type ViewTransform } from './canvasTransform';
 
 export interface TracingImage {
-  /** upload id (POST /api/sketches/:id/uploads) */
-  upload: number;
+  /** upload id as POST /api/sketches/:id/uploads answers it (a UUID string on this server) */
+  upload: string | number;
   /** where the bytes are served, '/api/uploads/:id' */
   url: string;
   /** image size in its own pixels */
@@ -44,7 +44,7 @@ export const MAX_MM_PER_PX = 1000;
 
 const coordinate = z.number().finite().min(-100_000).max(100_000);
 export const tracingImageSchema = z.object({
-  upload: z.number().int().positive(),
+  upload: z.union([z.string().min(1).max(100), z.number().int().positive()]),
   url: z.string().min(1).max(500),
   width: z.number().positive(),
   height: z.number().positive(),

@@ -119,10 +119,10 @@ test('targets shade the plots and missed ones are flagged', async ({ page }) => 
   await openBoard(page, id);
   await $(page, 'tab-targets').click();
   const plotBefore = await $(page, 'plot-antisquat').screenshot();
-  const min = page.locator('[data-test="target-antiSquat-min"] input');
+  const min = page.locator('[data-test="target-antiSquat-min"]');
   await min.fill('70');
   await min.press('Enter');
-  const max = page.locator('[data-test="target-antiSquat-max"] input');
+  const max = page.locator('[data-test="target-antiSquat-max"]');
   await max.fill('90');
   await max.press('Enter');
   await expect(page.locator('[data-test="target-antiSquat-status"]')).toHaveAttribute('data-status', 'missed');
@@ -154,7 +154,7 @@ test('a side photo uploads behind the side view and takes its scale from two cli
   const pb = await clientOf(page, b);
   await page.mouse.click(pb.x, pb.y);
   // They are really 1500 mm apart: every photo pixel covers 1.5 times as much.
-  const distance = page.locator('[data-test="tracing-distance"] input');
+  const distance = page.locator('[data-test="tracing-distance"]');
   await distance.fill('1500');
   await $(page, 'tracing-apply').click();
   await expect($(page, 'tracing-picking')).toHaveCount(0);

@@ -17,8 +17,8 @@ import { screenToPlane, type ViewTransform } from '../../../src/composables/canv
 const TOL = 1e-9;
 
 const photo: TracingImage = {
-  upload: 3,
-  url: '/api/uploads/3',
+  upload: '0bf04269-3540-4156-8ecc-6a1731167720',
+  url: '/api/uploads/0bf04269-3540-4156-8ecc-6a1731167720',
   width: 2000,
   height: 1000,
   centre: { h: 1600, v: 700 },
