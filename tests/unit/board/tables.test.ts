@@ -76,6 +76,10 @@ describe('pivot table', () => {
     expect((wrapper.get('[data-test="pivot-LL.fl-x"]').element as HTMLInputElement).value).toBe('38.583');
     await type(wrapper.get('[data-test="pivot-LL.fl-x"]'), '40');
     expect(point(board, 'LL.fl').x).toBeCloseTo(40 * MM_PER_INCH, 9);
+    // A length with its own unit is read as such and then shown in the user's.
+    await type(wrapper.get('[data-test="pivot-LL.fl-z"]'), '254 mm');
+    expect(point(board, 'LL.fl').z).toBe(254);
+    expect((wrapper.get('[data-test="pivot-LL.fl-z"]').element as HTMLInputElement).value).toBe('10');
   });
 
   it('renaming a pivot updates the members that use it', async () => {
