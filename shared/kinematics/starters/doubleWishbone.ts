@@ -45,8 +45,8 @@ const params: StarterParam[] = [
   { key: 'lowerAxisAngle', label: 'Lower pivot axis, side view (front end up)', unit: 'deg', default: 0, min: -10, max: 15 },
   { key: 'tieRodX', label: 'Tie rod fore-aft (ahead of the axle line +)', unit: 'mm', default: -140, min: -250, max: 250 },
   { key: 'tieRodOuterHeight', label: 'Tie rod outer end height', unit: 'mm', default: 300, min: 120, max: 600 },
-  { key: 'tieRodInnerHeight', label: 'Tie rod inner end (rack) height', unit: 'mm', default: 315.8, min: 120, max: 650 },
-  { key: 'rackHalfLength', label: 'Rack end from the centreline', unit: 'mm', default: 367.8, min: 150, max: 700 },
+  { key: 'tieRodInnerHeight', label: 'Tie rod inner end (rack) height', unit: 'mm', default: 317, min: 120, max: 650 },
+  { key: 'rackHalfLength', label: 'Rack end from the centreline', unit: 'mm', default: 350, min: 150, max: 700 },
   { key: 'springRate', label: 'Coil-over spring rate', unit: 'N/mm', default: 60, min: 5, max: 300 },
 ];
 
