@@ -33,6 +33,13 @@ export const BIND_MEMBER_MIN_MM = 0.01;
 
 const RIGID_KINDS = new Set(['link', 'lateral-rod', 'tie-rod', 'shackle']);
 
+const JOINT_NAMES: Record<string, string> = {
+  output: 'Output joint',
+  pinion: 'Pinion joint',
+  'half-shaft-inner': 'Inner half-shaft joint',
+  'half-shaft-outer': 'Outer half-shaft joint',
+};
+
 function nearestRow<T>(rows: T[], pos: (r: T) => number, at: number): T | undefined {
   let best: T | undefined;
   let bestD = Infinity;
@@ -108,7 +115,8 @@ function eventFlag(result: SweepResult, members: readonly SketchMember[], e: Swe
       };
     }
     case 'joint-angle': {
-      const joint = e.joint === 'output' ? 'Output joint' : e.joint === 'pinion' ? 'Pinion joint' : 'A driveline joint';
+      const side = e.side ? ` (${e.side})` : '';
+      const joint = JOINT_NAMES[e.joint ?? ''] ? `${JOINT_NAMES[e.joint ?? '']}${side}` : 'A driveline joint';
       const limit = e.value !== undefined ? showAngle(e.value, undefined, false, 1).text : 'its limit';
       return {
         ...base,
@@ -117,6 +125,16 @@ function eventFlag(result: SweepResult, members: readonly SketchMember[], e: Swe
         detail: `${joint} operating angle is over ${limit} from ${where} on.`,
       };
     }
+    case 'load-reversal':
+    case 'load-limit':
+      // Loads come from statics of the axle torque; the words are the core's own sentence.
+      return {
+        ...base,
+        severity: 'warning',
+        title: e.kind === 'load-reversal' ? 'Link load reverses' : 'Link load over its limit',
+        detail: `${e.message} (from ${where})`,
+        member: e.member,
+      };
     default:
       return { ...base, severity: 'warning', title: 'Sweep', detail: (e as SweepEvent).message };
   }

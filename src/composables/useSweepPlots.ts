@@ -9,6 +9,7 @@ import type { LengthUnit } from '../../shared/units';
 import { mmToUnit } from '../../shared/units';
 import { metricSpecs, bandIsSet, type TargetCheck, type TargetMetric, type Targets } from './useTargets';
 import { quantityUnit, toDisplay } from './useSweepFormat';
+import type { SweepContext } from './useSweepReadout';
 
 export interface PlotPoint {
   x: number;
@@ -53,6 +54,14 @@ export const PLOT_COLORS = ['#2f5d7c', '#e07a1f', '#5b7f6a', '#8e5ba8', '#b5443a
 
 type AnyRow = HeaveRow & RollRow;
 
+/** Heave-row fields of independent layouts (arms and knuckles), absent for a solid axle. */
+interface Independent {
+  camberChange?: number | null;
+  toeChange?: number | null;
+  trackChange?: number | null;
+  antiDive?: number | null;
+}
+
 interface CurveDef {
   key: string;
   title: string;
@@ -62,6 +71,8 @@ interface CurveDef {
   read: (r: AnyRow) => number | null;
   emptyReason: string;
   signed: boolean;
+  /** plotted only when the sweep gives the quantity at all (independent layouts add these) */
+  optional?: boolean;
 }
 
 const CURVES: CurveDef[] = [
@@ -69,12 +80,20 @@ const CURVES: CurveDef[] = [
   { key: 'lateral', title: 'Lateral shift', sweep: 'heave', metric: 'lateralShift', quantity: 'length', read: (r) => r.lateralShift, emptyReason: 'No axle: this layout has no lateral shift.', signed: true },
   { key: 'antisquat', title: 'Anti-squat', sweep: 'heave', metric: 'antiSquat', quantity: 'percent', read: (r) => r.antiSquat, emptyReason: 'Anti-squat is not defined anywhere in the travel (no upper and lower link pair).', signed: false },
   { key: 'foreaft', title: 'Fore-aft shift', sweep: 'heave', metric: 'foreAftShift', quantity: 'length', read: (r) => r.foreAftShift, emptyReason: 'Not defined for this layout.', signed: true },
+  { key: 'camber', title: 'Camber change', sweep: 'heave', quantity: 'angle', read: (r) => (r as AnyRow & Independent).camberChange ?? null, emptyReason: '', signed: true, optional: true },
+  { key: 'toe', title: 'Toe change (bump steer)', sweep: 'heave', quantity: 'angle', read: (r) => (r as AnyRow & Independent).toeChange ?? null, emptyReason: '', signed: true, optional: true },
+  { key: 'antidive', title: 'Anti-dive', sweep: 'heave', quantity: 'percent', read: (r) => (r as AnyRow & Independent).antiDive ?? null, emptyReason: '', signed: false, optional: true },
+  { key: 'track', title: 'Track change', sweep: 'heave', quantity: 'length', read: (r) => (r as AnyRow & Independent).trackChange ?? null, emptyReason: '', signed: true, optional: true },
   { key: 'bind', title: 'Bind in roll', sweep: 'roll', metric: 'bind', quantity: 'length', read: (r) => r.bind, emptyReason: 'No roll sweep (articulation set to 0).', signed: false },
   { key: 'rollsteer', title: 'Roll steer', sweep: 'roll', metric: 'rollSteer', quantity: 'percent', read: (r) => r.rollSteer, emptyReason: 'No roll sweep (articulation set to 0).', signed: true },
 ];
 
 /** The plot order on the board: travel quantities, the shocks, then the roll quantities. */
-const ORDER = ['pinion', 'lateral', 'antisquat', 'foreaft', 'shocks', 'bind', 'rollsteer'];
+const ORDER = ['pinion', 'lateral', 'antisquat', 'foreaft', 'camber', 'toe', 'track', 'antidive', 'shocks', 'bind', 'rollsteer'];
+/** Independent layouts: the wheel's own attitude first. */
+const ORDER_INDEPENDENT = ['camber', 'toe', 'track', 'antisquat', 'antidive', 'foreaft', 'shocks', 'bind', 'rollsteer'];
+/** Quantities of a solid axle: not shown at all for a layout without one. */
+const AXLE_ONLY = new Set(['pinion', 'lateral']);
 
 function axisTitle(sweep: 'heave' | 'roll', u: LengthUnit): string {
   return sweep === 'heave' ? `travel (${u})` : 'roll (°)';
@@ -154,10 +173,17 @@ function shockPlot(result: SweepResult, members: readonly SketchMember[], u: Len
 }
 
 /** Every travel plot of a result, in board order. */
-export function buildPlots(result: SweepResult | null, members: readonly SketchMember[], targets: Targets, checks: TargetCheck[], u: LengthUnit): PlotSpec[] {
+export function buildPlots(result: SweepResult | null, ctx: SweepContext, targets: Targets, checks: TargetCheck[], u: LengthUnit): PlotSpec[] {
   if (!result) return [];
   const plots = new Map<string, PlotSpec>();
-  for (const def of CURVES) plots.set(def.key, curvePlot(def, result, targets, checks, u));
-  plots.set('shocks', shockPlot(result, members, u));
-  return ORDER.map((k) => plots.get(k)!).filter(Boolean);
+  for (const def of CURVES) {
+    if (!ctx.hasAxle && AXLE_ONLY.has(def.key)) continue;
+    const spec = curvePlot(def, result, targets, checks, u);
+    // A quantity the sweep never gives is left out where it is an extra, or where the layout has no axle
+    // (anti-squat of a front suspension); for an axle it stays, with the reason, because it should exist.
+    if (spec.series.length === 0 && (def.optional || !ctx.hasAxle)) continue;
+    plots.set(def.key, spec);
+  }
+  plots.set('shocks', shockPlot(result, ctx.members, u));
+  return (ctx.hasAxle ? ORDER : ORDER_INDEPENDENT).map((k) => plots.get(k)).filter((p): p is PlotSpec => !!p);
 }

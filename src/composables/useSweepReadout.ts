@@ -52,6 +52,8 @@ interface IndependentFields {
   toeChange?: number | null;
   trackChange?: number | null;
   casterChange?: number | null;
+  antiDive?: number | null;
+  kingpin?: { inclination: number; caster: number; scrubRadius: number; trail: number } | null;
 }
 
 function memberLines(ctx: SweepContext, members: Record<string, { length: number; lengthChange: number; motionRatio?: number; wheelRate?: number }>, sweep: 'heave' | 'roll', u: LengthUnit): ReadoutLine[] {
@@ -100,10 +102,15 @@ export function readoutLines(cursor: CursorRow | null, ctx: SweepContext, u: Len
     const ind = r as HeaveRow & IndependentFields;
     const lines: ReadoutLine[] = [
       { key: 'position', label: 'Position', group: 'position', text: showPosition('heave', r.travel, u) },
-      { key: 'pinion', label: 'Pinion angle change', group: 'axle', ...showAngle(r.pinionAngleChange, why.axle, true) },
-      { key: 'lateral', label: 'Lateral shift', group: 'axle', ...showLength(r.lateralShift, u, why.axle, true) },
+      // Pinion angle and lateral shift belong to a solid axle: an independent layout does not list them.
+      ...(ctx.hasAxle
+        ? [
+            { key: 'pinion', label: 'Pinion angle change', group: 'axle' as const, ...showAngle(r.pinionAngleChange, why.axle, true) },
+            { key: 'lateral', label: 'Lateral shift', group: 'axle' as const, ...showLength(r.lateralShift, u, why.axle, true) },
+          ]
+        : []),
       { key: 'foreaft', label: 'Fore-aft shift', group: 'axle', ...showLength(r.foreAftShift, u, undefined, true) },
-      { key: 'antisquat', label: 'Anti-squat', group: 'geometry', ...showPercent(r.antiSquat, why.ic) },
+      ...(ctx.hasAxle || r.antiSquat !== null ? [{ key: 'antisquat', label: 'Anti-squat', group: 'geometry' as const, ...showPercent(r.antiSquat, why.ic) }] : []),
       { key: 'ic-x', label: 'Instant centre x', group: 'geometry', ...showLength(r.instantCenter?.x, u, why.ic) },
       { key: 'ic-z', label: 'Instant centre height', group: 'geometry', ...showLength(r.instantCenter?.z, u, why.ic) },
       { key: 'rc', label: 'Roll centre height', group: 'geometry', ...showLength(r.rollCenterHeight, u, why.rc) },
@@ -113,6 +120,17 @@ export function readoutLines(cursor: CursorRow | null, ctx: SweepContext, u: Len
     if (ind.toeChange !== undefined) lines.push({ key: 'toe', label: 'Toe change (bump steer)', group: 'axle', ...showAngle(ind.toeChange, undefined, true, 3) });
     if (ind.trackChange !== undefined) lines.push({ key: 'track', label: 'Track change', group: 'axle', ...showLength(ind.trackChange, u, undefined, true) });
     if (ind.casterChange !== undefined) lines.push({ key: 'caster', label: 'Caster change', group: 'axle', ...showAngle(ind.casterChange, undefined, true) });
+    if (ind.antiDive !== undefined) lines.push({ key: 'antidive', label: 'Anti-dive', group: 'geometry', ...showPercent(ind.antiDive, why.ic) });
+    if (ind.kingpin !== undefined) {
+      const k = ind.kingpin;
+      const level = 'ball joints level: no kingpin axis';
+      lines.push(
+        { key: 'kpi', label: 'Kingpin inclination', group: 'geometry', ...showAngle(k?.inclination, level) },
+        { key: 'kp-caster', label: 'Caster', group: 'geometry', ...showAngle(k?.caster, level) },
+        { key: 'scrub', label: 'Scrub radius', group: 'geometry', ...showLength(k?.scrubRadius, u, level) },
+        { key: 'trail', label: 'Mechanical trail', group: 'geometry', ...showLength(k?.trail, u, level) },
+      );
+    }
     return [...lines, ...memberLines(ctx, r.members, 'heave', u), ...drivelineLines(r.driveline, u)];
   }
   const r = cursor.row;
