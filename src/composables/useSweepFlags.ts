@@ -98,7 +98,7 @@ function eventFlag(result: SweepResult, members: readonly SketchMember[], e: Swe
         ...base,
         severity: 'negative',
         title: 'Bind',
-        detail: `From ${where} on, the links must stretch or shrink${amount} for the axle to move; the bushings have to take that.${member ? ` Most: ${member}.` : ''}`,
+        detail: `Beyond ${where} the links must stretch or shrink${amount} for the axle to move; the bushings have to take that.${member ? ` Most: ${member}.` : ''}`,
         member,
       };
     }
@@ -122,7 +122,7 @@ function eventFlag(result: SweepResult, members: readonly SketchMember[], e: Swe
         ...base,
         severity: 'warning',
         title: 'Joint angle',
-        detail: `${joint} operating angle is over ${limit} from ${where} on.`,
+        detail: `${joint} operating angle is over ${limit} beyond ${where}.`,
       };
     }
     case 'load-reversal':

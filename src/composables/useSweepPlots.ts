@@ -51,6 +51,17 @@ export interface PlotSpec {
 
 /** Our palette for curves (style: workshop steel blue, signal orange, and their companions). */
 export const PLOT_COLORS = ['#2f5d7c', '#e07a1f', '#5b7f6a', '#8e5ba8', '#b5443a', '#3a87ad', '#a0812d', '#4d4d4d'];
+/** The same hues lightened for the dark theme, where the deep ones would sink into the background. */
+export const PLOT_COLORS_DARK: Record<string, string> = {
+  '#2f5d7c': '#8fbfe0',
+  '#e07a1f': '#f0a35e',
+  '#5b7f6a': '#9cc7ab',
+  '#8e5ba8': '#c59ada',
+  '#b5443a': '#e5877e',
+  '#3a87ad': '#7cc0e2',
+  '#a0812d': '#d8b866',
+  '#4d4d4d': '#b8b8b8',
+};
 
 type AnyRow = HeaveRow & RollRow;
 
