@@ -132,7 +132,7 @@ test('targets shade the plots and missed ones are flagged', async ({ page }) => 
   await snap(page, 'board-sweep-targets');
 });
 
-test('a side photo uploads behind the side view and takes its scale from two clicked points', async ({ page }) => {
+test('a side photo uploads behind the side view, takes its scale from two clicked points, moves, and stays put when locked', async ({ page }) => {
   const id = await newFourLink(page, 'Sweep test: tracing');
   await openBoard(page, id);
   await $(page, 'tab-tracing').click();
@@ -169,12 +169,32 @@ test('a side photo uploads behind the side view and takes its scale from two cli
   await snap(page, 'board-sweep-tracing-scaled');
 
   // Saved with the sketch: the document carries the tracing at its new scale.
-  await expect
-    .poll(async () => {
-      const detail = (await (await page.request.get(`/api/sketches/${id}`)).json()) as { document: { tracing?: { side?: { mmPerPx: number } } } };
-      return detail.document.tracing?.side?.mmPerPx ?? 0;
-    })
-    .toBeGreaterThan(placed.mmPerPx * 1.4);
+  const saved = async () => {
+    const detail = (await (await page.request.get(`/api/sketches/${id}`)).json()) as { document: { tracing?: { side?: { mmPerPx: number; centre: PlanePoint } } } };
+    return detail.document.tracing?.side;
+  };
+  await expect.poll(async () => (await saved())?.mmPerPx ?? 0).toBeGreaterThan(placed.mmPerPx * 1.4);
+
+  // Move: drag the photo 40 px to the right (towards the rear: h grows to the left on screen).
+  const before = (await saved())!.centre;
+  const grip = await clientOf(page, { h: 1300, v: 120 });
+  await page.mouse.move(grip.x, grip.y);
+  await page.mouse.down();
+  for (let i = 1; i <= 8; i++) await page.mouse.move(grip.x + 5 * i, grip.y);
+  await page.mouse.up();
+  const pxPerMmNow = (await sideTransform(page)).scale;
+  await expect.poll(async () => before.h - (await saved())!.centre.h, { timeout: 10_000 }).toBeGreaterThan((40 / pxPerMmNow) * 0.9);
+  const moved = (await saved())!.centre;
+  expect(moved.h).toBeCloseTo(before.h - 40 / pxPerMmNow, 0);
+
+  // Locked, the same drag leaves it where it is.
+  await $(page, 'tracing-lock').click();
+  await page.mouse.move(grip.x, grip.y);
+  await page.mouse.down();
+  for (let i = 1; i <= 8; i++) await page.mouse.move(grip.x + 5 * i, grip.y);
+  await page.mouse.up();
+  await page.waitForTimeout(2000); // longer than the autosave delay
+  expect((await saved())!.centre).toEqual(moved);
 });
 
 test('a file that is not a photo is refused with a message and changes nothing', async ({ page }) => {
