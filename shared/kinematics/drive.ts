@@ -4,7 +4,7 @@
  * - solid axle: z = travel, roll = roll (sketch-format.md);
  * - wheel carrier (arm, knuckle): its wheel centre's z = travel ± halfTrack·tan(roll),
  *   left side up for positive roll, as the axle's wheels would move;
- * - free bodies: nothing imposed.
+ * - free bodies: nothing imposed (a body of one point: its rotation, which moves nothing, is held).
  */
 import { degToRad } from '../units';
 import type { LinkageModel } from './model';
@@ -26,6 +26,11 @@ export function driveBuild(model: LinkageModel): Drive {
       imposed[o + POSE_ROLL] = 1;
     } else if (b.role === 'wheel-carrier') {
       imposed[o + POSE_Z] = 1;
+    } else if (b.pointCount <= 1) {
+      // A body of one point (a shackle's swinging eye): its rotation moves nothing, so it is held.
+      imposed[o + POSE_ROLL] = 1;
+      imposed[o + POSE_ROLL + 1] = 1;
+      imposed[o + POSE_ROLL + 2] = 1;
     }
   }
   const free: number[] = [];

@@ -8,6 +8,7 @@ import type { MovingBodyId, Sketch, SketchMember } from '../schema/sketch';
 import { rigidMemberKinds } from '../schema/sketch';
 import { vec, vecCross, vecDot, vecLength, vecMid, vecScale, vecSub, type Vec3 } from './vec';
 import { POSE_SIZE } from './pose';
+import { leafSpringConstraints, type BendingConstraint, type PlanarConstraint } from './leafSpring';
 
 /** Frame points have no slot. */
 export const FRAME_SLOT = -1;
@@ -31,6 +32,8 @@ export interface BodyModel {
   side: 'left' | 'right' | null;
   /** mm, |y| of the wheel centre of a wheel carrier: the lever of body roll at that wheel */
   halfTrack: number;
+  /** how many sketch points are on the body (one point: its rotation moves nothing, so the sweep holds it) */
+  pointCount: number;
 }
 
 export interface PointModel {
@@ -72,9 +75,24 @@ export interface HingeConstraint {
   across2: Vec3;
 }
 
-export type Constraint = DistanceConstraint | HingeConstraint;
+export type Constraint = DistanceConstraint | HingeConstraint | PlanarConstraint<PointModel> | BendingConstraint<PointModel>;
 
-export const constraintRows = (c: Constraint): number => (c.type === 'distance' ? 1 : 5);
+/** Residual rows of a constraint. */
+export const constraintRows = (c: Constraint): number => (c.type === 'hinge' ? 5 : 1);
+
+/** Slots of the moving bodies a constraint's rows depend on (frame points have none). */
+export function constraintSlots(c: Constraint): number[] {
+  switch (c.type) {
+    case 'hinge':
+      return [c.slot];
+    case 'distance':
+      return [c.a.slot, c.b.slot].filter((s) => s !== FRAME_SLOT);
+    case 'planar':
+      return [...new Set(c.pairs.flatMap((p) => [p.a.slot, p.b.slot]))].filter((s) => s !== FRAME_SLOT);
+    case 'bending':
+      return [c.axleSlot, c.eye.slot].filter((s) => s !== FRAME_SLOT);
+  }
+}
 
 export interface LinkageModel {
   sketch: Sketch;
@@ -90,6 +108,11 @@ export interface LinkageModel {
   wheelRight: PointModel;
   /** the solid axle, if the sketch has one */
   axle: BodyModel | null;
+  /**
+   * 1 for a soft row (a leaf spring's bend, leafSpring.ts): it settles what the hard rows leave
+   * free, is not a length mismatch, and so counts neither as bind nor towards lock-up
+   */
+  softRows: Uint8Array;
 }
 
 function bodyReference(sketch: Sketch, body: MovingBodyId): Vec3 {
@@ -144,7 +167,8 @@ export function linkageModelBuild(sketch: Sketch): LinkageModel {
       side = carriesLeft ? 'left' : 'right';
       halfTrack = Math.abs((carriesLeft ? wl : wr).y);
     }
-    bodies.push({ id, slot: bodies.length, role, reference, side, halfTrack });
+    const pointCount = sketch.points.filter((p) => p.body === id).length;
+    bodies.push({ id, slot: bodies.length, role, reference, side, halfTrack, pointCount });
   }
   const bodyById = new Map(bodies.map((b) => [b.id, b]));
   const points = new Map<string, PointModel>();
@@ -163,7 +187,8 @@ export function linkageModelBuild(sketch: Sketch): LinkageModel {
   for (const m of sketch.members) {
     const a = points.get(m.a)!;
     const b = points.get(m.b)!;
-    if (rigidMemberKinds.includes(m.kind)) {
+    // A leaf half holds its length like a link (leafSpring.ts adds its bend and plane).
+    if (rigidMemberKinds.includes(m.kind) || m.kind === 'leaf-half') {
       constraints.push({ type: 'distance', member: m, a, b, length: vecLength(vecSub(a.ride, b.ride)) });
     } else if (m.kind === 'hinge') {
       const body = bodyById.get(m.body);
@@ -183,16 +208,26 @@ export function linkageModelBuild(sketch: Sketch): LinkageModel {
     }
   }
   const axle = bodies.find((b) => b.role === 'axle') ?? null;
+  const isShackle = (slot: number) => slot >= 0 && bodies[slot].id.startsWith('shackle-');
+  constraints.push(...leafSpringConstraints(sketch, points, axle ? axle.slot : null, isShackle));
+  const residualCount = constraints.reduce((s, c) => s + constraintRows(c), 0);
+  const softRows = new Uint8Array(residualCount);
+  let row = 0;
+  for (const c of constraints) {
+    if (c.type === 'bending') softRows[row] = 1;
+    row += constraintRows(c);
+  }
   return {
     sketch,
     bodies,
     bodyById,
     points,
     constraints,
-    residualCount: constraints.reduce((s, c) => s + constraintRows(c), 0),
+    residualCount,
     stateSize: bodies.length * POSE_SIZE,
     wheelLeft: points.get(wl.id)!,
     wheelRight: points.get(wr.id)!,
     axle,
+    softRows,
   };
 }

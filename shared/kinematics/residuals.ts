@@ -3,7 +3,8 @@
  * coordinate of every body (per mm for translations, per radian for rotations).
  * - distance (link, lateral rod, tie rod, shackle): r = |pA − pB| − L0,
  *   ∂r/∂q = u · (∂pA/∂q − ∂pB/∂q), u the unit vector from B to A;
- * - hinge: the arm's copies of the axis points stay on the frame axis.
+ * - hinge: the arm's copies of the axis points stay on the frame axis;
+ * - planar and bending (leaf springs, leafSpring.ts): a pivot's y offset, and a leaf half's bend.
  * A point on a body is p = ref + t + R·local, so ∂p/∂t = I and ∂p/∂angle_k = (∂R/∂angle_k)·local.
  */
 import type { LinkageModel, PointModel } from './model';
@@ -152,6 +153,50 @@ export function residualsEvaluate(
         }
         if (c.b.slot !== FRAME_SLOT) {
           addPointRow(J, row, cols, c.b.slot, rot.sets[c.b.slot], c.b.local.x, c.b.local.y, c.b.local.z, ux, uy, uz, -1, tmp);
+        }
+      }
+      row += 1;
+    } else if (c.type === 'planar') {
+      // The b points keep their ride y offsets from the a points on average (leafSpring.ts).
+      const w = 1 / c.pairs.length;
+      let sum = 0;
+      for (const { a, b, offset } of c.pairs) {
+        pointPlace(model, a, state, rot, pts, 0);
+        pointPlace(model, b, state, rot, pts, 3);
+        sum += pts[4] - pts[1] - offset;
+        if (J) {
+          if (a.slot !== FRAME_SLOT) addPointRow(J, row, cols, a.slot, rot.sets[a.slot], a.local.x, a.local.y, a.local.z, 0, w, 0, -1, tmp);
+          if (b.slot !== FRAME_SLOT) addPointRow(J, row, cols, b.slot, rot.sets[b.slot], b.local.x, b.local.y, b.local.z, 0, w, 0, 1, tmp);
+        }
+      }
+      r[row] = w * sum;
+      row += 1;
+    } else if (c.type === 'bending') {
+      // r = (w/ℓ)·[(R·e)·(p_eye − o) − e·pivot_local], o the axle's reference point placed
+      // (leafSpring.ts); (R·e)·(p_pivot − o) = e·pivot_local since the pivot rides on the axle.
+      const so = c.axleSlot * POSE_SIZE;
+      const axle = model.bodies[c.axleSlot];
+      const rs = rot.sets[c.axleSlot];
+      const e = c.across;
+      mat3Apply(rs, 0, e.x, e.y, e.z, pts, 0);
+      pointPlace(model, c.eye, state, rot, pts, 3);
+      const dx = pts[3] - (axle.reference.x + state[so]);
+      const dy = pts[4] - (axle.reference.y + state[so + 1]);
+      const dz = pts[5] - (axle.reference.z + state[so + 2]);
+      const k = c.weight / c.length;
+      r[row] = k * (pts[0] * dx + pts[1] * dy + pts[2] * dz - c.acrossDotPivot);
+      if (J) {
+        const base = row * cols + so;
+        J[base] -= k * pts[0];
+        J[base + 1] -= k * pts[1];
+        J[base + 2] -= k * pts[2];
+        for (let a = 0; a < 3; a++) {
+          mat3Apply(rs, 9 * (a + 1), e.x, e.y, e.z, tmp, 0);
+          J[base + 3 + a] += k * (tmp[0] * dx + tmp[1] * dy + tmp[2] * dz);
+        }
+        if (c.eye.slot !== FRAME_SLOT) {
+          const ex = k * pts[0], ey = k * pts[1], ez = k * pts[2];
+          addPointRow(J, row, cols, c.eye.slot, rot.sets[c.eye.slot], c.eye.local.x, c.eye.local.y, c.eye.local.z, ex, ey, ez, 1, tmp);
         }
       }
       row += 1;

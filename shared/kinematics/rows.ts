@@ -15,6 +15,7 @@ import type { SolvedRow } from './march';
 import type { BodyPoses, DrivelineReading, HeaveRow, MemberReading, Pose, RollRow } from './types';
 import { vec, type Vec3 } from './vec';
 import { halfShaftPlanBuild, halfShaftReadings, type HalfShaftPlan } from './halfShaft';
+import { leafSpringHeaveFields, leafSpringPlanBuild, type LeafSpringPlan } from './leafSpringRows';
 import { trailingArmHeaveFields, trailingArmPlanBuild, trailingArmRollFields, type TrailingArmPlan } from './trailingArm';
 import { wishbonePlanBuild, type WishbonePlan } from './wishbone';
 import { wishboneHeaveFields, wishboneRollFields } from './wishboneRows';
@@ -52,6 +53,8 @@ export interface RowPlan {
   trailingArm: TrailingArmPlan | null;
   /** the sketch's half-shafts, if any */
   halfShafts: HalfShaftPlan[];
+  /** leaf springs (their heave rows get the leafSpringRows.ts fields); null otherwise */
+  leafSpring: LeafSpringPlan | null;
   /** knuckles on double wishbones (their rows get the wishboneRows.ts fields); null otherwise */
   wishbone: WishbonePlan | null;
 }
@@ -98,6 +101,7 @@ export function rowPlanBuild(model: LinkageModel): RowPlan {
     scratch: { va: new Float64Array(3), vb: new Float64Array(3), tmp: new Float64Array(3) },
     trailingArm: trailingArmPlanBuild(model),
     halfShafts: halfShaftPlanBuild(sketch, points),
+    leafSpring: leafSpringPlanBuild(model),
     wishbone: wishbonePlanBuild(model),
   };
 }
@@ -212,6 +216,7 @@ export function heaveRowBuild(plan: RowPlan, solved: SolvedRow): HeaveRow {
   if (plan.trailingArm) Object.assign(row, trailingArmHeaveFields(plan.trailingArm, (p) => at.at(p), solved.state, solved.travel, clean));
   const hs = halfShaftReadings(plan.halfShafts, (p) => at.at(p), clean);
   if (hs) row.halfShafts = hs;
+  if (plan.leafSpring) Object.assign(row, leafSpringHeaveFields(plan.leafSpring, (p) => at.at(p), clean));
   if (plan.wishbone) Object.assign(row, wishboneHeaveFields(plan.wishbone, (p) => at.at(p), solved.state, solved.travel));
   return row;
 }

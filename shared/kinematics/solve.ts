@@ -106,9 +106,11 @@ export class PoseSolver {
     return this.r;
   }
 
+  /** Largest absolute hard residual (mm): a soft row (a leaf spring's bend) is not a length mismatch. */
   private maxAbs(r: Float64Array): number {
+    const soft = this.model.softRows;
     let v = 0;
-    for (let i = 0; i < r.length; i++) v = Math.max(v, Math.abs(r[i]));
+    for (let i = 0; i < r.length; i++) if (!soft[i]) v = Math.max(v, Math.abs(r[i]));
     return v;
   }
 

@@ -8,7 +8,7 @@
  */
 import { Matrix, QrDecomposition } from 'ml-matrix';
 import type { LinkageModel } from './model';
-import { FRAME_SLOT } from './model';
+import { constraintRows, constraintSlots } from './model';
 import { POSE_SIZE } from './pose';
 
 /**
@@ -36,8 +36,7 @@ export interface SolveBlock {
 export function solveBlocksBuild(model: LinkageModel, free: Int32Array): SolveBlock[] {
   const parent = model.bodies.map((_, i) => i);
   const root = (i: number): number => (parent[i] === i ? i : (parent[i] = root(parent[i])));
-  const slotsOf = (c: LinkageModel['constraints'][number]) =>
-    c.type === 'distance' ? [c.a.slot, c.b.slot].filter((s) => s !== FRAME_SLOT) : [c.slot];
+  const slotsOf = constraintSlots;
   for (const c of model.constraints) {
     const s = slotsOf(c);
     for (let k = 1; k < s.length; k++) parent[root(s[k])] = root(s[0]);
@@ -46,7 +45,7 @@ export function solveBlocksBuild(model: LinkageModel, free: Int32Array): SolveBl
   const cols = new Map<number, number[]>();
   let row = 0;
   for (const c of model.constraints) {
-    const count = c.type === 'distance' ? 1 : 5;
+    const count = constraintRows(c);
     const key = root(slotsOf(c)[0]);
     const list = rows.get(key) ?? [];
     for (let k = 0; k < count; k++) list.push(row + k);

@@ -13,6 +13,9 @@ import { pointVelocity, BodyRotations } from './residuals';
 import { heaveRowBuild, rollRowBuild, rowPlanBuild } from './rows';
 import { PoseSolver } from './solve';
 import { sweepEvents } from './events';
+import { leafSpringNotes } from './leafSpringRows';
+import { linkLoads, linkLoadsApply } from './loads';
+import { windUpReading } from './windUp';
 import { wishboneNotes } from './wishboneNotes';
 import type { HeaveRow, RollRow, SweepEvent, SweepResult } from './types';
 
@@ -95,7 +98,8 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
   // Every free coordinate located: plain QR of J needs no Tikhonov rows.
   solver.regularize = rank < solver.n;
   warnings.push(...unlocatedWarnings(model, nullSpace));
-  if (model.axle && !(plan.upper && plan.lower)) {
+  if (plan.leafSpring) warnings.push(...leafSpringNotes(plan.leafSpring));
+  else if (model.axle && !(plan.upper && plan.lower)) {
     warnings.push('No upper and lower link groups on the left side: no instant centre or anti-squat.');
   }
 
@@ -106,6 +110,14 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
   const heaveSolved = [...down.rows.slice().reverse(), ride, ...up.rows];
   const heave: HeaveRow[] = heaveSolved.map((r) => heaveRowBuild(plan, r));
   const rideRow = heave[down.rows.length];
+  const loads = linkLoadsApply(model) ? linkLoads(model, drive, heaveSolved, down.rows.length) : null;
+  if (loads) {
+    loads.rows.forEach((r, i) => {
+      if (r) heave[i].linkLoads = r;
+    });
+    events.push(...loads.events);
+  }
+  const windUp = windUpReading(model, drive, ride.state);
   if (up.lockedAt !== null) events.push(lockUpEvent('heave', up.lockedAt, up.rows.at(-1)?.travel ?? 0));
   if (down.lockedAt !== null) events.push(lockUpEvent('heave', down.lockedAt, down.rows.at(-1)?.travel ?? 0));
   events.push(...sweepEvents(sketch, 'heave', heave));
@@ -141,5 +153,7 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
     },
     warnings,
     ride: rideRow,
+    ...(windUp ? { windUp } : {}),
+    ...(loads ? { loads: loads.summary } : {}),
   };
 }

@@ -1,6 +1,7 @@
 import type { Layout } from '../../schema/sketch';
 import { doubleWishbone } from './doubleWishbone';
 import { fourLinkLateralRod } from './fourLinkLateralRod';
+import { leafSpring } from './leafSpring';
 import { threeLinkLateralRod } from './threeLinkLateralRod';
 import { trailingArm } from './trailingArm';
 import { triangulatedFourLink } from './triangulatedFourLink';
@@ -13,6 +14,7 @@ export const starters: Partial<Record<Layout, StarterSpec>> = {
   'three-link-lateral-rod': threeLinkLateralRod,
   'double-wishbone': doubleWishbone,
   'trailing-arm': trailingArm,
+  'leaf-spring': leafSpring,
 };
 
 export type { StarterParam, StarterSpec } from './types';
