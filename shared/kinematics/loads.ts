@@ -105,24 +105,31 @@ export function linkLoads(model: LinkageModel, drive: Drive, heave: SolvedRow[],
     if (!ride || known.length === 0) continue;
     const min = Math.min(...known), max = Math.max(...known);
     summary.members[id] = { ride: ride[id], min, max, reverses: min < -zero && max > zero, overLimit: limit !== null && Math.max(-min, max) > limit };
-    // Outward from ride each way: the first sign change, and the first pass beyond the limit.
+    // Every sign change along the travel (a zero, e.g. at ride, has no sign: the change is
+    // placed between the loads on either side of it).
+    let last: { travel: number; value: number } | null = null;
+    heave.forEach((row, i) => {
+      const v = values[i];
+      if (v === null || Math.abs(v) <= zero) return;
+      if (last && Math.sign(last.value) !== Math.sign(v)) {
+        const at = last.travel + ((0 - last.value) / (v - last.value)) * (row.travel - last.travel);
+        events.push({ kind: 'load-reversal', sweep: 'heave', at, member: id, value: 0,
+          message: `Link ${id}'s load reverses (${v > 0 ? 'compression to tension' : 'tension to compression'} going ${row.travel > last.travel ? 'up' : 'down'}) at ${fmt(at)} travel under ${torque} N·m.` });
+      }
+      last = { travel: row.travel, value: v };
+    });
+    // Outward from ride each way: the first pass beyond the limit.
     for (const dir of [1, -1]) {
-      let reversed = false, passed = false;
+      if (limit === null || Math.abs(ride[id]) > limit) break;
       for (let i = rideIndex + dir; i >= 0 && i < values.length; i += dir) {
         const a = values[i - dir], b = values[i];
         if (a === null || b === null) break;
-        const t0 = heave[i - dir].travel, t1 = heave[i].travel;
-        if (!reversed && Math.abs(a) > zero && Math.abs(b) > zero && Math.sign(a) !== Math.sign(b)) {
-          reversed = true;
-          const at = t0 + ((0 - a) / (b - a)) * (t1 - t0);
-          events.push({ kind: 'load-reversal', sweep: 'heave', at, member: id, value: 0,
-            message: `Link ${id}'s load reverses (${b > 0 ? 'compression to tension' : 'tension to compression'}) at ${fmt(at)} travel under ${torque} N·m.` });
-        }
-        if (!passed && limit !== null && Math.abs(ride[id]) <= limit && Math.abs(b) > limit) {
-          passed = true;
+        if (Math.abs(b) > limit) {
+          const t0 = heave[i - dir].travel, t1 = heave[i].travel;
           const at = t0 + ((limit - Math.abs(a)) / (Math.abs(b) - Math.abs(a))) * (t1 - t0);
           events.push({ kind: 'load-limit', sweep: 'heave', at, member: id, value: limit,
             message: `Link ${id}'s load passes the ${kN(limit)} limit at ${fmt(at)} travel under ${torque} N·m.` });
+          break;
         }
       }
     }
