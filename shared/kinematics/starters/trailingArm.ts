@@ -82,7 +82,8 @@ function leftSide(p: Params): { points: PointIn[]; members: MemberIn[] } {
     const q = rotateAbout(shock, outer, u, angleFor(wc, outer, u, t));
     return Math.hypot(q.x - shockTop.x, q.y - shockTop.y, q.z - shockTop.z);
   };
-  const ends = [lengthAt(-TRAVEL_MM), lengthAt(TRAVEL_MM)];
+  // With the ride length too: an arm too short to reach the whole range must not leave the shock short at ride.
+  const ends = [lengthAt(-TRAVEL_MM), lengthAt(0), lengthAt(TRAVEL_MM)];
   const shMin = Math.floor((Math.min(...ends) - SHOCK_MARGIN_MM) / 5) * 5;
   const shMax = Math.ceil((Math.max(...ends) + SHOCK_MARGIN_MM) / 5) * 5;
 
