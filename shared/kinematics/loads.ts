@@ -44,33 +44,51 @@ export function linkLoadsApply(model: LinkageModel): boolean {
 }
 
 /** Tensions (N) for one solved state; null when the links do not locate every free coordinate. */
-function rowLoads(model: LinkageModel, drive: Drive, state: Float64Array, patches: Vec3[], force: number, work: ReturnType<typeof residualWorkCreate>): number[] | null {
+interface LoadWork {
+  residual: ReturnType<typeof residualWorkCreate>;
+  r: Float64Array;
+  J: Float64Array;
+  N: Matrix;
+  q: Matrix;
+}
+
+function rowLoads(model: LinkageModel, drive: Drive, state: Float64Array, patches: Vec3[], force: number, lw: LoadWork): number[] | null {
   const m = model.residualCount, n = drive.free.length, cols = model.stateSize;
-  const r = new Float64Array(m), J = new Float64Array(m * cols);
+  const { r, J, N, residual: work } = lw;
   residualsEvaluate(model, state, work, r, J);
   const rs = work.rot.sets[model.axle!.slot];
   // Generalised forces of the patch forces (each F/2 along +x) in the free coordinates.
-  const q = new Float64Array(n);
+  const q = lw.q;
+  for (let j = 0; j < n; j++) q.set(j, 0, 0);
   const tmp = new Float64Array(3);
   drive.free.forEach((c, j) => {
     const k = c % POSE_SIZE;
     for (const local of patches) {
-      if (k === 0) q[j] += force / 2;
+      if (k === 0) q.set(j, 0, q.get(j, 0) + force / 2);
       else if (k >= POSE_ROLL) {
         mat3Apply(rs, 9 * (k - POSE_ROLL + 1), local.x, local.y, local.z, tmp, 0);
-        q[j] += (force / 2) * tmp[0];
+        q.set(j, 0, q.get(j, 0) + (force / 2) * tmp[0]);
       }
     }
   });
-  const A = new Matrix(m, n);
-  for (let i = 0; i < m; i++) for (let j = 0; j < n; j++) A.set(i, j, J[i * cols + drive.free[j]]);
-  const At = A.transpose();
-  const chol = new CholeskyDecomposition(At.mmul(A));
+  // Normal equations (JᵀJ)·x = Q, then f = J·x: the minimum-norm solution of Jᵀf = Q.
+  for (let j = 0; j < n; j++) {
+    for (let k = j; k < n; k++) {
+      let v = 0;
+      for (let i = 0; i < m; i++) v += J[i * cols + drive.free[j]] * J[i * cols + drive.free[k]];
+      N.set(j, k, v);
+      N.set(k, j, v);
+    }
+  }
+  const chol = new CholeskyDecomposition(N);
   if (!chol.isPositiveDefinite()) return null;
-  const x = chol.solve(Matrix.columnVector(Array.from(q)));
-  const f = A.mmul(x);
+  const x = chol.solve(q);
   const out: number[] = [];
-  for (let i = 0; i < m; i++) out.push(f.get(i, 0));
+  for (let i = 0; i < m; i++) {
+    let v = 0;
+    for (let j = 0; j < n; j++) v += J[i * cols + drive.free[j]] * x.get(j, 0);
+    out.push(v);
+  }
   return out.every(Number.isFinite) ? out : null;
 }
 
@@ -87,7 +105,14 @@ export function linkLoads(model: LinkageModel, drive: Drive, heave: SolvedRow[],
   const force = (torque * NMM_PER_NM) / sketch.vehicle.tireRadius;
   const ref = model.axle!.reference;
   const patches = [model.wheelLeft, model.wheelRight].map((w) => vecSub(vec(w.ride.x, w.ride.y, w.ride.z - sketch.vehicle.tireRadius), ref));
-  const work = residualWorkCreate(model);
+  const n = drive.free.length;
+  const work: LoadWork = {
+    residual: residualWorkCreate(model),
+    r: new Float64Array(model.residualCount),
+    J: new Float64Array(model.residualCount * model.stateSize),
+    N: new Matrix(n, n),
+    q: new Matrix(n, 1),
+  };
   const ids = model.constraints.map((c) => c.member.id);
   const zero = LOAD_ZERO_RELATIVE * Math.abs(force);
   const rows = heave.map((row) => {
