@@ -4,7 +4,7 @@
  * the sliders sit at ride height (then the ghost would only cover the linkage itself).
  */
 import { computed } from 'vue';
-import { pointsAt } from '../../shared/kinematics';
+import { pointsAt } from '../../shared/kinematics/points';
 import { useBoardStore } from '../stores/board';
 import { useSweepStore } from '../stores/sweep';
 import type { Vec3 } from './canvasTransform';

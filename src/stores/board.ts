@@ -4,7 +4,7 @@ import { api, ApiError, errorMessage } from '../api/http';
 import type { Revision, SketchDetail } from '../api/types';
 import { checkSketch, type Layout, type MemberKind, type Sketch } from '../../shared/schema/sketch';
 import { unitToMm, type Mm } from '../../shared/units';
-import { starters } from '../../shared/kinematics';
+import { starters } from '../../shared/kinematics/starters';
 import { History, deepEqual } from './board/history';
 import { findPairs } from './board/pairs';
 import * as edits from './board/edits';
