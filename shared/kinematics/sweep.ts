@@ -86,7 +86,7 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
   const events: SweepEvent[] = [];
 
   // Ride height satisfies every constraint by definition (lengths are measured there).
-  const ride: SolvedRow = solveStart(ctx, 'travel') ?? {
+  let ride: SolvedRow = solveStart(ctx, 'travel') ?? {
     travel: 0,
     roll: 0,
     state: new Float64Array(model.stateSize),
@@ -97,6 +97,9 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
   ctx.redundancy = Math.max(0, solver.m - rank);
   // Every free coordinate located: plain QR of J needs no Tikhonov rows.
   solver.regularize = rank < solver.n;
+  // The ride row's sensitivity again without the Tikhonov rows it was first found with: they
+  // bias the direction the soft rows settle (a leaf spring's pitch) by far more than round-off.
+  if (!solver.regularize) ride = rowRateFor(ctx, ride, 'travel');
   warnings.push(...unlocatedWarnings(model, nullSpace));
   if (plan.leafSpring) warnings.push(...leafSpringNotes(plan.leafSpring));
   else if (model.axle && !(plan.upper && plan.lower)) {
