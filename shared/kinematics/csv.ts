@@ -65,6 +65,15 @@ function columns(result: SweepResult): Column[] {
       cols.push({ name: `driveline.${k}`, get: (r) => r.driveline?.[k] });
     }
   }
+  // Leaf springs, half-shafts and link loads (additions): present when the ride row carries them.
+  if (first.shackleAngle !== undefined) cols.push({ name: 'shackleAngle', get: (r) => r.shackleAngle });
+  for (const side of ['left', 'right'] as const) {
+    if (!first.halfShafts?.[side]) continue;
+    for (const k of ['length', 'plunge', 'innerAngle', 'outerAngle'] as const) {
+      cols.push({ name: `halfShafts.${side}.${k}`, get: (r) => r.halfShafts?.[side]?.[k] });
+    }
+  }
+  for (const id of Object.keys(first.linkLoads ?? {})) cols.push({ name: `linkLoads.${id}`, get: (r) => r.linkLoads?.[id] });
   return cols;
 }
 
