@@ -1,7 +1,8 @@
 /**
  * Konva line configs for one member, by kind: a link as a rod, a lateral rod heavier and green,
  * a shackle short and thick, a shock as body and shaft with marks at its stroke limits, a spring
- * as a coil, a hinge as a dashed axis carried past its pivots. Pure: screen points in, configs out.
+ * as a coil, a hinge as a dashed axis carried past its pivots,
+ * a leaf half as a thin chord from its eye to the seat. Pure: screen points in, configs out.
  */
 import type Konva from 'konva';
 import type { Sketch } from '../../shared/schema/sketch';
@@ -66,6 +67,11 @@ export function memberLines(m: Member, a: ScreenPoint, b: ScreenPoint, o: Member
       break;
     case 'hinge':
       out.push({ ...BASE, ...tag, points: hingeAxis(a, b), stroke: colour(c.hinge), strokeWidth: 2, dash: [10, 4, 2, 4], hitStrokeWidth: 14 });
+      break;
+    case 'leaf-half':
+      // The pack itself is drawn bent (and not listening) by the leaf-spring layer; this thin
+      // chord from eye to seat is what a click or tap finds, like any other member.
+      out.push({ ...BASE, ...tag, points: seg, stroke: colour(c.spring), strokeWidth: 1.5, dash: dash ?? [3, 4], hitStrokeWidth: 14 });
       break;
   }
   return out;
