@@ -12,13 +12,19 @@ import { constraintRows, constraintSlots } from './model';
 import { POSE_SIZE } from './pose';
 
 /**
- * A Matrix whose clone copies row arrays directly. ml-matrix's decompositions clone their
- * input (QR its matrix, solve its right-hand side) through a generator over every entry,
- * which dominates the time of the small systems solved here; the algebra stays ml-matrix's.
+ * A Matrix whose clone copies row arrays directly into one copy it keeps. ml-matrix's
+ * decompositions clone their input (QR its matrix, solve its right-hand side) through a
+ * generator over every entry into a fresh matrix, which dominates the time of the small
+ * systems solved here; the algebra stays ml-matrix's. The kept copy is overwritten by the
+ * next clone, which is safe here: a block's factorisation of a matrix is dropped before that
+ * matrix is factored again, and a solve's copy of its right-hand side is read (its first n
+ * rows taken) before the next solve.
  */
 export class WorkMatrix extends Matrix {
+  private twin: WorkMatrix | null = null;
+
   override clone(): this {
-    const out = new WorkMatrix(this.rows, this.columns) as this;
+    const out = (this.twin ??= new WorkMatrix(this.rows, this.columns)) as this;
     const from = (this as unknown as { data: Float64Array[] }).data;
     const to = (out as unknown as { data: Float64Array[] }).data;
     for (let i = 0; i < this.rows; i++) to[i].set(from[i]);
