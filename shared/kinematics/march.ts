@@ -5,11 +5,22 @@
  * linkage has reached a limit (lock-up) and the march stops there, never inventing a row.
  */
 import type { Drive } from './drive';
-import { driveApply, driveRate } from './drive';
+import * as driveModule from './drive';
 import type { LinkageModel } from './model';
-import { POSE_ROLL, POSE_SIZE } from './pose';
+import * as pose from './pose';
 import type { PoseSolver } from './solve';
-import { ROTATION_SCALE_MM } from './solve';
+import * as solveModule from './solve';
+
+/**
+ * Module-local copies of imported bindings used in the inner loop: under the CommonJS interop
+ * Node runs this code with (tsx: server, command line, bench) every use of an imported
+ * binding is a getter call on the module's exports, about a tenth of a sweep's profile.
+ */
+const driveApply = driveModule.driveApply;
+const driveRate = driveModule.driveRate;
+const POSE_ROLL = pose.POSE_ROLL;
+const POSE_SIZE = pose.POSE_SIZE;
+const ROTATION_SCALE_MM = solveModule.ROTATION_SCALE_MM;
 
 /**
  * Exactly determined linkage: a residual above this (mm) means the links cannot be
