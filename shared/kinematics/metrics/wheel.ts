@@ -15,10 +15,26 @@
  * the camber (the wheel plane is perpendicular to that axis), its top-view angle ahead of
  * the lateral is the toe-in.
  */
-import { degToRad, radToDeg, type Deg, type Mm } from '../../units';
-import { mat3Apply, rotationSetCreate, rotationSetFill } from '../pose';
+import * as units from '../../units';
+import type { Deg, Mm } from '../../units';
+import * as poseModule from '../pose';
 import type { Pose } from '../types';
-import { vec, type Vec3 } from '../vec';
+import * as vectors from '../vec';
+import type { Vec3 } from '../vec';
+
+/**
+ * Module-local copies of imported bindings (under the CommonJS interop Node runs this code
+ * with, every use of an imported binding is a getter call; this runs at every row).
+ */
+const degToRad = units.degToRad;
+const radToDeg = units.radToDeg;
+const mat3Apply = poseModule.mat3Apply;
+const rotationSetFill = poseModule.rotationSetFill;
+const vec = vectors.vec;
+
+/** Scratch of `wheelAttitude` (synchronous, so one set serves every call): rotation set and a 3-vector. */
+const attitudeRotation = poseModule.rotationSetCreate();
+const attitudeOut = new Float64Array(3);
 
 export type WheelSide = 'left' | 'right';
 
@@ -68,9 +84,9 @@ export function wheelAttitude(
   side: WheelSide,
   rideSpinAxis: Vec3 = outwardAxis(side),
 ): WheelAttitude {
-  const rs = rotationSetCreate();
+  const rs = attitudeRotation;
   rotationSetFill(rs, degToRad(pose.roll), degToRad(pose.pitch), degToRad(pose.yaw));
-  const out = new Float64Array(3);
+  const out = attitudeOut;
   mat3Apply(rs, 0, rideSpinAxis.x, rideSpinAxis.y, rideSpinAxis.z, out, 0);
   const axis = vec(out[0], out[1], out[2]);
   mat3Apply(rs, 0, rideCentre.x - reference.x, rideCentre.y - reference.y, rideCentre.z - reference.z, out, 0);
