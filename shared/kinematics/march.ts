@@ -83,6 +83,17 @@ function scaledDistance(drive: Drive, a: Float64Array, b: Float64Array): number 
 
 const paramOf = (row: SolvedRow, param: MarchParameter) => (param === 'travel' ? row.travel : row.roll);
 
+/** Scratch of `stepTo` (synchronous, so one pair serves every call): the predicted state and the imposed rate. */
+const stepScratch = { predicted: new Float64Array(0), imposedRate: new Float64Array(0) };
+
+function stepScratchFor(size: number): typeof stepScratch {
+  if (stepScratch.predicted.length !== size) {
+    stepScratch.predicted = new Float64Array(size);
+    stepScratch.imposedRate = new Float64Array(size);
+  }
+  return stepScratch;
+}
+
 /**
  * Solves the row at parameter value `to` from a solved row; null if it fails. With the row
  * before `from` given, the predictor is second order (the change of the sensitivity between
@@ -102,14 +113,14 @@ function stepTo(ctx: MarchContext, from: SolvedRow, param: MarchParameter, to: n
     for (const c of drive.free) state[c] += from.rate[c] * delta;
   }
   driveApply(model, state, travel, roll);
-  const predicted = new Float64Array(state);
+  const { predicted, imposedRate } = stepScratchFor(model.stateSize);
+  predicted.set(state);
   const outcome = solver.solve(state);
   if (!outcome.converged) return null;
   const limit = ctx.redundancy === 0 ? LOCKUP_RESIDUAL_TOLERANCE_MM : LOCKUP_BIND_LIMIT_MM;
   if (!(outcome.maxResidual <= limit)) return null;
   if (scaledDistance(drive, state, predicted) > BRANCH_JUMP_LIMIT_MM) return null;
   const rate = new Float64Array(model.stateSize);
-  const imposedRate = new Float64Array(model.stateSize);
   driveRate(model, imposedRate, param, roll);
   solver.sensitivity(imposedRate, rate);
   for (let i = 0; i < rate.length; i++) if (!Number.isFinite(rate[i])) return null;
