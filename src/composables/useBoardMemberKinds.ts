@@ -6,6 +6,8 @@ export const KIND_OPTIONS: { value: MemberKind; label: string; stem: string }[] 
   { value: 'lateral-rod', label: 'lateral rod', stem: 'LR' },
   { value: 'tie-rod', label: 'tie rod', stem: 'TR' },
   { value: 'shackle', label: 'shackle', stem: 'SK' },
+  // A leaf half also names its axle seat point; re-kinding to it is refused until the seat is given.
+  { value: 'leaf-half', label: 'leaf spring half', stem: 'LH' },
   { value: 'shock', label: 'shock', stem: 'SH' },
   { value: 'spring', label: 'spring', stem: 'SP' },
   { value: 'hinge', label: 'hinge axis', stem: 'H' },
