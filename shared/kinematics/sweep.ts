@@ -120,7 +120,7 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
     });
     events.push(...loads.events);
   }
-  const windUp = windUpReading(model, drive, ride.state);
+  const windUp = windUpReading(model, drive, ride.state, undefined, solver.regularize);
   if (up.lockedAt !== null) events.push(lockUpEvent('heave', up.lockedAt, up.rows.at(-1)?.travel ?? 0));
   if (down.lockedAt !== null) events.push(lockUpEvent('heave', down.lockedAt, down.rows.at(-1)?.travel ?? 0));
   events.push(...sweepEvents(sketch, 'heave', heave));

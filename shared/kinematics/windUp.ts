@@ -66,9 +66,16 @@ export function leafSpringsOf(model: LinkageModel): LeafSpringWindUp[] | null {
 /**
  * Wind-up at ride height from the ride state (mm, rad) under `torqueNm` (N·m; the sketch's
  * sweep.axleTorque, else DEFAULT_AXLE_TORQUE_NM). Null without an axle on leaf springs whose
- * halves all have rates.
+ * halves all have rates. `regularize` false when the sweep's rank at ride showed every free
+ * coordinate located: imposing the pitch too leaves the rest located, so plain QR serves.
  */
-export function windUpReading(model: LinkageModel, drive: Drive, rideState: Float64Array, torqueNm = model.sketch.sweep.axleTorque ?? DEFAULT_AXLE_TORQUE_NM): WindUpReading | null {
+export function windUpReading(
+  model: LinkageModel,
+  drive: Drive,
+  rideState: Float64Array,
+  torqueNm = model.sketch.sweep.axleTorque ?? DEFAULT_AXLE_TORQUE_NM,
+  regularize = true,
+): WindUpReading | null {
   const axle = model.axle;
   if (!axle) return null;
   const springs = leafSpringsOf(model);
@@ -83,6 +90,7 @@ export function windUpReading(model: LinkageModel, drive: Drive, rideState: Floa
   const free: number[] = [];
   for (let i = 0; i < imposed.length; i++) if (!imposed[i]) free.push(i);
   const solver = new PoseSolver(model, { imposed, free: Int32Array.from(free) });
+  solver.regularize = regularize;
   const state = new Float64Array(rideState);
   driveApply(model, state, 0, 0);
   state[pitchIndex] = -(angle * Math.PI) / 180;
