@@ -11,6 +11,11 @@ export default defineConfig({
     vue({ template: { transformAssetUrls } }),
     quasar({ sassVariables: r('./src/css/quasar-variables.sass') }),
   ],
+  resolve: {
+    // vue-konva imports the whole of Konva for one global flag; the board registers the
+    // shapes it draws itself (src/components/konvaNodes.ts), so Konva's core is enough.
+    alias: [{ find: /^konva$/, replacement: 'konva/lib/Core' }],
+  },
   build: { outDir: 'dist', chunkSizeWarningLimit: 900 },
   server: {
     proxy: { '/api': 'http://localhost:3000' },

@@ -17,7 +17,7 @@
  * load that changes sign within the travel, or passes sweep.linkLoadLimit, is flagged.
  */
 import { CholeskyDecomposition, Matrix } from 'ml-matrix';
-import { DEFAULT_AXLE_TORQUE_NM } from '../schema/sketch';
+import { DEFAULT_AXLE_TORQUE_NM } from '../schema/sketchVocabulary';
 import type { Drive } from './drive';
 import type { SolvedRow } from './march';
 import type { LinkageModel } from './model';

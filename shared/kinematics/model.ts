@@ -5,7 +5,7 @@
  * which bodies and constraints they bring; the solver never looks at `layout`.
  */
 import type { MovingBodyId, Sketch, SketchMember } from '../schema/sketch';
-import { rigidMemberKinds } from '../schema/sketch';
+import { rigidMemberKinds } from '../schema/sketchVocabulary';
 import { vec, vecCross, vecDot, vecLength, vecMid, vecScale, vecSub, type Vec3 } from './vec';
 import { POSE_SIZE } from './pose';
 import { leafSpringConstraints, type BendingConstraint, type PlanarConstraint } from './leafSpring';

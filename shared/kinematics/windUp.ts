@@ -17,7 +17,7 @@
  * Left out: the vertical load the torque also puts into the springs (anti-squat), the pinion
  * torque about x, and the spring's own large-angle stiffening.
  */
-import { DEFAULT_AXLE_TORQUE_NM } from '../schema/sketch';
+import { DEFAULT_AXLE_TORQUE_NM } from '../schema/sketchVocabulary';
 import { radToDeg } from '../units';
 import type { Drive } from './drive';
 import { driveApply } from './drive';

@@ -7,7 +7,7 @@
  * the knuckle, a wheel carrier); it is the plan for the double-wishbone metrics.
  */
 import type { Sketch } from '../schema/sketch';
-import { DEFAULT_FRONT_BRAKE_SHARE_PERCENT } from '../schema/sketch';
+import { DEFAULT_FRONT_BRAKE_SHARE_PERCENT } from '../schema/sketchVocabulary';
 import { kingpinReading } from './metrics/kingpin';
 import type { KingpinReading } from './types';
 import type { BodyModel, LinkageModel, PointModel } from './model';

@@ -8,65 +8,24 @@
 import { z } from 'zod';
 import { gridCount } from '../kinematics/grid';
 import { SketchValidationError } from './errors';
+import {
+  bodyIds,
+  layouts,
+  DEFAULT_BIND_THRESHOLD_MM,
+  DEFAULT_JOINT_ANGLE_LIMIT_DEG,
+  MAX_AXLE_TORQUE_NM,
+  MAX_COORDINATE_MM,
+  MAX_ID_LENGTH,
+  MAX_MEMBERS,
+  MAX_NAME_LENGTH,
+  MAX_POINTS,
+  MAX_ROLL_DEG,
+  MAX_SWEEP_ROWS,
+  MAX_TRAVEL_MM,
+  MIN_MEMBER_LENGTH_MM,
+} from './sketchVocabulary';
 
-/** The six layouts a sketch can come from (the starter it was built from). */
-export const layouts = [
-  'four-link-lateral-rod',
-  'triangulated-four-link',
-  'three-link-lateral-rod',
-  'leaf-spring',
-  'trailing-arm',
-  'double-wishbone',
-] as const;
-export type Layout = (typeof layouts)[number];
-
-/** Bodies a point can belong to. The frame is fixed; the others move. */
-export const bodyIds = [
-  'frame',
-  'axle',
-  'arm-left',
-  'arm-right',
-  'knuckle-left',
-  'knuckle-right',
-  // Leaf-spring layouts (addition): the shackle carrying each spring's swinging eye.
-  'shackle-left',
-  'shackle-right',
-] as const;
-export type BodyId = (typeof bodyIds)[number];
-export type MovingBodyId = Exclude<BodyId, 'frame'>;
-
-export const memberKinds = ['link', 'lateral-rod', 'tie-rod', 'shackle', 'shock', 'spring', 'hinge', 'leaf-half'] as const;
-export type MemberKind = (typeof memberKinds)[number];
-
-/** Member kinds that hold a fixed length between their two points (the solver's constraints). */
-export const rigidMemberKinds: readonly MemberKind[] = ['link', 'lateral-rod', 'tie-rod', 'shackle'];
-
-/** Size bounds, so that a document can never make the solver or the server work without end. */
-export const MAX_POINTS = 200;
-export const MAX_MEMBERS = 200;
-/** Heave rows plus roll rows of one sweep. */
-export const MAX_SWEEP_ROWS = 2000;
-/** No coordinate or vehicle dimension beyond 100 m: keeps every derived number finite. */
-export const MAX_COORDINATE_MM = 100_000;
-/** Heave travel either way, mm. */
-export const MAX_TRAVEL_MM = 2000;
-/** Articulation either way, degrees (beyond this the small-part geometry of a sketch means nothing). */
-export const MAX_ROLL_DEG = 45;
-export const MAX_ID_LENGTH = 64;
-export const MAX_NAME_LENGTH = 200;
-/** A member shorter than this is a drawing slip (two pivots on top of each other), not a part. */
-export const MIN_MEMBER_LENGTH_MM = 1;
-
-export const DEFAULT_BIND_THRESHOLD_MM = 1.5;
-/**
- * N·m, drive torque at the axle for wind-up and link loads when the file gives none: about a
- * light truck in first gear (350 N·m × 3.3 × 3.5). Common practice, no published source.
- */
-export const DEFAULT_AXLE_TORQUE_NM = 4000;
-/** N·m, the largest axle torque a file may ask for (a heavy truck's first gear is well below). */
-export const MAX_AXLE_TORQUE_NM = 200_000;
-/** Common practice for smooth running at road speed (references.md, driveline guides); no published source. */
-export const DEFAULT_JOINT_ANGLE_LIMIT_DEG = 3;
+export * from './sketchVocabulary';
 
 const coordinate = z.number().min(-MAX_COORDINATE_MM).max(MAX_COORDINATE_MM);
 const positiveLength = z.number().positive().max(MAX_COORDINATE_MM);
@@ -101,9 +60,6 @@ export const memberSchema = z.discriminatedUnion('kind', [
   // `rate` (N/mm) is this half's share of the spring's vertical rate at the seat.
   z.looseObject({ ...memberBase, kind: z.literal('leaf-half'), seat: id, rate: z.number().positive().max(1e6).optional() }),
 ]);
-
-/** Share of the braking force on the front axle when a file gives none (%; common practice for road vehicles, no published source). */
-export const DEFAULT_FRONT_BRAKE_SHARE_PERCENT = 65;
 
 export const vehicleSchema = z.looseObject({
   wheelbase: positiveLength,

@@ -5,7 +5,12 @@
  * already shown is thrown away. Where a Web Worker cannot be made (unit tests, very old
  * browsers, a worker that fails to load) the same computation runs on the main thread,
  * coalesced to one run per macrotask.
+ *
+ * The document is validated here, on the main thread, where the board has the schema loaded
+ * anyway: an invalid sketch is answered at once with its problems and never reaches the
+ * solver, and the worker receives the parsed sketch and need not carry the validator.
  */
+import { checkSketch } from '../../shared/schema/sketch';
 import type { SweepAnswer, SweepRequest } from '../workers/sweep.protocol';
 
 type Compute = (req: SweepRequest) => SweepAnswer;
@@ -21,7 +26,7 @@ async function loadCompute(): Promise<Compute> {
 export type RunnerMode = 'worker' | 'main-thread';
 
 export interface SweepRunner {
-  /** Ask for a sweep of this document (copied now; later edits to it do not leak in). */
+  /** Ask for a sweep of this document (validated and copied now; later edits to it do not leak in). */
   request(doc: unknown): void;
   /** Resolves once nothing is running or waiting (for tests and benchmarks). */
   whenIdle(): Promise<void>;
@@ -45,6 +50,14 @@ function defaultWorker(): Worker {
 /** A plain copy: structured clone cannot take Vue's reactive proxies, JSON can and drops nothing a sketch holds. */
 function snapshot(doc: unknown): unknown {
   return doc === undefined ? undefined : JSON.parse(JSON.stringify(doc));
+}
+
+/** The request for a valid document, or the answer (its problems) for an invalid one. */
+function prepare(id: number, doc: unknown): { request: SweepRequest } | { answer: SweepAnswer } {
+  const t0 = performance.now();
+  const check = checkSketch(snapshot(doc));
+  if (check.ok) return { request: { id, sketch: check.sketch } };
+  return { answer: { id, ok: false, problems: check.problems, ms: performance.now() - t0 } };
 }
 
 export function createSweepRunner(onAnswer: (answer: SweepAnswer) => void, options: RunnerOptions = {}): SweepRunner {
@@ -145,10 +158,16 @@ export function createSweepRunner(onAnswer: (answer: SweepAnswer) => void, optio
   return {
     request(doc: unknown) {
       if (disposed) return;
-      const req: SweepRequest = { id: ++nextId, doc: snapshot(doc) };
+      const prepared = prepare(++nextId, doc);
       if (waiting) dropped++;
-      if (worker && inFlight) waiting = req; // replaces (drops) any older waiting request
-      else send(req);
+      if ('answer' in prepared) {
+        // Nothing to sweep: the problems replace whatever was waiting, and an older sweep
+        // still running will be thrown away as stale when it answers.
+        waiting = null;
+        apply(prepared.answer);
+        notifyIdle();
+      } else if (worker && inFlight) waiting = prepared.request; // replaces (drops) any older waiting request
+      else send(prepared.request);
     },
     whenIdle() {
       return isIdle() ? Promise.resolve() : new Promise<void>((resolve) => idleWaiters.push(resolve));

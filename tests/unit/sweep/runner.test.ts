@@ -42,12 +42,12 @@ describe('latest-wins sweep runner', () => {
     runner.request(docWithTrack(1520));
     runner.request(docWithTrack(1530));
     // Only the first went out; the three after it replaced each other while it ran.
-    expect(w.sent.map((r) => (r.doc as { name: string }).name)).toEqual(['track 1500']);
+    expect(w.sent.map((r) => r.sketch.name)).toEqual(['track 1500']);
     expect(runner.dropped).toBe(2);
 
     w.answer(0);
     // The newest waiting request goes out next; 1510 and 1520 never run.
-    expect(w.sent.map((r) => (r.doc as { name: string }).name)).toEqual(['track 1500', 'track 1530']);
+    expect(w.sent.map((r) => r.sketch.name)).toEqual(['track 1500', 'track 1530']);
     w.answer(1);
     expect(answers.map((a) => a.id)).toEqual([1, 4]);
     expect(answers.every((a) => a.ok)).toBe(true);
@@ -71,7 +71,7 @@ describe('latest-wins sweep runner', () => {
     const doc = docWithTrack(1500);
     runner.request(doc);
     doc.vehicle.track = 9999;
-    expect((w.sent[0].doc as { vehicle: { track: number } }).vehicle.track).toBe(1500);
+    expect(w.sent[0].sketch.vehicle.track).toBe(1500);
   });
 
   it('runs on the main thread, once per macrotask, when there is no worker', async () => {
@@ -109,6 +109,29 @@ describe('latest-wins sweep runner', () => {
     await runner.whenIdle();
     expect(answers[0].ok).toBe(false);
     if (!answers[0].ok) expect(answers[0].problems.some((p) => p.includes("members[0].a") && p.includes("'nowhere'"))).toBe(true);
+  });
+
+  it('validates on the page: the worker gets the parsed sketch, an invalid one never reaches it', () => {
+    const w = new HeldWorker();
+    const answers: SweepAnswer[] = [];
+    const runner = createSweepRunner((a) => answers.push(a), { useWorker: true, createWorker: () => w as unknown as Worker });
+    // A document without its sweep block: the schema fills in the defaults the solver reads.
+    const { sweep: _omitted, ...withoutSweep } = docWithTrack(1500);
+    runner.request(withoutSweep);
+    expect(w.sent[0].sketch.sweep.step).toBeGreaterThan(0);
+
+    runner.request(docWithTrack(1510)); // waits behind the first
+    const bad = { ...docWithTrack(1520), vehicle: { ...fourLink().vehicle, track: -5 } };
+    runner.request(bad);
+    // The problems are answered at once and replace the waiting request; the worker saw neither.
+    expect(w.sent).toHaveLength(1);
+    expect(answers).toHaveLength(1);
+    expect(answers[0].ok).toBe(false);
+    if (!answers[0].ok) expect(answers[0].problems.some((p) => p.startsWith('vehicle.track'))).toBe(true);
+    // The first sweep finishing late must not cover the problems with an older result.
+    w.answer(0);
+    expect(answers).toHaveLength(1);
+    expect(w.sent).toHaveLength(1);
   });
 
   it('uses the main thread by itself where Worker does not exist (as in Node)', () => {

@@ -1,0 +1,69 @@
+/**
+ * The words and bounds of the sketch format (../shared/design/sketch-format.md) that the
+ * solver reads as values: layouts, bodies, member kinds, size bounds and defaults. They live
+ * apart from the zod schema (sketch.ts, which re-exports them) so that the kinematics core can
+ * import them without the validator: the board's sweep worker runs on sketches the page has
+ * already validated, and carrying zod there would only add to the download.
+ * Lengths in mm, angles in degrees, torques in N·m.
+ */
+/** The six layouts a sketch can come from (the starter it was built from). */
+export const layouts = [
+  'four-link-lateral-rod',
+  'triangulated-four-link',
+  'three-link-lateral-rod',
+  'leaf-spring',
+  'trailing-arm',
+  'double-wishbone',
+] as const;
+export type Layout = (typeof layouts)[number];
+
+/** Bodies a point can belong to. The frame is fixed; the others move. */
+export const bodyIds = [
+  'frame',
+  'axle',
+  'arm-left',
+  'arm-right',
+  'knuckle-left',
+  'knuckle-right',
+  // Leaf-spring layouts (addition): the shackle carrying each spring's swinging eye.
+  'shackle-left',
+  'shackle-right',
+] as const;
+export type BodyId = (typeof bodyIds)[number];
+export type MovingBodyId = Exclude<BodyId, 'frame'>;
+
+export const memberKinds = ['link', 'lateral-rod', 'tie-rod', 'shackle', 'shock', 'spring', 'hinge', 'leaf-half'] as const;
+export type MemberKind = (typeof memberKinds)[number];
+
+/** Member kinds that hold a fixed length between their two points (the solver's constraints). */
+export const rigidMemberKinds: readonly MemberKind[] = ['link', 'lateral-rod', 'tie-rod', 'shackle'];
+
+/** Size bounds, so that a document can never make the solver or the server work without end. */
+export const MAX_POINTS = 200;
+export const MAX_MEMBERS = 200;
+/** Heave rows plus roll rows of one sweep. */
+export const MAX_SWEEP_ROWS = 2000;
+/** No coordinate or vehicle dimension beyond 100 m: keeps every derived number finite. */
+export const MAX_COORDINATE_MM = 100_000;
+/** Heave travel either way, mm. */
+export const MAX_TRAVEL_MM = 2000;
+/** Articulation either way, degrees (beyond this the small-part geometry of a sketch means nothing). */
+export const MAX_ROLL_DEG = 45;
+export const MAX_ID_LENGTH = 64;
+export const MAX_NAME_LENGTH = 200;
+/** A member shorter than this is a drawing slip (two pivots on top of each other), not a part. */
+export const MIN_MEMBER_LENGTH_MM = 1;
+
+export const DEFAULT_BIND_THRESHOLD_MM = 1.5;
+/**
+ * N·m, drive torque at the axle for wind-up and link loads when the file gives none: about a
+ * light truck in first gear (350 N·m × 3.3 × 3.5). Common practice, no published source.
+ */
+export const DEFAULT_AXLE_TORQUE_NM = 4000;
+/** N·m, the largest axle torque a file may ask for (a heavy truck's first gear is well below). */
+export const MAX_AXLE_TORQUE_NM = 200_000;
+/** Common practice for smooth running at road speed (references.md, driveline guides); no published source. */
+export const DEFAULT_JOINT_ANGLE_LIMIT_DEG = 3;
+
+/** Share of the braking force on the front axle when a file gives none (%; common practice for road vehicles, no published source). */
+export const DEFAULT_FRONT_BRAKE_SHARE_PERCENT = 65;
