@@ -23,6 +23,9 @@ import { usePrefsStore } from './prefs';
 /** The parts of a document the sweep reads; targets, tracing and the name do not need a new sweep. */
 const SWEPT_FIELDS = ['layout', 'vehicle', 'points', 'members', 'wheels', 'driveline', 'sweep'] as const;
 
+/** How long a sweep may be pending before the board says it is still sweeping (ms). */
+const SLOW_SWEEP_MS = 300;
+
 function nearest<T>(rows: readonly T[], pos: (r: T) => number, at: number): T | null {
   let best: T | null = null;
   let bestD = Infinity;
@@ -54,6 +57,25 @@ export const useSweepStore = defineStore('sweep', () => {
   const stale = computed(() => error.value !== null && result.value !== null);
   /** True while a newer sweep has been asked for than the one shown. */
   const pending = ref(false);
+  /**
+   * True once a sweep has been pending for longer than SLOW_SWEEP_MS. A sweep takes a few ms,
+   * so during a drag `pending` flips at every pointer move; an indicator bound to it would
+   * flicker and repaint the page each time for nothing a user could read.
+   */
+  const slow = ref(false);
+  let slowTimer: ReturnType<typeof setTimeout> | null = null;
+  watch(pending, (now) => {
+    if (now && slowTimer === null) {
+      slowTimer = setTimeout(() => {
+        slowTimer = null;
+        slow.value = pending.value;
+      }, SLOW_SWEEP_MS);
+    } else if (!now) {
+      if (slowTimer !== null) clearTimeout(slowTimer);
+      slowTimer = null;
+      slow.value = false;
+    }
+  });
   /** ms runSweep took for the result shown. */
   const lastMs = ref(0);
   /** Slider position in heave, mm of travel (0 = ride). */
@@ -212,6 +234,8 @@ export const useSweepStore = defineStore('sweep', () => {
   }
 
   function dispose() {
+    if (slowTimer !== null) clearTimeout(slowTimer);
+    slowTimer = null;
     runner?.dispose();
     runner = null;
     if (frame) cancelAnimationFrame(frame);
@@ -224,6 +248,7 @@ export const useSweepStore = defineStore('sweep', () => {
     error,
     stale,
     pending,
+    slow,
     lastMs,
     travel,
     roll,

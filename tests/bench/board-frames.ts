@@ -13,6 +13,9 @@
  * Run with `npm run bench:board` (builds first). `--out FILE` also writes the figures as Markdown.
  * `--without-sweep` answers the sweep worker's script with one that never replies, so the drag
  * measures the canvas and tables alone (a diagnostic: where the frame time goes).
+ * `--profile` records the page's main thread during the drag with Chromium's sampling profiler
+ * and prints where the time went, by function (a diagnostic: the profiler slows the page, so
+ * its frame figures are not the benchmark's).
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync, existsSync, rmSync } from 'node:fs';
@@ -194,6 +197,49 @@ function bundleFigures(urls: Set<string>): BundleFigures {
   };
 }
 
+interface ProfileNode {
+  id: number;
+  callFrame: { functionName: string; url: string; lineNumber: number };
+}
+
+/** Starts Chromium's sampling profiler on the page; `stop` answers the 25 functions with the most self time. */
+async function startProfiler(page: Page): Promise<{ stop(): Promise<string> }> {
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send('Profiler.enable');
+  await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
+  await cdp.send('Profiler.start');
+  return {
+    async stop() {
+      const { profile } = await cdp.send('Profiler.stop');
+      const nodes = new Map<number, ProfileNode>(profile.nodes.map((n: ProfileNode) => [n.id, n]));
+      const self = new Map<string, number>();
+      const deltas = profile.timeDeltas ?? [];
+      (profile.samples ?? []).forEach((nodeId: number, i: number) => {
+        const f = nodes.get(nodeId)?.callFrame;
+        if (!f) return;
+        const key = `${f.functionName || '(anonymous)'}  ${f.url.replace(/^.*\/assets\//, '')}:${f.lineNumber + 1}`;
+        self.set(key, (self.get(key) ?? 0) + (deltas[i + 1] ?? 0) / 1000);
+      });
+      const total = [...self.values()].reduce((a, b) => a + b, 0);
+      const top = [...self].sort((a, b) => b[1] - a[1]).slice(0, 25);
+      return [`Main thread during the drag (sampling profile, ${ms(total)} in all), self time by function:`, ...top.map(([k, v]) => `  ${ms(v).padStart(10)}  ${k}`)].join('\n');
+    },
+  };
+}
+
+/** ms: the page's clock steps (Chromium coarsens performance.now to 0.1 ms where the page is not cross-origin isolated). */
+const CLOCK_STEP_MS = 0.1;
+
+/**
+ * The verdict on the p95. One frame interval is 16.67 ms, which that clock shows as 16.6, 16.7
+ * or 16.8 ms (an idle page shows the same), so the target is read to within one clock step.
+ * A slow frame shows as a gap of two intervals (33.3 ms), far outside that.
+ */
+function frameVerdict(f: FrameFigures): string {
+  return f.p95 <= FRAME_TARGET_MS + CLOCK_STEP_MS + 1e-6 ? 'MET' : 'NOT MET';
+}
+
+const ms2 = (v: number) => `${v.toFixed(2)} ms`;
 const ms = (v: number) => `${v.toFixed(1)} ms`;
 const kb = (v: number) => `${v.toFixed(1)} KB`;
 
@@ -239,15 +285,17 @@ async function main() {
     page.on('worker', (w) => scripts.add(w.url()));
     await openBoard(page, base, id);
     const bundle = bundleFigures(scripts);
+    const profiler = process.argv.includes('--profile') ? await startProfiler(page) : null;
     const frames = await measureDrag(page);
+    if (profiler) console.log(await profiler.stop());
     await page.screenshot({ path: join(ROOT, 'tests/e2e/artifacts/bench-board-after-drag.png') });
 
     const load = loadavg().map((v) => v.toFixed(2)).join(' / ');
     const lines = [
       `Machine: ${cpus().length} cores, load average ${load} (1 / 5 / 15 min; other work on the machine skews frame times)`,
       `Board frame time while dragging ${DRAG_PIVOT} of the four-link starter (${DRAG_STEPS} pointer moves, ${frames.frames} frames sampled)${withoutSweep ? ' WITHOUT the sweep (diagnostic)' : ''}:`,
-      `  p95 ${ms(frames.p95)} (target <= ${ms(FRAME_TARGET_MS)}) ${frames.p95 <= FRAME_TARGET_MS + 0.05 ? 'MET' : 'NOT MET'}`,
-      `  median ${ms(frames.p50)}, worst ${ms(frames.max)}, frames over 25 ms: ${frames.over}; idle p95 ${ms(frames.idleP95)}`,
+      `  p95 ${ms2(frames.p95)} (target <= ${ms(FRAME_TARGET_MS)}, read to the clock's ${CLOCK_STEP_MS} ms step; an idle page: ${ms2(frames.idleP95)}) ${frameVerdict(frames)}`,
+      `  median ${ms2(frames.p50)}, worst ${ms(frames.max)}; dropped frames (over 25 ms): ${frames.over} of ${frames.frames} (${((100 * frames.over) / frames.frames).toFixed(1)} %)`,
       `  pivot moved: ${frames.moved ? 'yes' : 'NO'}; readout anti-squat changed: ${frames.readoutChanged ? 'yes' : 'NO'}`,
       `Board route JavaScript (every script fetched to open the board, plots and worker included), gzip -9 from dist/:`,
       `  total ${kb(bundle.totalGzipKb)} gzip (${kb(bundle.totalRawKb)} raw) (target <= ${BUNDLE_TARGET_KB} KB) ${bundle.totalGzipKb <= BUNDLE_TARGET_KB ? 'MET' : 'NOT MET'}`,

@@ -1,10 +1,14 @@
 // @vitest-environment happy-dom
-import { afterEach, describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { nextTick } from 'vue';
+import { createPinia, setActivePinia } from 'pinia';
 import { intersect } from 'mathjs';
 import { runSweep } from '../../../shared/kinematics';
 import type { Sketch } from '../../../shared/schema/sketch';
 import { startingTargets } from '../../../src/composables/useTargets';
-import { useSweepStore } from '../../../src/stores/sweep';
+import { configureSweepRunner, useSweepStore } from '../../../src/stores/sweep';
+import { useBoardStore } from '../../../src/stores/board';
+import { computeSweep, type SweepAnswer, type SweepRequest } from '../../../src/workers/sweep.protocol';
 import { fourLink, onBoard, settled, freshStores, detailOf } from './setup';
 
 /** Solver answers are least-squares residuals far below this; a display difference would be far above (mm, deg, %). */
@@ -93,6 +97,42 @@ describe('the sweep store follows the board', () => {
     await settled(sweep);
     expect(sweep.result).toEqual(runSweep(board.sketch));
     expect(sweep.pending).toBe(false);
+  });
+
+  it('says it is still sweeping only once a sweep has taken longer than a moment', async () => {
+    vi.useFakeTimers();
+    // A worker that answers only when told: the sweep takes as long as the test says.
+    const worker = {
+      sent: [] as SweepRequest[],
+      onmessage: null as ((e: MessageEvent<SweepAnswer>) => void) | null,
+      onerror: null,
+      postMessage(req: SweepRequest) {
+        this.sent.push(req);
+      },
+      terminate() {},
+    };
+    try {
+      setActivePinia(createPinia());
+      configureSweepRunner({ useWorker: true, createWorker: () => worker as unknown as Worker });
+      const board = useBoardStore();
+      const sweep = useSweepStore();
+      board.setLoaded(detailOf(fourLink()));
+      await nextTick();
+      expect(sweep.pending).toBe(true);
+      vi.advanceTimersByTime(200);
+      expect(sweep.slow).toBe(false); // a sweep still running after 0.2 s: no indicator yet
+      vi.advanceTimersByTime(150);
+      expect(sweep.slow).toBe(true);
+      worker.onmessage?.({ data: computeSweep(worker.sent[0]) } as MessageEvent<SweepAnswer>);
+      vi.advanceTimersByTime(20); // the answer is shown at the next animation frame
+      await nextTick();
+      expect(sweep.pending).toBe(false);
+      expect(sweep.slow).toBe(false);
+      expect(sweep.result).toEqual(runSweep(board.sketch));
+    } finally {
+      vi.useRealTimers();
+      configureSweepRunner({ useWorker: false });
+    }
   });
 
   it('keeps the last valid result, marked stale, and lists the problems of an invalid sketch', async () => {
