@@ -1,29 +1,9 @@
 import { test, expect, snap, signIn, DEMO } from './fixtures';
 import { test as anonymous, type APIRequestContext, type Page } from '@playwright/test';
-
-const $ = (page: Page, id: string) => page.locator(`[data-test="${id}"]`);
+import { $, boardReady, pivotAt, settled } from './board';
 
 async function csrf(request: APIRequestContext): Promise<string> {
   return ((await (await request.get('/api/auth/csrf')).json()) as { token: string }).token;
-}
-
-/** Waits until a view has drawn the pivot and the readout has a sweep to show. */
-async function boardReady(page: Page, pivot = 'UL.fl') {
-  await page.waitForFunction((id) => !!window.arcwrightBoard?.side?.pivotAt(id) && !!window.arcwrightBoard?.rear?.pivotAt(id), pivot);
-  await expect($(page, 'readout-antisquat')).toContainText('%');
-  const dismiss = $(page, 'caution-dismiss');
-  if (await dismiss.isVisible()) await dismiss.click();
-}
-
-async function pivotAt(page: Page, view: 'side' | 'rear', id: string) {
-  const at = await page.evaluate(([v, p]) => window.arcwrightBoard?.[v as 'side' | 'rear']?.pivotAt(p) ?? null, [view, id] as const);
-  expect(at, `${id} drawn in the ${view} view`).not.toBeNull();
-  return at!;
-}
-
-/** Lets the page finish what a gesture started: the tables refresh on an animation frame. */
-async function settled(page: Page) {
-  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(() => requestAnimationFrame(r)))));
 }
 
 /** Presses a pivot's handle and drags it by (dx, dy) screen pixels in small steps, as a hand would. */
