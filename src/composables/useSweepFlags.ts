@@ -2,7 +2,8 @@
  * Flags: the warnings a sweep raised (lock-up, bind, shock limits, joint angles) and the
  * targets it misses, each with where it starts and, where there is one, the member
  * concerned so a click can select it. Built from the result's structured events; the
- * words are written here in the user's units.
+ * words are written here in the user's units. The sweep's plain-sentence notes (its
+ * assumptions) are not flags: the readout shows them beside the numbers they qualify.
  */
 import type { HeaveRow, RollRow, SweepEvent, SweepResult } from '../../shared/kinematics';
 import type { SketchMember } from '../../shared/schema/sketch';
@@ -10,7 +11,7 @@ import type { LengthUnit } from '../../shared/units';
 import { metricSpecs, type TargetCheck } from './useTargets';
 import { showAngle, showLength, showPosition, showQuantity, quantityUnit, toDisplay, fixed } from './useSweepFormat';
 
-export type FlagKind = SweepEvent['kind'] | 'target' | 'warning';
+export type FlagKind = SweepEvent['kind'] | 'target';
 
 export interface Flag {
   /** stable within one result (for v-for keys and tests) */
@@ -189,6 +190,5 @@ export function buildFlags(result: SweepResult | null, members: readonly SketchM
     const f = targetFlag(c, u);
     if (f) flags.push(f);
   }
-  result.warnings.forEach((w, i) => flags.push({ key: `warning-${i}`, kind: 'warning', severity: 'info', title: 'Note', detail: w }));
   return flags.sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity] || Math.abs(a.at ?? 0) - Math.abs(b.at ?? 0));
 }

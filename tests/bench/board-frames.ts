@@ -324,6 +324,7 @@ async function main() {
     await context?.close().catch(() => undefined);
     server.kill('SIGTERM');
     rmSync(userDataDir, { recursive: true, force: true });
+    rmSync(dir, { recursive: true, force: true });
     if (server.exitCode && serverErr) console.error(serverErr);
   }
 }

@@ -123,3 +123,11 @@ describe('flags for missed targets', () => {
     expect(flag.detail).toBe('\u221220.0 mm at \u2212100.0 mm droop; wanted within ±15.0 mm.');
   });
 });
+
+describe('the sweep’s notes', () => {
+  it('are not flags: only events and missed targets are, so the readout alone shows the notes', () => {
+    const r = { ...result([-50, 0, 50].map((t) => heave(t))), warnings: ['The leaf springs locate the axle sideways; no lateral rod is modelled.'] };
+    expect(buildFlags(r, [], [], 'mm')).toEqual([]);
+  });
+});
+
