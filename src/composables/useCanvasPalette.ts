@@ -34,6 +34,8 @@ export interface CanvasPalette {
   ghost: string;
   geometry: string;
   scaleBar: string;
+  /** behind a label that sits over the drawing, so lines under it do not cross its letters */
+  labelBackdrop: string;
 }
 
 const LIGHT: CanvasPalette = {
@@ -65,6 +67,7 @@ const LIGHT: CanvasPalette = {
   ghost: 'rgba(120, 134, 148, 0.85)',
   geometry: '#a0307a',
   scaleBar: '#2b3a45',
+  labelBackdrop: 'rgba(247, 246, 242, 0.85)',
 };
 
 const DARK: CanvasPalette = {
@@ -92,6 +95,7 @@ const DARK: CanvasPalette = {
   ghost: 'rgba(170, 184, 196, 0.8)',
   geometry: '#e06ab8',
   scaleBar: '#d5dee5',
+  labelBackdrop: 'rgba(22, 28, 34, 0.85)',
 };
 
 export function useCanvasPalette() {
