@@ -8,6 +8,7 @@
 import { z } from 'zod';
 import { gridCount } from '../kinematics/grid';
 import { SketchValidationError } from './errors';
+import { targetsSchema, tracingSchema } from './boardFields';
 import {
   bodyIds,
   layouts,
@@ -121,6 +122,10 @@ const baseSketchSchema = z.looseObject({
     })
     .optional(),
   sweep: sweepSettingsSchema,
+  /** the designer's target bands (addition; boardFields.ts) */
+  targets: targetsSchema.optional(),
+  /** reference photos behind the views (addition; boardFields.ts) */
+  tracing: tracingSchema.optional(),
 });
 
 type BaseSketch = z.infer<typeof baseSketchSchema>;

@@ -10,6 +10,7 @@
  * anyway: an invalid sketch is answered at once with its problems and never reaches the
  * solver, and the worker receives the parsed sketch and need not carry the validator.
  */
+import { boardOnlyFields } from '../../shared/schema/boardFields';
 import { checkSketch } from '../../shared/schema/sketch';
 import type { SweepAnswer, SweepRequest } from '../workers/sweep.protocol';
 
@@ -47,9 +48,17 @@ function defaultWorker(): Worker {
   return new Worker(new URL('../workers/sweep.worker.ts', import.meta.url), { type: 'module' });
 }
 
-/** A plain copy: structured clone cannot take Vue's reactive proxies, JSON can and drops nothing a sketch holds. */
+/**
+ * A plain copy of what the sweep reads: structured clone cannot take Vue's reactive proxies, JSON
+ * can and drops nothing a sketch holds. The board-only fields (targets, tracing) are left out: the
+ * solver never reads them, so a bad target must not stop the sweep (the board names it, and it
+ * blocks saving, where it matters).
+ */
 function snapshot(doc: unknown): unknown {
-  return doc === undefined ? undefined : JSON.parse(JSON.stringify(doc));
+  if (doc === undefined) return undefined;
+  const copy = JSON.parse(JSON.stringify(doc)) as unknown;
+  if (copy && typeof copy === 'object') for (const k of boardOnlyFields) delete (copy as Record<string, unknown>)[k];
+  return copy;
 }
 
 /** The request for a valid document, or the answer (its problems) for an invalid one. */

@@ -2,9 +2,10 @@
  * Targets: bands the designer wants a sweep quantity to stay within (anti-squat 60–90 %,
  * pinion angle change within ±3°, ...). Kept in the sketch document as the optional
  * `targets` field so they save, export and travel with the sketch. Values are in the
- * file's units: % for anti-squat and roll steer, degrees for angles, mm for lengths.
+ * file's units: % for anti-squat and roll steer, degrees for angles, mm for lengths. The
+ * field's schema is the shared one (shared/schema/boardFields.ts), so the server checks it too.
  */
-import { z } from 'zod';
+import { targetMetrics, targetsSchema, type TargetMetric } from '../../shared/schema/boardFields';
 import type { HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
 import type { Deg, Mm } from '../../shared/units';
 
@@ -18,17 +19,7 @@ export interface TargetBand {
   to?: number;
 }
 
-export const targetMetrics = [
-  'antiSquat',
-  'pinionAngleChange',
-  'lateralShift',
-  'foreAftShift',
-  'rollCenterHeight',
-  'bind',
-  'rollSteer',
-  'articulation',
-] as const;
-export type TargetMetric = (typeof targetMetrics)[number];
+export { targetMetrics, type TargetMetric };
 export type Targets = Partial<Record<TargetMetric, TargetBand>>;
 
 /** What kind of number a metric is, so the UI can convert and label it. */
@@ -65,15 +56,6 @@ export const startingTargets: Targets = {
   lateralShift: { min: -15, max: 15 },
   articulation: { min: 8 },
 };
-
-const finite = z.number().finite();
-const bandSchema = z
-  .object({ min: finite.optional(), max: finite.optional(), from: finite.optional(), to: finite.optional() })
-  .refine((b) => b.min === undefined || b.max === undefined || b.min <= b.max, { message: 'min must not be above max' })
-  .refine((b) => b.from === undefined || b.to === undefined || b.from <= b.to, { message: 'from must not be after to' });
-
-/** The document's `targets` field (checked here too, so a hand-edited file cannot break the board). */
-export const targetsSchema = z.object(Object.fromEntries(targetMetrics.map((m) => [m, bandSchema.optional()])) as Record<TargetMetric, z.ZodOptional<typeof bandSchema>>);
 
 /** The targets of a document, or none when the field is absent or malformed. */
 export function readTargets(doc: unknown): Targets {

@@ -7,7 +7,7 @@
  * (mm per image pixel) are stored. Pure functions only; the canvas converts with
  * canvasTransform, the one place mm become stage pixels.
  */
-import { z } from 'zod';
+import { MAX_MM_PER_PX, MIN_MM_PER_PX, tracingImageSchema } from '../../shared/schema/boardFields';
 import type { Mm } from '../../shared/units';
 import { planeToScreen, screenToPlane, type PlanePoint, type ViewKind, type ViewTransform } from './canvasTransform';
 
@@ -38,21 +38,7 @@ export const MAX_TRACING_BYTES = 10 * 1024 * 1024;
 export const DEFAULT_TRACING_OPACITY = 0.5;
 /** Two scale points closer than this on the photo (image px) cannot give a trustworthy scale. */
 export const MIN_SCALE_PICK_PX = 4;
-/** Scales outside this range (mm per image px) come from a slip, not from a photo of a vehicle. */
-export const MIN_MM_PER_PX = 0.001;
-export const MAX_MM_PER_PX = 1000;
-
-const coordinate = z.number().finite().min(-100_000).max(100_000);
-export const tracingImageSchema = z.object({
-  upload: z.union([z.string().min(1).max(100), z.number().int().positive()]),
-  url: z.string().min(1).max(500),
-  width: z.number().positive(),
-  height: z.number().positive(),
-  centre: z.object({ h: coordinate, v: coordinate }),
-  mmPerPx: z.number().min(MIN_MM_PER_PX).max(MAX_MM_PER_PX),
-  opacity: z.number().min(0).max(1),
-  locked: z.boolean(),
-});
+export { MIN_MM_PER_PX, MAX_MM_PER_PX };
 
 /** The document's tracing for a view, or null when absent or malformed (a bad field never breaks the board). */
 export function readTracing(doc: unknown, view: ViewKind): TracingImage | null {

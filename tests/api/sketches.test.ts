@@ -116,6 +116,19 @@ describe('save with versions', () => {
     expect(await SketchRevision.count({ where: { sketchId: s.id } })).toBe(2);
   });
 
+  it('refuses a save whose targets or tracing are malformed, naming the field, and keeps the stored version', async () => {
+    const s = await create(alice);
+    const bad = await alice.put(`/api/sketches/${s.id}`).send({ document: { ...s.document, targets: { antiSquat: { min: 90, max: 60 } } }, version: 1 });
+    expect(bad.status).toBe(400);
+    expect(bad.body.details).toContain('document.targets.antiSquat: min must not be above max');
+    const photo = { upload: 'a1', url: '/api/uploads/a1', width: 10, height: 10, centre: { h: 0, v: 0 }, mmPerPx: 1, opacity: -1, locked: false };
+    const badPhoto = await alice.put(`/api/sketches/${s.id}`).send({ document: { ...s.document, tracing: { side: photo } }, version: 1 });
+    expect(badPhoto.status).toBe(400);
+    expect((badPhoto.body.details as string[]).some((d) => d.startsWith('document.tracing.side.opacity'))).toBe(true);
+    const row = await Sketch.findByPk(s.id);
+    expect(row!.version).toBe(1);
+  });
+
   it('lets exactly one of several concurrent saves of the same version through', async () => {
     const s = await create(alice);
     const results = await Promise.all(

@@ -34,6 +34,21 @@ describe('sketch schema', () => {
     expect((s.points[0] as Record<string, unknown>).label).toBe('hub');
   });
 
+  it('checks the board fields, targets and tracing, and keeps what it does not know in them', () => {
+    const photo = { upload: 'a1', url: '/api/uploads/a1', width: 1600, height: 900, centre: { h: 0, v: 400 }, mmPerPx: 2.5, opacity: 0.5, locked: false };
+    const s = parseSketch(edit((d) => {
+      d.targets = { antiSquat: { min: 60, max: 90 }, camberGain: { max: 1 } };
+      d.tracing = { side: { ...photo, caption: 'shop photo' } };
+    }));
+    expect((s.targets as Record<string, unknown>).camberGain).toEqual({ max: 1 });
+    expect((s.tracing!.side as Record<string, unknown>).caption).toBe('shop photo');
+
+    expect(problemsOf(edit((d) => (d.targets = { antiSquat: { min: 90, max: 60 } })))).toContain('targets.antiSquat: min must not be above max');
+    expect(problemsOf(edit((d) => (d.targets = { lateralShift: { max: 'wide' } })))).toContain('targets.lateralShift.max: expected a number');
+    expect(problemsOf(edit((d) => (d.tracing = { side: { ...photo, opacity: 2 } }))).some((p) => p.startsWith('tracing.side.opacity'))).toBe(true);
+    expect(problemsOf(edit((d) => (d.tracing = { rear: { ...photo, mmPerPx: 0 } }))).some((p) => p.startsWith('tracing.rear.mmPerPx'))).toBe(true);
+  });
+
   it('names the path of a non-number', () => {
     expect(problemsOf(edit((d) => (d.points[3].x = 'a')))).toContain('points[3].x: expected a number');
   });

@@ -192,11 +192,13 @@ describe('targets live in the document', () => {
     expect(flag!.detail).toContain('wanted 70.0–90.0 %');
   });
 
-  it('ignores a malformed targets field from a hand-edited file instead of breaking', async () => {
+  it('a malformed targets field from a hand-edited file still sweeps, and the board names the problem', async () => {
     const doc = { ...fourLink(), targets: { antiSquat: { min: 'lots' } } } as unknown as Sketch;
-    const { sweep } = await onBoard(doc);
+    const { board, sweep } = await onBoard(doc);
     expect(sweep.targets).toEqual({});
     expect(sweep.result).not.toBeNull();
+    expect(sweep.error).toBeNull();
+    expect(board.problems.some((p) => p.startsWith('targets.antiSquat.min'))).toBe(true);
   });
 });
 
