@@ -53,14 +53,15 @@ async function openBoard(page: Page, id: number) {
   await expect($(page, 'readout-antisquat')).toContainText('%');
 }
 
-async function sideTransform(page: Page): Promise<ViewTransform> {
-  return page.evaluate(() => window.arcwrightBoard!.side!.transform());
+async function viewTransform(page: Page, view: 'side' | 'rear' = 'side'): Promise<ViewTransform> {
+  return page.evaluate((v) => window.arcwrightBoard![v]!.transform(), view);
 }
+const sideTransform = (page: Page) => viewTransform(page, 'side');
 
-/** Client pixels of a side-view plane point. */
-async function clientOf(page: Page, p: PlanePoint): Promise<{ x: number; y: number }> {
-  const t = await sideTransform(page);
-  const box = (await $(page, 'canvas-side').boundingBox())!;
+/** Client pixels of a plane point of a view (the side view unless told). */
+async function clientOf(page: Page, p: PlanePoint, view: 'side' | 'rear' = 'side'): Promise<{ x: number; y: number }> {
+  const t = await viewTransform(page, view);
+  const box = (await $(page, `canvas-${view}`).boundingBox())!;
   const s = planeToScreen(t, p);
   return { x: box.x + s.px, y: box.y + s.py };
 }
@@ -195,6 +196,38 @@ test('a side photo uploads behind the side view, takes its scale from two clicke
   await page.mouse.up();
   await page.waitForTimeout(2000); // longer than the autosave delay
   expect((await saved())!.centre).toEqual(moved);
+});
+
+test('a photo behind the rear view is its own: placed across the track, scaled from clicks in the rear view', async ({ page }) => {
+  const id = await newFourLink(page, 'Sweep test: rear tracing');
+  await openBoard(page, id);
+  await $(page, 'tab-tracing').click();
+  await $(page, 'tracing-view').getByRole('button', { name: 'rear view' }).click();
+  await $(page, 'tracing-file').setInputFiles({ name: 'axle-rear.png', mimeType: 'image/png', buffer: makePng(400, 200) });
+  const track = starters['four-link-lateral-rod']!.build().vehicle.track;
+  const placed = initialPlacement('rear', 400, 200, { wheelbase: 3000, track });
+  await expect($(page, 'tracing-scale')).toHaveText(`Scale: 1 photo pixel = ${placed.mmPerPx.toPrecision(3)} mm`);
+
+  // 800 mm apart across the photo, below the axle, where no pivot or link lies; really 1200 mm.
+  await $(page, 'tracing-set-scale').click();
+  for (const h of [400, -400]) {
+    const at = await clientOf(page, { h, v: 100 }, 'rear');
+    await page.mouse.click(at.x, at.y);
+  }
+  await page.locator('[data-test="tracing-distance"]').fill('1200');
+  await $(page, 'tracing-apply').click();
+  await expect($(page, 'tracing-picking')).toHaveCount(0);
+  await snap(page, 'board-sweep-tracing-rear');
+
+  const saved = async () => ((await (await page.request.get(`/api/sketches/${id}`)).json()) as { document: { tracing?: { side?: unknown; rear?: { mmPerPx: number } } } }).document.tracing;
+  const clickError = 2 / (800 * (await viewTransform(page, 'rear')).scale);
+  await expect.poll(async () => (await saved())?.rear?.mmPerPx ?? 0).toBeGreaterThan(placed.mmPerPx * 1.4);
+  const t = (await saved())!;
+  expect(Math.abs(t.rear!.mmPerPx / (placed.mmPerPx * 1.5) - 1)).toBeLessThan(clickError + 1e-9);
+  // The side view has no photo: each view keeps its own.
+  expect(t.side).toBeUndefined();
+  await $(page, 'tracing-view').getByRole('button', { name: 'side view' }).click();
+  await expect($(page, 'tracing-scale')).toHaveCount(0);
 });
 
 test('a file that is not a photo is refused with a message and changes nothing', async ({ page }) => {
