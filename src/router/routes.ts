@@ -25,6 +25,7 @@ export const routes: RouteRecordRaw[] = [
       { path: 'sketches/:id(\\d+)', name: 'board', component: BoardPage, meta: { auth: true } },
       // Read-only links work signed out too.
       { path: 'shared/:token', name: 'board-shared', component: BoardPage },
+      { path: 'lineup', name: 'lineup', component: () => import('../pages/LineupPage.vue'), meta: { auth: true } },
       { path: 'admin', redirect: '/admin/users' },
       { path: 'admin/users', name: 'admin-users', component: () => import('../pages/AdminUsersPage.vue'), meta: { auth: true, admin: true } },
       { path: 'admin/outbox', name: 'admin-outbox', component: () => import('../pages/AdminOutboxPage.vue'), meta: { auth: true, admin: true } },
