@@ -23,6 +23,7 @@ export const routes: RouteRecordRaw[] = [
       { path: 'library', name: 'library', component: () => import('../pages/LibraryPage.vue'), meta: { auth: true } },
       { path: 'sketches/new', name: 'board-new', component: BoardPage, meta: { auth: true } },
       { path: 'sketches/:id(\\d+)', name: 'board', component: BoardPage, meta: { auth: true } },
+      { path: 'sketches/:id(\\d+)/sheet', name: 'build-sheet', component: () => import('../pages/BuildSheetPage.vue'), meta: { auth: true } },
       // Read-only links work signed out too.
       { path: 'shared/:token', name: 'board-shared', component: BoardPage },
       { path: 'lineup', name: 'lineup', component: () => import('../pages/LineupPage.vue'), meta: { auth: true } },

@@ -1,0 +1,122 @@
+/**
+ * The build sheet as data: what a fabricator needs from a sketch to cut and weld it, in the
+ * user's unit. Every pivot's position (frame brackets apart from the axle's or arms' mounts),
+ * every member centre to centre at ride height, the shocks' lengths across the travel against
+ * their stroke, and the geometry the sweep reads at ride. Pure; the page only lays it out.
+ */
+import type { SweepResult } from '../../shared/kinematics/types';
+import type { Sketch } from '../../shared/schema/sketch';
+import { formatLength, mmToUnit, type LengthUnit } from '../../shared/units';
+import { fixed, showAngle, showLength, showPercent, showRate, showRatio } from './useSweepFormat';
+import { kindLabel } from './useBoardMemberKinds';
+
+export interface SheetPivot {
+  id: string;
+  body: string;
+  /** x, y, z in the user's unit, as text */
+  x: string;
+  y: string;
+  z: string;
+}
+
+export interface SheetMember {
+  id: string;
+  kind: string;
+  ends: string;
+  /** centre to centre at ride height */
+  length: string;
+  /** shocks: shortest and longest the travel asks of it, against its stroke; springs: rate and motion ratio */
+  note: string;
+}
+
+export interface SheetLine {
+  label: string;
+  value: string;
+}
+
+export interface BuildSheet {
+  vehicle: SheetLine[];
+  frame: SheetPivot[];
+  moving: SheetPivot[];
+  members: SheetMember[];
+  /** the sweep's readings; empty with `problem` set when the sketch cannot be swept */
+  geometry: SheetLine[];
+  problem: string | null;
+}
+
+function coordinate(v: number, u: LengthUnit): string {
+  const d = u === 'in' ? 2 : 1;
+  return fixed(mmToUnit(v, u), d);
+}
+
+function pivot(p: Sketch['points'][number], u: LengthUnit): SheetPivot {
+  return { id: p.id, body: p.body.replace('-', ' '), x: coordinate(p.x, u), y: coordinate(p.y, u), z: coordinate(p.z, u) };
+}
+
+/** The span a member's length takes over the heave sweep (mm), or null when the sweep has no reading of it. */
+function lengthSpan(result: SweepResult | null, id: string): { min: number; max: number } | null {
+  const lengths = (result?.heave ?? []).map((r) => r.members[id]?.length).filter((v): v is number => v !== undefined);
+  return lengths.length ? { min: Math.min(...lengths), max: Math.max(...lengths) } : null;
+}
+
+function memberNote(m: Sketch['members'][number], result: SweepResult | null, u: LengthUnit): string {
+  if (m.kind === 'shock') {
+    const span = lengthSpan(result, m.id);
+    const used = span ? `${formatLength(span.min, u)} to ${formatLength(span.max, u)} over the travel` : 'not swept';
+    const stroke = m.minLength !== undefined && m.maxLength !== undefined ? `stroke ${formatLength(m.minLength, u)} to ${formatLength(m.maxLength, u)}` : 'no stroke given';
+    return `${stroke}; ${used}`;
+  }
+  if (m.kind === 'spring') {
+    const mr = result?.ride.members[m.id]?.motionRatio;
+    const rate = m.rate === undefined ? 'no rate given' : showRate(m.rate).text;
+    return `${rate}; motion ratio ${showRatio(mr).text} at ride`;
+  }
+  if (m.kind === 'link' && m.group) return `${m.group} link`;
+  return '';
+}
+
+export function buildSheet(sketch: Sketch, result: SweepResult | null, problem: string | null, u: LengthUnit): BuildSheet {
+  const byId = new Map(sketch.points.map((p) => [p.id, p] as const));
+  const v = sketch.vehicle;
+  const vehicle: SheetLine[] = [
+    { label: 'Wheelbase', value: formatLength(v.wheelbase, u) },
+    { label: 'Track', value: formatLength(v.track, u) },
+    { label: 'Tyre radius', value: formatLength(v.tireRadius, u) },
+    { label: 'Centre of gravity height', value: formatLength(v.cgHeight, u) },
+  ];
+  const members: SheetMember[] = sketch.members.map((m) => {
+    const a = byId.get(m.a);
+    const b = byId.get(m.b);
+    const length = a && b ? formatLength(Math.hypot(a.x - b.x, a.y - b.y, a.z - b.z), u) : '—';
+    return { id: m.id, kind: kindLabel(m.kind), ends: `${m.a} – ${m.b}`, length, note: memberNote(m, result, u) };
+  });
+
+  const geometry: SheetLine[] = [];
+  if (result) {
+    const ride = result.ride;
+    const heave = result.heave;
+    const range = (read: (r: (typeof heave)[number]) => number | null) => {
+      const vals = heave.map(read).filter((x): x is number => x !== null && Number.isFinite(x));
+      return vals.length ? { min: Math.min(...vals), max: Math.max(...vals) } : null;
+    };
+    const pinion = range((r) => r.pinionAngleChange);
+    const lateral = range((r) => r.lateralShift);
+    geometry.push(
+      { label: 'Travel reached', value: `${formatLength(-result.limits.droop, u)} droop, ${formatLength(result.limits.bump, u)} bump` },
+      { label: 'Articulation reached', value: showAngle(result.limits.articulation, 'no roll sweep', false, 1).text },
+      { label: 'Anti-squat at ride', value: showPercent(ride.antiSquat, 'not defined').text },
+      { label: 'Instant centre at ride (x, z)', value: ride.instantCenter ? `${formatLength(ride.instantCenter.x, u)}, ${formatLength(ride.instantCenter.z, u)}` : '—' },
+      { label: 'Roll centre height at ride', value: showLength(ride.rollCenterHeight, u).text },
+      { label: 'Pinion angle change over the travel', value: pinion ? `${showAngle(pinion.min, '', true).text} to ${showAngle(pinion.max, '', true).text}` : '—' },
+      { label: 'Lateral shift over the travel', value: lateral ? `${showLength(lateral.min, u, '', true).text} to ${showLength(lateral.max, u, '', true).text}` : '—' },
+    );
+  }
+  return {
+    vehicle,
+    frame: sketch.points.filter((p) => p.body === 'frame').map((p) => pivot(p, u)),
+    moving: sketch.points.filter((p) => p.body !== 'frame').map((p) => pivot(p, u)),
+    members,
+    geometry,
+    problem,
+  };
+}

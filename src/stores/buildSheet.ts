@@ -1,0 +1,44 @@
+/**
+ * The build sheet of one sketch: the sketch as saved and its sweep (runSweep, the same result
+ * the board shows). Read-only; the sheet is printed, not edited.
+ */
+import { defineStore } from 'pinia';
+import { ref, shallowRef } from 'vue';
+import { api, errorMessage } from '../api/http';
+import type { SketchDetail } from '../api/types';
+import type { SweepResult } from '../../shared/kinematics/types';
+import { runSweep } from '../../shared/kinematics/run';
+import { isSketchValidationError } from '../../shared/schema/errors';
+
+export const useBuildSheetStore = defineStore('buildSheet', () => {
+  const detail = shallowRef<SketchDetail | null>(null);
+  const result = shallowRef<SweepResult | null>(null);
+  /** why the sketch cannot be swept (the sheet still lists its pivots and members) */
+  const problem = ref<string | null>(null);
+  /** why the sheet could not open at all */
+  const error = ref<string | null>(null);
+  const loading = ref(false);
+
+  async function load(id: number): Promise<void> {
+    loading.value = true;
+    error.value = null;
+    problem.value = null;
+    result.value = null;
+    detail.value = null;
+    try {
+      detail.value = await api.get<SketchDetail>(`/api/sketches/${id}`);
+    } catch (err) {
+      error.value = `The build sheet could not open: ${errorMessage(err)}.`;
+      return;
+    } finally {
+      loading.value = false;
+    }
+    try {
+      result.value = runSweep(detail.value.document);
+    } catch (err) {
+      problem.value = `The sketch cannot be swept: ${isSketchValidationError(err) ? err.problems[0] : errorMessage(err)}`;
+    }
+  }
+
+  return { detail, result, problem, error, loading, load };
+});
