@@ -7,8 +7,7 @@ import { ref, shallowRef } from 'vue';
 import { api, errorMessage } from '../api/http';
 import type { SketchDetail } from '../api/types';
 import type { SweepResult } from '../../shared/kinematics/types';
-import { runSweep } from '../../shared/kinematics/run';
-import { isSketchValidationError } from '../../shared/schema/errors';
+import { sweepOnce } from '../composables/sweepOnce';
 
 export const useBuildSheetStore = defineStore('buildSheet', () => {
   const detail = shallowRef<SketchDetail | null>(null);
@@ -33,11 +32,9 @@ export const useBuildSheetStore = defineStore('buildSheet', () => {
     } finally {
       loading.value = false;
     }
-    try {
-      result.value = runSweep(detail.value.document);
-    } catch (err) {
-      problem.value = `The sketch cannot be swept: ${isSketchValidationError(err) ? err.problems[0] : errorMessage(err)}`;
-    }
+    const swept = sweepOnce(detail.value.document);
+    result.value = swept.result;
+    problem.value = swept.problem;
   }
 
   return { detail, result, problem, error, loading, load };

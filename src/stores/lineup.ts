@@ -6,10 +6,9 @@
 import { defineStore } from 'pinia';
 import { computed, ref, shallowRef } from 'vue';
 import { api, errorMessage } from '../api/http';
+import { sweepOnce } from '../composables/sweepOnce';
 import type { SketchDetail } from '../api/types';
 import type { SweepResult } from '../../shared/kinematics/types';
-import { runSweep } from '../../shared/kinematics/run';
-import { isSketchValidationError } from '../../shared/schema/errors';
 import { bracketList } from '../../shared/lineup/brackets';
 import { parseLineupIds } from './lineup/ids';
 
@@ -20,15 +19,6 @@ export interface LineupVariant {
   /** the sweep, or null with the reason when the sketch cannot be swept */
   result: SweepResult | null;
   problem: string | null;
-}
-
-function sweepOf(detail: SketchDetail): Pick<LineupVariant, 'result' | 'problem'> {
-  try {
-    return { result: runSweep(detail.document), problem: null };
-  } catch (err) {
-    const problem = isSketchValidationError(err) ? err.problems[0] : errorMessage(err);
-    return { result: null, problem: `It cannot be swept: ${problem}` };
-  }
 }
 
 export const useLineupStore = defineStore('lineup', () => {
@@ -50,7 +40,7 @@ export const useLineupStore = defineStore('lineup', () => {
     loading.value = true;
     try {
       const details = await Promise.all(parsed.ids.map((id) => api.get<SketchDetail>(`/api/sketches/${id}`)));
-      variants.value = details.map((detail) => ({ detail, ...sweepOf(detail) }));
+      variants.value = details.map((detail) => ({ detail, ...sweepOnce(detail.document) }));
     } catch (err) {
       variants.value = [];
       error.value = `The line-up could not open: ${errorMessage(err)}.`;
