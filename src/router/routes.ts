@@ -26,6 +26,7 @@ export const routes: RouteRecordRaw[] = [
       { path: 'sketches/:id(\\d+)/sheet', name: 'build-sheet', component: () => import('../pages/BuildSheetPage.vue'), meta: { auth: true } },
       // Read-only links work signed out too.
       { path: 'shared/:token', name: 'board-shared', component: BoardPage },
+      { path: 'shared/:token/sheet', name: 'build-sheet-shared', component: () => import('../pages/BuildSheetPage.vue') },
       { path: 'lineup', name: 'lineup', component: () => import('../pages/LineupPage.vue'), meta: { auth: true } },
       { path: 'admin', redirect: '/admin/users' },
       { path: 'admin/users', name: 'admin-users', component: () => import('../pages/AdminUsersPage.vue'), meta: { auth: true, admin: true } },

@@ -18,14 +18,16 @@ export const useBuildSheetStore = defineStore('buildSheet', () => {
   const error = ref<string | null>(null);
   const loading = ref(false);
 
-  async function load(id: number): Promise<void> {
+  /** Loads a sketch by id (the owner's) or by its read-only link's token (anyone with the link). */
+  async function load(which: { id: number } | { token: string }): Promise<void> {
     loading.value = true;
     error.value = null;
     problem.value = null;
     result.value = null;
     detail.value = null;
     try {
-      detail.value = await api.get<SketchDetail>(`/api/sketches/${id}`);
+      const url = 'token' in which ? `/api/shared/${encodeURIComponent(which.token)}` : `/api/sketches/${which.id}`;
+      detail.value = await api.get<SketchDetail>(url);
     } catch (err) {
       error.value = `The build sheet could not open: ${errorMessage(err)}.`;
       return;

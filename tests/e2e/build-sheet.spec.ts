@@ -1,6 +1,11 @@
-import { test, expect, snap } from './fixtures';
+import { test, expect, snap, signIn, DEMO } from './fixtures';
+import { test as anonymous, type APIRequestContext } from '@playwright/test';
 import { starters } from '../../shared/kinematics';
 import { $, boardReady } from './board';
+
+async function csrf(request: APIRequestContext): Promise<string> {
+  return ((await (await request.get('/api/auth/csrf')).json()) as { token: string }).token;
+}
 
 test('the board menu opens the build sheet: caution, brackets and member lengths, and a print without the app around it', async ({ page }) => {
   await page.goto('/sketches/new?starter=four-link-lateral-rod');
@@ -33,4 +38,26 @@ test('the board menu opens the build sheet: caution, brackets and member lengths
 test('a build sheet for a sketch that is not there says so', async ({ page }) => {
   await page.goto('/sketches/999999/sheet');
   await expect($(page, 'sheet-error')).toContainText('The build sheet could not open: no such sketch.');
+});
+
+anonymous('a customer with the read-only link opens the build sheet from the board without signing in', async ({ page, browser, baseURL }) => {
+  const owner = await browser.newContext({ baseURL });
+  const ownerPage = await owner.newPage();
+  await signIn(ownerPage, DEMO.maker);
+  await ownerPage.goto('/sketches/new?starter=four-link-lateral-rod');
+  await expect(ownerPage).toHaveURL(/\/sketches\/\d+$/);
+  const id = Number(ownerPage.url().match(/(\d+)$/)![1]);
+  const share = await ownerPage.request.post(`/api/sketches/${id}/share`, { data: { mode: 'link' }, headers: { 'X-CSRF-Token': await csrf(ownerPage.request) } });
+  const { shareToken } = (await share.json()) as { shareToken: string };
+  await owner.close();
+
+  await page.goto(`/shared/${shareToken}`);
+  await boardReady(page);
+  await $(page, 'board-menu').click();
+  await $(page, 'open-build-sheet').click();
+  await expect(page).toHaveURL(new RegExp(`/shared/${shareToken}/sheet$`));
+  await expect($(page, 'sheet-caution')).toContainText('Geometry only.');
+  await expect($(page, 'sheet-pivot-UL.fl')).toBeVisible();
+  await page.getByLabel('Back to the board').click();
+  await expect(page).toHaveURL(new RegExp(`/shared/${shareToken}$`));
 });
