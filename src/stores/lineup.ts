@@ -12,8 +12,6 @@ import type { SweepResult } from '../../shared/kinematics/types';
 import { bracketList } from '../../shared/lineup/brackets';
 import { parseLineupIds } from './lineup/ids';
 
-export { LINEUP_MAX, LINEUP_MIN } from './lineup/ids';
-
 export interface LineupVariant {
   detail: SketchDetail;
   /** the sweep, or null with the reason when the sketch cannot be swept */
