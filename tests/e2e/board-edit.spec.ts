@@ -1,10 +1,7 @@
-import { test, expect, snap, signIn, DEMO } from './fixtures';
-import { test as anonymous, type APIRequestContext, type Page } from '@playwright/test';
+import { test, expect, snap } from './fixtures';
+import { test as anonymous, type Page } from '@playwright/test';
 import { $, boardReady, pivotAt, settled } from './board';
-
-async function csrf(request: APIRequestContext): Promise<string> {
-  return ((await (await request.get('/api/auth/csrf')).json()) as { token: string }).token;
-}
+import { csrf, ownerSharesStarter } from './api';
 
 /** Presses a pivot's handle and drags it by (dx, dy) screen pixels in small steps, as a hand would. */
 async function drag(page: Page, view: 'side' | 'rear', id: string, dx: number, dy: number) {
@@ -183,16 +180,7 @@ test('revisions: compare an earlier version with the current sketch, then restor
 
 anonymous('a read-only link opens the board without sign-in: no drags, and a copy needs an account', async ({ page, browser, baseURL }) => {
   // The owner shares a sketch by link (through the API, signed in in a context of their own).
-  const owner = await browser.newContext({ baseURL });
-  const ownerPage = await owner.newPage();
-  await signIn(ownerPage, DEMO.maker);
-  await ownerPage.goto('/sketches/new?starter=four-link-lateral-rod');
-  await expect(ownerPage).toHaveURL(/\/sketches\/\d+$/);
-  const id = Number(ownerPage.url().match(/(\d+)$/)![1]);
-  const share = await ownerPage.request.post(`/api/sketches/${id}/share`, { data: { mode: 'link' }, headers: { 'X-CSRF-Token': await csrf(ownerPage.request) } });
-  expect(share.status()).toBe(200);
-  const { shareToken } = (await share.json()) as { shareToken: string };
-  await owner.close();
+  const shareToken = await ownerSharesStarter(browser, baseURL);
 
   await page.goto(`/shared/${shareToken}`);
   await boardReady(page);

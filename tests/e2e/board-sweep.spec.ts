@@ -1,7 +1,8 @@
 import { deflateSync, crc32 } from 'node:zlib';
 import { test, expect, snap } from './fixtures';
-import type { Page, APIRequestContext } from '@playwright/test';
+import type { Page } from '@playwright/test';
 import { starters } from '../../shared/kinematics';
+import { csrf } from './api';
 import { initialPlacement } from '../../src/composables/useTracingGeometry';
 import { planeToScreen, type PlanePoint, type ViewTransform } from '../../src/composables/canvasTransform';
 
@@ -32,10 +33,6 @@ function makePng(width: number, height: number): Buffer {
     rows.push(row);
   }
   return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk('IHDR', ihdr), chunk('IDAT', deflateSync(Buffer.concat(rows))), chunk('IEND', Buffer.alloc(0))]);
-}
-
-async function csrf(request: APIRequestContext): Promise<string> {
-  return ((await (await request.get('/api/auth/csrf')).json()) as { token: string }).token;
 }
 
 /** A fresh four-link starter sketch of the signed-in maker's, made through the API. */

@@ -1,11 +1,8 @@
-import { test, expect, snap, signIn, DEMO } from './fixtures';
-import { test as anonymous, type APIRequestContext } from '@playwright/test';
+import { test, expect, snap } from './fixtures';
+import { test as anonymous } from '@playwright/test';
+import { ownerSharesStarter } from './api';
 import { starters } from '../../shared/kinematics';
 import { $, boardReady } from './board';
-
-async function csrf(request: APIRequestContext): Promise<string> {
-  return ((await (await request.get('/api/auth/csrf')).json()) as { token: string }).token;
-}
 
 test('the board menu opens the build sheet: caution, brackets and member lengths, and a print without the app around it', async ({ page }) => {
   await page.goto('/sketches/new?starter=four-link-lateral-rod');
@@ -41,15 +38,7 @@ test('a build sheet for a sketch that is not there says so', async ({ page }) =>
 });
 
 anonymous('a customer with the read-only link opens the build sheet from the board without signing in', async ({ page, browser, baseURL }) => {
-  const owner = await browser.newContext({ baseURL });
-  const ownerPage = await owner.newPage();
-  await signIn(ownerPage, DEMO.maker);
-  await ownerPage.goto('/sketches/new?starter=four-link-lateral-rod');
-  await expect(ownerPage).toHaveURL(/\/sketches\/\d+$/);
-  const id = Number(ownerPage.url().match(/(\d+)$/)![1]);
-  const share = await ownerPage.request.post(`/api/sketches/${id}/share`, { data: { mode: 'link' }, headers: { 'X-CSRF-Token': await csrf(ownerPage.request) } });
-  const { shareToken } = (await share.json()) as { shareToken: string };
-  await owner.close();
+  const shareToken = await ownerSharesStarter(browser, baseURL);
 
   await page.goto(`/shared/${shareToken}`);
   await boardReady(page);

@@ -1,11 +1,8 @@
 import { test, expect, snap, inputOf } from './fixtures';
-import type { APIRequestContext, Page } from '@playwright/test';
+import type { Page } from '@playwright/test';
 import { starters } from '../../shared/kinematics';
+import { csrf } from './api';
 import { $ } from './board';
-
-async function csrf(request: APIRequestContext): Promise<string> {
-  return ((await (await request.get('/api/auth/csrf')).json()) as { token: string }).token;
-}
 
 /** A four-link sketch of the maker's; `raise` lifts the upper links' frame pivots (mm). */
 async function fourLink(page: Page, name: string, raise = 0): Promise<number> {
