@@ -7,7 +7,8 @@ import type { HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
 import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
 import { mmToUnit } from '../../shared/units';
-import { metricSpecs, bandIsSet, type TargetCheck, type TargetMetric, type Targets } from './useTargets';
+import { metricSpecs, bandIsSet, type TargetCheck, type Targets } from './useTargets';
+import type { TargetMetric } from '../../shared/schema/boardFields';
 import { quantityUnit, toDisplay } from './useSweepFormat';
 import type { SweepContext } from './useSweepReadout';
 

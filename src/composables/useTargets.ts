@@ -19,7 +19,6 @@ export interface TargetBand {
   to?: number;
 }
 
-export { targetMetrics, type TargetMetric };
 export type Targets = Partial<Record<TargetMetric, TargetBand>>;
 
 /** What kind of number a metric is, so the UI can convert and label it. */

@@ -5,7 +5,8 @@
  */
 import type { LengthUnit } from '../../shared/units';
 import { fixed, fromDisplay, quantityUnit, toDisplay } from './useSweepFormat';
-import { metricSpecs, type TargetBand, type TargetMetric, type Targets } from './useTargets';
+import { metricSpecs, type TargetBand, type Targets } from './useTargets';
+import type { TargetMetric } from '../../shared/schema/boardFields';
 
 export type BandField = keyof TargetBand;
 

@@ -38,7 +38,6 @@ export const MAX_TRACING_BYTES = 10 * 1024 * 1024;
 export const DEFAULT_TRACING_OPACITY = 0.5;
 /** Two scale points closer than this on the photo (image px) cannot give a trustworthy scale. */
 export const MIN_SCALE_PICK_PX = 4;
-export { MIN_MM_PER_PX, MAX_MM_PER_PX };
 
 /** The document's tracing for a view, or null when absent or malformed (a bad field never breaks the board). */
 export function readTracing(doc: unknown, view: ViewKind): TracingImage | null {

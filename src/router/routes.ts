@@ -8,6 +8,8 @@ declare module 'vue-router' {
     admin?: boolean;
     /** A page for signed-out visitors (sign in, sign up, reset). */
     guest?: boolean;
+    /** A page that needs the whole width (the board): the menu starts closed and opens over it. */
+    fullWidth?: boolean;
   }
 }
 
@@ -21,11 +23,11 @@ export const routes: RouteRecordRaw[] = [
     children: [
       { path: '', redirect: '/library' },
       { path: 'library', name: 'library', component: () => import('../pages/LibraryPage.vue'), meta: { auth: true } },
-      { path: 'sketches/new', name: 'board-new', component: BoardPage, meta: { auth: true } },
-      { path: 'sketches/:id(\\d+)', name: 'board', component: BoardPage, meta: { auth: true } },
+      { path: 'sketches/new', name: 'board-new', component: BoardPage, meta: { auth: true, fullWidth: true } },
+      { path: 'sketches/:id(\\d+)', name: 'board', component: BoardPage, meta: { auth: true, fullWidth: true } },
       { path: 'sketches/:id(\\d+)/sheet', name: 'build-sheet', component: () => import('../pages/BuildSheetPage.vue'), meta: { auth: true } },
       // Read-only links work signed out too.
-      { path: 'shared/:token', name: 'board-shared', component: BoardPage },
+      { path: 'shared/:token', name: 'board-shared', component: BoardPage, meta: { fullWidth: true } },
       { path: 'shared/:token/sheet', name: 'build-sheet-shared', component: () => import('../pages/BuildSheetPage.vue') },
       { path: 'lineup', name: 'lineup', component: () => import('../pages/LineupPage.vue'), meta: { auth: true } },
       { path: 'admin', redirect: '/admin/users' },
