@@ -9,7 +9,7 @@
 import { onBeforeUnmount, ref, type Ref } from 'vue';
 import type Konva from 'konva';
 import { useBoardStore } from '../stores/board';
-import { screenToPlane, toScreen, type ScreenPoint, type ViewKind } from './canvasTransform';
+import { screenToPlane, toScreen, type ScreenPoint, type ViewKind } from '../canvas/transform';
 import { WHEEL_ZOOM_STEP, type CanvasView } from './useCanvasView';
 
 /** A press that moves less than this (px) is a click. */

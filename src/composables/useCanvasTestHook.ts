@@ -4,7 +4,7 @@
  * nothing itself.
  */
 import { onBeforeUnmount } from 'vue';
-import type { ViewKind, ViewTransform } from './canvasTransform';
+import type { ViewKind, ViewTransform } from '../canvas/transform';
 
 export interface CanvasHook {
   /** client-pixel centre of a pivot's handle, or null when it is not drawn */

@@ -5,7 +5,7 @@
  * Keys typed into a field belong to the field (its own undo included).
  */
 import { onBeforeUnmount, onMounted, type Ref } from 'vue';
-import type { ViewKind } from './canvasTransform';
+import type { ViewKind } from '../canvas/transform';
 import { useBoardStore } from '../stores/board';
 
 export interface BoardKeyHandlers {

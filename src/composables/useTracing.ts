@@ -7,7 +7,7 @@ import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
 import { api, errorMessage } from '../api/http';
 import { useBoardStore, type EditResult } from '../stores/board';
-import type { PlanePoint, ViewKind } from './canvasTransform';
+import type { PlanePoint, ViewKind } from '../canvas/transform';
 import {
   DEFAULT_TRACING_OPACITY,
   initialPlacement,
@@ -16,7 +16,7 @@ import {
   rescaleFromPicks,
   withTracing,
   type TracingImage,
-} from './useTracingGeometry';
+} from '../canvas/tracingGeometry';
 import type { Mm } from '../../shared/units';
 
 /** What the uploads route answers. */

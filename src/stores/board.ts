@@ -9,7 +9,7 @@ import { History, deepEqual } from './board/history';
 import { findPairs } from './board/pairs';
 import * as edits from './board/edits';
 import { compareSketches, type SketchComparison } from './board/compare';
-import { snapTo, type PlanePoint, type ViewKind } from '../composables/canvasTransform';
+import { snapTo, type PlanePoint, type ViewKind } from '../canvas/transform';
 import { usePrefsStore } from './prefs';
 
 /** Quiet time after the last edit before the sketch is saved (ms): long enough to finish typing a number. */

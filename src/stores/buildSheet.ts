@@ -7,7 +7,7 @@ import { ref, shallowRef } from 'vue';
 import { api, errorMessage } from '../api/http';
 import type { SketchDetail } from '../api/types';
 import type { SweepResult } from '../../shared/kinematics/types';
-import { sweepOnce } from '../composables/sweepOnce';
+import { sweepOnce } from '../sweep/sweepOnce';
 
 export const useBuildSheetStore = defineStore('buildSheet', () => {
   const detail = shallowRef<SketchDetail | null>(null);

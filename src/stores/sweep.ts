@@ -11,12 +11,12 @@ import { computed, ref, shallowRef, watch } from 'vue';
 import type { BodyPoses, HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
 import type { Sketch } from '../../shared/schema/sketch';
 import type { Deg, Mm } from '../../shared/units';
-import { createSweepRunner, type SweepRunner, type RunnerOptions } from '../composables/useSweepRunner';
+import { createSweepRunner, type SweepRunner, type RunnerOptions } from '../sweep/runner';
 import type { SweepAnswer } from '../workers/sweep.protocol';
-import { checkTargets, readTargets, type Targets } from '../composables/useTargets';
-import { buildFlags } from '../composables/useSweepFlags';
-import { EMPTY_CONTEXT, type CursorRow, type SweepContext } from '../composables/useSweepReadout';
-import { sweepRange } from '../composables/useSweepRange';
+import { checkTargets, readTargets, type Targets } from '../sweep/targets';
+import { buildFlags } from '../sweep/flags';
+import { EMPTY_CONTEXT, type CursorRow, type SweepContext } from '../sweep/readout';
+import { sweepRange } from '../sweep/range';
 import { useBoardStore, type EditResult } from './board';
 import { usePrefsStore } from './prefs';
 

@@ -1,7 +1,7 @@
 import { test, expect } from './fixtures';
 import type { Page } from '@playwright/test';
 import { $, boardReady } from './board';
-import { screenToPlane, type ViewTransform } from '../../src/composables/canvasTransform';
+import { screenToPlane, type ViewTransform } from '../../src/canvas/transform';
 
 // A touch screen: Chromium turns the touches below into pointer events, as on a tablet.
 test.use({ hasTouch: true });

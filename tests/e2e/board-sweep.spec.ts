@@ -3,8 +3,8 @@ import { test, expect, snap } from './fixtures';
 import type { Page } from '@playwright/test';
 import { starters } from '../../shared/kinematics';
 import { csrf } from './api';
-import { initialPlacement } from '../../src/composables/useTracingGeometry';
-import { planeToScreen, type PlanePoint, type ViewTransform } from '../../src/composables/canvasTransform';
+import { initialPlacement } from '../../src/canvas/tracingGeometry';
+import { planeToScreen, type PlanePoint, type ViewTransform } from '../../src/canvas/transform';
 
 const $ = (page: Page, test: string) => page.locator(`[data-test="${test}"]`);
 

@@ -2,8 +2,8 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { test, expect, snap, inputOf } from './fixtures';
 
-// The published example sketch sits beside the project (../shared/design), as on every developer's machine and CI.
-const EXAMPLE = join(import.meta.dirname, '../../../shared/design/example-sketch.json');
+// The example sketch file the format documentation ships.
+const EXAMPLE = join(import.meta.dirname, '../../docs/examples/workshop-runabout.sketch.json');
 
 test('import a sketch file, find it by search, delete it and undo the delete', async ({ page }) => {
   const doc = JSON.parse(readFileSync(EXAMPLE, 'utf8')) as { name: string };

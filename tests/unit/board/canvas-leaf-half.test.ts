@@ -2,7 +2,7 @@
 /** A leaf half is a member the canvas can pick: a listening line tagged with its id, eye to seat. */
 import { beforeEach, describe, expect, it } from 'vitest';
 import { createPinia, setActivePinia } from 'pinia';
-import { memberLines } from '../../../src/composables/canvasMembers';
+import { memberLines } from '../../../src/canvas/members';
 import { useCanvasPalette } from '../../../src/composables/useCanvasPalette';
 import type { Sketch } from '../../../shared/schema/sketch';
 

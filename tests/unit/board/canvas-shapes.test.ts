@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { exitPoint, hingeAxis, lineAtX, placeLabels, shockMarks, springCoil } from '../../../src/composables/canvasShapes';
+import { exitPoint, hingeAxis, lineAtX, placeLabels, shockMarks, springCoil } from '../../../src/canvas/shapes';
 
 /** Pixel positions from straight-line arithmetic; far below a pixel. */
 const PX_TOL = 1e-9;

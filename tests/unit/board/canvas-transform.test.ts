@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   boundsOf, fitTransform, gridStep, gridValues, planeOf, planeToScreen, screenToPlane, snapTo, toScreen, withPlane, zoomAt, MAX_SCALE,
-} from '../../../src/composables/canvasTransform';
+} from '../../../src/canvas/transform';
 import { MM_PER_INCH } from '../../../shared/units';
 
 /** Screen positions agree to well under a pixel; plane positions to well under a micron. */

@@ -2,9 +2,9 @@
 import { readFileSync } from 'node:fs';
 import type { SketchInput } from '../../../shared/schema/sketch';
 
-/** The example file beside the format (CI has ../shared beside the repository). */
+/** The example sketch file the format documentation ships (docs/examples). */
 export function exampleSketch(): SketchInput {
-  const url = new URL('../../../../shared/design/example-sketch.json', import.meta.url);
+  const url = new URL('../../../docs/examples/workshop-runabout.sketch.json', import.meta.url);
   return JSON.parse(readFileSync(url, 'utf8')) as SketchInput;
 }
 

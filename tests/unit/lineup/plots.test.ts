@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { runSweep, starters } from '../../../shared/kinematics';
-import { lineupPlots, VARIANT_COLORS } from '../../../src/composables/useLineupPlots';
-import { buildPlots } from '../../../src/composables/useSweepPlots';
+import { lineupPlots, VARIANT_COLORS } from '../../../src/lineup/plots';
+import { buildPlots } from '../../../src/sweep/plots';
 import { parseLineupIds } from '../../../src/stores/lineup/ids';
 
 const fourLink = () => starters['four-link-lateral-rod']!.build();

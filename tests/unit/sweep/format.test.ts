@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { MISSING, showAngle, showLength, showPercent, showPosition, showRatio, fixed } from '../../../src/composables/useSweepFormat';
+import { MISSING, showAngle, showLength, showPercent, showPosition, showRatio, fixed } from '../../../src/sweep/format';
 
 describe('numbers on the board', () => {
   it('never show NaN: a missing number is a dash with its reason', () => {

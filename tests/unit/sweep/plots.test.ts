@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { runSweep, starters } from '../../../shared/kinematics';
 import type { SweepResult } from '../../../shared/kinematics';
-import { buildPlots } from '../../../src/composables/useSweepPlots';
-import { checkTargets } from '../../../src/composables/useTargets';
-import type { SweepContext } from '../../../src/composables/useSweepReadout';
+import { buildPlots } from '../../../src/sweep/plots';
+import { checkTargets } from '../../../src/sweep/targets';
+import type { SweepContext } from '../../../src/sweep/readout';
 
 /** 1 in = 25.4 mm exactly (international inch, 1959); conversions are one multiplication, so 1e-9 is generous. */
 const TOL = 1e-9;

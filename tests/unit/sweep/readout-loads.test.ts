@@ -11,9 +11,9 @@ import BoardReadout from '../../../src/components/BoardReadout.vue';
 import { useSweepStore } from '../../../src/stores/sweep';
 import { starters } from '../../../shared/kinematics';
 import type { Sketch } from '../../../shared/schema/sketch';
-import { fixed } from '../../../src/composables/useSweepFormat';
-import { readoutLines, EMPTY_CONTEXT } from '../../../src/composables/useSweepReadout';
-import { parseSweepNumber } from '../../../src/composables/sweepLoadInput';
+import { fixed } from '../../../src/sweep/format';
+import { readoutLines, EMPTY_CONTEXT } from '../../../src/sweep/readout';
+import { parseSweepNumber } from '../../../src/sweep/loadInput';
 import { fourLink, onBoard, provideScreenOrientation, settled } from './setup';
 
 provideScreenOrientation();

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createSweepRunner } from '../../../src/composables/useSweepRunner';
+import { createSweepRunner } from '../../../src/sweep/runner';
 import { computeSweep, type SweepAnswer, type SweepRequest } from '../../../src/workers/sweep.protocol';
 import { starters } from '../../../shared/kinematics';
 

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import type { HeaveRow, RollRow, SweepResult } from '../../../shared/kinematics';
-import { checkTarget, checkTargets, readTargets } from '../../../src/composables/useTargets';
-import { editTarget, fieldText } from '../../../src/composables/useTargetsEditor';
-import { buildFlags } from '../../../src/composables/useSweepFlags';
+import { checkTarget, checkTargets, readTargets } from '../../../src/sweep/targets';
+import { editTarget, fieldText } from '../../../src/sweep/targetsEditor';
+import { buildFlags } from '../../../src/sweep/flags';
 
 const pose = { x: 0, y: 0, z: 0, roll: 0, pitch: 0, yaw: 0 };
 

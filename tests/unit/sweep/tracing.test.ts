@@ -10,8 +10,8 @@ import {
   withTracing,
   MAX_TRACING_BYTES,
   type TracingImage,
-} from '../../../src/composables/useTracingGeometry';
-import { screenToPlane, type ViewTransform } from '../../../src/composables/canvasTransform';
+} from '../../../src/canvas/tracingGeometry';
+import { screenToPlane, type ViewTransform } from '../../../src/canvas/transform';
 
 /** Positions round-trip through float arithmetic; anything above this would be a real error (mm, px). */
 const TOL = 1e-9;

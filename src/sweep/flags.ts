@@ -8,8 +8,8 @@
 import type { HeaveRow, RollRow, SweepEvent, SweepResult } from '../../shared/kinematics';
 import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
-import { metricSpecs, type TargetCheck } from './useTargets';
-import { showAngle, showLength, showPosition, showQuantity, quantityUnit, toDisplay, fixed } from './useSweepFormat';
+import { metricSpecs, type TargetCheck } from './targets';
+import { showAngle, showLength, showPosition, showQuantity, quantityUnit, toDisplay, fixed } from './format';
 
 export type FlagKind = SweepEvent['kind'] | 'target';
 

@@ -7,7 +7,7 @@
 import type { SweepResult } from '../../shared/kinematics/types';
 import type { Sketch } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
-import { buildPlots, PLOT_COLORS, type PlotSpec } from './useSweepPlots';
+import { buildPlots, PLOT_COLORS, type PlotSpec } from '../sweep/plots';
 
 /** One colour per variant, from our plot palette (blue, orange, green, violet). */
 export const VARIANT_COLORS = PLOT_COLORS.slice(0, 4);

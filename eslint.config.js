@@ -1,4 +1,4 @@
-// ESLint flat config (passed with --config: the project's top level holds only the files it lists).
+// ESLint flat config: the rules of the code base and the boundaries between its parts.
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import pluginVue from 'eslint-plugin-vue';

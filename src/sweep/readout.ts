@@ -6,7 +6,7 @@ import type { HeaveRow, RollRow } from '../../shared/kinematics';
 import type { LinkLoadSummary, WindUpReading } from '../../shared/kinematics/types';
 import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
-import { fixed, MISSING, showAngle, showLength, showPercent, showPosition, showRate, showRatio, type Shown } from './useSweepFormat';
+import { fixed, MISSING, showAngle, showLength, showPercent, showPosition, showRate, showRatio, type Shown } from './format';
 
 export interface ReadoutLine extends Shown {
   key: string;

@@ -7,9 +7,9 @@
 import type Konva from 'konva';
 import type { Sketch } from '../../shared/schema/sketch';
 import type { Mm } from '../../shared/units';
-import type { ScreenPoint } from './canvasTransform';
-import { hingeAxis, shockMarks, springCoil } from './canvasShapes';
-import type { CanvasPalette } from './useCanvasPalette';
+import type { ScreenPoint } from './transform';
+import { hingeAxis, shockMarks, springCoil } from './shapes';
+import type { CanvasPalette } from '../composables/useCanvasPalette';
 
 type Member = Sketch['members'][number];
 

@@ -7,10 +7,10 @@ import type { HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
 import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
 import { mmToUnit } from '../../shared/units';
-import { metricSpecs, bandIsSet, type TargetCheck, type Targets } from './useTargets';
+import { metricSpecs, bandIsSet, type TargetCheck, type Targets } from './targets';
 import type { TargetMetric } from '../../shared/schema/boardFields';
-import { quantityUnit, toDisplay } from './useSweepFormat';
-import type { SweepContext } from './useSweepReadout';
+import { quantityUnit, toDisplay } from './format';
+import type { SweepContext } from './readout';
 
 export interface PlotPoint {
   x: number;

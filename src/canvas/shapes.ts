@@ -2,7 +2,7 @@
  * Drawing geometry of members on a stage, in pixels: a spring's coil, a shock's stroke marks,
  * a hinge's axis line. Pure functions of screen points, so they are cheap to run every frame.
  */
-import type { Px, ScreenPoint } from './canvasTransform';
+import type { Px, ScreenPoint } from './transform';
 
 /** Below this screen length (px) a member is drawn as a plain line: a coil or marks would be noise. */
 export const MIN_DETAIL_PX = 14;

@@ -6,7 +6,7 @@
  * Only types come from chart.js here; the library itself loads with the plot chunk.
  */
 import type { Chart, Plugin } from 'chart.js';
-import type { PlotBand } from './useSweepPlots';
+import type { PlotBand } from './plots';
 
 export interface CursorState {
   /** x of the cursor in plot units, null for none */

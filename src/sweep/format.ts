@@ -4,7 +4,7 @@
  * beside it, never "NaN".
  */
 import { formatLength, mmToUnit, unitToMm, type LengthUnit, type Mm } from '../../shared/units';
-import type { MetricQuantity } from './useTargets';
+import type { MetricQuantity } from './targets';
 
 /** Shown for a number that does not exist; the reason goes to the tooltip. */
 export const MISSING = '—';

@@ -4,8 +4,8 @@
  * its upper end, is refused with a message and changes nothing.
  */
 import type { LengthUnit } from '../../shared/units';
-import { fixed, fromDisplay, quantityUnit, toDisplay } from './useSweepFormat';
-import { metricSpecs, type TargetBand, type Targets } from './useTargets';
+import { fixed, fromDisplay, quantityUnit, toDisplay } from './format';
+import { metricSpecs, type TargetBand, type Targets } from './targets';
 import type { TargetMetric } from '../../shared/schema/boardFields';
 
 export type BandField = keyof TargetBand;

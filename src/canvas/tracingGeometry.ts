@@ -9,7 +9,7 @@
  */
 import { MAX_MM_PER_PX, MIN_MM_PER_PX, tracingImageSchema } from '../../shared/schema/boardFields';
 import type { Mm } from '../../shared/units';
-import { planeToScreen, screenToPlane, type PlanePoint, type ViewKind, type ViewTransform } from './canvasTransform';
+import { planeToScreen, screenToPlane, type PlanePoint, type ViewKind, type ViewTransform } from './transform';
 
 export interface TracingImage {
   /** upload id as POST /api/sketches/:id/uploads answers it (a UUID string on this server) */

@@ -7,8 +7,8 @@
 import type { SweepResult } from '../../shared/kinematics/types';
 import type { Sketch } from '../../shared/schema/sketch';
 import { formatLength, mmToUnit, type LengthUnit } from '../../shared/units';
-import { fixed, showAngle, showLength, showPercent, showRate, showRatio } from './useSweepFormat';
-import { kindLabel } from './useBoardMemberKinds';
+import { fixed, showAngle, showLength, showPercent, showRate, showRatio } from '../sweep/format';
+import { kindLabel } from '../board/memberKinds';
 
 export interface SheetPivot {
   id: string;
