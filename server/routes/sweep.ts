@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
-import { isSketchValidationError, runSweep } from '../../shared/kinematics';
+import { runSweep } from '../../shared/kinematics';
+import { isSketchValidationError } from '../../shared/schema/errors';
 import type { ServerConfig } from '../config';
 import { badRequest } from '../middleware/http-error';
 

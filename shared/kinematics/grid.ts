@@ -4,9 +4,8 @@
  * height, where the sweep starts marching) is always a row. Roll rows work the same way
  * between −roll and +roll. With the default −150..150 by 5 this gives 61 rows.
  */
+import { GRID_MERGE_TOLERANCE, sideCount } from '../schema/sweepGrid';
 
-/** Two grid values closer than this (in the sweep's own unit) count as one. */
-export const GRID_MERGE_TOLERANCE = 1e-9;
 /** Grid values are rounded to 1e-9 of their unit (far below any step a sketch can ask for). */
 const GRID_ROUNDING = 1e9;
 
@@ -19,20 +18,6 @@ export interface MarchPlan {
   up: number[];
   /** 0 > v1 > v2 > … ≥ lo */
   down: number[];
-}
-
-/** Number of values on one side of 0 reaching `limit` (> 0) by `step` (> 0), ends included. */
-function sideCount(limit: number, step: number): number {
-  if (!(limit > GRID_MERGE_TOLERANCE)) return 0;
-  const whole = Math.floor(limit / step + GRID_MERGE_TOLERANCE);
-  const onGrid = Math.abs(whole * step - limit) <= GRID_MERGE_TOLERANCE * Math.max(1, limit);
-  return whole + (onGrid ? 0 : 1);
-}
-
-/** Rows a sweep from `lo` (≤ 0) to `hi` (≥ 0) by `step` produces, ride row included. */
-export function gridCount(lo: number, hi: number, step: number): number {
-  if (!(step > 0) || !Number.isFinite(lo) || !Number.isFinite(hi)) return Number.POSITIVE_INFINITY;
-  return 1 + sideCount(hi, step) + sideCount(-lo, step);
 }
 
 function side(limit: number, step: number): number[] {

@@ -16,16 +16,7 @@ export type {
   DrivelineReading,
   SidePoint,
 } from './types';
-export {
-  sketchSchema,
-  parseSketch,
-  checkSketch,
-  layouts,
-  bodyIds,
-  memberKinds,
-} from '../schema/sketch';
 export type { Sketch, SketchInput, Layout, BodyId, MovingBodyId, MemberKind, SketchPoint, SketchMember } from '../schema/sketch';
-export { SketchValidationError, isSketchValidationError } from '../schema/errors';
 export type { StarterParam, StarterSpec } from './starters/types';
 export { starters } from './starters';
 export { runSweep } from './run';

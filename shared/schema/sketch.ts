@@ -6,7 +6,7 @@
  * Lengths in mm, angles in degrees, rates in N/mm.
  */
 import { z } from 'zod';
-import { gridCount } from '../kinematics/grid';
+import { gridCount } from './sweepGrid';
 import { SketchValidationError } from './errors';
 import { targetsSchema, tracingSchema } from './boardFields';
 import {

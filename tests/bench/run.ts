@@ -5,7 +5,8 @@
  * A benchmark, not a test: it prints figures and never fails on time.
  */
 import os from 'node:os';
-import { parseSketch, runSweep, starters, sweepEnvelope, sweepSketch } from '../../shared/kinematics';
+import { runSweep, starters, sweepEnvelope, sweepSketch } from '../../shared/kinematics';
+import { parseSketch } from '../../shared/schema/sketch';
 
 const FULL = { droop: -150, bump: 150, step: 5, roll: 8, rollStep: 1 };
 const GRID = { droop: -150, bump: 150, step: 15, roll: 8, rollStep: 0.8 };

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { runSweep, starters, pointsAt, parseSketch } from '../../../shared/kinematics';
+import { runSweep, starters, pointsAt } from '../../../shared/kinematics';
+import { parseSketch } from '../../../shared/schema/sketch';
 import { SketchValidationError } from '../../../shared/schema/errors';
 import { exampleSketch, nonFinite, sketchOf } from './helpers';
 

@@ -3,7 +3,8 @@
  * sketch-format.md, and the half-shaft readings follow their definitions.
  */
 import { describe, expect, it } from 'vitest';
-import { pointsAt, runSweep, parseSketch } from '../../../shared/kinematics';
+import { pointsAt, runSweep } from '../../../shared/kinematics';
+import { parseSketch } from '../../../shared/schema/sketch';
 import { trailingArm } from '../../../shared/kinematics/starters/trailingArm';
 import { nonFinite } from './helpers';
 
