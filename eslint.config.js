@@ -50,7 +50,14 @@ function restrict(...groups) {
 
 export default tseslint.config(
   {
-    ignores: ['dist/**', 'node_modules/**', 'data/**', 'tests/e2e/artifacts/**', 'test-results/**', 'playwright-report/**'],
+    ignores: [
+      'dist/**',
+      'node_modules/**',
+      'data/**',
+      'tests/e2e/artifacts/**',
+      'test-results/**',
+      'playwright-report/**',
+    ],
   },
   js.configs.recommended,
   ...tseslint.configs.recommended,
@@ -73,7 +80,16 @@ export default tseslint.config(
     languageOptions: { globals: { ...globals.es2021 } },
     rules: {
       'no-restricted-imports': restrict(sharedRules),
-      'no-restricted-globals': ['error', 'window', 'document', 'navigator', 'localStorage', 'sessionStorage', 'HTMLElement', 'fetch'],
+      'no-restricted-globals': [
+        'error',
+        'window',
+        'document',
+        'navigator',
+        'localStorage',
+        'sessionStorage',
+        'HTMLElement',
+        'fetch',
+      ],
     },
   },
   {
@@ -81,7 +97,9 @@ export default tseslint.config(
     files: ['shared/schema/**/*.ts'],
     rules: {
       'no-restricted-imports': restrict(sharedRules, {
-        patterns: [under('(^|/)kinematics(/|$)', 'shared/schema never imports the kinematics (it runs the other way).')],
+        patterns: [
+          under('(^|/)kinematics(/|$)', 'shared/schema never imports the kinematics (it runs the other way).'),
+        ],
       }),
     },
   },
@@ -115,7 +133,9 @@ export default tseslint.config(
     files: ['src/**/*.ts', 'src/**/*.vue'],
     rules: {
       'no-restricted-imports': restrict({
-        patterns: [under('(^|/)server(/|$)', 'The client never imports the server: use the API (src/api) and shared/.')],
+        patterns: [
+          under('(^|/)server(/|$)', 'The client never imports the server: use the API (src/api) and shared/.'),
+        ],
       }),
     },
   },

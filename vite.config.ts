@@ -7,10 +7,7 @@ import { quasar, transformAssetUrls } from '@quasar/vite-plugin';
 const r = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 
 export default defineConfig({
-  plugins: [
-    vue({ template: { transformAssetUrls } }),
-    quasar({ sassVariables: r('./src/css/quasar-variables.sass') }),
-  ],
+  plugins: [vue({ template: { transformAssetUrls } }), quasar({ sassVariables: r('./src/css/quasar-variables.sass') })],
   resolve: {
     // vue-konva imports the whole of Konva for one global flag; the board registers the
     // shapes it draws itself (src/components/konvaNodes.ts), so Konva's core is enough.

@@ -16,7 +16,11 @@ async function main(): Promise<void> {
   if (applied.length) console.log(`[arcwright] migrations applied: ${applied.join(', ')}`);
   await seedDemoData(sequelize);
   const mail = await setUpMail(config);
-  console.log(mail.catcher ? `[arcwright] mail catcher on 127.0.0.1:${mail.catcher.port} (read it at /admin/outbox)` : '[arcwright] mail via SMTP_URL');
+  console.log(
+    mail.catcher
+      ? `[arcwright] mail catcher on 127.0.0.1:${mail.catcher.port} (read it at /admin/outbox)`
+      : '[arcwright] mail via SMTP_URL',
+  );
 
   const purge = () => purgeDeleted(config.uploadsDir).catch((err) => console.error('[arcwright] purge failed:', err));
   await purge();
@@ -34,7 +38,10 @@ async function main(): Promise<void> {
     console.log(`[arcwright] ${signal}: closing`);
     setTimeout(() => process.exit(0), 5000).unref();
     server.close(() => {
-      void mail.close().then(() => sequelize.close()).finally(() => process.exit(0));
+      void mail
+        .close()
+        .then(() => sequelize.close())
+        .finally(() => process.exit(0));
     });
   };
   process.on('SIGINT', () => shutdown('SIGINT'));

@@ -11,7 +11,10 @@ export function clientApp(distDir: string): Router | null {
   if (!fs.existsSync(index)) return null;
   const router = Router();
   // Hashed asset names never change content, so they may be cached for long; index.html may not.
-  router.use('/assets', express.static(path.join(distDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+  router.use(
+    '/assets',
+    express.static(path.join(distDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }),
+  );
   router.use(express.static(distDir, { index: false }));
   router.get('/{*splat}', (req, res, next) => {
     if (req.path === '/api' || req.path.startsWith('/api/')) return next();

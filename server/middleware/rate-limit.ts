@@ -39,8 +39,12 @@ export function loginLimiters(config: ServerConfig): { perAddress: RequestHandle
 /** Sign-ups and reset e-mails per address (and reset e-mails per account), to stop mail floods. */
 export function signupLimiter(config: ServerConfig): RequestHandler {
   return rateLimit({
-    windowMs: HOUR_MS, limit: config.signupMaxPerAddress, keyGenerator: addressKey,
-    standardHeaders: 'draft-8', legacyHeaders: false, handler: tooMany('too many requests from this address'),
+    windowMs: HOUR_MS,
+    limit: config.signupMaxPerAddress,
+    keyGenerator: addressKey,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: tooMany('too many requests from this address'),
   });
 }
 
@@ -50,7 +54,17 @@ const RESETS_PER_ACCOUNT = 5;
 export function resetRequestLimiters(config: ServerConfig): { perAddress: RequestHandler; perAccount: RequestHandler } {
   const common = { windowMs: HOUR_MS, standardHeaders: 'draft-8' as const, legacyHeaders: false };
   return {
-    perAddress: rateLimit({ ...common, limit: config.signupMaxPerAddress, keyGenerator: addressKey, handler: tooMany('too many reset requests') }),
-    perAccount: rateLimit({ ...common, limit: RESETS_PER_ACCOUNT, keyGenerator: emailKey, handler: tooMany('too many reset requests for this account') }),
+    perAddress: rateLimit({
+      ...common,
+      limit: config.signupMaxPerAddress,
+      keyGenerator: addressKey,
+      handler: tooMany('too many reset requests'),
+    }),
+    perAccount: rateLimit({
+      ...common,
+      limit: RESETS_PER_ACCOUNT,
+      keyGenerator: emailKey,
+      handler: tooMany('too many reset requests for this account'),
+    }),
   };
 }

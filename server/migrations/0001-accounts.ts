@@ -22,8 +22,10 @@ export const up: Migration = async ({ context: qi }) => {
     passwordHash: { type: DataTypes.STRING(255), allowNull: false },
     disabled: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     shopId: {
-      type: DataTypes.INTEGER, allowNull: true,
-      references: { model: 'shops', key: 'id' }, onDelete: 'SET NULL',
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'shops', key: 'id' },
+      onDelete: 'SET NULL',
     },
     ...timestamps,
   });
@@ -32,19 +34,27 @@ export const up: Migration = async ({ context: qi }) => {
     name: { type: DataTypes.STRING(120), allowNull: false },
     term: { type: DataTypes.STRING(60), allowNull: true },
     instructorId: {
-      type: DataTypes.INTEGER, allowNull: false,
-      references: { model: 'users', key: 'id' }, onDelete: 'CASCADE',
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'CASCADE',
     },
     ...timestamps,
   });
   await qi.createTable('class_members', {
     classId: {
-      type: DataTypes.INTEGER, allowNull: false, primaryKey: true,
-      references: { model: 'classes', key: 'id' }, onDelete: 'CASCADE',
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      primaryKey: true,
+      references: { model: 'classes', key: 'id' },
+      onDelete: 'CASCADE',
     },
     userId: {
-      type: DataTypes.INTEGER, allowNull: false, primaryKey: true,
-      references: { model: 'users', key: 'id' }, onDelete: 'CASCADE',
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      primaryKey: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'CASCADE',
     },
     ...timestamps,
   });

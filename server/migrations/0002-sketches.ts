@@ -6,8 +6,10 @@ export const up: Migration = async ({ context: qi }) => {
   await qi.createTable('sketches', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
     ownerId: {
-      type: DataTypes.INTEGER, allowNull: false,
-      references: { model: 'users', key: 'id' }, onDelete: 'CASCADE',
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'CASCADE',
     },
     name: { type: DataTypes.STRING(200), allowNull: false },
     layout: { type: DataTypes.STRING(40), allowNull: false },
@@ -17,8 +19,10 @@ export const up: Migration = async ({ context: qi }) => {
     share: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'private' },
     shareToken: { type: DataTypes.STRING(64), allowNull: true, unique: true },
     shareClassId: {
-      type: DataTypes.INTEGER, allowNull: true,
-      references: { model: 'classes', key: 'id' }, onDelete: 'SET NULL',
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'classes', key: 'id' },
+      onDelete: 'SET NULL',
     },
     deletedAt: { type: DataTypes.DATE, allowNull: true },
     createdAt: { type: DataTypes.DATE, allowNull: false },
@@ -29,16 +33,20 @@ export const up: Migration = async ({ context: qi }) => {
   await qi.createTable('sketch_revisions', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
     sketchId: {
-      type: DataTypes.INTEGER, allowNull: false,
-      references: { model: 'sketches', key: 'id' }, onDelete: 'CASCADE',
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'sketches', key: 'id' },
+      onDelete: 'CASCADE',
     },
     rev: { type: DataTypes.INTEGER, allowNull: false },
     version: { type: DataTypes.INTEGER, allowNull: false },
     name: { type: DataTypes.STRING(200), allowNull: false },
     document: { type: DataTypes.TEXT, allowNull: false },
     authorId: {
-      type: DataTypes.INTEGER, allowNull: true,
-      references: { model: 'users', key: 'id' }, onDelete: 'SET NULL',
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'SET NULL',
     },
     createdAt: { type: DataTypes.DATE, allowNull: false },
   });
@@ -47,12 +55,16 @@ export const up: Migration = async ({ context: qi }) => {
   await qi.createTable('uploads', {
     id: { type: DataTypes.STRING(36), primaryKey: true },
     sketchId: {
-      type: DataTypes.INTEGER, allowNull: false,
-      references: { model: 'sketches', key: 'id' }, onDelete: 'CASCADE',
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'sketches', key: 'id' },
+      onDelete: 'CASCADE',
     },
     ownerId: {
-      type: DataTypes.INTEGER, allowNull: false,
-      references: { model: 'users', key: 'id' }, onDelete: 'CASCADE',
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'CASCADE',
     },
     mime: { type: DataTypes.STRING(40), allowNull: false },
     size: { type: DataTypes.INTEGER, allowNull: false },

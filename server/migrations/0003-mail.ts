@@ -20,8 +20,10 @@ export const up: Migration = async ({ context: qi }) => {
   await qi.createTable('password_resets', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
     userId: {
-      type: DataTypes.INTEGER, allowNull: false,
-      references: { model: 'users', key: 'id' }, onDelete: 'CASCADE',
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'CASCADE',
     },
     // SHA-256 of the token: a copy of the database does not hand out working reset links.
     tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },

@@ -17,8 +17,18 @@ export { roles, toPublicUser, type Role, type PublicUser } from './user.model';
 /** Binds every model to `sequelize` and declares the associations, in one place. Tables come from migrations. */
 export function initModels(sequelize: Sequelize): void {
   for (const model of [
-    User, Shop, ClassGroup, ClassMember, Session, Sketch, SketchRevision, Upload, OutboxMessage, PasswordReset,
-  ]) model.initModel(sequelize);
+    User,
+    Shop,
+    ClassGroup,
+    ClassMember,
+    Session,
+    Sketch,
+    SketchRevision,
+    Upload,
+    OutboxMessage,
+    PasswordReset,
+  ])
+    model.initModel(sequelize);
 
   Shop.hasMany(User, { foreignKey: 'shopId', as: 'members' });
   User.belongsTo(Shop, { foreignKey: 'shopId', as: 'shop' });

@@ -15,7 +15,9 @@ export function sweepRoutes(config: ServerConfig): Router {
     keyGenerator: (req) => ipKeyGenerator(req.ip ?? 'unknown'),
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    handler: (_req, res) => { res.status(429).json({ error: 'too many sweeps from this address; wait a minute' }); },
+    handler: (_req, res) => {
+      res.status(429).json({ error: 'too many sweeps from this address; wait a minute' });
+    },
   });
 
   router.post('/sweep', limiter, (req, res) => {

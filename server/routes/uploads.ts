@@ -8,7 +8,15 @@ import { UPLOAD_MAX_BYTES, findUpload, saveUpload } from '../services/uploads';
 /** Multipart limits: one file of at most 10 MB, and hardly any other fields. */
 const receive = multer({
   storage: multer.memoryStorage(),
-  limits: { fileSize: UPLOAD_MAX_BYTES, files: 1, fields: 4, parts: 5, fieldSize: 1024, fieldNameSize: 64, headerPairs: 100 },
+  limits: {
+    fileSize: UPLOAD_MAX_BYTES,
+    files: 1,
+    fields: 4,
+    parts: 5,
+    fieldSize: 1024,
+    fieldNameSize: 64,
+    headerPairs: 100,
+  },
 }).single('file');
 
 /** POST /api/sketches/:id/uploads and GET /api/uploads/:id. */

@@ -13,12 +13,41 @@ export interface DemoSketch {
 
 export const demoSketches: DemoSketch[] = [
   { owner: 'maker@demo.test', layout: 'four-link-lateral-rod', name: 'Kettle Creek shop truck, rear four-link' },
-  { owner: 'maker@demo.test', layout: 'triangulated-four-link', name: 'Gravel Hopper buggy, rear triangulated', params: { wheelbase: 2900, track: 1650, tireRadius: 430 } },
+  {
+    owner: 'maker@demo.test',
+    layout: 'triangulated-four-link',
+    name: 'Gravel Hopper buggy, rear triangulated',
+    params: { wheelbase: 2900, track: 1650, tireRadius: 430 },
+  },
   { owner: 'maker@demo.test', layout: 'three-link-lateral-rod', name: 'Marsh Wren crawler, rear three-link' },
-  { owner: 'maker@demo.test', layout: 'double-wishbone', name: 'Juniper Flats runabout, front double wishbone', params: { track: 1560, tireRadius: 360, wheelbase: 2750, cgHeight: 560, rackHalfLength: 320 } },
-  { owner: 'maker@demo.test', layout: 'leaf-spring', name: 'Tallow Ridge hauler, rear leaf springs', params: { wheelbase: 3600, track: 1680, tireRadius: 410, springLength: 1500, springRate: 180, shockStagger: 140 } },
-  { owner: 'maker@demo.test', layout: 'trailing-arm', name: 'Brindle Point coupe, rear semi-trailing arms', params: { track: 1500, tireRadius: 320, wheelbase: 2600, cgHeight: 520, sweepAngle: 20 } },
-  { owner: 'instructor@demo.test', layout: 'four-link-lateral-rod', name: 'Chassis 210 starter: four-link with lateral rod' },
+  {
+    owner: 'maker@demo.test',
+    layout: 'double-wishbone',
+    name: 'Juniper Flats runabout, front double wishbone',
+    params: { track: 1560, tireRadius: 360, wheelbase: 2750, cgHeight: 560, rackHalfLength: 320 },
+  },
+  {
+    owner: 'maker@demo.test',
+    layout: 'leaf-spring',
+    name: 'Tallow Ridge hauler, rear leaf springs',
+    params: { wheelbase: 3600, track: 1680, tireRadius: 410, springLength: 1500, springRate: 180, shockStagger: 140 },
+  },
+  {
+    owner: 'maker@demo.test',
+    layout: 'trailing-arm',
+    name: 'Brindle Point coupe, rear semi-trailing arms',
+    params: { track: 1500, tireRadius: 320, wheelbase: 2600, cgHeight: 520, sweepAngle: 20 },
+  },
+  {
+    owner: 'instructor@demo.test',
+    layout: 'four-link-lateral-rod',
+    name: 'Chassis 210 starter: four-link with lateral rod',
+  },
   { owner: 'instructor@demo.test', layout: 'three-link-lateral-rod', name: 'Chassis 210 starter: three-link' },
-  { owner: 'student@demo.test', layout: 'four-link-lateral-rod', name: 'Lab 2 variant: lower link angle 10°', params: { lowerAngle: 10 } },
+  {
+    owner: 'student@demo.test',
+    layout: 'four-link-lateral-rod',
+    name: 'Lab 2 variant: lower link angle 10°',
+    params: { lowerAngle: 10 },
+  },
 ];

@@ -6,11 +6,23 @@ import { endSessionsOf } from './accounts';
 const OUTBOX_LIMIT = 200;
 
 function adminView(u: User) {
-  return { id: u.id, email: u.email, name: u.name, role: u.role, disabled: u.disabled, createdAt: u.createdAt.toISOString() };
+  return {
+    id: u.id,
+    email: u.email,
+    name: u.name,
+    role: u.role,
+    disabled: u.disabled,
+    createdAt: u.createdAt.toISOString(),
+  };
 }
 
 export async function listUsers() {
-  const users = await User.findAll({ order: [['createdAt', 'ASC'], ['id', 'ASC']] });
+  const users = await User.findAll({
+    order: [
+      ['createdAt', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
   return { items: users.map(adminView) };
 }
 
@@ -30,8 +42,21 @@ export async function updateUser(actorId: number, id: number, patch: { role?: Ro
 }
 
 export async function listOutbox() {
-  const rows = await OutboxMessage.findAll({ order: [['sentAt', 'DESC'], ['id', 'DESC']], limit: OUTBOX_LIMIT });
+  const rows = await OutboxMessage.findAll({
+    order: [
+      ['sentAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    limit: OUTBOX_LIMIT,
+  });
   return {
-    items: rows.map((m) => ({ id: m.id, to: m.to, subject: m.subject, text: m.text, html: m.html, sentAt: m.sentAt.toISOString() })),
+    items: rows.map((m) => ({
+      id: m.id,
+      to: m.to,
+      subject: m.subject,
+      text: m.text,
+      html: m.html,
+      sentAt: m.sentAt.toISOString(),
+    })),
   };
 }

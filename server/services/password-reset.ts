@@ -30,7 +30,8 @@ export async function requestPasswordReset(email: string, config: ServerConfig, 
   mailer.queue(passwordResetMail(config, user, token, RESET_VALID_MINUTES));
 }
 
-const refused = () => badRequest('this reset link is not valid: it may have expired or been used already; ask for a new one');
+const refused = () =>
+  badRequest('this reset link is not valid: it may have expired or been used already; ask for a new one');
 
 /** Sets a new password with a reset token, once; every session of the account ends. */
 export async function resetPassword(token: string, password: string): Promise<void> {
@@ -45,7 +46,10 @@ export async function resetPassword(token: string, password: string): Promise<vo
     const now = new Date();
     await reset.update({ usedAt: now }, { transaction });
     // Other links still in someone's mailbox stop working too.
-    await PasswordReset.update({ usedAt: now }, { where: { userId: reset.userId, usedAt: null, id: { [Op.ne]: reset.id } }, transaction });
+    await PasswordReset.update(
+      { usedAt: now },
+      { where: { userId: reset.userId, usedAt: null, id: { [Op.ne]: reset.id } }, transaction },
+    );
     await User.update({ passwordHash }, { where: { id: reset.userId }, transaction });
   });
   await endSessionsOf(found.userId);

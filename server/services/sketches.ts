@@ -64,7 +64,9 @@ export function validDocument(doc: unknown, name: string | undefined, prefix = '
   const checked = checkSketch(withName);
   if (!checked.ok) {
     const problems = prefix
-      ? checked.problems.map((p) => (p.startsWith('(document)') ? prefix + p.slice('(document)'.length) : `${prefix}.${p}`))
+      ? checked.problems.map((p) =>
+          p.startsWith('(document)') ? prefix + p.slice('(document)'.length) : `${prefix}.${p}`,
+        )
       : checked.problems;
     throw badRequest('not a valid sketch', problems);
   }
@@ -76,7 +78,12 @@ function transaction<T>(work: (t: Transaction) => Promise<T>): Promise<T> {
 }
 
 /** The caller's own live sketch, inside `t`, or 404 (someone else's sketch looks exactly like a missing one). */
-async function ownSketch(user: PublicUser, id: number, t?: Transaction, opts: { deleted?: boolean } = {}): Promise<Sketch> {
+async function ownSketch(
+  user: PublicUser,
+  id: number,
+  t?: Transaction,
+  opts: { deleted?: boolean } = {},
+): Promise<Sketch> {
   const row = await Sketch.findOne({
     where: { id, ownerId: user.id, deletedAt: opts.deleted ? { [Op.ne]: null } : null },
     include: [withOwner],
@@ -108,7 +115,10 @@ async function insertSketch(owner: PublicUser, doc: SketchDocument): Promise<Ske
 
 /** Runs `change` on the caller's own sketch inside one transaction and answers its new state. */
 async function changeOwn(
-  user: PublicUser, id: number, change: (row: Sketch, t: Transaction) => Promise<void>, opts: { deleted?: boolean } = {},
+  user: PublicUser,
+  id: number,
+  change: (row: Sketch, t: Transaction) => Promise<void>,
+  opts: { deleted?: boolean } = {},
 ): Promise<SketchDetail> {
   return transaction(async (t) => {
     const row = await ownSketch(user, id, t, opts);
@@ -130,7 +140,10 @@ export async function listSketches(user: PublicUser, query: ListQuery) {
   const { rows, count } = await Sketch.findAndCountAll({
     where: { [Op.and]: conditions },
     include: [withOwner],
-    order: [[sortColumn, direction], ['id', direction]],
+    order: [
+      [sortColumn, direction],
+      ['id', direction],
+    ],
     limit: query.pageSize,
     offset: (query.page - 1) * query.pageSize,
   });
@@ -149,7 +162,12 @@ export function createSketch(user: PublicUser, doc: SketchDocument): Promise<Ske
  * Saves a new version if `version` is still the current one. The check and the write happen
  * in one IMMEDIATE transaction, so two saves of the same version cannot both succeed.
  */
-export function updateSketch(user: PublicUser, id: number, doc: SketchDocument, version: number): Promise<SketchDetail> {
+export function updateSketch(
+  user: PublicUser,
+  id: number,
+  doc: SketchDocument,
+  version: number,
+): Promise<SketchDetail> {
   return changeOwn(user, id, async (row, t) => {
     if (row.version !== version) {
       throw conflict(`the sketch was saved elsewhere since version ${version}`, { version: row.version });
@@ -168,10 +186,15 @@ export async function deleteSketch(user: PublicUser, id: number): Promise<void> 
 }
 
 export function undeleteSketch(user: PublicUser, id: number): Promise<SketchDetail> {
-  return changeOwn(user, id, async (row, t) => {
-    if (Date.now() - row.deletedAt!.getTime() > RESTORE_WINDOW_MS) throw notFound('no such sketch');
-    await row.update({ deletedAt: null }, { transaction: t });
-  }, { deleted: true });
+  return changeOwn(
+    user,
+    id,
+    async (row, t) => {
+      if (Date.now() - row.deletedAt!.getTime() > RESTORE_WINDOW_MS) throw notFound('no such sketch');
+      await row.update({ deletedAt: null }, { transaction: t });
+    },
+    { deleted: true },
+  );
 }
 
 export async function listRevisions(user: PublicUser, id: number) {
@@ -181,7 +204,9 @@ export async function listRevisions(user: PublicUser, id: number) {
     attributes: ['rev', 'version', 'name', 'createdAt'],
     order: [['rev', 'DESC']],
   });
-  return { items: rows.map((r) => ({ rev: r.rev, version: r.version, name: r.name, createdAt: r.createdAt.toISOString() })) };
+  return {
+    items: rows.map((r) => ({ rev: r.rev, version: r.version, name: r.name, createdAt: r.createdAt.toISOString() })),
+  };
 }
 
 async function revisionOf(sketchId: number, rev: number, t?: Transaction): Promise<SketchRevision> {
@@ -193,7 +218,13 @@ async function revisionOf(sketchId: number, rev: number, t?: Transaction): Promi
 export async function getRevision(user: PublicUser, id: number, rev: number) {
   await ownSketch(user, id);
   const r = await revisionOf(id, rev);
-  return { rev: r.rev, version: r.version, name: r.name, createdAt: r.createdAt.toISOString(), document: JSON.parse(r.document) as unknown };
+  return {
+    rev: r.rev,
+    version: r.version,
+    name: r.name,
+    createdAt: r.createdAt.toISOString(),
+    document: JSON.parse(r.document) as unknown,
+  };
 }
 
 /** Makes a new version whose document is that of revision `rev`; the history keeps everything in between. */
@@ -224,7 +255,12 @@ export async function copySketch(user: PublicUser, id: number): Promise<SketchDe
 /** The sketch file and a file name for it. */
 export async function exportSketch(user: PublicUser, id: number) {
   const row = await ownSketch(user, id);
-  const base = row.name.replace(/[^A-Za-z0-9 ._-]+/g, '').trim().replace(/\s+/g, '-').slice(0, 80) || 'sketch';
+  const base =
+    row.name
+      .replace(/[^A-Za-z0-9 ._-]+/g, '')
+      .trim()
+      .replace(/\s+/g, '-')
+      .slice(0, 80) || 'sketch';
   return { fileName: `${base}.arcwright.json`, document: JSON.parse(row.document) as unknown };
 }
 
@@ -238,14 +274,20 @@ export async function setShare(user: PublicUser, id: number, mode: ShareMode) {
     if (mode === 'private') {
       await row.update({ share: 'private', shareToken: null }, { transaction: t });
     } else if (row.share !== 'link' || !row.shareToken) {
-      await row.update({ share: 'link', shareToken: randomBytes(SHARE_TOKEN_BYTES).toString('base64url') }, { transaction: t });
+      await row.update(
+        { share: 'link', shareToken: randomBytes(SHARE_TOKEN_BYTES).toString('base64url') },
+        { transaction: t },
+      );
     }
     return { share: row.share, shareToken: row.shareToken, name: row.name };
   });
 }
 
 async function sharedSketch(token: string): Promise<Sketch> {
-  const row = await Sketch.findOne({ where: { shareToken: token, share: 'link', deletedAt: null }, include: [withOwner] });
+  const row = await Sketch.findOne({
+    where: { shareToken: token, share: 'link', deletedAt: null },
+    include: [withOwner],
+  });
   if (!row) throw notFound('this link is not shared (any more)');
   return row;
 }
@@ -262,9 +304,11 @@ export async function copyShared(user: PublicUser, token: string): Promise<Sketc
 
 /** The sketch an upload belongs to, if `viewer` (or the holder of `shareToken`) may see it. */
 export async function maySeeSketch(viewer: PublicUser | null, sketchId: number, shareToken?: string): Promise<boolean> {
-  const row = await Sketch.findOne({ where: { id: sketchId, deletedAt: null }, attributes: ['ownerId', 'share', 'shareToken'] });
+  const row = await Sketch.findOne({
+    where: { id: sketchId, deletedAt: null },
+    attributes: ['ownerId', 'share', 'shareToken'],
+  });
   if (!row) return false;
   if (viewer && row.ownerId === viewer.id) return true;
   return row.share === 'link' && !!shareToken && row.shareToken === shareToken;
 }
-

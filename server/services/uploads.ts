@@ -22,8 +22,16 @@ export interface UploadInfo {
 }
 
 /** Stores an image for one of the caller's own sketches under a name the server makes. */
-export async function saveUpload(uploadsDir: string, user: PublicUser, sketchId: number, bytes: Buffer | undefined): Promise<UploadInfo> {
-  const sketch = await Sketch.findOne({ where: { id: sketchId, ownerId: user.id, deletedAt: null }, attributes: ['id'] });
+export async function saveUpload(
+  uploadsDir: string,
+  user: PublicUser,
+  sketchId: number,
+  bytes: Buffer | undefined,
+): Promise<UploadInfo> {
+  const sketch = await Sketch.findOne({
+    where: { id: sketchId, ownerId: user.id, deletedAt: null },
+    attributes: ['id'],
+  });
   if (!sketch) throw notFound('no such sketch');
   if (!bytes || bytes.length === 0) throw badRequest('send one PNG or JPEG image in the form field "file"');
   const type = await fileTypeFromBuffer(bytes);

@@ -25,15 +25,27 @@ export function sweepCommand(args: string[], cwd: string): CliOutcome {
   const csv = args.includes('--csv');
   const unknown = args.filter((a) => a.startsWith('--') && a !== '--csv');
   const files = args.filter((a) => !a.startsWith('--'));
-  if (unknown.length > 0) return { code: EXIT_BAD_INPUT, stderr: [...unknown.map((a) => `unknown option '${a}'`), USAGE] };
-  if (files.length !== 1) return { code: EXIT_BAD_INPUT, stderr: [files.length === 0 ? 'no sketch file given' : 'give exactly one sketch file', USAGE] };
+  if (unknown.length > 0)
+    return { code: EXIT_BAD_INPUT, stderr: [...unknown.map((a) => `unknown option '${a}'`), USAGE] };
+  if (files.length !== 1)
+    return {
+      code: EXIT_BAD_INPUT,
+      stderr: [files.length === 0 ? 'no sketch file given' : 'give exactly one sketch file', USAGE],
+    };
   const file = files[0];
   let text: string;
   try {
     text = readFileSync(path.resolve(cwd, file), 'utf8');
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'is a directory' : code === 'EACCES' ? 'permission denied' : 'cannot be read';
+    const why =
+      code === 'ENOENT'
+        ? 'no such file'
+        : code === 'EISDIR'
+          ? 'is a directory'
+          : code === 'EACCES'
+            ? 'permission denied'
+            : 'cannot be read';
     return { code: EXIT_BAD_INPUT, stderr: [`${file}: ${why}`] };
   }
   let doc: unknown;
@@ -47,7 +59,10 @@ export function sweepCommand(args: string[], cwd: string): CliOutcome {
     return { code: EXIT_OK, stdout: csv ? heaveRowsCsv(result) : `${JSON.stringify(result, null, 2)}\n` };
   } catch (e) {
     if (isSketchValidationError(e)) return { code: EXIT_BAD_INPUT, stderr: e.problems.map((p) => `${file}: ${p}`) };
-    return { code: EXIT_INTERNAL, stderr: [`${file}: internal error in the sweep (${(e as Error)?.message ?? String(e)})`] };
+    return {
+      code: EXIT_INTERNAL,
+      stderr: [`${file}: internal error in the sweep (${(e as Error)?.message ?? String(e)})`],
+    };
   }
 }
 

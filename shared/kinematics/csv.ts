@@ -20,7 +20,10 @@ function columns(result: SweepResult): Column[] {
   const first = result.ride;
   const cols: Column[] = [
     { name: 'travel', get: (r) => r.travel },
-    ...(['x', 'y', 'z', 'roll', 'pitch', 'yaw'] as const).map((k) => ({ name: `pose.${k}`, get: (r: HeaveRow) => r.pose[k] })),
+    ...(['x', 'y', 'z', 'roll', 'pitch', 'yaw'] as const).map((k) => ({
+      name: `pose.${k}`,
+      get: (r: HeaveRow) => r.pose[k],
+    })),
     { name: 'pinionAngleChange', get: (r) => r.pinionAngleChange },
     { name: 'lateralShift', get: (r) => r.lateralShift },
     { name: 'foreAftShift', get: (r) => r.foreAftShift },
@@ -33,7 +36,8 @@ function columns(result: SweepResult): Column[] {
   for (const [id, m] of Object.entries(first.members)) {
     cols.push({ name: `members.${id}.length`, get: (r) => r.members[id]?.length });
     cols.push({ name: `members.${id}.lengthChange`, get: (r) => r.members[id]?.lengthChange });
-    if (m.motionRatio !== undefined) cols.push({ name: `members.${id}.motionRatio`, get: (r) => r.members[id]?.motionRatio });
+    if (m.motionRatio !== undefined)
+      cols.push({ name: `members.${id}.motionRatio`, get: (r) => r.members[id]?.motionRatio });
     if (m.wheelRate !== undefined) cols.push({ name: `members.${id}.wheelRate`, get: (r) => r.members[id]?.wheelRate });
   }
   // Independent wheels (addition): present when the ride row carries them.
@@ -73,7 +77,8 @@ function columns(result: SweepResult): Column[] {
       cols.push({ name: `halfShafts.${side}.${k}`, get: (r) => r.halfShafts?.[side]?.[k] });
     }
   }
-  for (const id of Object.keys(first.linkLoads ?? {})) cols.push({ name: `linkLoads.${id}`, get: (r) => r.linkLoads?.[id] });
+  for (const id of Object.keys(first.linkLoads ?? {}))
+    cols.push({ name: `linkLoads.${id}`, get: (r) => r.linkLoads?.[id] });
   return cols;
 }
 

@@ -51,7 +51,8 @@ export function sweepEnvelope(sketch: Sketch, s: EnvelopeSettings): EnvelopeCell
   solver.regularize = rank < solver.n;
 
   const heaveRows = new Map<number, SolvedRow>([[0, ride]]);
-  for (const side of [hp.up, hp.down]) for (const r of march(ctx, ride, 'travel', side).rows) heaveRows.set(r.travel, r);
+  for (const side of [hp.up, hp.down])
+    for (const r of march(ctx, ride, 'travel', side).rows) heaveRows.set(r.travel, r);
 
   return travels.map((travel) => {
     const start = heaveRows.get(travel);
@@ -61,7 +62,9 @@ export function sweepEnvelope(sketch: Sketch, s: EnvelopeSettings): EnvelopeCell
     for (const side of [rp.up, rp.down]) for (const r of march(ctx, centre, 'roll', side).rows) cells.set(r.roll, r);
     return rolls.map((roll) => {
       const c = cells.get(roll);
-      return c ? { travel, roll, pose: poseFromState(c.state, slot), bind: c.bind } : { travel, roll, pose: null, bind: null };
+      return c
+        ? { travel, roll, pose: poseFromState(c.state, slot), bind: c.bind }
+        : { travel, roll, pose: null, bind: null };
     });
   });
 }

@@ -21,7 +21,11 @@ const fmt = (v: number, unit: string) => {
  * First crossing of `value(row) > limit` going outward along `rows` (ordered from ride
  * outward, ride first). Returns the interpolated parameter and value, or null.
  */
-function firstCrossing(rows: Row[], value: (r: Row) => number | undefined, limit: number): { at: number; value: number } | null {
+function firstCrossing(
+  rows: Row[],
+  value: (r: Row) => number | undefined,
+  limit: number,
+): { at: number; value: number } | null {
   let prev: Row | null = null;
   for (const r of rows) {
     const v = value(r);
@@ -60,24 +64,62 @@ export function sweepEvents(sketch: Sketch, kind: SweepKind, rows: Row[]): Sweep
       if (m.kind !== 'shock') continue;
       if (m.maxLength !== undefined) {
         const c = firstCrossing(side, (r) => r.members[m.id]?.length, m.maxLength);
-        if (c) push({ kind: 'shock-extended', sweep: kind, at: c.at, member: m.id, value: c.value,
-          message: `Shock ${m.id} is fully extended (${m.maxLength} mm) ${where(c.at)}.` });
+        if (c)
+          push({
+            kind: 'shock-extended',
+            sweep: kind,
+            at: c.at,
+            member: m.id,
+            value: c.value,
+            message: `Shock ${m.id} is fully extended (${m.maxLength} mm) ${where(c.at)}.`,
+          });
       }
       if (m.minLength !== undefined) {
         const min = m.minLength;
-        const c = firstCrossing(side, (r) => { const l = r.members[m.id]?.length; return l === undefined ? undefined : -l; }, -min);
-        if (c) push({ kind: 'shock-compressed', sweep: kind, at: c.at, member: m.id, value: -c.value,
-          message: `Shock ${m.id} is fully compressed (${min} mm) ${where(c.at)}.` });
+        const c = firstCrossing(
+          side,
+          (r) => {
+            const l = r.members[m.id]?.length;
+            return l === undefined ? undefined : -l;
+          },
+          -min,
+        );
+        if (c)
+          push({
+            kind: 'shock-compressed',
+            sweep: kind,
+            at: c.at,
+            member: m.id,
+            value: -c.value,
+            message: `Shock ${m.id} is fully compressed (${min} mm) ${where(c.at)}.`,
+          });
       }
     }
     const b = firstCrossing(side, (r) => r.bind, bindThreshold);
-    if (b) push({ kind: 'bind', sweep: kind, at: b.at, value: b.value,
-      message: `Bind passes ${bindThreshold} mm ${where(b.at)}: the bushings must take up the links' length mismatch.` });
+    if (b)
+      push({
+        kind: 'bind',
+        sweep: kind,
+        at: b.at,
+        value: b.value,
+        message: `Bind passes ${bindThreshold} mm ${where(b.at)}: the bushings must take up the links' length mismatch.`,
+      });
     if (sketch.driveline) {
       for (const joint of ['output', 'pinion'] as const) {
-        const c = firstCrossing(side, (r) => (joint === 'output' ? r.driveline?.outputAngle : r.driveline?.pinionAngle), jointAngleLimit);
-        if (c) push({ kind: 'joint-angle', sweep: kind, at: c.at, joint, value: c.value,
-          message: `The ${joint} joint's operating angle passes ${jointAngleLimit}° ${where(c.at)}.` });
+        const c = firstCrossing(
+          side,
+          (r) => (joint === 'output' ? r.driveline?.outputAngle : r.driveline?.pinionAngle),
+          jointAngleLimit,
+        );
+        if (c)
+          push({
+            kind: 'joint-angle',
+            sweep: kind,
+            at: c.at,
+            joint,
+            value: c.value,
+            message: `The ${joint} joint's operating angle passes ${jointAngleLimit}° ${where(c.at)}.`,
+          });
       }
     }
   }

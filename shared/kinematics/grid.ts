@@ -25,7 +25,9 @@ function side(limit: number, step: number): number[] {
   const n = sideCount(limit, step);
   for (let k = 1; k <= n; k++) out.push(Math.min(k * step, limit));
   // Round multiples of the step so that rows read 5, 10, … rather than 15.000000000000002.
-  return out.map((v) => (Math.abs(v - limit) <= GRID_MERGE_TOLERANCE ? limit : Math.round(v * GRID_ROUNDING) / GRID_ROUNDING));
+  return out.map((v) =>
+    Math.abs(v - limit) <= GRID_MERGE_TOLERANCE ? limit : Math.round(v * GRID_ROUNDING) / GRID_ROUNDING,
+  );
 }
 
 /** The outward plan for a sweep from `lo` (≤ 0) to `hi` (≥ 0) by `step` (> 0). */

@@ -25,21 +25,38 @@ export function halfShaftPlanBuild(sketch: Sketch, points: Map<string, PointMode
   for (const side of ['left', 'right'] as const) {
     const h = sketch.halfShafts?.[side];
     if (!h) continue;
-    const inner = points.get(h.inner)!, outer = points.get(h.outer)!;
-    out.push({ side, inner, innerAxis: points.get(h.innerAxis)!, outer, outerAxis: points.get(h.outerAxis)!, rideLength: vecDistance(inner.ride, outer.ride) });
+    const inner = points.get(h.inner)!,
+      outer = points.get(h.outer)!;
+    out.push({
+      side,
+      inner,
+      innerAxis: points.get(h.innerAxis)!,
+      outer,
+      outerAxis: points.get(h.outerAxis)!,
+      rideLength: vecDistance(inner.ride, outer.ride),
+    });
   }
   return out;
 }
 
 /** Readings of every half-shaft at one row; undefined when the sketch has none. */
-export function halfShaftReadings(plans: HalfShaftPlan[], at: (p: PointModel) => Vec3, clean: (v: number) => number): HalfShaftReadings | undefined {
+export function halfShaftReadings(
+  plans: HalfShaftPlan[],
+  at: (p: PointModel) => Vec3,
+  clean: (v: number) => number,
+): HalfShaftReadings | undefined {
   if (plans.length === 0) return undefined;
   const out: HalfShaftReadings = {};
   for (const h of plans) {
     // The inner axis point lies inboard, so inner − innerAxis points out into the joint, as the
     // gearbox shaft does for the driveshaft; the outer axis point lies outboard, as the pinion's does.
     const r = drivelineReading(at(h.inner), at(h.innerAxis), at(h.outer), at(h.outerAxis), h.rideLength);
-    const reading: HalfShaftReading = { length: r.length, plunge: clean(r.plunge), innerAngle: clean(r.outputAngle), outerAngle: clean(r.pinionAngle) };
+    const reading: HalfShaftReading = {
+      length: r.length,
+      plunge: clean(r.plunge),
+      innerAngle: clean(r.outputAngle),
+      outerAngle: clean(r.pinionAngle),
+    };
     out[h.side] = reading;
   }
   return out;

@@ -16,7 +16,16 @@ export type {
   DrivelineReading,
   SidePoint,
 } from './types';
-export type { Sketch, SketchInput, Layout, BodyId, MovingBodyId, MemberKind, SketchPoint, SketchMember } from '../schema/sketch';
+export type {
+  Sketch,
+  SketchInput,
+  Layout,
+  BodyId,
+  MovingBodyId,
+  MemberKind,
+  SketchPoint,
+  SketchMember,
+} from '../schema/sketch';
 export type { StarterParam, StarterSpec } from './starters/types';
 export { starters } from './starters';
 export { runSweep } from './run';

@@ -92,12 +92,17 @@ export function leafSpringConstraints<P extends PointRef>(
   let firstLeaf: SketchMember | null = null;
   const bends: { m: SketchMember; eye: P; pivot: P; across: Vec3; length: number; stiffness: number }[] = [];
   for (const m of sketch.members) {
-    const a = points.get(m.a)!, b = points.get(m.b)!;
+    const a = points.get(m.a)!,
+      b = points.get(m.b)!;
     if (m.kind === 'shackle') {
       const frameEnd = a.slot < 0 ? a : b.slot < 0 ? b : null;
       const swinging = frameEnd === a ? b : a;
       if (frameEnd && isShackleBody(swinging.slot)) {
-        planar.push({ type: 'planar', member: m, pairs: [{ a: frameEnd, b: swinging, offset: swinging.ride.y - frameEnd.ride.y }] });
+        planar.push({
+          type: 'planar',
+          member: m,
+          pairs: [{ a: frameEnd, b: swinging, offset: swinging.ride.y - frameEnd.ride.y }],
+        });
       }
     } else if (m.kind === 'leaf-half') {
       if (a.slot < 0) {

@@ -31,7 +31,8 @@ export function leafSpringPlanBuild(model: LinkageModel): LeafSpringPlan | null 
   let shackle: LeafSpringPlan['shackle'] = null;
   for (const m of sketch.members) {
     if (m.kind !== 'shackle') continue;
-    const a = points.get(m.a)!, b = points.get(m.b)!;
+    const a = points.get(m.a)!,
+      b = points.get(m.b)!;
     const eye = [a, b].find((p) => p.slot >= 0 && model.bodies[p.slot].id === 'shackle-left');
     const hanger = eye === a ? b : a;
     if (eye && hanger.slot < 0) shackle = { hanger, eye };
@@ -45,7 +46,11 @@ export function shackleAngle(hanger: Vec3, eye: Vec3): number {
 }
 
 /** The leaf-spring fields of a heave row. */
-export function leafSpringHeaveFields(plan: LeafSpringPlan, at: (p: PointModel) => Vec3, clean: (v: number) => number): Partial<HeaveRow> {
+export function leafSpringHeaveFields(
+  plan: LeafSpringPlan,
+  at: (p: PointModel) => Vec3,
+  clean: (v: number) => number,
+): Partial<HeaveRow> {
   const out: Partial<HeaveRow> = {};
   if (plan.shackle) out.shackleAngle = clean(shackleAngle(at(plan.shackle.hanger), at(plan.shackle.eye)));
   if (plan.seat && !plan.lateralRod) out.rollCenterHeight = clean(at(plan.seat).z);

@@ -40,7 +40,12 @@ export interface LinkLoadsOutcome {
 
 /** True when the statics apply: one moving body, the axle, held by links alone. */
 export function linkLoadsApply(model: LinkageModel): boolean {
-  return model.axle !== null && model.bodies.length === 1 && model.constraints.length > 0 && model.constraints.every((c) => c.type === 'distance');
+  return (
+    model.axle !== null &&
+    model.bodies.length === 1 &&
+    model.constraints.length > 0 &&
+    model.constraints.every((c) => c.type === 'distance')
+  );
 }
 
 /** Tensions (N) for one solved state; null when the links do not locate every free coordinate. */
@@ -52,8 +57,17 @@ interface LoadWork {
   q: Matrix;
 }
 
-function rowLoads(model: LinkageModel, drive: Drive, state: Float64Array, patches: Vec3[], force: number, lw: LoadWork): number[] | null {
-  const m = model.residualCount, n = drive.free.length, cols = model.stateSize;
+function rowLoads(
+  model: LinkageModel,
+  drive: Drive,
+  state: Float64Array,
+  patches: Vec3[],
+  force: number,
+  lw: LoadWork,
+): number[] | null {
+  const m = model.residualCount,
+    n = drive.free.length,
+    cols = model.stateSize;
   const { r, J, N, residual: work } = lw;
   residualsEvaluate(model, state, work, r, J);
   const rs = work.rot.sets[model.axle!.slot];
@@ -104,7 +118,9 @@ export function linkLoads(model: LinkageModel, drive: Drive, heave: SolvedRow[],
   const torque = sketch.sweep.axleTorque ?? DEFAULT_AXLE_TORQUE_NM;
   const force = (torque * NMM_PER_NM) / sketch.vehicle.tireRadius;
   const ref = model.axle!.reference;
-  const patches = [model.wheelLeft, model.wheelRight].map((w) => vecSub(vec(w.ride.x, w.ride.y, w.ride.z - sketch.vehicle.tireRadius), ref));
+  const patches = [model.wheelLeft, model.wheelRight].map((w) =>
+    vecSub(vec(w.ride.x, w.ride.y, w.ride.z - sketch.vehicle.tireRadius), ref),
+  );
   const n = drive.free.length;
   const work: LoadWork = {
     residual: residualWorkCreate(model),
@@ -121,15 +137,28 @@ export function linkLoads(model: LinkageModel, drive: Drive, heave: SolvedRow[],
     return Object.fromEntries(ids.map((id, i) => [id, Math.abs(f[i]) < zero ? 0 : f[i]]));
   });
   const limit = sketch.sweep.linkLoadLimit ?? null;
-  const summary: LinkLoadSummary = { torque, tractiveForce: force, limit, indeterminate: model.residualCount > drive.free.length, members: {} };
+  const summary: LinkLoadSummary = {
+    torque,
+    tractiveForce: force,
+    limit,
+    indeterminate: model.residualCount > drive.free.length,
+    members: {},
+  };
   const events: SweepEvent[] = [];
   const ride = rows[rideIndex];
   for (const id of ids) {
     const values = rows.map((r) => (r ? r[id] : null));
     const known = values.filter((v): v is number => v !== null);
     if (!ride || known.length === 0) continue;
-    const min = Math.min(...known), max = Math.max(...known);
-    summary.members[id] = { ride: ride[id], min, max, reverses: min < -zero && max > zero, overLimit: limit !== null && Math.max(-min, max) > limit };
+    const min = Math.min(...known),
+      max = Math.max(...known);
+    summary.members[id] = {
+      ride: ride[id],
+      min,
+      max,
+      reverses: min < -zero && max > zero,
+      overLimit: limit !== null && Math.max(-min, max) > limit,
+    };
     // Every sign change along the travel (a zero, e.g. at ride, has no sign: the change is
     // placed between the loads on either side of it).
     let last: { travel: number; value: number } | null = null;
@@ -138,8 +167,14 @@ export function linkLoads(model: LinkageModel, drive: Drive, heave: SolvedRow[],
       if (v === null || Math.abs(v) <= zero) return;
       if (last && Math.sign(last.value) !== Math.sign(v)) {
         const at = last.travel + ((0 - last.value) / (v - last.value)) * (row.travel - last.travel);
-        events.push({ kind: 'load-reversal', sweep: 'heave', at, member: id, value: 0,
-          message: `Link ${id}'s load reverses (${v > 0 ? 'compression to tension' : 'tension to compression'} going ${row.travel > last.travel ? 'up' : 'down'}) at ${fmt(at)} travel under ${torque} N·m.` });
+        events.push({
+          kind: 'load-reversal',
+          sweep: 'heave',
+          at,
+          member: id,
+          value: 0,
+          message: `Link ${id}'s load reverses (${v > 0 ? 'compression to tension' : 'tension to compression'} going ${row.travel > last.travel ? 'up' : 'down'}) at ${fmt(at)} travel under ${torque} N·m.`,
+        });
       }
       last = { travel: row.travel, value: v };
     });
@@ -147,20 +182,34 @@ export function linkLoads(model: LinkageModel, drive: Drive, heave: SolvedRow[],
     for (const dir of [1, -1]) {
       if (limit === null || Math.abs(ride[id]) > limit) break;
       for (let i = rideIndex + dir; i >= 0 && i < values.length; i += dir) {
-        const a = values[i - dir], b = values[i];
+        const a = values[i - dir],
+          b = values[i];
         if (a === null || b === null) break;
         if (Math.abs(b) > limit) {
-          const t0 = heave[i - dir].travel, t1 = heave[i].travel;
+          const t0 = heave[i - dir].travel,
+            t1 = heave[i].travel;
           const at = t0 + ((limit - Math.abs(a)) / (Math.abs(b) - Math.abs(a))) * (t1 - t0);
-          events.push({ kind: 'load-limit', sweep: 'heave', at, member: id, value: limit,
-            message: `Link ${id}'s load passes the ${kN(limit)} limit at ${fmt(at)} travel under ${torque} N·m.` });
+          events.push({
+            kind: 'load-limit',
+            sweep: 'heave',
+            at,
+            member: id,
+            value: limit,
+            message: `Link ${id}'s load passes the ${kN(limit)} limit at ${fmt(at)} travel under ${torque} N·m.`,
+          });
           break;
         }
       }
     }
     if (limit !== null && Math.abs(ride[id]) > limit) {
-      events.push({ kind: 'load-limit', sweep: 'heave', at: 0, member: id, value: limit,
-        message: `Link ${id}'s load (${kN(ride[id])}) is beyond the ${kN(limit)} limit at ride height under ${torque} N·m.` });
+      events.push({
+        kind: 'load-limit',
+        sweep: 'heave',
+        at: 0,
+        member: id,
+        value: limit,
+        message: `Link ${id}'s load (${kN(ride[id])}) is beyond the ${kN(limit)} limit at ride height under ${torque} N·m.`,
+      });
     }
   }
   return { rows, summary, events };

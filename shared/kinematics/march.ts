@@ -99,7 +99,13 @@ function stepScratchFor(size: number): typeof stepScratch {
  * before `from` given, the predictor is second order (the change of the sensitivity between
  * the two rows estimates the path's curvature), which saves a Newton step a row.
  */
-function stepTo(ctx: MarchContext, from: SolvedRow, param: MarchParameter, to: number, before: SolvedRow | null = null): SolvedRow | null {
+function stepTo(
+  ctx: MarchContext,
+  from: SolvedRow,
+  param: MarchParameter,
+  to: number,
+  before: SolvedRow | null = null,
+): SolvedRow | null {
   const { model, drive, solver } = ctx;
   const travel = param === 'travel' ? to : from.travel;
   const roll = param === 'roll' ? to : from.roll;
@@ -128,7 +134,13 @@ function stepTo(ctx: MarchContext, from: SolvedRow, param: MarchParameter, to: n
 }
 
 /** Solves the ride row (travel 0, roll 0), with the sensitivity to `param`. */
-export function solveStart(ctx: MarchContext, param: MarchParameter, travel = 0, roll = 0, guess?: Float64Array): SolvedRow | null {
+export function solveStart(
+  ctx: MarchContext,
+  param: MarchParameter,
+  travel = 0,
+  roll = 0,
+  guess?: Float64Array,
+): SolvedRow | null {
   const { model, solver } = ctx;
   const state = guess ? new Float64Array(guess) : new Float64Array(model.stateSize);
   driveApply(model, state, travel, roll);
@@ -157,7 +169,12 @@ export function rowRateFor(ctx: MarchContext, row: SolvedRow, param: MarchParame
 }
 
 /** Marches from `start` through `values` (ordered away from the start), stopping at lock-up. */
-export function march(ctx: MarchContext, start: SolvedRow, param: MarchParameter, values: readonly number[]): MarchOutcome {
+export function march(
+  ctx: MarchContext,
+  start: SolvedRow,
+  param: MarchParameter,
+  values: readonly number[],
+): MarchOutcome {
   const rows: SolvedRow[] = [];
   let prev = start;
   let before: SolvedRow | null = null;

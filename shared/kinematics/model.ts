@@ -75,7 +75,8 @@ export interface HingeConstraint {
   across2: Vec3;
 }
 
-export type Constraint = DistanceConstraint | HingeConstraint | PlanarConstraint<PointModel> | BendingConstraint<PointModel>;
+export type Constraint =
+  DistanceConstraint | HingeConstraint | PlanarConstraint<PointModel> | BendingConstraint<PointModel>;
 
 /** Residual rows of a constraint. */
 export const constraintRows = (c: Constraint): number => (c.type === 'hinge' ? 5 : 1);

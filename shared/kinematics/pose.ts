@@ -30,29 +30,64 @@ export function rotationSetCreate(): RotationSet {
 
 /** Fills `out` with R(roll, pitch, yaw) (radians) and its partial derivatives (per radian). */
 export function rotationSetFill(out: RotationSet, roll: number, pitch: number, yaw: number): void {
-  const cr = Math.cos(roll), sr = Math.sin(roll);
-  const cp = Math.cos(pitch), sp = Math.sin(pitch);
-  const cy = Math.cos(yaw), sy = Math.sin(yaw);
+  const cr = Math.cos(roll),
+    sr = Math.sin(roll);
+  const cp = Math.cos(pitch),
+    sp = Math.sin(pitch);
+  const cy = Math.cos(yaw),
+    sy = Math.sin(yaw);
   // R = Rz·Ry·Rx written out.
-  out[0] = cy * cp; out[1] = cy * sp * sr - sy * cr; out[2] = cy * sp * cr + sy * sr;
-  out[3] = sy * cp; out[4] = sy * sp * sr + cy * cr; out[5] = sy * sp * cr - cy * sr;
-  out[6] = -sp; out[7] = cp * sr; out[8] = cp * cr;
+  out[0] = cy * cp;
+  out[1] = cy * sp * sr - sy * cr;
+  out[2] = cy * sp * cr + sy * sr;
+  out[3] = sy * cp;
+  out[4] = sy * sp * sr + cy * cr;
+  out[5] = sy * sp * cr - cy * sr;
+  out[6] = -sp;
+  out[7] = cp * sr;
+  out[8] = cp * cr;
   // ∂R/∂roll = Rz·Ry·∂Rx
-  out[9] = 0; out[10] = cy * sp * cr + sy * sr; out[11] = -cy * sp * sr + sy * cr;
-  out[12] = 0; out[13] = sy * sp * cr - cy * sr; out[14] = -sy * sp * sr - cy * cr;
-  out[15] = 0; out[16] = cp * cr; out[17] = -cp * sr;
+  out[9] = 0;
+  out[10] = cy * sp * cr + sy * sr;
+  out[11] = -cy * sp * sr + sy * cr;
+  out[12] = 0;
+  out[13] = sy * sp * cr - cy * sr;
+  out[14] = -sy * sp * sr - cy * cr;
+  out[15] = 0;
+  out[16] = cp * cr;
+  out[17] = -cp * sr;
   // ∂R/∂pitch = Rz·∂Ry·Rx
-  out[18] = -cy * sp; out[19] = cy * cp * sr; out[20] = cy * cp * cr;
-  out[21] = -sy * sp; out[22] = sy * cp * sr; out[23] = sy * cp * cr;
-  out[24] = -cp; out[25] = -sp * sr; out[26] = -sp * cr;
+  out[18] = -cy * sp;
+  out[19] = cy * cp * sr;
+  out[20] = cy * cp * cr;
+  out[21] = -sy * sp;
+  out[22] = sy * cp * sr;
+  out[23] = sy * cp * cr;
+  out[24] = -cp;
+  out[25] = -sp * sr;
+  out[26] = -sp * cr;
   // ∂R/∂yaw = ∂Rz·Ry·Rx
-  out[27] = -sy * cp; out[28] = -sy * sp * sr - cy * cr; out[29] = -sy * sp * cr + cy * sr;
-  out[30] = cy * cp; out[31] = cy * sp * sr - sy * cr; out[32] = cy * sp * cr + sy * sr;
-  out[33] = 0; out[34] = 0; out[35] = 0;
+  out[27] = -sy * cp;
+  out[28] = -sy * sp * sr - cy * cr;
+  out[29] = -sy * sp * cr + cy * sr;
+  out[30] = cy * cp;
+  out[31] = cy * sp * sr - sy * cr;
+  out[32] = cy * sp * cr + sy * sr;
+  out[33] = 0;
+  out[34] = 0;
+  out[35] = 0;
 }
 
 /** Multiplies the 3×3 block at `offset` of `m` by (x, y, z); writes into out[o..o+2]. */
-export function mat3Apply(m: Float64Array, offset: number, x: number, y: number, z: number, out: Float64Array, o: number): void {
+export function mat3Apply(
+  m: Float64Array,
+  offset: number,
+  x: number,
+  y: number,
+  z: number,
+  out: Float64Array,
+  o: number,
+): void {
   out[o] = m[offset] * x + m[offset + 1] * y + m[offset + 2] * z;
   out[o + 1] = m[offset + 3] * x + m[offset + 4] * y + m[offset + 5] * z;
   out[o + 2] = m[offset + 6] * x + m[offset + 7] * y + m[offset + 8] * z;

@@ -154,17 +154,49 @@ export function residualsEvaluate(
     if (c.type === 'distance') {
       pointPlace(model, c.a, state, rot, pts, 0);
       pointPlace(model, c.b, state, rot, pts, 3);
-      const dx = pts[0] - pts[3], dy = pts[1] - pts[4], dz = pts[2] - pts[5];
+      const dx = pts[0] - pts[3],
+        dy = pts[1] - pts[4],
+        dz = pts[2] - pts[5];
       const len = Math.sqrt(dx * dx + dy * dy + dz * dz);
       r[row] = len - c.length;
       if (J) {
         const inv = 1 / Math.max(len, DIRECTION_EPSILON_MM);
-        const ux = dx * inv, uy = dy * inv, uz = dz * inv;
+        const ux = dx * inv,
+          uy = dy * inv,
+          uz = dz * inv;
         if (c.a.slot !== FRAME_SLOT) {
-          addPointRow(J, row, cols, c.a.slot, rot.sets[c.a.slot], c.a.local.x, c.a.local.y, c.a.local.z, ux, uy, uz, 1, tmp);
+          addPointRow(
+            J,
+            row,
+            cols,
+            c.a.slot,
+            rot.sets[c.a.slot],
+            c.a.local.x,
+            c.a.local.y,
+            c.a.local.z,
+            ux,
+            uy,
+            uz,
+            1,
+            tmp,
+          );
         }
         if (c.b.slot !== FRAME_SLOT) {
-          addPointRow(J, row, cols, c.b.slot, rot.sets[c.b.slot], c.b.local.x, c.b.local.y, c.b.local.z, ux, uy, uz, -1, tmp);
+          addPointRow(
+            J,
+            row,
+            cols,
+            c.b.slot,
+            rot.sets[c.b.slot],
+            c.b.local.x,
+            c.b.local.y,
+            c.b.local.z,
+            ux,
+            uy,
+            uz,
+            -1,
+            tmp,
+          );
         }
       }
       row += 1;
@@ -177,8 +209,10 @@ export function residualsEvaluate(
         pointPlace(model, b, state, rot, pts, 3);
         sum += pts[4] - pts[1] - offset;
         if (J) {
-          if (a.slot !== FRAME_SLOT) addPointRow(J, row, cols, a.slot, rot.sets[a.slot], a.local.x, a.local.y, a.local.z, 0, w, 0, -1, tmp);
-          if (b.slot !== FRAME_SLOT) addPointRow(J, row, cols, b.slot, rot.sets[b.slot], b.local.x, b.local.y, b.local.z, 0, w, 0, 1, tmp);
+          if (a.slot !== FRAME_SLOT)
+            addPointRow(J, row, cols, a.slot, rot.sets[a.slot], a.local.x, a.local.y, a.local.z, 0, w, 0, -1, tmp);
+          if (b.slot !== FRAME_SLOT)
+            addPointRow(J, row, cols, b.slot, rot.sets[b.slot], b.local.x, b.local.y, b.local.z, 0, w, 0, 1, tmp);
         }
       }
       r[row] = w * sum;
@@ -207,8 +241,24 @@ export function residualsEvaluate(
           J[base + 3 + a] += k * (tmp[0] * dx + tmp[1] * dy + tmp[2] * dz);
         }
         if (c.eye.slot !== FRAME_SLOT) {
-          const ex = k * pts[0], ey = k * pts[1], ez = k * pts[2];
-          addPointRow(J, row, cols, c.eye.slot, rot.sets[c.eye.slot], c.eye.local.x, c.eye.local.y, c.eye.local.z, ex, ey, ez, 1, tmp);
+          const ex = k * pts[0],
+            ey = k * pts[1],
+            ez = k * pts[2];
+          addPointRow(
+            J,
+            row,
+            cols,
+            c.eye.slot,
+            rot.sets[c.eye.slot],
+            c.eye.local.x,
+            c.eye.local.y,
+            c.eye.local.z,
+            ex,
+            ey,
+            ez,
+            1,
+            tmp,
+          );
         }
       }
       row += 1;
@@ -231,7 +281,10 @@ export function residualsEvaluate(
       r[row + 3] = bx * c.across1.x + by * c.across1.y + bz * c.across1.z;
       r[row + 4] = bx * c.across2.x + by * c.across2.y + bz * c.across2.z;
       if (J) {
-        const la = c.localA, lb = c.localB, e1 = c.across1, e2 = c.across2;
+        const la = c.localA,
+          lb = c.localB,
+          e1 = c.across1,
+          e2 = c.across2;
         addPointRow(J, row, cols, c.slot, rs, la.x, la.y, la.z, 1, 0, 0, 1, tmp);
         addPointRow(J, row + 1, cols, c.slot, rs, la.x, la.y, la.z, 0, 1, 0, 1, tmp);
         addPointRow(J, row + 2, cols, c.slot, rs, la.x, la.y, la.z, 0, 0, 1, 1, tmp);

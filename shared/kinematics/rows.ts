@@ -16,7 +16,12 @@ import type { BodyPoses, DrivelineReading, HeaveRow, MemberReading, Pose, RollRo
 import { vec, type Vec3 } from './vec';
 import { halfShaftPlanBuild, halfShaftReadings, type HalfShaftPlan } from './halfShaft';
 import { leafSpringHeaveFields, leafSpringPlanBuild, type LeafSpringPlan } from './leafSpringRows';
-import { trailingArmHeaveFields, trailingArmPlanBuild, trailingArmRollFields, type TrailingArmPlan } from './trailingArm';
+import {
+  trailingArmHeaveFields,
+  trailingArmPlanBuild,
+  trailingArmRollFields,
+  type TrailingArmPlan,
+} from './trailingArm';
 import { wishbonePlanBuild, type WishbonePlan } from './wishbone';
 import { wishboneHeaveFields, wishboneRollFields } from './wishboneRows';
 
@@ -44,7 +49,13 @@ export interface RowPlan {
   rod: MemberPlan | null;
   upperPair: [MemberPlan, MemberPlan] | null;
   lowerPair: [MemberPlan, MemberPlan] | null;
-  driveline: { output: PointModel; outputAxis: PointModel; pinion: PointModel; pinionAxis: PointModel; rideLength: number } | null;
+  driveline: {
+    output: PointModel;
+    outputAxis: PointModel;
+    pinion: PointModel;
+    pinionAxis: PointModel;
+    rideLength: number;
+  } | null;
   /** the body whose pose is a row's `pose`: the axle, else the body carrying the left wheel */
   primarySlot: number;
   rot: BodyRotations;
@@ -69,7 +80,7 @@ export function rowPlanBuild(model: LinkageModel): RowPlan {
       return { member: m, a, b, rideLength: Math.hypot(a.ride.x - b.ride.x, a.ride.y - b.ride.y, a.ride.z - b.ride.z) };
     });
   const byId = new Map(members.map((p) => [p.member.id, p]));
-  const pick = (m: SketchMember | null) => (m ? byId.get(m.id) ?? null : null);
+  const pick = (m: SketchMember | null) => (m ? (byId.get(m.id) ?? null) : null);
   const pair = (group: 'upper' | 'lower'): [MemberPlan, MemberPlan] | null => {
     const g = members.filter((p) => p.member.kind === 'link' && p.member.group === group);
     return g.length === 2 ? [g[0], g[1]] : null;
@@ -110,7 +121,10 @@ export function rowPlanBuild(model: LinkageModel): RowPlan {
 class RowPlacer {
   private readonly buf = new Float64Array(3);
   private readonly placed: (Vec3 | undefined)[];
-  constructor(private readonly plan: RowPlan, private readonly state: Float64Array) {
+  constructor(
+    private readonly plan: RowPlan,
+    private readonly state: Float64Array,
+  ) {
     plan.rot.update(state);
     this.placed = new Array(plan.model.points.size);
   }
@@ -135,8 +149,11 @@ function memberReadings(plan: RowPlan, at: RowPlacer, rate: Float64Array | null)
   const out: Record<string, MemberReading> = {};
   const { va, vb, tmp } = plan.scratch;
   for (const p of plan.members) {
-    const a = at.at(p.a), b = at.at(p.b);
-    const dx = a.x - b.x, dy = a.y - b.y, dz = a.z - b.z;
+    const a = at.at(p.a),
+      b = at.at(p.b);
+    const dx = a.x - b.x,
+      dy = a.y - b.y,
+      dz = a.z - b.z;
     const length = Math.sqrt(dx * dx + dy * dy + dz * dz);
     const reading: MemberReading = { length, lengthChange: clean(length - p.rideLength) };
     const kind = p.member.kind;
@@ -160,7 +177,12 @@ function drivelineAt(plan: RowPlan, at: RowPlacer): DrivelineReading | undefined
   const d = plan.driveline;
   if (!d) return undefined;
   const r = drivelineReading(at.at(d.output), at.at(d.outputAxis), at.at(d.pinion), at.at(d.pinionAxis), d.rideLength);
-  return { length: r.length, plunge: clean(r.plunge), outputAngle: clean(r.outputAngle), pinionAngle: clean(r.pinionAngle) };
+  return {
+    length: r.length,
+    plunge: clean(r.plunge),
+    outputAngle: clean(r.outputAngle),
+    pinionAngle: clean(r.pinionAngle),
+  };
 }
 
 /** A heave row from a solved row whose `rate` is d(state)/d(travel). */
@@ -175,8 +197,10 @@ export function heaveRowBuild(plan: RowPlan, solved: SolvedRow): HeaveRow {
   let instantCenter = null;
   let parallelSlope: number | null = null;
   if (plan.upper && plan.lower) {
-    const u1 = at.at(plan.upper.a), u2 = at.at(plan.upper.b);
-    const l1 = at.at(plan.lower.a), l2 = at.at(plan.lower.b);
+    const u1 = at.at(plan.upper.a),
+      u2 = at.at(plan.upper.b);
+    const l1 = at.at(plan.lower.a),
+      l2 = at.at(plan.lower.b);
     instantCenter = sideViewCrossing(u1, u2, l1, l2);
     if (!instantCenter && Math.abs(l2.x - l1.x) > 0) parallelSlope = (l2.z - l1.z) / (l2.x - l1.x);
   }
@@ -213,11 +237,23 @@ export function heaveRowBuild(plan: RowPlan, solved: SolvedRow): HeaveRow {
   };
   const dl = drivelineAt(plan, at);
   if (dl) row.driveline = dl;
-  if (plan.trailingArm) Object.assign(row, trailingArmHeaveFields(plan.trailingArm, (p) => at.at(p), solved.state, solved.travel, clean));
+  if (plan.trailingArm)
+    Object.assign(
+      row,
+      trailingArmHeaveFields(plan.trailingArm, (p) => at.at(p), solved.state, solved.travel, clean),
+    );
   const hs = halfShaftReadings(plan.halfShafts, (p) => at.at(p), clean);
   if (hs) row.halfShafts = hs;
-  if (plan.leafSpring) Object.assign(row, leafSpringHeaveFields(plan.leafSpring, (p) => at.at(p), clean));
-  if (plan.wishbone) Object.assign(row, wishboneHeaveFields(plan.wishbone, (p) => at.at(p), solved.state, solved.travel));
+  if (plan.leafSpring)
+    Object.assign(
+      row,
+      leafSpringHeaveFields(plan.leafSpring, (p) => at.at(p), clean),
+    );
+  if (plan.wishbone)
+    Object.assign(
+      row,
+      wishboneHeaveFields(plan.wishbone, (p) => at.at(p), solved.state, solved.travel),
+    );
   return row;
 }
 
@@ -226,7 +262,8 @@ export function rollRowBuild(plan: RowPlan, solved: SolvedRow): RollRow {
   const { model } = plan;
   const at = new RowPlacer(plan, solved.state);
   const pose = cleanPose(poseFromState(solved.state, plan.primarySlot));
-  const wl = at.at(model.wheelLeft), wr = at.at(model.wheelRight);
+  const wl = at.at(model.wheelLeft),
+    wr = at.at(model.wheelRight);
   const row: RollRow = {
     roll: solved.roll,
     pose,
@@ -239,9 +276,17 @@ export function rollRowBuild(plan: RowPlan, solved: SolvedRow): RollRow {
   };
   const dl = drivelineAt(plan, at);
   if (dl) row.driveline = dl;
-  if (plan.trailingArm) Object.assign(row, trailingArmRollFields(plan.trailingArm, (p) => at.at(p), solved.state, solved.roll, clean));
+  if (plan.trailingArm)
+    Object.assign(
+      row,
+      trailingArmRollFields(plan.trailingArm, (p) => at.at(p), solved.state, solved.roll, clean),
+    );
   const hs = halfShaftReadings(plan.halfShafts, (p) => at.at(p), clean);
   if (hs) row.halfShafts = hs;
-  if (plan.wishbone) Object.assign(row, wishboneRollFields(plan.wishbone, (p) => at.at(p), solved.state, solved.roll));
+  if (plan.wishbone)
+    Object.assign(
+      row,
+      wishboneRollFields(plan.wishbone, (p) => at.at(p), solved.state, solved.roll),
+    );
   return row;
 }

@@ -132,7 +132,14 @@ export class PoseSolver {
 
   /** Fills [J_free; damping rows] (or J_free alone), block by block, and factors it. False when J is all zero or singular. */
   private factor(damping: number): boolean {
-    this.factored = this.ls.factor(this.J, this.model.stateSize, this.free, damping, this.regularize, REGULARIZATION_RELATIVE);
+    this.factored = this.ls.factor(
+      this.J,
+      this.model.stateSize,
+      this.free,
+      damping,
+      this.regularize,
+      REGULARIZATION_RELATIVE,
+    );
     this.qrIsUndamped = damping === 0;
     // Only an exactly singular J without damping rows fails here (a linkage at a toggle).
     return this.factored;

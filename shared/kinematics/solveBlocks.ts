@@ -64,7 +64,10 @@ export function solveBlocksBuild(model: LinkageModel, free: Int32Array): SolveBl
     list.push(j);
     cols.set(key, list);
   });
-  return [...cols.entries()].map(([key, cs]) => ({ rows: Int32Array.from(rows.get(key) ?? []), cols: Int32Array.from(cs) }));
+  return [...cols.entries()].map(([key, cs]) => ({
+    rows: Int32Array.from(rows.get(key) ?? []),
+    cols: Int32Array.from(cs),
+  }));
 }
 
 interface BlockWork extends SolveBlock {
@@ -86,7 +89,8 @@ export class BlockedLeastSquares {
 
   constructor(blocks: SolveBlock[]) {
     this.blocks = blocks.map((b) => {
-      const m = b.rows.length, n = b.cols.length;
+      const m = b.rows.length,
+        n = b.cols.length;
       return {
         ...b,
         aug: new WorkMatrix(m + n, n),
@@ -111,11 +115,19 @@ export class BlockedLeastSquares {
    * of `regularizationRelative` × the block's largest column norm². False when every column is
    * zero or a block is singular (a linkage at a toggle, without damping rows).
    */
-  factor(J: Float64Array, stateSize: number, free: Int32Array, damping: number, regularize: boolean, regularizationRelative: number): boolean {
+  factor(
+    J: Float64Array,
+    stateSize: number,
+    free: Int32Array,
+    damping: number,
+    regularize: boolean,
+    regularizationRelative: number,
+  ): boolean {
     let any = false;
     for (const b of this.blocks) {
       b.qr = null;
-      const m = b.rows.length, n = b.cols.length;
+      const m = b.rows.length,
+        n = b.cols.length;
       const augmented = damping > 0 || regularize || m < n;
       const A = augmented ? b.aug : b.plain;
       b.used = augmented ? m + n : m;

@@ -35,7 +35,8 @@ function unlocatedWarnings(model: LinkageModel, nullSpace: Float64Array[]): stri
   const out: string[] = [];
   const rot = new BodyRotations(model.bodies.length);
   rot.update(new Float64Array(model.stateSize));
-  const v = new Float64Array(3), tmp = new Float64Array(3);
+  const v = new Float64Array(3),
+    tmp = new Float64Array(3);
   for (const dir of nullSpace) {
     let moving = false;
     for (const p of model.points.values()) {

@@ -66,7 +66,13 @@ function patchLine(s: TrailingArmSide, wc: Vec3, patch: { u: number; v: number }
 }
 
 /** The trailing-arm fields of a heave row at `travel` (mm). */
-export function trailingArmHeaveFields(plan: TrailingArmPlan, at: PlacePoint, state: Float64Array, travel: number, clean: (v: number) => number): Partial<HeaveRow> {
+export function trailingArmHeaveFields(
+  plan: TrailingArmPlan,
+  at: PlacePoint,
+  state: Float64Array,
+  travel: number,
+  clean: (v: number) => number,
+): Partial<HeaveRow> {
   const s = plan.left;
   const wc = at(s.wheel);
   const attitude = wheelAttitude(poseFromState(state, s.body.slot), s.body.reference, s.wheel.ride, 'left');
@@ -74,7 +80,8 @@ export function trailingArmHeaveFields(plan: TrailingArmPlan, at: PlacePoint, st
   const side = axisInView(s.axisA, s.axisB, 'y', wc.y);
   const instantCenter = side && 'point' in side ? { x: side.point.u, z: side.point.v } : null;
   // Frame-mounted drive: the line runs from the wheel centre (sketch-format.md, anti-squat).
-  const parallelSlope = side && 'direction' in side && side.direction.u !== 0 ? side.direction.v / side.direction.u : null;
+  const parallelSlope =
+    side && 'direction' in side && side.direction.u !== 0 ? side.direction.v / side.direction.u : null;
   const antiSquat = antiSquatPercent(instantCenter, { x: wc.x, z: wc.z }, plan.cgHeight, plan.wheelbase, parallelSlope);
 
   // In a heave row the ground has risen by the travel; the patch is below the wheel centre.
@@ -87,20 +94,28 @@ export function trailingArmHeaveFields(plan: TrailingArmPlan, at: PlacePoint, st
     trackChange: clean(attitude.trackChange),
     instantCenter: instantCenter ? { x: clean(instantCenter.x), z: clean(instantCenter.z) } : null,
     antiSquat: orNull(antiSquat),
-    frontViewInstantCenter: rear.target && 'point' in rear.target ? { y: clean(rear.target.point.u), z: clean(rear.target.point.v) } : null,
+    frontViewInstantCenter:
+      rear.target && 'point' in rear.target ? { y: clean(rear.target.point.u), z: clean(rear.target.point.v) } : null,
     rollCenterHeight: orNull(rollCenterHeight),
   };
 }
 
 /** Foot of the perpendicular from a wheel centre onto the ground, z = y·tan(roll) in the frame's axes (rear view, mm). */
 function patchOnTiltedGround(wc: Vec3, rollRad: number): { u: number; v: number } {
-  const ny = -Math.sin(rollRad), nz = Math.cos(rollRad);
+  const ny = -Math.sin(rollRad),
+    nz = Math.cos(rollRad);
   const d = wc.y * ny + wc.z * nz;
   return { u: wc.y - d * ny, v: wc.z - d * nz };
 }
 
 /** The trailing-arm fields of a roll row at `rollDeg` (deg, the left wheel up for positive roll). */
-export function trailingArmRollFields(plan: TrailingArmPlan, at: PlacePoint, state: Float64Array, rollDeg: number, clean: (v: number) => number): Partial<RollRow> {
+export function trailingArmRollFields(
+  plan: TrailingArmPlan,
+  at: PlacePoint,
+  state: Float64Array,
+  rollDeg: number,
+  clean: (v: number) => number,
+): Partial<RollRow> {
   if (!plan.right) return {};
   const roll = degToRad(rollDeg);
   const sides = [plan.left, plan.right];
@@ -109,7 +124,8 @@ export function trailingArmRollFields(plan: TrailingArmPlan, at: PlacePoint, sta
     return patchLine(s, wc, patchOnTiltedGround(wc, roll)).line;
   });
   const c = lines[0] && lines[1] ? viewLinesCross(lines[0], lines[1]) : null;
-  const camber = (s: TrailingArmSide) => wheelAttitude(poseFromState(state, s.body.slot), s.body.reference, s.wheel.ride, s.side).camberChange;
+  const camber = (s: TrailingArmSide) =>
+    wheelAttitude(poseFromState(state, s.body.slot), s.body.reference, s.wheel.ride, s.side).camberChange;
   // The ground tilts by the roll (left side up): relative to it the left wheel leans out by the roll, the right in.
   return {
     rollCenter: c ? { y: clean(c.u), z: clean(c.v) } : null,

@@ -48,7 +48,8 @@ export function leafSpringsOf(model: LinkageModel): LeafSpringWindUp[] | null {
     const seat = points.get(seatId)!.ride;
     const [front, rear] = halves[0].eye.x >= halves[1].eye.x ? halves : [halves[1], halves[0]];
     const side = (h: { eye: Vec3 }) => Math.hypot(h.eye.x - seat.x, h.eye.z - seat.z);
-    const frontLength = side(front), rearLength = side(rear);
+    const frontLength = side(front),
+      rearLength = side(rear);
     const nmmPerRad = front.rate! * frontLength ** 2 + rear.rate! * rearLength ** 2;
     out.push({
       side: seat.y >= 0 ? 'left' : 'right',
@@ -106,7 +107,8 @@ export function windUpReading(
   const members: WindUpReading['members'] = {};
   for (const m of model.sketch.members) {
     if (m.kind !== 'shock' && m.kind !== 'spring') continue;
-    const a = model.points.get(m.a)!, b = model.points.get(m.b)!;
+    const a = model.points.get(m.a)!,
+      b = model.points.get(m.b)!;
     members[m.id] = { lengthChange: vecDistance(place(a), place(b)) - vecDistance(a.ride, b.ride) };
   }
   const bodies: BodyPoses = {};
@@ -123,8 +125,10 @@ export function windUpReading(
   };
   const d = model.sketch.driveline;
   if (d) {
-    const o = model.points.get(d.output)!, oa = model.points.get(d.outputAxis)!;
-    const pn = model.points.get(d.pinion)!, pa = model.points.get(d.pinionAxis)!;
+    const o = model.points.get(d.output)!,
+      oa = model.points.get(d.outputAxis)!;
+    const pn = model.points.get(d.pinion)!,
+      pa = model.points.get(d.pinionAxis)!;
     reading.driveline = drivelineReading(place(o), place(oa), place(pn), place(pa), vecDistance(o.ride, pn.ride));
   }
   return reading;

@@ -32,7 +32,8 @@ const ZERO_STEER_DIFF_RAD = 1e-6;
 /** `p` turned by `angle` (rad) about the axis through `o` along the unit vector `k` (Rodrigues' formula). */
 function turnAbout(p: Vec3, o: Vec3, k: Vec3, angle: number): Vec3 {
   const v = vecSub(p, o);
-  const c = Math.cos(angle), s = Math.sin(angle);
+  const c = Math.cos(angle),
+    s = Math.sin(angle);
   const kxv = vecCross(k, v);
   const kv = vecDot(k, v);
   return vecAdd(o, vecAdd(vecAdd(vecScale(v, c), vecScale(kxv, s)), vecScale(k, kv * (1 - c))));
@@ -46,7 +47,8 @@ function turnAbout(p: Vec3, o: Vec3, k: Vec3, angle: number): Vec3 {
 function outerEndWithoutSteer(s: WishboneSide, pose: Pose): Vec3 | null {
   const ref = s.body.reference;
   const place = (p: Vec3) => poseApply(pose, ref, p);
-  const lower = place(s.lower.joint.ride), upper = place(s.upper.joint.ride);
+  const lower = place(s.lower.joint.ride),
+    upper = place(s.upper.joint.ride);
   const axis = vecSub(upper, lower);
   const len = vecLength(axis);
   if (!(len > 0)) return null;
@@ -93,7 +95,8 @@ export function tieRodInnerIdeal(s: WishboneSide, heave: HeaveRow[]): Vec3 | nul
     b: 2 * (p.z - p0.z),
     c: vecDot(p, p) - vecDot(p0, p0) - 2 * X * (p.x - p0.x),
   });
-  const e1 = row(p1), e2 = row(p2);
+  const e1 = row(p1),
+    e2 = row(p2);
   const det = e1.a * e2.b - e2.a * e1.b;
   if (!(Math.abs(det) > 0)) return null;
   const y = (e1.c * e2.b - e2.c * e1.b) / det;
@@ -131,7 +134,8 @@ function bumpSteerNote(s: WishboneSide, heave: HeaveRow[]): string | null {
   const dz = target.z - now.z;
   const dl = lengthThen - lengthNow;
   const height = Math.abs(dz) < 0.5 ? 'keep its height' : `${dz > 0 ? 'raise' : 'lower'} it ${mm(Math.abs(dz))}`;
-  const length = Math.abs(dl) < 0.5 ? 'keep the rod\'s length' : `make the rod ${mm(Math.abs(dl))} ${dl > 0 ? 'longer' : 'shorter'}`;
+  const length =
+    Math.abs(dl) < 0.5 ? "keep the rod's length" : `make the rod ${mm(Math.abs(dl))} ${dl > 0 ? 'longer' : 'shorter'}`;
   return (
     `${head} The wishbones ask for its inner end at about y ${mm(target.y)}, z ${mm(target.z)} ` +
     `(on the line from its outer end through the front-view instant centre; now y ${mm(now.y)}, z ${mm(now.z)}): ` +

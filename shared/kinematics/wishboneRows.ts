@@ -34,7 +34,11 @@ export type PlacePoint = (p: PointModel) => Vec3;
 const clean = (v: number) => (Math.abs(v) < OUTPUT_ZERO_TOLERANCE ? 0 : v);
 
 /** The two wishbone lines of a side in the vertical plane `cut` through its wheel centre, and their crossing. */
-export function wishboneView(s: WishboneSide, at: PlacePoint, cut: 'x' | 'y'): { ic: ViewPoint | null; parallel: ViewLine | null; upper: ViewLine | null; lower: ViewLine | null } {
+export function wishboneView(
+  s: WishboneSide,
+  at: PlacePoint,
+  cut: 'x' | 'y',
+): { ic: ViewPoint | null; parallel: ViewLine | null; upper: ViewLine | null; lower: ViewLine | null } {
   const wc = at(s.wheel);
   const level = cut === 'x' ? wc.x : wc.y;
   const upper = planeLineInCut(at(s.upper.inner[0]), at(s.upper.inner[1]), at(s.upper.joint), cut, level);
@@ -49,7 +53,12 @@ const side = (p: ViewPoint | null): SidePoint | null => (p ? { x: clean(p.u), z:
 const orNull = (v: number | null) => (v === null ? null : clean(v));
 
 /** The double-wishbone fields of a heave row at `travel` (mm); they replace the solid-axle instant centre, anti-squat and roll centre. */
-export function wishboneHeaveFields(w: WishbonePlan, at: PlacePoint, state: Float64Array, travel: number): Partial<HeaveRow> {
+export function wishboneHeaveFields(
+  w: WishbonePlan,
+  at: PlacePoint,
+  state: Float64Array,
+  travel: number,
+): Partial<HeaveRow> {
   const s = w.left;
   const pose = poseFromState(state, s.body.slot);
   const attitude = wheelAttitude(pose, s.body.reference, s.wheel.ride, 'left');
@@ -65,7 +74,14 @@ export function wishboneHeaveFields(w: WishbonePlan, at: PlacePoint, state: Floa
     const d = viewLineDirection(sv.parallel);
     slope = Math.abs(d.u) > 0 ? d.v / d.u : null;
   }
-  const antiDive = antiDivePercent(side(sv.ic), { x: wc.x, z: travel }, w.frontBrakeShare, w.cgHeight, w.wheelbase, slope);
+  const antiDive = antiDivePercent(
+    side(sv.ic),
+    { x: wc.x, z: travel },
+    w.frontBrakeShare,
+    w.cgHeight,
+    w.wheelbase,
+    slope,
+  );
 
   const kp = kingpinReading(at(s.lower.joint), at(s.upper.joint), wc, travel, 'left');
   return {
@@ -79,7 +95,12 @@ export function wishboneHeaveFields(w: WishbonePlan, at: PlacePoint, state: Floa
     antiSquat: null,
     antiDive: orNull(antiDive),
     kingpin: kp
-      ? { inclination: clean(kp.inclination), caster: clean(kp.caster), scrubRadius: clean(kp.scrubRadius), trail: clean(kp.trail) }
+      ? {
+          inclination: clean(kp.inclination),
+          caster: clean(kp.caster),
+          scrubRadius: clean(kp.scrubRadius),
+          trail: clean(kp.trail),
+        }
       : null,
   };
 }
@@ -88,13 +109,19 @@ export function wishboneHeaveFields(w: WishbonePlan, at: PlacePoint, state: Floa
 function patchOnTiltedGround(wc: Vec3, rollRad: number): ViewPoint {
   // The roll sweep lifts the left wheel by halfTrack·tan(roll) and drops the right by as much:
   // in the frame's axes the ground is the line z = y·tan(roll) through the origin.
-  const ny = -Math.sin(rollRad), nz = Math.cos(rollRad);
+  const ny = -Math.sin(rollRad),
+    nz = Math.cos(rollRad);
   const d = wc.y * ny + wc.z * nz;
   return { u: wc.y - d * ny, v: wc.z - d * nz };
 }
 
 /** The double-wishbone fields of a roll row at `rollDeg` (deg, the left wheel up for positive roll). */
-export function wishboneRollFields(w: WishbonePlan, at: PlacePoint, state: Float64Array, rollDeg: number): Partial<RollRow> {
+export function wishboneRollFields(
+  w: WishbonePlan,
+  at: PlacePoint,
+  state: Float64Array,
+  rollDeg: number,
+): Partial<RollRow> {
   const out: Partial<RollRow> = {};
   if (!w.right) return out;
   const lines = [w.left, w.right].map((s) => {

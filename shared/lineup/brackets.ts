@@ -28,7 +28,10 @@ export interface BracketRow {
 }
 
 /** Rows in the order the pivots first appear, variant by variant. */
-export function bracketList(variants: readonly Pick<Sketch, 'points'>[], toleranceMm = COMMON_BRACKET_TOLERANCE_MM): BracketRow[] {
+export function bracketList(
+  variants: readonly Pick<Sketch, 'points'>[],
+  toleranceMm = COMMON_BRACKET_TOLERANCE_MM,
+): BracketRow[] {
   const order: string[] = [];
   const seen = new Set<string>();
   for (const v of variants) {
@@ -53,7 +56,8 @@ export function bracketList(variants: readonly Pick<Sketch, 'points'>[], toleran
         spread = Math.max(spread, Math.hypot(a.x - b.x, a.y - b.y, a.z - b.z));
       }
     }
-    const status: BracketStatus = present.length < variants.length ? 'partial' : spread <= toleranceMm ? 'common' : 'moved';
+    const status: BracketStatus =
+      present.length < variants.length ? 'partial' : spread <= toleranceMm ? 'common' : 'moved';
     return { id, at, spread, status };
   });
 }

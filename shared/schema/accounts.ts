@@ -9,7 +9,12 @@ export const PASSWORD_MIN = 8;
 export const PASSWORD_MAX = 256;
 
 /** An e-mail address, trimmed and lower-cased so that one person has one account. */
-export const emailField = z.string().trim().toLowerCase().max(254).pipe(z.email({ message: 'not an e-mail address' }));
+export const emailField = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .max(254)
+  .pipe(z.email({ message: 'not an e-mail address' }));
 
 export const passwordField = z
   .string()

@@ -30,10 +30,15 @@ const finite = z.number().finite();
 export const targetBandSchema = z
   .looseObject({ min: finite.optional(), max: finite.optional(), from: finite.optional(), to: finite.optional() })
   .refine((b) => b.min === undefined || b.max === undefined || b.min <= b.max, { message: 'min must not be above max' })
-  .refine((b) => b.from === undefined || b.to === undefined || b.from <= b.to, { message: 'from must not be after to' });
+  .refine((b) => b.from === undefined || b.to === undefined || b.from <= b.to, {
+    message: 'from must not be after to',
+  });
 
 export const targetsSchema = z.looseObject(
-  Object.fromEntries(targetMetrics.map((m) => [m, targetBandSchema.optional()])) as Record<TargetMetric, z.ZodOptional<typeof targetBandSchema>>,
+  Object.fromEntries(targetMetrics.map((m) => [m, targetBandSchema.optional()])) as Record<
+    TargetMetric,
+    z.ZodOptional<typeof targetBandSchema>
+  >,
 );
 
 /** Scales outside this range (mm per image px) come from a slip, not from a photo of a vehicle. */
@@ -53,4 +58,7 @@ export const tracingImageSchema = z.looseObject({
   locked: z.boolean(),
 });
 
-export const tracingSchema = z.looseObject({ side: tracingImageSchema.optional(), rear: tracingImageSchema.optional() });
+export const tracingSchema = z.looseObject({
+  side: tracingImageSchema.optional(),
+  rear: tracingImageSchema.optional(),
+});

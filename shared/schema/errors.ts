@@ -19,7 +19,9 @@ export class SketchValidationError extends Error {
 export function isSketchValidationError(e: unknown): e is SketchValidationError {
   return (
     e instanceof SketchValidationError ||
-    (typeof e === 'object' && e !== null && (e as { name?: unknown }).name === 'SketchValidationError' &&
+    (typeof e === 'object' &&
+      e !== null &&
+      (e as { name?: unknown }).name === 'SketchValidationError' &&
       Array.isArray((e as { problems?: unknown }).problems))
   );
 }

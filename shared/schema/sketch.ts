@@ -59,7 +59,12 @@ export const memberSchema = z.discriminatedUnion('kind', [
   // three-link model's equivalent link, from its eye `a` (frame hanger or shackle) to its
   // pivot `b` on the axle, bending about `seat` (the axle point at the spring's seat centre);
   // `rate` (N/mm) is this half's share of the spring's vertical rate at the seat.
-  z.looseObject({ ...memberBase, kind: z.literal('leaf-half'), seat: id, rate: z.number().positive().max(1e6).optional() }),
+  z.looseObject({
+    ...memberBase,
+    kind: z.literal('leaf-half'),
+    seat: id,
+    rate: z.number().positive().max(1e6).optional(),
+  }),
 ]);
 
 export const vehicleSchema = z.looseObject({
@@ -106,9 +111,7 @@ const baseSketchSchema = z.looseObject({
   points: z.array(pointSchema).max(MAX_POINTS),
   members: z.array(memberSchema).max(MAX_MEMBERS),
   wheels: z.looseObject({ left: id, right: id }),
-  driveline: z
-    .looseObject({ output: id, outputAxis: id, pinion: id, pinionAxis: id })
-    .optional(),
+  driveline: z.looseObject({ output: id, outputAxis: id, pinion: id, pinionAxis: id }).optional(),
   /**
    * Half-shafts from a frame-mounted drive unit to independent wheels (addition, trailing
    * arms): `inner` and `innerAxis` are frame points (the inner joint, and a point on the drive
@@ -153,25 +156,36 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
     if (!b) report(['members', i, 'b'], `no point '${m.b}'`);
     if (!a || !b) return;
     if (m.kind === 'hinge') {
-      if (a.body !== 'frame') report(['members', i, 'a'], `a hinge axis point must be on the frame ('${a.id}' is on '${a.body}')`);
-      if (b.body !== 'frame') report(['members', i, 'b'], `a hinge axis point must be on the frame ('${b.id}' is on '${b.body}')`);
+      if (a.body !== 'frame')
+        report(['members', i, 'a'], `a hinge axis point must be on the frame ('${a.id}' is on '${a.body}')`);
+      if (b.body !== 'frame')
+        report(['members', i, 'b'], `a hinge axis point must be on the frame ('${b.id}' is on '${b.body}')`);
       if (!s.points.some((p) => p.body === m.body)) report(['members', i, 'body'], `no point is on '${m.body}'`);
     } else if (a.body === b.body) {
       report(['members', i, 'b'], `joins two points of one body ('${m.a}' and '${m.b}' are both on '${a.body}')`);
     }
     if (m.kind === 'leaf-half') {
       if (a.body !== 'frame' && !a.body.startsWith('shackle-')) {
-        report(['members', i, 'a'], `a leaf spring's eye must be on the frame or a shackle ('${a.id}' is on '${a.body}')`);
+        report(
+          ['members', i, 'a'],
+          `a leaf spring's eye must be on the frame or a shackle ('${a.id}' is on '${a.body}')`,
+        );
       }
-      if (b.body !== 'axle') report(['members', i, 'b'], `a leaf spring's pivot must be on the axle ('${b.id}' is on '${b.body}')`);
+      if (b.body !== 'axle')
+        report(['members', i, 'b'], `a leaf spring's pivot must be on the axle ('${b.id}' is on '${b.body}')`);
       const seat = points.get(m.seat);
       if (!seat) report(['members', i, 'seat'], `no point '${m.seat}'`);
-      else if (seat.body !== 'axle') report(['members', i, 'seat'], `a leaf spring's seat must be on the axle ('${seat.id}' is on '${seat.body}')`);
-      else if (distance(a, seat) < MIN_MEMBER_LENGTH_MM) report(['members', i, 'seat'], `must be apart from the eye '${m.a}' (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+      else if (seat.body !== 'axle')
+        report(['members', i, 'seat'], `a leaf spring's seat must be on the axle ('${seat.id}' is on '${seat.body}')`);
+      else if (distance(a, seat) < MIN_MEMBER_LENGTH_MM)
+        report(['members', i, 'seat'], `must be apart from the eye '${m.a}' (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
     }
     const len = distance(a, b);
     if (len < MIN_MEMBER_LENGTH_MM) {
-      report(['members', i], `zero length: '${m.a}' and '${m.b}' are ${len.toFixed(2)} mm apart (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+      report(
+        ['members', i],
+        `zero length: '${m.a}' and '${m.b}' are ${len.toFixed(2)} mm apart (at least ${MIN_MEMBER_LENGTH_MM} mm)`,
+      );
     }
     if (m.kind === 'shock' && m.minLength !== undefined && m.maxLength !== undefined && !(m.minLength < m.maxLength)) {
       report(['members', i, 'maxLength'], `must be greater than minLength (${m.minLength})`);
@@ -182,7 +196,8 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
     const ref = s.wheels[side];
     const p = points.get(ref);
     if (!p) report(['wheels', side], `no point '${ref}'`);
-    else if (p.body === 'frame') report(['wheels', side], `'${ref}' is on the frame; a wheel centre must be on a moving body`);
+    else if (p.body === 'frame')
+      report(['wheels', side], `'${ref}' is on the frame; a wheel centre must be on a moving body`);
     return p;
   };
   const wl = wheel('left');
@@ -195,18 +210,24 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
       const ref = d[key] as string;
       const p = points.get(ref);
       if (!p) report(['driveline', key], `no point '${ref}'`);
-      else if (onFrame && p.body !== 'frame') report(['driveline', key], `'${ref}' must be on the frame (it is on '${p.body}')`);
-      else if (!onFrame && p.body === 'frame') report(['driveline', key], `'${ref}' must be on a moving body (it is on the frame)`);
+      else if (onFrame && p.body !== 'frame')
+        report(['driveline', key], `'${ref}' must be on the frame (it is on '${p.body}')`);
+      else if (!onFrame && p.body === 'frame')
+        report(['driveline', key], `'${ref}' must be on a moving body (it is on the frame)`);
       return p;
     };
     const o = at('output', true);
     const oa = at('outputAxis', true);
     const pn = at('pinion', false);
     const pa = at('pinionAxis', false);
-    if (o && oa && distance(o, oa) < MIN_MEMBER_LENGTH_MM) report(['driveline', 'outputAxis'], `must be apart from the output point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
-    if (pn && pa && distance(pn, pa) < MIN_MEMBER_LENGTH_MM) report(['driveline', 'pinionAxis'], `must be apart from the pinion point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
-    if (pn && pa && pn.body !== pa.body && pa.body !== 'frame') report(['driveline', 'pinionAxis'], `must be on the same body as the pinion ('${pn.body}')`);
-    if (o && pn && distance(o, pn) < MIN_MEMBER_LENGTH_MM) report(['driveline', 'pinion'], `must be apart from the output point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+    if (o && oa && distance(o, oa) < MIN_MEMBER_LENGTH_MM)
+      report(['driveline', 'outputAxis'], `must be apart from the output point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+    if (pn && pa && distance(pn, pa) < MIN_MEMBER_LENGTH_MM)
+      report(['driveline', 'pinionAxis'], `must be apart from the pinion point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+    if (pn && pa && pn.body !== pa.body && pa.body !== 'frame')
+      report(['driveline', 'pinionAxis'], `must be on the same body as the pinion ('${pn.body}')`);
+    if (o && pn && distance(o, pn) < MIN_MEMBER_LENGTH_MM)
+      report(['driveline', 'pinion'], `must be apart from the output point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
   }
 
   for (const side of ['left', 'right'] as const) {
@@ -217,20 +238,42 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
       if (!p) report(['halfShafts', side, key], `no point '${h[key]}'`);
       return p;
     };
-    const inner = at('inner'), innerAxis = at('innerAxis'), outer = at('outer'), outerAxis = at('outerAxis');
-    if (inner && inner.body !== 'frame') report(['halfShafts', side, 'inner'], `'${inner.id}' must be on the frame (it is on '${inner.body}')`);
-    if (innerAxis && innerAxis.body !== 'frame') report(['halfShafts', side, 'innerAxis'], `'${innerAxis.id}' must be on the frame (it is on '${innerAxis.body}')`);
-    if (outer && outer.body === 'frame') report(['halfShafts', side, 'outer'], `'${outer.id}' must be on a moving body (it is on the frame)`);
-    if (outer && outerAxis && outerAxis.body !== outer.body) report(['halfShafts', side, 'outerAxis'], `must be on the same body as the outer joint ('${outer.body}')`);
-    if (inner && innerAxis && distance(inner, innerAxis) < MIN_MEMBER_LENGTH_MM) report(['halfShafts', side, 'innerAxis'], `must be apart from the inner joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
-    if (outer && outerAxis && distance(outer, outerAxis) < MIN_MEMBER_LENGTH_MM) report(['halfShafts', side, 'outerAxis'], `must be apart from the outer joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
-    if (inner && outer && distance(inner, outer) < MIN_MEMBER_LENGTH_MM) report(['halfShafts', side, 'outer'], `must be apart from the inner joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+    const inner = at('inner'),
+      innerAxis = at('innerAxis'),
+      outer = at('outer'),
+      outerAxis = at('outerAxis');
+    if (inner && inner.body !== 'frame')
+      report(['halfShafts', side, 'inner'], `'${inner.id}' must be on the frame (it is on '${inner.body}')`);
+    if (innerAxis && innerAxis.body !== 'frame')
+      report(
+        ['halfShafts', side, 'innerAxis'],
+        `'${innerAxis.id}' must be on the frame (it is on '${innerAxis.body}')`,
+      );
+    if (outer && outer.body === 'frame')
+      report(['halfShafts', side, 'outer'], `'${outer.id}' must be on a moving body (it is on the frame)`);
+    if (outer && outerAxis && outerAxis.body !== outer.body)
+      report(['halfShafts', side, 'outerAxis'], `must be on the same body as the outer joint ('${outer.body}')`);
+    if (inner && innerAxis && distance(inner, innerAxis) < MIN_MEMBER_LENGTH_MM)
+      report(
+        ['halfShafts', side, 'innerAxis'],
+        `must be apart from the inner joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`,
+      );
+    if (outer && outerAxis && distance(outer, outerAxis) < MIN_MEMBER_LENGTH_MM)
+      report(
+        ['halfShafts', side, 'outerAxis'],
+        `must be apart from the outer joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`,
+      );
+    if (inner && outer && distance(inner, outer) < MIN_MEMBER_LENGTH_MM)
+      report(['halfShafts', side, 'outer'], `must be apart from the inner joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
   }
 
   const sw = s.sweep;
   const rows = gridCount(sw.droop, sw.bump, sw.step) + gridCount(-sw.roll, sw.roll, sw.rollStep);
   if (rows > MAX_SWEEP_ROWS) {
-    report(['sweep'], `at most ${MAX_SWEEP_ROWS} rows a sweep (these settings give ${Number.isFinite(rows) ? rows : 'too many'}); use a larger step`);
+    report(
+      ['sweep'],
+      `at most ${MAX_SWEEP_ROWS} rows a sweep (these settings give ${Number.isFinite(rows) ? rows : 'too many'}); use a larger step`,
+    );
   }
 }
 
@@ -273,7 +316,9 @@ export function formatIssue(iss: z.core.$ZodIssue): string {
     case 'invalid_type': {
       const expected = article(typeName(String(iss.expected)));
       const missing = 'input' in iss ? iss.input === undefined : /received undefined/.test(iss.message);
-      return missing && iss.path.length > 0 ? `${where}: required, expected ${expected}` : `${where}: expected ${expected}`;
+      return missing && iss.path.length > 0
+        ? `${where}: required, expected ${expected}`
+        : `${where}: expected ${expected}`;
     }
     case 'invalid_value':
       return `${where}: ${quoteList(iss.values)}`;
@@ -285,7 +330,8 @@ export function formatIssue(iss: z.core.$ZodIssue): string {
     case 'too_small': {
       const bound = Number(iss.minimum);
       if (iss.origin === 'array') return `${where}: at least ${bound} item${bound === 1 ? '' : 's'}`;
-      if (iss.origin === 'string') return bound <= 1 ? `${where}: must not be empty` : `${where}: at least ${bound} characters`;
+      if (iss.origin === 'string')
+        return bound <= 1 ? `${where}: must not be empty` : `${where}: at least ${bound} characters`;
       return `${where}: must be ${iss.inclusive ? 'at least' : 'greater than'} ${bound}`;
     }
     case 'too_big': {

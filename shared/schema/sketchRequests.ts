@@ -28,7 +28,10 @@ export const shareBody = z.strictObject({
   email: emailField.optional(),
 });
 
-const flag = z.enum(['0', '1']).default('0').transform((v) => v === '1');
+const flag = z
+  .enum(['0', '1'])
+  .default('0')
+  .transform((v) => v === '1');
 
 export const listQuery = z.object({
   q: z.string().trim().max(SKETCH_NAME_MAX).default(''),

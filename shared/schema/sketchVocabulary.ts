@@ -32,7 +32,16 @@ export const bodyIds = [
 export type BodyId = (typeof bodyIds)[number];
 export type MovingBodyId = Exclude<BodyId, 'frame'>;
 
-export const memberKinds = ['link', 'lateral-rod', 'tie-rod', 'shackle', 'shock', 'spring', 'hinge', 'leaf-half'] as const;
+export const memberKinds = [
+  'link',
+  'lateral-rod',
+  'tie-rod',
+  'shackle',
+  'shock',
+  'spring',
+  'hinge',
+  'leaf-half',
+] as const;
 export type MemberKind = (typeof memberKinds)[number];
 
 /** Member kinds that hold a fixed length between their two points (the solver's constraints). */

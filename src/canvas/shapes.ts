@@ -53,18 +53,27 @@ export interface ShockMarks {
  * A shock drawn from a (body end) to b (shaft end), with marks where b would sit at `minLength`
  * and `maxLength`. The 3D length ratio carries over to the view: projection keeps ratios along a line.
  */
-export function shockMarks(a: ScreenPoint, b: ScreenPoint, length: number, minLength?: number, maxLength?: number, tick: Px = 6): ShockMarks {
+export function shockMarks(
+  a: ScreenPoint,
+  b: ScreenPoint,
+  length: number,
+  minLength?: number,
+  maxLength?: number,
+  tick: Px = 6,
+): ShockMarks {
   const dx = b.px - a.px;
   const dy = b.py - a.py;
   const len = Math.hypot(dx, dy);
   const nx = len > 0 ? -dy / len : 0;
   const ny = len > 0 ? dx / len : 0;
   const mark = (mm?: number): ScreenPoint | null => (mm && length > 0 ? lerp(a, b, mm / length) : null);
-  const tickAt = (p: ScreenPoint | null) => (p && len >= MIN_DETAIL_PX ? [p.px - nx * tick, p.py - ny * tick, p.px + nx * tick, p.py + ny * tick] : null);
+  const tickAt = (p: ScreenPoint | null) =>
+    p && len >= MIN_DETAIL_PX ? [p.px - nx * tick, p.py - ny * tick, p.px + nx * tick, p.py + ny * tick] : null;
   const compressed = mark(minLength);
   const extended = mark(maxLength);
   // The body reaches to where the shaft would bottom out; without limits, a little past halfway.
-  const bodyEnd = compressed && minLength! < length ? lerp(a, b, Math.max(0.35, (minLength! / length) * 0.85)) : lerp(a, b, 0.55);
+  const bodyEnd =
+    compressed && minLength! < length ? lerp(a, b, Math.max(0.35, (minLength! / length) * 0.85)) : lerp(a, b, 0.55);
   return {
     compressed,
     extended,
@@ -111,7 +120,10 @@ function overlaps(a: LabelBox, b: LabelBox): boolean {
  * round its handle (right-above first) and is left out when all four are taken. `priority`
  * labels (selected pivots) go first, so they always show.
  */
-export function placeLabels(items: readonly { id: string; at: ScreenPoint; text: string; priority?: boolean }[], handles: readonly ScreenPoint[] = []): Map<string, LabelBox> {
+export function placeLabels(
+  items: readonly { id: string; at: ScreenPoint; text: string; priority?: boolean }[],
+  handles: readonly ScreenPoint[] = [],
+): Map<string, LabelBox> {
   const placed = new Map<string, LabelBox>();
   const taken: LabelBox[] = handles.map((h) => ({ x: h.px - 6, y: h.py - 6, width: 12, height: 12 }));
   const order = [...items].sort((a, b) => Number(!!b.priority) - Number(!!a.priority));

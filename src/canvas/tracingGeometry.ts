@@ -58,8 +58,10 @@ export function withTracing(doc: unknown, view: ViewKind, img: TracingImage | nu
 
 /** Why a file cannot be a tracing, or null when it can. */
 export function photoProblem(file: { type: string; size: number; name: string }): string | null {
-  if (!(TRACING_MIME_TYPES as readonly string[]).includes(file.type)) return `“${file.name}” is not a PNG or JPEG photo.`;
-  if (file.size > MAX_TRACING_BYTES) return `“${file.name}” is ${(file.size / 1024 / 1024).toFixed(1)} MB; a tracing may be up to 10 MB.`;
+  if (!(TRACING_MIME_TYPES as readonly string[]).includes(file.type))
+    return `“${file.name}” is not a PNG or JPEG photo.`;
+  if (file.size > MAX_TRACING_BYTES)
+    return `“${file.name}” is ${(file.size / 1024 / 1024).toFixed(1)} MB; a tracing may be up to 10 MB.`;
   if (file.size === 0) return `“${file.name}” is empty.`;
   return null;
 }
@@ -69,7 +71,12 @@ export function photoProblem(file: { type: string; size: number; name: string })
  * whole vehicle; the rear view: 1.6 tracks), centred over the middle of the wheelbase, its
  * bottom edge on the ground. The user then sets the true scale from two points.
  */
-export function initialPlacement(view: ViewKind, width: number, height: number, vehicle: { wheelbase: Mm; track: Mm } | undefined): Pick<TracingImage, 'centre' | 'mmPerPx'> {
+export function initialPlacement(
+  view: ViewKind,
+  width: number,
+  height: number,
+  vehicle: { wheelbase: Mm; track: Mm } | undefined,
+): Pick<TracingImage, 'centre' | 'mmPerPx'> {
   const span = view === 'side' ? (vehicle?.wheelbase ?? 3000) : (vehicle?.track ?? 1600);
   const mmPerPx = Math.min(MAX_MM_PER_PX, Math.max(MIN_MM_PER_PX, (1.6 * span) / width));
   const centreH = view === 'side' ? span / 2 : 0;
@@ -77,7 +84,10 @@ export function initialPlacement(view: ViewKind, width: number, height: number, 
 }
 
 /** The image's rectangle on the stage (px): top-left corner and size. */
-export function imageRect(img: TracingImage, t: ViewTransform): { x: number; y: number; width: number; height: number } {
+export function imageRect(
+  img: TracingImage,
+  t: ViewTransform,
+): { x: number; y: number; width: number; height: number } {
   const c = planeToScreen(t, img.centre);
   const width = img.width * img.mmPerPx * t.scale;
   const height = img.height * img.mmPerPx * t.scale;
@@ -94,7 +104,10 @@ export function centreForRect(img: TracingImage, t: ViewTransform, x: number, y:
 /** A plane point (mm) as a pixel of the image (px from its top-left corner, y down). */
 export function planeToImagePx(img: TracingImage, p: PlanePoint): { u: number; w: number } {
   // h grows to the screen's left in both views (canvasTransform), and the image is drawn upright.
-  return { u: img.width / 2 - (p.h - img.centre.h) / img.mmPerPx, w: img.height / 2 - (p.v - img.centre.v) / img.mmPerPx };
+  return {
+    u: img.width / 2 - (p.h - img.centre.h) / img.mmPerPx,
+    w: img.height / 2 - (p.v - img.centre.v) / img.mmPerPx,
+  };
 }
 
 export type ScaleOutcome = { ok: true; image: TracingImage } | { ok: false; error: string };
@@ -105,12 +118,18 @@ export type ScaleOutcome = { ok: true; image: TracingImage } | { ok: false; erro
  * known point first (a wheel centre) keeps it in place.
  */
 export function rescaleFromPicks(img: TracingImage, a: PlanePoint, b: PlanePoint, realMm: Mm): ScaleOutcome {
-  if (!(Number.isFinite(realMm) && realMm > 0)) return { ok: false, error: 'The real distance must be a length above zero.' };
+  if (!(Number.isFinite(realMm) && realMm > 0))
+    return { ok: false, error: 'The real distance must be a length above zero.' };
   const shownMm = Math.hypot(b.h - a.h, b.v - a.v);
-  if (shownMm / img.mmPerPx < MIN_SCALE_PICK_PX) return { ok: false, error: 'The two points are too close together on the photo; pick points further apart.' };
+  if (shownMm / img.mmPerPx < MIN_SCALE_PICK_PX)
+    return { ok: false, error: 'The two points are too close together on the photo; pick points further apart.' };
   const k = realMm / shownMm;
   const mmPerPx = img.mmPerPx * k;
-  if (mmPerPx < MIN_MM_PER_PX || mmPerPx > MAX_MM_PER_PX) return { ok: false, error: 'That distance gives an impossible scale for this photo; check the number and its unit.' };
+  if (mmPerPx < MIN_MM_PER_PX || mmPerPx > MAX_MM_PER_PX)
+    return {
+      ok: false,
+      error: 'That distance gives an impossible scale for this photo; check the number and its unit.',
+    };
   const centre = { h: a.h + (img.centre.h - a.h) * k, v: a.v + (img.centre.v - a.v) * k };
   return { ok: true, image: { ...img, mmPerPx, centre } };
 }

@@ -127,7 +127,9 @@ export function useCanvasPointer(
     if (Math.hypot(p.px - downAt.px, p.py - downAt.py) > CLICK_SLOP_PX) moved = true;
     switch (mode.value) {
       case 'drag':
-        onFrame(() => board.dragTo(screenToPlane(canvas.transform.value, { px: p.px - grabOffset.dx, py: p.py - grabOffset.dy })));
+        onFrame(() =>
+          board.dragTo(screenToPlane(canvas.transform.value, { px: p.px - grabOffset.dx, py: p.py - grabOffset.dy })),
+        );
         break;
       case 'pan': {
         const dx = p.px - last.px;
@@ -145,7 +147,8 @@ export function useCanvasPointer(
         break;
       }
       case 'none':
-        if (e.pointerType === 'mouse') onFrame(() => (hovered.value = (hit(p)?.getAttr('pivotId') as string | undefined) ?? null));
+        if (e.pointerType === 'mouse')
+          onFrame(() => (hovered.value = (hit(p)?.getAttr('pivotId') as string | undefined) ?? null));
         break;
     }
   }
@@ -191,5 +194,15 @@ export function useCanvasPointer(
     if (mode.value === 'drag') board.endDrag();
   });
 
-  return { hovered, mode, onPointerDown, onPointerMove, onPointerUp, onPointerCancel, onPointerLeave, onWheel, pivotScreen };
+  return {
+    hovered,
+    mode,
+    onPointerDown,
+    onPointerMove,
+    onPointerUp,
+    onPointerCancel,
+    onPointerLeave,
+    onWheel,
+    pivotScreen,
+  };
 }

@@ -4,7 +4,15 @@
  * sketch; after that only the user moves it (wheel, pinch, pan, the fit button).
  */
 import { ref, shallowRef } from 'vue';
-import { boundsOf, fitTransform, panBy, zoomAt, type PlaneBounds, type PlanePoint, type ViewTransform } from '../canvas/transform';
+import {
+  boundsOf,
+  fitTransform,
+  panBy,
+  zoomAt,
+  type PlaneBounds,
+  type PlanePoint,
+  type ViewTransform,
+} from '../canvas/transform';
 
 /** One wheel notch zooms by this factor. */
 export const WHEEL_ZOOM_STEP = 1.15;

@@ -6,7 +6,11 @@
  */
 import { nextTick, watch, type Ref } from 'vue';
 
-export function useRowIntoView(scroller: Ref<HTMLElement | null>, selected: () => string | null, rowTestId: (id: string) => string): void {
+export function useRowIntoView(
+  scroller: Ref<HTMLElement | null>,
+  selected: () => string | null,
+  rowTestId: (id: string) => string,
+): void {
   watch(selected, async (id) => {
     if (!id) return;
     await nextTick();

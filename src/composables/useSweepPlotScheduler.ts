@@ -24,7 +24,7 @@ let frame = 0;
 function pump() {
   frame = 0;
   let given = 0;
-  for (let i = 0; i < queue.length && given < CHARTS_PER_FRAME; ) {
+  for (let i = 0; i < queue.length && given < CHARTS_PER_FRAME;) {
     const job = queue[i];
     if (job.dirty && job.visible) {
       job.dirty = false;

@@ -138,7 +138,8 @@ export const useTracingStore = defineStore('tracing', () => {
 
   function setOpacity(view: ViewKind, opacity: number) {
     const img = current(view);
-    if (img) write(view, { ...img, opacity: Math.min(1, Math.max(0, opacity)) }, 'Tracing opacity', `tracing-opacity:${view}`);
+    if (img)
+      write(view, { ...img, opacity: Math.min(1, Math.max(0, opacity)) }, 'Tracing opacity', `tracing-opacity:${view}`);
   }
 
   function setLocked(view: ViewKind, locked: boolean) {
@@ -157,5 +158,22 @@ export const useTracingStore = defineStore('tracing', () => {
     if (picking.value === view) cancelScale();
   }
 
-  return { uploading, error, picking, picks, side, rear, current, upload, startScale, addPick, cancelScale, applyScale, setOpacity, setLocked, moveTo, remove };
+  return {
+    uploading,
+    error,
+    picking,
+    picks,
+    side,
+    rear,
+    current,
+    upload,
+    startScale,
+    addPick,
+    cancelScale,
+    applyScale,
+    setOpacity,
+    setLocked,
+    moveTo,
+    remove,
+  };
 });

@@ -20,10 +20,19 @@ export interface PlottedVariant {
 
 export function lineupPlots(variants: readonly PlottedVariant[], u: LengthUnit): PlotSpec[] {
   const perVariant = variants.map((v) =>
-    v.result ? buildPlots(v.result, { members: v.document.members, hasAxle: v.document.points.some((p) => p.body === 'axle') }, {}, [], u) : [],
+    v.result
+      ? buildPlots(
+          v.result,
+          { members: v.document.members, hasAxle: v.document.points.some((p) => p.body === 'axle') },
+          {},
+          [],
+          u,
+        )
+      : [],
   );
   const keys: string[] = [];
-  for (const plots of perVariant) for (const p of plots) if (p.key !== 'shocks' && !keys.includes(p.key)) keys.push(p.key);
+  for (const plots of perVariant)
+    for (const p of plots) if (p.key !== 'shocks' && !keys.includes(p.key)) keys.push(p.key);
 
   const out: PlotSpec[] = [];
   for (const key of keys) {
@@ -32,7 +41,11 @@ export function lineupPlots(variants: readonly PlottedVariant[], u: LengthUnit):
     const series = perVariant.flatMap((plots, i) => {
       const spec = plots.find((p) => p.key === key);
       const curves = spec?.series.filter((s) => !s.dash) ?? [];
-      return curves.map((s) => ({ ...s, color: VARIANT_COLORS[i % VARIANT_COLORS.length], label: curves.length > 1 ? `${variants[i].name}: ${s.label}` : variants[i].name }));
+      return curves.map((s) => ({
+        ...s,
+        color: VARIANT_COLORS[i % VARIANT_COLORS.length],
+        label: curves.length > 1 ? `${variants[i].name}: ${s.label}` : variants[i].name,
+      }));
     });
     out.push({ ...first, series, bands: [], emptyReason: undefined });
   }

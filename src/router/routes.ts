@@ -25,14 +25,33 @@ export const routes: RouteRecordRaw[] = [
       { path: 'library', name: 'library', component: () => import('../pages/LibraryPage.vue'), meta: { auth: true } },
       { path: 'sketches/new', name: 'board-new', component: BoardPage, meta: { auth: true, fullWidth: true } },
       { path: 'sketches/:id(\\d+)', name: 'board', component: BoardPage, meta: { auth: true, fullWidth: true } },
-      { path: 'sketches/:id(\\d+)/sheet', name: 'build-sheet', component: () => import('../pages/BuildSheetPage.vue'), meta: { auth: true } },
+      {
+        path: 'sketches/:id(\\d+)/sheet',
+        name: 'build-sheet',
+        component: () => import('../pages/BuildSheetPage.vue'),
+        meta: { auth: true },
+      },
       // Read-only links work signed out too.
       { path: 'shared/:token', name: 'board-shared', component: BoardPage, meta: { fullWidth: true } },
-      { path: 'shared/:token/sheet', name: 'build-sheet-shared', component: () => import('../pages/BuildSheetPage.vue') },
+      {
+        path: 'shared/:token/sheet',
+        name: 'build-sheet-shared',
+        component: () => import('../pages/BuildSheetPage.vue'),
+      },
       { path: 'lineup', name: 'lineup', component: () => import('../pages/LineupPage.vue'), meta: { auth: true } },
       { path: 'admin', redirect: '/admin/users' },
-      { path: 'admin/users', name: 'admin-users', component: () => import('../pages/AdminUsersPage.vue'), meta: { auth: true, admin: true } },
-      { path: 'admin/outbox', name: 'admin-outbox', component: () => import('../pages/AdminOutboxPage.vue'), meta: { auth: true, admin: true } },
+      {
+        path: 'admin/users',
+        name: 'admin-users',
+        component: () => import('../pages/AdminUsersPage.vue'),
+        meta: { auth: true, admin: true },
+      },
+      {
+        path: 'admin/outbox',
+        name: 'admin-outbox',
+        component: () => import('../pages/AdminOutboxPage.vue'),
+        meta: { auth: true, admin: true },
+      },
     ],
   },
   {
@@ -41,7 +60,12 @@ export const routes: RouteRecordRaw[] = [
     children: [
       { path: 'signin', name: 'signin', component: () => import('../pages/SignInPage.vue'), meta: { guest: true } },
       { path: 'signup', name: 'signup', component: () => import('../pages/SignUpPage.vue'), meta: { guest: true } },
-      { path: 'forgot', name: 'forgot', component: () => import('../pages/ForgotPasswordPage.vue'), meta: { guest: true } },
+      {
+        path: 'forgot',
+        name: 'forgot',
+        component: () => import('../pages/ForgotPasswordPage.vue'),
+        meta: { guest: true },
+      },
       { path: 'reset', name: 'reset', component: () => import('../pages/ResetPasswordPage.vue') },
     ],
   },

@@ -50,7 +50,13 @@ function coordinate(v: number, u: LengthUnit): string {
 }
 
 function pivot(p: Sketch['points'][number], u: LengthUnit): SheetPivot {
-  return { id: p.id, body: p.body.replace('-', ' '), x: coordinate(p.x, u), y: coordinate(p.y, u), z: coordinate(p.z, u) };
+  return {
+    id: p.id,
+    body: p.body.replace('-', ' '),
+    x: coordinate(p.x, u),
+    y: coordinate(p.y, u),
+    z: coordinate(p.z, u),
+  };
 }
 
 /** The span a member's length takes over the heave sweep (mm), or null when the sweep has no reading of it. */
@@ -63,7 +69,10 @@ function memberNote(m: Sketch['members'][number], result: SweepResult | null, u:
   if (m.kind === 'shock') {
     const span = lengthSpan(result, m.id);
     const used = span ? `${formatLength(span.min, u)} to ${formatLength(span.max, u)} over the travel` : 'not swept';
-    const stroke = m.minLength !== undefined && m.maxLength !== undefined ? `stroke ${formatLength(m.minLength, u)} to ${formatLength(m.maxLength, u)}` : 'no stroke given';
+    const stroke =
+      m.minLength !== undefined && m.maxLength !== undefined
+        ? `stroke ${formatLength(m.minLength, u)} to ${formatLength(m.maxLength, u)}`
+        : 'no stroke given';
     return `${stroke}; ${used}`;
   }
   if (m.kind === 'spring') {
@@ -75,7 +84,12 @@ function memberNote(m: Sketch['members'][number], result: SweepResult | null, u:
   return '';
 }
 
-export function buildSheet(sketch: Sketch, result: SweepResult | null, problem: string | null, u: LengthUnit): BuildSheet {
+export function buildSheet(
+  sketch: Sketch,
+  result: SweepResult | null,
+  problem: string | null,
+  u: LengthUnit,
+): BuildSheet {
   const byId = new Map(sketch.points.map((p) => [p.id, p] as const));
   const v = sketch.vehicle;
   const vehicle: SheetLine[] = [
@@ -102,13 +116,29 @@ export function buildSheet(sketch: Sketch, result: SweepResult | null, problem: 
     const pinion = range((r) => r.pinionAngleChange);
     const lateral = range((r) => r.lateralShift);
     geometry.push(
-      { label: 'Travel reached', value: `${formatLength(-result.limits.droop, u)} droop, ${formatLength(result.limits.bump, u)} bump` },
+      {
+        label: 'Travel reached',
+        value: `${formatLength(-result.limits.droop, u)} droop, ${formatLength(result.limits.bump, u)} bump`,
+      },
       { label: 'Articulation reached', value: showAngle(result.limits.articulation, 'no roll sweep', false, 1).text },
       { label: 'Anti-squat at ride', value: showPercent(ride.antiSquat, 'not defined').text },
-      { label: 'Instant centre at ride (x, z)', value: ride.instantCenter ? `${formatLength(ride.instantCenter.x, u)}, ${formatLength(ride.instantCenter.z, u)}` : '—' },
+      {
+        label: 'Instant centre at ride (x, z)',
+        value: ride.instantCenter
+          ? `${formatLength(ride.instantCenter.x, u)}, ${formatLength(ride.instantCenter.z, u)}`
+          : '—',
+      },
       { label: 'Roll centre height at ride', value: showLength(ride.rollCenterHeight, u).text },
-      { label: 'Pinion angle change over the travel', value: pinion ? `${showAngle(pinion.min, '', true).text} to ${showAngle(pinion.max, '', true).text}` : '—' },
-      { label: 'Lateral shift over the travel', value: lateral ? `${showLength(lateral.min, u, '', true).text} to ${showLength(lateral.max, u, '', true).text}` : '—' },
+      {
+        label: 'Pinion angle change over the travel',
+        value: pinion ? `${showAngle(pinion.min, '', true).text} to ${showAngle(pinion.max, '', true).text}` : '—',
+      },
+      {
+        label: 'Lateral shift over the travel',
+        value: lateral
+          ? `${showLength(lateral.min, u, '', true).text} to ${showLength(lateral.max, u, '', true).text}`
+          : '—',
+      },
     );
   }
   return {

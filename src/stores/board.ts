@@ -150,7 +150,9 @@ export const useBoardStore = defineStore('board', () => {
     if (!doc.points.some((p) => p.id === id)) return;
     selectedMember.value = null;
     if (opts.add) {
-      selectedPoints.value = selectedPoints.value.includes(id) ? selectedPoints.value.filter((p) => p !== id) : [...selectedPoints.value, id];
+      selectedPoints.value = selectedPoints.value.includes(id)
+        ? selectedPoints.value.filter((p) => p !== id)
+        : [...selectedPoints.value, id];
     } else selectedPoints.value = [id];
   }
 
@@ -185,10 +187,20 @@ export const useBoardStore = defineStore('board', () => {
    * is read-only, when the edit itself fails, or when it would turn a valid sketch into an
    * invalid one (the message names the problem).
    */
-  function commit(label: string, edit: (doc: Sketch) => Sketch, opts: { coalesce?: string; windowMs?: number } = {}): EditResult {
+  function commit(
+    label: string,
+    edit: (doc: Sketch) => Sketch,
+    opts: { coalesce?: string; windowMs?: number } = {},
+  ): EditResult {
     const before = document.value;
     if (!before) return { ok: false, error: 'No sketch is open.' };
-    if (readOnly.value) return { ok: false, error: viewing.value ? 'A revision is open read-only; go back to the current sketch to edit.' : 'This sketch is read-only.' };
+    if (readOnly.value)
+      return {
+        ok: false,
+        error: viewing.value
+          ? 'A revision is open read-only; go back to the current sketch to edit.'
+          : 'This sketch is read-only.',
+      };
     if (drag) endDrag();
     let after: Sketch;
     try {
@@ -284,9 +296,16 @@ export const useBoardStore = defineStore('board', () => {
    * `tracing`) as one undo step. `live` (a photo being moved, a slider held) merges the run of
    * quick changes to the same field into one step; `coalesce` names such a run explicitly.
    */
-  function setDocumentField(key: string, value: unknown, opts: { live?: boolean; coalesce?: string; label?: string } = {}): EditResult {
+  function setDocumentField(
+    key: string,
+    value: unknown,
+    opts: { live?: boolean; coalesce?: string; label?: string } = {},
+  ): EditResult {
     const coalesce = opts.coalesce ?? (opts.live ? `field:${key}` : undefined);
-    return commit(opts.label ?? `Change ${key}`, (d) => edits.setDocumentField(d, key, value), { coalesce, windowMs: NUDGE_COALESCE_MS });
+    return commit(opts.label ?? `Change ${key}`, (d) => edits.setDocumentField(d, key, value), {
+      coalesce,
+      windowMs: NUDGE_COALESCE_MS,
+    });
   }
 
   /**
@@ -329,7 +348,8 @@ export const useBoardStore = defineStore('board', () => {
     const step = snapOn.value ? snapStepMm.value : 0;
     const h = step ? snapTo(target.h, step) : target.h;
     const v = step ? snapTo(target.v, step) : target.v;
-    const delta: edits.Delta = drag.view === 'side' ? { x: h - start.x, z: v - start.z } : { y: h - start.y, z: v - start.z };
+    const delta: edits.Delta =
+      drag.view === 'side' ? { x: h - start.x, z: v - start.z } : { y: h - start.y, z: v - start.z };
     // Always from the drag's start: no drift from rounding, and snapping can move a pivot back.
     document.value = edits.movePoints(drag.start, new Map(drag.ids.map((id) => [id, delta])), mirrorPairs());
   }
@@ -410,7 +430,11 @@ export const useBoardStore = defineStore('board', () => {
     saving.value = true;
     pending = (async () => {
       try {
-        const detail = await api.put<SketchDetail>(`/api/sketches/${m.id}`, { document: doc, name: doc.name, version: m.version });
+        const detail = await api.put<SketchDetail>(`/api/sketches/${m.id}`, {
+          document: doc,
+          name: doc.name,
+          version: m.version,
+        });
         meta.value = stripDocument(detail);
         savedDocument.value = doc;
         saveError.value = null;
@@ -514,7 +538,10 @@ export const useBoardStore = defineStore('board', () => {
     } catch (err) {
       document.value = null;
       meta.value = null;
-      loadError.value = err instanceof ApiError && err.status === 404 ? 'This sketch does not exist, or is not shared with you.' : errorMessage(err);
+      loadError.value =
+        err instanceof ApiError && err.status === 404
+          ? 'This sketch does not exist, or is not shared with you.'
+          : errorMessage(err);
     } finally {
       loading.value = false;
     }
@@ -602,20 +629,78 @@ export const useBoardStore = defineStore('board', () => {
 
   return {
     // state
-    meta, sharedToken, document, viewing, loading, loadError, sketch, canEdit, readOnly, sketchId, pairs, problems,
-    selectedPoints, selectedMember, mirrorLinked, snapOn, snapStep, snapStepMm, dragging, dragView,
-    canUndo, canRedo, undoLabel, redoLabel,
-    saveState, saveError, conflictVersion, lastSavedAt, dirty, hasUnsavedChanges,
-    revisions, revisionsLoading,
+    meta,
+    sharedToken,
+    document,
+    viewing,
+    loading,
+    loadError,
+    sketch,
+    canEdit,
+    readOnly,
+    sketchId,
+    pairs,
+    problems,
+    selectedPoints,
+    selectedMember,
+    mirrorLinked,
+    snapOn,
+    snapStep,
+    snapStepMm,
+    dragging,
+    dragView,
+    canUndo,
+    canRedo,
+    undoLabel,
+    redoLabel,
+    saveState,
+    saveError,
+    conflictVersion,
+    lastSavedAt,
+    dirty,
+    hasUnsavedChanges,
+    revisions,
+    revisionsLoading,
     // actions
-    select, setSnap, setSnapStep, setMirrorLinked,
-    commit, undo, redo,
-    setPointCoordinate, renamePoint, renameMember, setMemberKind, setMemberEnds, setMemberField,
-    addMember, deleteMember, addPoint, deletePoint, setVehicleField, rename, setDocumentField, nudge,
-    beginDrag, dragTo, endDrag, cancelDrag,
-    save, flush, takeServerVersion, saveAsCopy, copyToLibrary,
-    setLoaded, loadSketch, loadShared,
-    loadRevisions, openRevision, closeRevision, compareRevisions, restoreRevision,
-    dispose, createFromStarter,
+    select,
+    setSnap,
+    setSnapStep,
+    setMirrorLinked,
+    commit,
+    undo,
+    redo,
+    setPointCoordinate,
+    renamePoint,
+    renameMember,
+    setMemberKind,
+    setMemberEnds,
+    setMemberField,
+    addMember,
+    deleteMember,
+    addPoint,
+    deletePoint,
+    setVehicleField,
+    rename,
+    setDocumentField,
+    nudge,
+    beginDrag,
+    dragTo,
+    endDrag,
+    cancelDrag,
+    save,
+    flush,
+    takeServerVersion,
+    saveAsCopy,
+    copyToLibrary,
+    setLoaded,
+    loadSketch,
+    loadShared,
+    loadRevisions,
+    openRevision,
+    closeRevision,
+    compareRevisions,
+    restoreRevision,
+    dispose,
+    createFromStarter,
   };
 });

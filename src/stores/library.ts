@@ -50,7 +50,11 @@ export const useLibraryStore = defineStore('library', {
     },
     async rename(item: SketchSummary, name: string) {
       const full = await api.get<SketchDetail>(`/api/sketches/${item.id}`);
-      await api.put<SketchDetail>(`/api/sketches/${item.id}`, { document: { ...full.document, name }, name, version: full.version });
+      await api.put<SketchDetail>(`/api/sketches/${item.id}`, {
+        document: { ...full.document, name },
+        name,
+        version: full.version,
+      });
       await this.load();
     },
     async copy(item: SketchSummary): Promise<SketchDetail> {

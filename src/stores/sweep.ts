@@ -169,8 +169,12 @@ export const useSweepStore = defineStore('sweep', () => {
     { immediate: true },
   );
 
-  const heaveRow = computed<HeaveRow | null>(() => (result.value ? nearest(result.value.heave, (r) => r.travel, travel.value) : null));
-  const rollRow = computed<RollRow | null>(() => (result.value ? nearest(result.value.roll, (r) => r.roll, roll.value) : null));
+  const heaveRow = computed<HeaveRow | null>(() =>
+    result.value ? nearest(result.value.heave, (r) => r.travel, travel.value) : null,
+  );
+  const rollRow = computed<RollRow | null>(() =>
+    result.value ? nearest(result.value.roll, (r) => r.roll, roll.value) : null,
+  );
 
   /** The row the readout shows and the ghost draws: of the slider moved last. */
   const rowAtCursor = computed<CursorRow | null>(() => {
@@ -193,7 +197,8 @@ export const useSweepStore = defineStore('sweep', () => {
   const cursorBeyondReach = computed(() => {
     const r = result.value;
     if (!r) return false;
-    if (cursorSweep.value === 'roll') return roll.value < r.limits.rollMin - 1e-9 || roll.value > r.limits.rollMax + 1e-9;
+    if (cursorSweep.value === 'roll')
+      return roll.value < r.limits.rollMin - 1e-9 || roll.value > r.limits.rollMax + 1e-9;
     return travel.value < r.limits.droop - 1e-9 || travel.value > r.limits.bump + 1e-9;
   });
 
@@ -230,7 +235,9 @@ export const useSweepStore = defineStore('sweep', () => {
     for (const [k, band] of Object.entries(next)) {
       if (band && Object.values(band).some((v) => v !== undefined)) clean[k as keyof Targets] = { ...band };
     }
-    return board.setDocumentField('targets', Object.keys(clean).length ? clean : undefined, { label: 'Change targets' });
+    return board.setDocumentField('targets', Object.keys(clean).length ? clean : undefined, {
+      label: 'Change targets',
+    });
   }
 
   function dispose() {

@@ -55,7 +55,10 @@ function nearestRow<T>(rows: T[], pos: (r: T) => number, at: number): T | undefi
 }
 
 /** The rigid member that stretches or shrinks most at a row: the one taking the bind (or stopping the sweep). */
-export function mostStrainedMember(members: readonly SketchMember[], row: HeaveRow | RollRow | undefined): string | undefined {
+export function mostStrainedMember(
+  members: readonly SketchMember[],
+  row: HeaveRow | RollRow | undefined,
+): string | undefined {
   if (!row) return undefined;
   const kinds = new Map(members.map((m) => [m.id, m.kind] as const));
   let best: string | undefined;
@@ -78,7 +81,13 @@ function eventRow(result: SweepResult, e: SweepEvent): HeaveRow | RollRow | unde
     : nearestRow(result.heave, (r) => r.travel, e.at);
 }
 
-function eventFlag(result: SweepResult, members: readonly SketchMember[], e: SweepEvent, i: number, u: LengthUnit): Flag {
+function eventFlag(
+  result: SweepResult,
+  members: readonly SketchMember[],
+  e: SweepEvent,
+  i: number,
+  u: LengthUnit,
+): Flag {
   const where = showPosition(e.sweep, e.at, u);
   const base = { key: `event-${i}-${e.kind}`, kind: e.kind, sweep: e.sweep, at: e.at, where } as const;
   switch (e.kind) {
@@ -160,14 +169,29 @@ function targetFlag(check: TargetCheck, u: LengthUnit): Flag | null {
   const wanted = bandText(check, u);
   const key = `target-${check.metric}`;
   if (check.status === 'unknown') {
-    return { key, kind: 'target', severity: 'info', title: `Target not checked: ${spec.label}`, detail: `${spec.label} is not defined anywhere in the sweep, so ${wanted} cannot be checked.` };
+    return {
+      key,
+      kind: 'target',
+      severity: 'info',
+      title: `Target not checked: ${spec.label}`,
+      detail: `${spec.label} is not defined anywhere in the sweep, so ${wanted} cannot be checked.`,
+    };
   }
   const value = showQuantity(check.value, spec.quantity, u, spec.symmetric).text;
   if (check.sweep === 'limits') {
-    return { key, kind: 'target', severity: 'warning', title: `Target missed: ${spec.label}`, detail: `Reaches ${value}; wanted ${wanted}.` };
+    return {
+      key,
+      kind: 'target',
+      severity: 'warning',
+      title: `Target missed: ${spec.label}`,
+      detail: `Reaches ${value}; wanted ${wanted}.`,
+    };
   }
   const where = showPosition(check.sweep as 'heave' | 'roll', check.at!, u);
-  const worst = check.worst !== undefined && check.worst !== check.value ? ` (worst ${showQuantity(check.worst, spec.quantity, u, spec.symmetric).text})` : '';
+  const worst =
+    check.worst !== undefined && check.worst !== check.value
+      ? ` (worst ${showQuantity(check.worst, spec.quantity, u, spec.symmetric).text})`
+      : '';
   return {
     key,
     kind: 'target',
@@ -183,12 +207,19 @@ function targetFlag(check: TargetCheck, u: LengthUnit): Flag | null {
 const SEVERITY_ORDER = { negative: 0, warning: 1, info: 2 } as const;
 
 /** Every flag of a result, the design-stopping ones first, then by distance from ride. */
-export function buildFlags(result: SweepResult | null, members: readonly SketchMember[], checks: TargetCheck[], u: LengthUnit): Flag[] {
+export function buildFlags(
+  result: SweepResult | null,
+  members: readonly SketchMember[],
+  checks: TargetCheck[],
+  u: LengthUnit,
+): Flag[] {
   if (!result) return [];
   const flags: Flag[] = result.limits.events.map((e, i) => eventFlag(result, members, e, i, u));
   for (const c of checks) {
     const f = targetFlag(c, u);
     if (f) flags.push(f);
   }
-  return flags.sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity] || Math.abs(a.at ?? 0) - Math.abs(b.at ?? 0));
+  return flags.sort(
+    (a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity] || Math.abs(a.at ?? 0) - Math.abs(b.at ?? 0),
+  );
 }

@@ -30,14 +30,24 @@ function missing(reason: string): Shown {
 }
 
 /** A length in mm shown in the user's unit. */
-export function showLength(v: Mm | null | undefined, u: LengthUnit, reason = 'not defined here', signed = false): Shown {
+export function showLength(
+  v: Mm | null | undefined,
+  u: LengthUnit,
+  reason = 'not defined here',
+  signed = false,
+): Shown {
   if (v === null || v === undefined || !Number.isFinite(v)) return missing(reason);
   if (!signed) return { text: formatLength(v, u) };
   return { text: `${fixed(mmToUnit(v, u), u === 'in' ? 2 : 1, true)} ${u}` };
 }
 
 /** An angle in degrees. */
-export function showAngle(v: number | null | undefined, reason = 'not defined here', signed = false, digits = 2): Shown {
+export function showAngle(
+  v: number | null | undefined,
+  reason = 'not defined here',
+  signed = false,
+  digits = 2,
+): Shown {
   if (v === null || v === undefined || !Number.isFinite(v)) return missing(reason);
   return { text: `${fixed(v, digits, signed)}°` };
 }

@@ -16,10 +16,17 @@ export interface SweepNumberRule {
 export type SweepNumberParse = { ok: true; value: number | undefined } | { ok: false; error: string };
 
 export function parseSweepNumber(text: string, rule: SweepNumberRule): SweepNumberParse {
-  const t = text.trim().replace(/\s+/g, '').replace(/\u2212/g, '-');
-  if (t === '') return rule.allowEmpty ? { ok: true, value: undefined } : { ok: false, error: `${rule.name} needs a number (${rule.unit}).` };
+  const t = text
+    .trim()
+    .replace(/\s+/g, '')
+    .replace(/\u2212/g, '-');
+  if (t === '')
+    return rule.allowEmpty
+      ? { ok: true, value: undefined }
+      : { ok: false, error: `${rule.name} needs a number (${rule.unit}).` };
   const v = Number(t);
-  if (!Number.isFinite(v)) return { ok: false, error: `${rule.name}: "${text.trim()}" is not a number (${rule.unit}).` };
+  if (!Number.isFinite(v))
+    return { ok: false, error: `${rule.name}: "${text.trim()}" is not a number (${rule.unit}).` };
   const low = rule.exclusiveMin ? v <= rule.min : v < rule.min;
   if (low || v > rule.max) {
     const lo = rule.exclusiveMin ? `above ${rule.min}` : `at least ${rule.min}`;

@@ -88,20 +88,122 @@ interface CurveDef {
 }
 
 const CURVES: CurveDef[] = [
-  { key: 'pinion', title: 'Pinion angle change', sweep: 'heave', metric: 'pinionAngleChange', quantity: 'angle', read: (r) => r.pinionAngleChange, emptyReason: 'No axle: this layout has no pinion angle to change.', signed: true },
-  { key: 'lateral', title: 'Lateral shift', sweep: 'heave', metric: 'lateralShift', quantity: 'length', read: (r) => r.lateralShift, emptyReason: 'No axle: this layout has no lateral shift.', signed: true },
-  { key: 'antisquat', title: 'Anti-squat', sweep: 'heave', metric: 'antiSquat', quantity: 'percent', read: (r) => r.antiSquat, emptyReason: 'Anti-squat is not defined anywhere in the travel (no upper and lower link pair).', signed: false },
-  { key: 'foreaft', title: 'Fore-aft shift', sweep: 'heave', metric: 'foreAftShift', quantity: 'length', read: (r) => r.foreAftShift, emptyReason: 'Not defined for this layout.', signed: true },
-  { key: 'camber', title: 'Camber change', sweep: 'heave', quantity: 'angle', read: (r) => (r as AnyRow & Independent).camberChange ?? null, emptyReason: '', signed: true, optional: true },
-  { key: 'toe', title: 'Toe change (bump steer)', sweep: 'heave', quantity: 'angle', read: (r) => (r as AnyRow & Independent).toeChange ?? null, emptyReason: '', signed: true, optional: true },
-  { key: 'antidive', title: 'Anti-dive', sweep: 'heave', quantity: 'percent', read: (r) => (r as AnyRow & Independent).antiDive ?? null, emptyReason: '', signed: false, optional: true },
-  { key: 'track', title: 'Track change', sweep: 'heave', quantity: 'length', read: (r) => (r as AnyRow & Independent).trackChange ?? null, emptyReason: '', signed: true, optional: true },
-  { key: 'bind', title: 'Bind in roll', sweep: 'roll', metric: 'bind', quantity: 'length', read: (r) => r.bind, emptyReason: 'No roll sweep (articulation set to 0).', signed: false },
-  { key: 'rollsteer', title: 'Roll steer', sweep: 'roll', metric: 'rollSteer', quantity: 'percent', read: (r) => r.rollSteer, emptyReason: 'No roll sweep (articulation set to 0).', signed: true },
+  {
+    key: 'pinion',
+    title: 'Pinion angle change',
+    sweep: 'heave',
+    metric: 'pinionAngleChange',
+    quantity: 'angle',
+    read: (r) => r.pinionAngleChange,
+    emptyReason: 'No axle: this layout has no pinion angle to change.',
+    signed: true,
+  },
+  {
+    key: 'lateral',
+    title: 'Lateral shift',
+    sweep: 'heave',
+    metric: 'lateralShift',
+    quantity: 'length',
+    read: (r) => r.lateralShift,
+    emptyReason: 'No axle: this layout has no lateral shift.',
+    signed: true,
+  },
+  {
+    key: 'antisquat',
+    title: 'Anti-squat',
+    sweep: 'heave',
+    metric: 'antiSquat',
+    quantity: 'percent',
+    read: (r) => r.antiSquat,
+    emptyReason: 'Anti-squat is not defined anywhere in the travel (no upper and lower link pair).',
+    signed: false,
+  },
+  {
+    key: 'foreaft',
+    title: 'Fore-aft shift',
+    sweep: 'heave',
+    metric: 'foreAftShift',
+    quantity: 'length',
+    read: (r) => r.foreAftShift,
+    emptyReason: 'Not defined for this layout.',
+    signed: true,
+  },
+  {
+    key: 'camber',
+    title: 'Camber change',
+    sweep: 'heave',
+    quantity: 'angle',
+    read: (r) => (r as AnyRow & Independent).camberChange ?? null,
+    emptyReason: '',
+    signed: true,
+    optional: true,
+  },
+  {
+    key: 'toe',
+    title: 'Toe change (bump steer)',
+    sweep: 'heave',
+    quantity: 'angle',
+    read: (r) => (r as AnyRow & Independent).toeChange ?? null,
+    emptyReason: '',
+    signed: true,
+    optional: true,
+  },
+  {
+    key: 'antidive',
+    title: 'Anti-dive',
+    sweep: 'heave',
+    quantity: 'percent',
+    read: (r) => (r as AnyRow & Independent).antiDive ?? null,
+    emptyReason: '',
+    signed: false,
+    optional: true,
+  },
+  {
+    key: 'track',
+    title: 'Track change',
+    sweep: 'heave',
+    quantity: 'length',
+    read: (r) => (r as AnyRow & Independent).trackChange ?? null,
+    emptyReason: '',
+    signed: true,
+    optional: true,
+  },
+  {
+    key: 'bind',
+    title: 'Bind in roll',
+    sweep: 'roll',
+    metric: 'bind',
+    quantity: 'length',
+    read: (r) => r.bind,
+    emptyReason: 'No roll sweep (articulation set to 0).',
+    signed: false,
+  },
+  {
+    key: 'rollsteer',
+    title: 'Roll steer',
+    sweep: 'roll',
+    metric: 'rollSteer',
+    quantity: 'percent',
+    read: (r) => r.rollSteer,
+    emptyReason: 'No roll sweep (articulation set to 0).',
+    signed: true,
+  },
 ];
 
 /** The plot order on the board: travel quantities, the shocks, then the roll quantities. */
-const ORDER = ['pinion', 'lateral', 'antisquat', 'foreaft', 'camber', 'toe', 'track', 'antidive', 'shocks', 'bind', 'rollsteer'];
+const ORDER = [
+  'pinion',
+  'lateral',
+  'antisquat',
+  'foreaft',
+  'camber',
+  'toe',
+  'track',
+  'antidive',
+  'shocks',
+  'bind',
+  'rollsteer',
+];
 /** Independent layouts: the wheel's own attitude first. */
 const ORDER_INDEPENDENT = ['camber', 'toe', 'track', 'antisquat', 'antidive', 'foreaft', 'shocks', 'bind', 'rollsteer'];
 /** Quantities of a solid axle: not shown at all for a layout without one. */
@@ -115,12 +217,18 @@ function xOf(sweep: 'heave' | 'roll', r: AnyRow, u: LengthUnit): number {
   return sweep === 'heave' ? mmToUnit(r.travel, u) : r.roll;
 }
 
-function bandsFor(metric: TargetMetric | undefined, targets: Targets, checks: TargetCheck[], u: LengthUnit): PlotBand[] {
+function bandsFor(
+  metric: TargetMetric | undefined,
+  targets: Targets,
+  checks: TargetCheck[],
+  u: LengthUnit,
+): PlotBand[] {
   if (!metric) return [];
   const band = targets[metric];
   if (!bandIsSet(band)) return [];
   const q = metricSpecs[metric].quantity;
-  const window = (v: number | undefined) => (v === undefined ? undefined : metricSpecs[metric].sweep === 'heave' ? mmToUnit(v, u) : v);
+  const window = (v: number | undefined) =>
+    v === undefined ? undefined : metricSpecs[metric].sweep === 'heave' ? mmToUnit(v, u) : v;
   const check = checks.find((c) => c.metric === metric);
   return [
     {
@@ -133,7 +241,13 @@ function bandsFor(metric: TargetMetric | undefined, targets: Targets, checks: Ta
   ];
 }
 
-function curvePlot(def: CurveDef, result: SweepResult, targets: Targets, checks: TargetCheck[], u: LengthUnit): PlotSpec {
+function curvePlot(
+  def: CurveDef,
+  result: SweepResult,
+  targets: Targets,
+  checks: TargetCheck[],
+  u: LengthUnit,
+): PlotSpec {
   const rows = (def.sweep === 'heave' ? result.heave : result.roll) as AnyRow[];
   const points = rows.map((r) => {
     const v = def.read(r);
@@ -166,9 +280,17 @@ function shockPlot(result: SweepResult, members: readonly SketchMember[], u: Len
       return { x: xs[k], y: len === undefined || !Number.isFinite(len) ? null : mmToUnit(len, u) };
     });
     series.push({ label: m.id, points, color });
-    for (const [which, v] of [['shortest', m.minLength], ['longest', m.maxLength]] as const) {
+    for (const [which, v] of [
+      ['shortest', m.minLength],
+      ['longest', m.maxLength],
+    ] as const) {
       if (v === undefined || xEnds.length < 2) continue;
-      series.push({ label: `${m.id} ${which}`, points: xEnds.map((x) => ({ x, y: mmToUnit(v, u) })), color, dash: [6, 4] });
+      series.push({
+        label: `${m.id} ${which}`,
+        points: xEnds.map((x) => ({ x, y: mmToUnit(v, u) })),
+        color,
+        dash: [6, 4],
+      });
     }
   });
   return {
@@ -179,13 +301,24 @@ function shockPlot(result: SweepResult, members: readonly SketchMember[], u: Len
     yTitle: u,
     series,
     bands: [],
-    emptyReason: shocks.length === 0 ? 'No shocks in this sketch.' : result.heave.length === 0 ? 'No rows in this sweep.' : undefined,
+    emptyReason:
+      shocks.length === 0
+        ? 'No shocks in this sketch.'
+        : result.heave.length === 0
+          ? 'No rows in this sweep.'
+          : undefined,
     signed: false,
   };
 }
 
 /** Every travel plot of a result, in board order. */
-export function buildPlots(result: SweepResult | null, ctx: SweepContext, targets: Targets, checks: TargetCheck[], u: LengthUnit): PlotSpec[] {
+export function buildPlots(
+  result: SweepResult | null,
+  ctx: SweepContext,
+  targets: Targets,
+  checks: TargetCheck[],
+  u: LengthUnit,
+): PlotSpec[] {
   if (!result) return [];
   const plots = new Map<string, PlotSpec>();
   for (const def of CURVES) {

@@ -6,7 +6,17 @@ import type { HeaveRow, RollRow } from '../../shared/kinematics';
 import type { LinkLoadSummary, WindUpReading } from '../../shared/kinematics/types';
 import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
-import { fixed, MISSING, showAngle, showLength, showPercent, showPosition, showRate, showRatio, type Shown } from './format';
+import {
+  fixed,
+  MISSING,
+  showAngle,
+  showLength,
+  showPercent,
+  showPosition,
+  showRate,
+  showRatio,
+  type Shown,
+} from './format';
 
 export interface ReadoutLine extends Shown {
   key: string;
@@ -43,14 +53,18 @@ export const EMPTY_CONTEXT: SweepContext = { members: [], hasAxle: false };
 /** Reasons, in the user's words, for numbers the sweep leaves out. */
 function reasons(ctx: SweepContext) {
   const members = ctx.members;
-  const grouped = members.some((m) => m.kind === 'link' && m.group === 'upper') && members.some((m) => m.kind === 'link' && m.group === 'lower');
+  const grouped =
+    members.some((m) => m.kind === 'link' && m.group === 'upper') &&
+    members.some((m) => m.kind === 'link' && m.group === 'lower');
   const hasRod = members.some((m) => m.kind === 'lateral-rod');
   const hasAxle = ctx.hasAxle;
   return {
     ic: grouped
       ? 'upper and lower links parallel in side view: no instant centre'
       : 'no upper and lower link pair: no side-view instant centre',
-    rc: hasRod ? "the lateral rod's line does not cross the centreline" : 'no lateral rod: roll centre not defined by this layout',
+    rc: hasRod
+      ? "the lateral rod's line does not cross the centreline"
+      : 'no lateral rod: roll centre not defined by this layout',
     axle: hasAxle ? 'not defined at this position' : 'independent layout: no axle to measure',
   };
 }
@@ -65,14 +79,26 @@ interface IndependentFields {
   kingpin?: { inclination: number; caster: number; scrubRadius: number; trail: number } | null;
 }
 
-function memberLines(ctx: SweepContext, members: Record<string, { length: number; lengthChange: number; motionRatio?: number; wheelRate?: number }>, sweep: 'heave' | 'roll', u: LengthUnit, windUp?: WindUpReading): ReadoutLine[] {
+function memberLines(
+  ctx: SweepContext,
+  members: Record<string, { length: number; lengthChange: number; motionRatio?: number; wheelRate?: number }>,
+  sweep: 'heave' | 'roll',
+  u: LengthUnit,
+  windUp?: WindUpReading,
+): ReadoutLine[] {
   const lines: ReadoutLine[] = [];
   const shown = ctx.members.filter((m) => m.kind === 'shock' || m.kind === 'spring');
   for (const m of shown) {
     const r = members[m.id];
     if (!r) continue;
     const name = m.kind === 'shock' ? 'Shock' : 'Spring';
-    const line: ReadoutLine = { key: `member-${m.id}`, label: `${name} ${m.id} length`, group: 'members', member: m.id, ...showLength(r.length, u) };
+    const line: ReadoutLine = {
+      key: `member-${m.id}`,
+      label: `${name} ${m.id} length`,
+      group: 'members',
+      member: m.id,
+      ...showLength(r.length, u),
+    };
     if (m.kind === 'shock') {
       const lo = m.minLength;
       const hi = m.maxLength;
@@ -83,16 +109,41 @@ function memberLines(ctx: SweepContext, members: Record<string, { length: number
       if ((lo !== undefined && r.length <= lo) || (hi !== undefined && r.length >= hi)) line.tone = 'negative';
     }
     lines.push(line);
-    const mrReason = sweep === 'roll' ? 'motion ratio is taken in heave (wheel travel), not in roll' : 'not defined here';
-    lines.push({ key: `mr-${m.id}`, label: `${name} ${m.id} motion ratio`, group: 'members', member: m.id, ...showRatio(r.motionRatio, mrReason) });
+    const mrReason =
+      sweep === 'roll' ? 'motion ratio is taken in heave (wheel travel), not in roll' : 'not defined here';
+    lines.push({
+      key: `mr-${m.id}`,
+      label: `${name} ${m.id} motion ratio`,
+      group: 'members',
+      member: m.id,
+      ...showRatio(r.motionRatio, mrReason),
+    });
     if (m.kind === 'spring' && m.rate !== undefined) {
-      lines.push({ key: `wr-${m.id}`, label: `Wheel rate (${m.id})`, group: 'members', member: m.id, ...showRate(r.wheelRate, mrReason) });
+      lines.push({
+        key: `wr-${m.id}`,
+        label: `Wheel rate (${m.id})`,
+        group: 'members',
+        member: m.id,
+        ...showRate(r.wheelRate, mrReason),
+      });
     }
     if (windUp) {
       // A leaf-sprung axle: the stroke each shock uses in travel and what the wind-up alone takes of it.
-      lines.push({ key: `dl-${m.id}`, label: `${name} ${m.id} length change (${sweep})`, group: 'members', member: m.id, ...showLength(r.lengthChange, u, undefined, true) });
+      lines.push({
+        key: `dl-${m.id}`,
+        label: `${name} ${m.id} length change (${sweep})`,
+        group: 'members',
+        member: m.id,
+        ...showLength(r.lengthChange, u, undefined, true),
+      });
       const w = windUp.members[m.id];
-      lines.push({ key: `wu-${m.id}`, label: `${name} ${m.id} length change (wind-up)`, group: 'members', member: m.id, ...showLength(w?.lengthChange, u, 'not solved under the wind-up', true) });
+      lines.push({
+        key: `wu-${m.id}`,
+        label: `${name} ${m.id} length change (wind-up)`,
+        group: 'members',
+        member: m.id,
+        ...showLength(w?.lengthChange, u, 'not solved under the wind-up', true),
+      });
     }
   }
   return lines;
@@ -121,18 +172,36 @@ export function showTorque(v: number | null | undefined, reason = 'not defined h
 }
 
 /** The leaf-spring lines: shackle angle at the cursor, the axle's wind-up at ride under the axle torque. */
-function leafLines(shackleAngle: number | null | undefined, hasShackle: boolean, windUp: WindUpReading | undefined, u: LengthUnit): ReadoutLine[] {
+function leafLines(
+  shackleAngle: number | null | undefined,
+  hasShackle: boolean,
+  windUp: WindUpReading | undefined,
+  u: LengthUnit,
+): ReadoutLine[] {
   const lines: ReadoutLine[] = [];
-  if (hasShackle) lines.push({ key: 'shackle', label: 'Shackle angle', group: 'leaf', ...showAngle(shackleAngle, 'shackle angle is taken in heave, not in roll', true, 1) });
+  if (hasShackle)
+    lines.push({
+      key: 'shackle',
+      label: 'Shackle angle',
+      group: 'leaf',
+      ...showAngle(shackleAngle, 'shackle angle is taken in heave, not in roll', true, 1),
+    });
   if (!windUp) return lines;
   const torque = showTorque(windUp.torque).text;
   lines.push(
-    { key: 'windup', label: `Wind-up at ride (${torque})`, group: 'leaf', ...showAngle(windUp.angle, 'the springs do not resist wind-up', true) },
+    {
+      key: 'windup',
+      label: `Wind-up at ride (${torque})`,
+      group: 'leaf',
+      ...showAngle(windUp.angle, 'the springs do not resist wind-up', true),
+    },
     {
       key: 'windup-rate',
       label: 'Wind-up rate',
       group: 'leaf',
-      ...(Number.isFinite(windUp.rate) ? { text: `${fixed(windUp.rate, 0)} N·m/°` } : { text: MISSING, reason: 'the springs have no rate' }),
+      ...(Number.isFinite(windUp.rate)
+        ? { text: `${fixed(windUp.rate, 0)} N·m/°` }
+        : { text: MISSING, reason: 'the springs have no rate' }),
     },
     { key: 'windup-bind', label: 'Bind under wind-up', group: 'leaf', ...showLength(windUp.bind, u) },
   );
@@ -144,9 +213,16 @@ function leafLines(shackleAngle: number | null | undefined, hasShackle: boolean,
  * are found per heave row), at ride in roll. Marked when the load reverses within the travel,
  * passes the user's limit, or when the split among the links is the least-squares one.
  */
-function loadLines(ctx: SweepContext, loads: LinkLoadSummary, rowLoads: Record<string, number> | undefined, sweep: 'heave' | 'roll'): ReadoutLine[] {
+function loadLines(
+  ctx: SweepContext,
+  loads: LinkLoadSummary,
+  rowLoads: Record<string, number> | undefined,
+  sweep: 'heave' | 'roll',
+): ReadoutLine[] {
   const lines: ReadoutLine[] = [];
-  const split = loads.indeterminate ? 'more links than the axle motions they locate: the split shown is the least-squares one (equal bushing stiffness); real bushings share it differently' : undefined;
+  const split = loads.indeterminate
+    ? 'more links than the axle motions they locate: the split shown is the least-squares one (equal bushing stiffness); real bushings share it differently'
+    : undefined;
   if (split) lines.push({ key: 'load-split', label: 'Load split', group: 'loads', text: 'indeterminate', hint: split });
   for (const m of ctx.members) {
     const reading = loads.members[m.id];
@@ -157,13 +233,26 @@ function loadLines(ctx: SweepContext, loads: LinkLoadSummary, rowLoads: Record<s
     const marks: string[] = [];
     if (reading.reverses) marks.push('reverses');
     if (reading.overLimit) marks.push('over limit');
-    const line: ReadoutLine = { key: `load-${m.id}`, label: `${name} ${m.id} load${sweep === 'roll' ? ' at ride' : ''}`, group: 'loads', member: m.id, ...shown };
+    const line: ReadoutLine = {
+      key: `load-${m.id}`,
+      label: `${name} ${m.id} load${sweep === 'roll' ? ' at ride' : ''}`,
+      group: 'loads',
+      member: m.id,
+      ...shown,
+    };
     if (!shown.reason) {
       if (split) line.text = `≈ ${line.text}`;
       if (marks.length) line.text += ` (${marks.join(', ')})`;
-      line.hint = [split, reading.reverses ? 'changes sign within the travel' : '', reading.overLimit && loads.limit !== null ? `passes the limit of ${fixed(loads.limit, 0)} N within the travel` : '']
-        .filter(Boolean)
-        .join('; ') || undefined;
+      line.hint =
+        [
+          split,
+          reading.reverses ? 'changes sign within the travel' : '',
+          reading.overLimit && loads.limit !== null
+            ? `passes the limit of ${fixed(loads.limit, 0)} N within the travel`
+            : '',
+        ]
+          .filter(Boolean)
+          .join('; ') || undefined;
     }
     if (reading.reverses || reading.overLimit) line.tone = 'negative';
     lines.push(line);
@@ -172,7 +261,12 @@ function loadLines(ctx: SweepContext, loads: LinkLoadSummary, rowLoads: Record<s
 }
 
 /** The readout lines for the row at the cursor. */
-export function readoutLines(cursor: CursorRow | null, ctx: SweepContext, u: LengthUnit, extras: ReadoutExtras = {}): ReadoutLine[] {
+export function readoutLines(
+  cursor: CursorRow | null,
+  ctx: SweepContext,
+  u: LengthUnit,
+  extras: ReadoutExtras = {},
+): ReadoutLine[] {
   if (!cursor) return [];
   const why = reasons(ctx);
   const hasShackle = ctx.members.some((m) => m.kind === 'leaf-half');
@@ -184,22 +278,59 @@ export function readoutLines(cursor: CursorRow | null, ctx: SweepContext, u: Len
       // Pinion angle and lateral shift belong to a solid axle: an independent layout does not list them.
       ...(ctx.hasAxle
         ? [
-            { key: 'pinion', label: 'Pinion angle change', group: 'axle' as const, ...showAngle(r.pinionAngleChange, why.axle, true) },
-            { key: 'lateral', label: 'Lateral shift', group: 'axle' as const, ...showLength(r.lateralShift, u, why.axle, true) },
+            {
+              key: 'pinion',
+              label: 'Pinion angle change',
+              group: 'axle' as const,
+              ...showAngle(r.pinionAngleChange, why.axle, true),
+            },
+            {
+              key: 'lateral',
+              label: 'Lateral shift',
+              group: 'axle' as const,
+              ...showLength(r.lateralShift, u, why.axle, true),
+            },
           ]
         : []),
       { key: 'foreaft', label: 'Fore-aft shift', group: 'axle', ...showLength(r.foreAftShift, u, undefined, true) },
-      ...(ctx.hasAxle || r.antiSquat !== null ? [{ key: 'antisquat', label: 'Anti-squat', group: 'geometry' as const, ...showPercent(r.antiSquat, why.ic) }] : []),
+      ...(ctx.hasAxle || r.antiSquat !== null
+        ? [{ key: 'antisquat', label: 'Anti-squat', group: 'geometry' as const, ...showPercent(r.antiSquat, why.ic) }]
+        : []),
       { key: 'ic-x', label: 'Instant centre x', group: 'geometry', ...showLength(r.instantCenter?.x, u, why.ic) },
       { key: 'ic-z', label: 'Instant centre height', group: 'geometry', ...showLength(r.instantCenter?.z, u, why.ic) },
       { key: 'rc', label: 'Roll centre height', group: 'geometry', ...showLength(r.rollCenterHeight, u, why.rc) },
       { key: 'bind', label: 'Bind', group: 'geometry', ...showLength(r.bind, u) },
     ];
-    if (ind.camberChange !== undefined) lines.push({ key: 'camber', label: 'Camber change', group: 'axle', ...showAngle(ind.camberChange, undefined, true) });
-    if (ind.toeChange !== undefined) lines.push({ key: 'toe', label: 'Toe change (bump steer)', group: 'axle', ...showAngle(ind.toeChange, undefined, true, 3) });
-    if (ind.trackChange !== undefined) lines.push({ key: 'track', label: 'Track change', group: 'axle', ...showLength(ind.trackChange, u, undefined, true) });
-    if (ind.casterChange !== undefined) lines.push({ key: 'caster', label: 'Caster change', group: 'axle', ...showAngle(ind.casterChange, undefined, true) });
-    if (ind.antiDive !== undefined) lines.push({ key: 'antidive', label: 'Anti-dive', group: 'geometry', ...showPercent(ind.antiDive, why.ic) });
+    if (ind.camberChange !== undefined)
+      lines.push({
+        key: 'camber',
+        label: 'Camber change',
+        group: 'axle',
+        ...showAngle(ind.camberChange, undefined, true),
+      });
+    if (ind.toeChange !== undefined)
+      lines.push({
+        key: 'toe',
+        label: 'Toe change (bump steer)',
+        group: 'axle',
+        ...showAngle(ind.toeChange, undefined, true, 3),
+      });
+    if (ind.trackChange !== undefined)
+      lines.push({
+        key: 'track',
+        label: 'Track change',
+        group: 'axle',
+        ...showLength(ind.trackChange, u, undefined, true),
+      });
+    if (ind.casterChange !== undefined)
+      lines.push({
+        key: 'caster',
+        label: 'Caster change',
+        group: 'axle',
+        ...showAngle(ind.casterChange, undefined, true),
+      });
+    if (ind.antiDive !== undefined)
+      lines.push({ key: 'antidive', label: 'Anti-dive', group: 'geometry', ...showPercent(ind.antiDive, why.ic) });
     if (ind.kingpin !== undefined) {
       const k = ind.kingpin;
       const level = 'ball joints level: no kingpin axis';
@@ -223,7 +354,12 @@ export function readoutLines(cursor: CursorRow | null, ctx: SweepContext, u: Len
     { key: 'position', label: 'Position', group: 'position', text: showPosition('roll', r.roll, u) },
     { key: 'left', label: 'Left wheel travel', group: 'axle', ...showLength(r.leftTravel, u, undefined, true) },
     { key: 'right', label: 'Right wheel travel', group: 'axle', ...showLength(r.rightTravel, u, undefined, true) },
-    { key: 'rollsteer', label: 'Roll steer', group: 'geometry', ...showPercent(r.rollSteer, 'no roll: roll steer is a ratio to the roll angle', true) },
+    {
+      key: 'rollsteer',
+      label: 'Roll steer',
+      group: 'geometry',
+      ...showPercent(r.rollSteer, 'no roll: roll steer is a ratio to the roll angle', true),
+    },
     { key: 'bind', label: 'Bind', group: 'geometry', ...showLength(r.bind, u) },
     ...leafLines(undefined, hasShackle, extras.windUp, u),
     ...(extras.loads ? loadLines(ctx, extras.loads, undefined, 'roll') : []),

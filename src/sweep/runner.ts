@@ -175,7 +175,8 @@ export function createSweepRunner(onAnswer: (answer: SweepAnswer) => void, optio
         waiting = null;
         apply(prepared.answer);
         notifyIdle();
-      } else if (worker && inFlight) waiting = prepared.request; // replaces (drops) any older waiting request
+      } else if (worker && inFlight)
+        waiting = prepared.request; // replaces (drops) any older waiting request
       else send(prepared.request);
     },
     whenIdle() {

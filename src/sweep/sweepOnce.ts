@@ -12,6 +12,9 @@ export function sweepOnce(doc: unknown): { result: SweepResult; problem: null } 
   try {
     return { result: runSweep(doc), problem: null };
   } catch (err) {
-    return { result: null, problem: `The sketch cannot be swept: ${isSketchValidationError(err) ? err.problems[0] : errorMessage(err)}` };
+    return {
+      result: null,
+      problem: `The sketch cannot be swept: ${isSketchValidationError(err) ? err.problems[0] : errorMessage(err)}`,
+    };
   }
 }

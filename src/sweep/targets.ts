@@ -36,10 +36,34 @@ export interface MetricSpec {
 
 export const metricSpecs: Record<TargetMetric, MetricSpec> = {
   antiSquat: { label: 'Anti-squat', quantity: 'percent', sweep: 'heave', symmetric: false, read: (r) => r.antiSquat },
-  pinionAngleChange: { label: 'Pinion angle change', quantity: 'angle', sweep: 'heave', symmetric: true, read: (r) => r.pinionAngleChange },
-  lateralShift: { label: 'Lateral shift', quantity: 'length', sweep: 'heave', symmetric: true, read: (r) => r.lateralShift },
-  foreAftShift: { label: 'Fore-aft shift', quantity: 'length', sweep: 'heave', symmetric: true, read: (r) => r.foreAftShift },
-  rollCenterHeight: { label: 'Roll centre height', quantity: 'length', sweep: 'heave', symmetric: false, read: (r) => r.rollCenterHeight },
+  pinionAngleChange: {
+    label: 'Pinion angle change',
+    quantity: 'angle',
+    sweep: 'heave',
+    symmetric: true,
+    read: (r) => r.pinionAngleChange,
+  },
+  lateralShift: {
+    label: 'Lateral shift',
+    quantity: 'length',
+    sweep: 'heave',
+    symmetric: true,
+    read: (r) => r.lateralShift,
+  },
+  foreAftShift: {
+    label: 'Fore-aft shift',
+    quantity: 'length',
+    sweep: 'heave',
+    symmetric: true,
+    read: (r) => r.foreAftShift,
+  },
+  rollCenterHeight: {
+    label: 'Roll centre height',
+    quantity: 'length',
+    sweep: 'heave',
+    symmetric: false,
+    read: (r) => r.rollCenterHeight,
+  },
   bind: { label: 'Bind in roll', quantity: 'length', sweep: 'roll', symmetric: false, read: (r) => r.bind },
   rollSteer: { label: 'Roll steer', quantity: 'percent', sweep: 'roll', symmetric: true, read: (r) => r.rollSteer },
   articulation: { label: 'Articulation', quantity: 'angle', sweep: 'limits', symmetric: false },
@@ -87,7 +111,10 @@ export interface TargetCheck {
 }
 
 function inBand(v: number, b: TargetBand): boolean {
-  return (b.min === undefined || v >= b.min - BAND_EDGE_TOLERANCE) && (b.max === undefined || v <= b.max + BAND_EDGE_TOLERANCE);
+  return (
+    (b.min === undefined || v >= b.min - BAND_EDGE_TOLERANCE) &&
+    (b.max === undefined || v <= b.max + BAND_EDGE_TOLERANCE)
+  );
 }
 
 /** How far outside the band a value lies (0 inside). */
@@ -114,7 +141,9 @@ export function checkTarget(result: SweepResult, metric: TargetMetric, band: Tar
   }
   const rows = (spec.sweep === 'heave' ? result.heave : result.roll) as Array<HeaveRow & RollRow>;
   const pos = (r: HeaveRow & RollRow) => (spec.sweep === 'heave' ? r.travel : r.roll);
-  const inWindow = rows.filter((r) => (band.from === undefined || pos(r) >= band.from) && (band.to === undefined || pos(r) <= band.to));
+  const inWindow = rows.filter(
+    (r) => (band.from === undefined || pos(r) >= band.from) && (band.to === undefined || pos(r) <= band.to),
+  );
   let first: { at: number; value: number } | undefined;
   let worst: number | undefined;
   let worstExcess = -1;

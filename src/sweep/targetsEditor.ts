@@ -35,7 +35,13 @@ export function fieldText(targets: Targets, metric: TargetMetric, field: BandFie
 export type EditOutcome = { ok: true; targets: Targets } | { ok: false; error: string };
 
 /** The targets with one field set from typed text, or the reason it cannot be. */
-export function editTarget(targets: Targets, metric: TargetMetric, field: BandField, text: string, u: LengthUnit): EditOutcome {
+export function editTarget(
+  targets: Targets,
+  metric: TargetMetric,
+  field: BandField,
+  text: string,
+  u: LengthUnit,
+): EditOutcome {
   const t = text.trim().replace(',', '.').replace('\u2212', '-');
   const band: TargetBand = { ...(targets[metric] ?? {}) };
   if (t === '') delete band[field];
@@ -44,8 +50,10 @@ export function editTarget(targets: Targets, metric: TargetMetric, field: BandFi
     if (!Number.isFinite(n)) return { ok: false, error: `“${text.trim()}” is not a number.` };
     band[field] = fromDisplay(n, fieldQuantity(metric, field), u);
   }
-  if (band.min !== undefined && band.max !== undefined && band.min > band.max) return { ok: false, error: 'The lower end is above the upper end.' };
-  if (band.from !== undefined && band.to !== undefined && band.from > band.to) return { ok: false, error: 'The window starts after it ends.' };
+  if (band.min !== undefined && band.max !== undefined && band.min > band.max)
+    return { ok: false, error: 'The lower end is above the upper end.' };
+  if (band.from !== undefined && band.to !== undefined && band.from > band.to)
+    return { ok: false, error: 'The window starts after it ends.' };
   const next: Targets = { ...targets };
   if (Object.keys(band).length === 0) delete next[metric];
   else next[metric] = band;

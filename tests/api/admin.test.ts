@@ -9,17 +9,25 @@ beforeAll(async () => {
   server = await startTestServer();
   admin = await new Caller(server.app).signIn(demo.admin.email, demo.admin.password);
 });
-afterAll(async () => { await server.close(); });
+afterAll(async () => {
+  await server.close();
+});
 
 describe('admin routes', () => {
   it('lists users without password hashes', async () => {
     const res = await admin.get('/api/admin/users');
     expect(res.status).toBe(200);
     const emails = res.body.items.map((u: { email: string }) => u.email);
-    expect(emails).toEqual(expect.arrayContaining(['admin@demo.test', 'instructor@demo.test', 'maker@demo.test', 'student@demo.test']));
+    expect(emails).toEqual(
+      expect.arrayContaining(['admin@demo.test', 'instructor@demo.test', 'maker@demo.test', 'student@demo.test']),
+    );
     expect(res.body.items[0]).toEqual({
-      id: expect.any(Number), email: expect.any(String), name: expect.any(String), role: expect.any(String),
-      disabled: false, createdAt: expect.any(String),
+      id: expect.any(Number),
+      email: expect.any(String),
+      name: expect.any(String),
+      role: expect.any(String),
+      disabled: false,
+      createdAt: expect.any(String),
     });
   });
 

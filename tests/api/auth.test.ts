@@ -4,8 +4,12 @@ import { Caller, demo, newMember, startTestServer, type TestServer } from './hel
 import { Session, User } from '../../server/models';
 
 let server: TestServer;
-beforeAll(async () => { server = await startTestServer({ LOGIN_MAX_PER_ACCOUNT: '3', SESSION_ABSOLUTE_HOURS: '1' }); });
-afterAll(async () => { await server.close(); });
+beforeAll(async () => {
+  server = await startTestServer({ LOGIN_MAX_PER_ACCOUNT: '3', SESSION_ABSOLUTE_HOURS: '1' });
+});
+afterAll(async () => {
+  await server.close();
+});
 
 const sessionCookie = (res: request.Response) =>
   ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('arcwright.sid='));
@@ -14,7 +18,9 @@ describe('sign-up', () => {
   it('creates a member, signs them in and answers 201 with the user', async () => {
     const caller = new Caller(server.app);
     await caller.refreshToken();
-    const res = await caller.post('/api/auth/signup').send({ email: ' New.Person@Example.test ', password: 'eight ch', name: 'New Person' });
+    const res = await caller
+      .post('/api/auth/signup')
+      .send({ email: ' New.Person@Example.test ', password: 'eight ch', name: 'New Person' });
     expect(res.status).toBe(201);
     expect(res.body.user).toMatchObject({ email: 'new.person@example.test', name: 'New Person', role: 'member' });
     expect(res.body.user.passwordHash).toBeUndefined();
@@ -26,7 +32,9 @@ describe('sign-up', () => {
   it('refuses a short password, a bad e-mail and extra fields with 400 naming each problem', async () => {
     const caller = new Caller(server.app);
     await caller.refreshToken();
-    const res = await caller.post('/api/auth/signup').send({ email: 'nope', password: 'short', name: '', role: 'admin' });
+    const res = await caller
+      .post('/api/auth/signup')
+      .send({ email: 'nope', password: 'short', name: '', role: 'admin' });
     expect(res.status).toBe(400);
     const details: string[] = res.body.details;
     expect(details.some((d) => d.startsWith('email:'))).toBe(true);
@@ -41,13 +49,17 @@ describe('sign-up', () => {
     expect((await a.get('/api/auth/me')).status).toBe(200);
     const b = new Caller(server.app);
     await b.refreshToken();
-    expect((await b.post('/api/auth/login').send({ email: 'long-pass@example.test', password: long + 'b' })).status).toBe(401);
+    expect(
+      (await b.post('/api/auth/login').send({ email: 'long-pass@example.test', password: long + 'b' })).status,
+    ).toBe(401);
   });
 
   it('answers 409 for an e-mail that already has an account', async () => {
     const caller = new Caller(server.app);
     await caller.refreshToken();
-    const res = await caller.post('/api/auth/signup').send({ email: 'maker@demo.test', password: 'whatever-long', name: 'Copy' });
+    const res = await caller
+      .post('/api/auth/signup')
+      .send({ email: 'maker@demo.test', password: 'whatever-long', name: 'Copy' });
     expect(res.status).toBe(409);
   });
 
@@ -78,8 +90,12 @@ describe('sign-in and sign-out', () => {
   it('answers 401 for a wrong password and for an unknown account, with the same message', async () => {
     const caller = new Caller(server.app);
     await caller.refreshToken();
-    const wrong = await caller.post('/api/auth/login').send({ email: 'student@demo.test', password: 'not-the-password' });
-    const unknown = await caller.post('/api/auth/login').send({ email: 'nobody@demo.test', password: 'not-the-password' });
+    const wrong = await caller
+      .post('/api/auth/login')
+      .send({ email: 'student@demo.test', password: 'not-the-password' });
+    const unknown = await caller
+      .post('/api/auth/login')
+      .send({ email: 'nobody@demo.test', password: 'not-the-password' });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body.error).toBe(unknown.body.error);
@@ -105,7 +121,9 @@ describe('sign-in and sign-out', () => {
     const attacker = new Caller(server.app);
     await attacker.refreshToken();
     for (let i = 0; i < 3; i++) {
-      expect((await attacker.post('/api/auth/login').send({ email: target.email, password: 'guess-' + i })).status).toBe(401);
+      expect(
+        (await attacker.post('/api/auth/login').send({ email: target.email, password: 'guess-' + i })).status,
+      ).toBe(401);
     }
     const blocked = await attacker.post('/api/auth/login').send({ email: target.email, password: target.password });
     expect(blocked.status).toBe(429);
@@ -127,7 +145,10 @@ describe('sign-in and sign-out', () => {
 
   it('refuses a session whose idle expiry has passed', async () => {
     const caller = await new Caller(server.app).signIn(demo.admin.email, demo.admin.password);
-    await Session.update({ expires: new Date(Date.now() - 1000) }, { where: { userId: (await User.findOne({ where: { email: demo.admin.email } }))!.id } });
+    await Session.update(
+      { expires: new Date(Date.now() - 1000) },
+      { where: { userId: (await User.findOne({ where: { email: demo.admin.email } }))!.id } },
+    );
     expect((await caller.get('/api/auth/me')).status).toBe(401);
   });
 });

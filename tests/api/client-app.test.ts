@@ -12,7 +12,9 @@ fs.mkdirSync(path.join(dist, 'assets'));
 fs.writeFileSync(path.join(dist, 'assets', 'index-abc123.js'), 'console.log("client")');
 
 let server: TestServer;
-beforeAll(async () => { server = await startTestServer({ DIST_DIR: dist }); });
+beforeAll(async () => {
+  server = await startTestServer({ DIST_DIR: dist });
+});
 afterAll(async () => {
   await server.close();
   fs.rmSync(dist, { recursive: true, force: true });

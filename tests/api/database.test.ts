@@ -6,8 +6,12 @@ import { User } from '../../server/models';
 import { seedDemoData } from '../../server/seed';
 
 let server: TestServer;
-beforeAll(async () => { server = await startTestServer(); });
-afterAll(async () => { await server.close(); });
+beforeAll(async () => {
+  server = await startTestServer();
+});
+afterAll(async () => {
+  await server.close();
+});
 
 type PragmaRow = Record<string, unknown>;
 
@@ -47,7 +51,10 @@ describe('SQLite connection settings', () => {
   it('enforce foreign keys inside a transaction', async () => {
     await expect(
       server.sequelize.transaction((transaction) =>
-        server.sequelize.query('INSERT INTO class_members (classId, userId, createdAt, updatedAt) VALUES (999999, 999999, 0, 0)', { transaction }),
+        server.sequelize.query(
+          'INSERT INTO class_members (classId, userId, createdAt, updatedAt) VALUES (999999, 999999, 0, 0)',
+          { transaction },
+        ),
       ),
     ).rejects.toThrow(/FOREIGN KEY/);
   });

@@ -3,8 +3,12 @@ import request from 'supertest';
 import { startTestServer, type TestServer } from './helpers';
 
 let server: TestServer;
-beforeAll(async () => { server = await startTestServer(); });
-afterAll(async () => { await server.close(); });
+beforeAll(async () => {
+  server = await startTestServer();
+});
+afterAll(async () => {
+  await server.close();
+});
 
 describe('GET /api/health', () => {
   it('answers ok with the package version', async () => {
@@ -32,15 +36,19 @@ describe('API errors', () => {
   });
 
   it('answers malformed JSON with 400 and no stack trace', async () => {
-    const res = await request(server.app).post('/api/no-such-thing')
-      .set('Content-Type', 'application/json').send('{"a":');
+    const res = await request(server.app)
+      .post('/api/no-such-thing')
+      .set('Content-Type', 'application/json')
+      .send('{"a":');
     expect(res.status).toBe(400);
     expect(res.body).toEqual({ error: 'request body is not valid JSON' });
   });
 
   it('answers a body over 256 KB with 413', async () => {
-    const res = await request(server.app).post('/api/no-such-thing')
-      .set('Content-Type', 'application/json').send(JSON.stringify({ pad: 'x'.repeat(300 * 1024) }));
+    const res = await request(server.app)
+      .post('/api/no-such-thing')
+      .set('Content-Type', 'application/json')
+      .send(JSON.stringify({ pad: 'x'.repeat(300 * 1024) }));
     expect(res.status).toBe(413);
     expect(res.body.error).toMatch(/256 KB/);
   });

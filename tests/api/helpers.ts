@@ -42,7 +42,11 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
   const mail = await setUpMail(config, { retryDelayMs: 20 });
   const app = createApp({ sequelize, config, mailer: mail.mailer });
   return {
-    app, sequelize, config, mail, dir,
+    app,
+    sequelize,
+    config,
+    mail,
+    dir,
     async mailTo(to: string) {
       await mail.mailer.idle();
       return OutboxMessage.findAll({ where: { to }, order: [['id', 'DESC']] });
@@ -85,11 +89,21 @@ export class Caller {
     return this;
   }
 
-  get(url: string) { return this.agent.get(url); }
-  post(url: string) { return this.agent.post(url).set('X-CSRF-Token', this.token); }
-  put(url: string) { return this.agent.put(url).set('X-CSRF-Token', this.token); }
-  patch(url: string) { return this.agent.patch(url).set('X-CSRF-Token', this.token); }
-  delete(url: string) { return this.agent.delete(url).set('X-CSRF-Token', this.token); }
+  get(url: string) {
+    return this.agent.get(url);
+  }
+  post(url: string) {
+    return this.agent.post(url).set('X-CSRF-Token', this.token);
+  }
+  put(url: string) {
+    return this.agent.put(url).set('X-CSRF-Token', this.token);
+  }
+  patch(url: string) {
+    return this.agent.patch(url).set('X-CSRF-Token', this.token);
+  }
+  delete(url: string) {
+    return this.agent.delete(url).set('X-CSRF-Token', this.token);
+  }
 }
 
 export const demo = {

@@ -19,7 +19,11 @@ type Route = { method: 'get' | 'post' | 'put' | 'delete'; path: (id: number) => 
 
 const routes: Route[] = [
   { method: 'get', path: (id) => `/api/sketches/${id}` },
-  { method: 'put', path: (id) => `/api/sketches/${id}`, body: () => ({ document: sketchFile('Hijacked'), version: 1 }) },
+  {
+    method: 'put',
+    path: (id) => `/api/sketches/${id}`,
+    body: () => ({ document: sketchFile('Hijacked'), version: 1 }),
+  },
   { method: 'delete', path: (id) => `/api/sketches/${id}` },
   { method: 'post', path: (id) => `/api/sketches/${id}/undelete` },
   { method: 'get', path: (id) => `/api/sketches/${id}/revisions` },
@@ -43,13 +47,18 @@ beforeAll(async () => {
   aliceSketch = (await alice.post('/api/sketches').send({ name: 'Alice rear', document: sketchFile() })).body.id;
   bobSketch = (await bob.post('/api/sketches').send({ name: 'Bob rear', document: sketchFile() })).body.id;
 });
-afterAll(async () => { await server.close(); });
+afterAll(async () => {
+  await server.close();
+});
 
 describe("someone else's sketch", () => {
   for (const route of routes) {
     it(`${route.method.toUpperCase()} ${route.path(0).replace('/0', '/:id')} answers 404 both ways and changes nothing`, async () => {
       const before = await snapshot();
-      for (const [caller, id] of [[alice, bobSketch], [bob, aliceSketch]] as const) {
+      for (const [caller, id] of [
+        [alice, bobSketch],
+        [bob, aliceSketch],
+      ] as const) {
         const req = caller[route.method](route.path(id));
         const res = route.body ? await req.send(route.body() as object) : await req;
         expect(res.status, `${route.method} ${route.path(id)}`).toBe(404);
@@ -64,7 +73,7 @@ describe("someone else's sketch", () => {
     expect(list.body.items.map((i: { id: number }) => i.id)).toEqual([aliceSketch]);
   });
 
-  it('is 404 for an admin too (admins manage accounts, not other people\'s work)', async () => {
+  it("is 404 for an admin too (admins manage accounts, not other people's work)", async () => {
     const admin = await new Caller(server.app).signIn(demo.admin.email, demo.admin.password);
     expect((await admin.get(`/api/sketches/${aliceSketch}`)).status).toBe(404);
   });
@@ -77,14 +86,21 @@ describe("someone else's sketch", () => {
 });
 
 describe('signed out', () => {
-  for (const route of [...routes, { method: 'get', path: () => '/api/sketches' } as Route, { method: 'post', path: () => '/api/sketches/import' } as Route]) {
+  for (const route of [
+    ...routes,
+    { method: 'get', path: () => '/api/sketches' } as Route,
+    { method: 'post', path: () => '/api/sketches/import' } as Route,
+  ]) {
     it(`${route.method.toUpperCase()} ${route.path(0)} answers 401 (or 403 for a write without a session token)`, async () => {
       const anon = new Caller(server.app);
       await anon.refreshToken();
-      const res = route.body ? await anon[route.method](route.path(aliceSketch)).send(route.body() as object) : await anon[route.method](route.path(aliceSketch));
+      const res = route.body
+        ? await anon[route.method](route.path(aliceSketch)).send(route.body() as object)
+        : await anon[route.method](route.path(aliceSketch));
       expect(res.status).toBe(401);
       // Without any token a write is refused before authentication.
-      if (route.method !== 'get') expect((await request(server.app)[route.method](route.path(aliceSketch))).status).toBe(403);
+      if (route.method !== 'get')
+        expect((await request(server.app)[route.method](route.path(aliceSketch))).status).toBe(403);
     });
   }
 });

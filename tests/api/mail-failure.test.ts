@@ -7,7 +7,9 @@ let server: TestServer;
 const logged: unknown[][] = [];
 const originalError = console.error;
 beforeAll(async () => {
-  console.error = (...args: unknown[]) => { logged.push(args); };
+  console.error = (...args: unknown[]) => {
+    logged.push(args);
+  };
   server = await startTestServer({ SMTP_URL: 'smtp://127.0.0.1:9' });
 });
 afterAll(async () => {

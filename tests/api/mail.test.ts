@@ -6,8 +6,12 @@ import { Mailer } from '../../server/services/mail/mailer';
 import type { Transporter } from 'nodemailer';
 
 let server: TestServer;
-beforeAll(async () => { server = await startTestServer(); });
-afterAll(async () => { await server.close(); });
+beforeAll(async () => {
+  server = await startTestServer();
+});
+afterAll(async () => {
+  await server.close();
+});
 
 function tokenFrom(text: string): string {
   const m = /\/reset\?token=([A-Za-z0-9_-]+)/.exec(text);
@@ -48,7 +52,9 @@ describe('password reset through the outbox', () => {
     const fresh = new Caller(server.app);
     await fresh.refreshToken();
     expect((await fresh.post('/api/auth/login').send({ email: user.email, password: user.password })).status).toBe(401);
-    expect((await fresh.post('/api/auth/login').send({ email: user.email, password: 'brand-new-password' })).status).toBe(200);
+    expect(
+      (await fresh.post('/api/auth/login').send({ email: user.email, password: 'brand-new-password' })).status,
+    ).toBe(200);
   });
 
   it('answers 202 for an unknown e-mail and sends nothing', async () => {
@@ -65,9 +71,16 @@ describe('password reset through the outbox', () => {
     await anon.refreshToken();
     await anon.post('/api/auth/reset-request').send({ email: user.email }).expect(202);
     const [mail] = await server.mailTo(user.email);
-    await PasswordReset.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { userId: (await User.findOne({ where: { email: user.email } }))!.id } });
-    expect((await anon.post('/api/auth/reset').send({ token: tokenFrom(mail.text), password: 'brand-new-password' })).status).toBe(400);
-    expect((await anon.post('/api/auth/reset').send({ token: 'made-up-token', password: 'brand-new-password' })).status).toBe(400);
+    await PasswordReset.update(
+      { expiresAt: new Date(Date.now() - 1000) },
+      { where: { userId: (await User.findOne({ where: { email: user.email } }))!.id } },
+    );
+    expect(
+      (await anon.post('/api/auth/reset').send({ token: tokenFrom(mail.text), password: 'brand-new-password' })).status,
+    ).toBe(400);
+    expect(
+      (await anon.post('/api/auth/reset').send({ token: 'made-up-token', password: 'brand-new-password' })).status,
+    ).toBe(400);
   });
 });
 
@@ -75,7 +88,9 @@ describe('share notice', () => {
   it('mails the link when the owner shares with an e-mail address, escaping the names in HTML', async () => {
     const owner = await newMember(server.app, 'sharer');
     const created = await owner.post('/api/sketches').send({ name: 'Rock <crawler> rear', document: sketchFile() });
-    const res = await owner.post(`/api/sketches/${created.body.id}/share`).send({ mode: 'link', email: 'friend@example.test' });
+    const res = await owner
+      .post(`/api/sketches/${created.body.id}/share`)
+      .send({ mode: 'link', email: 'friend@example.test' });
     expect(res.status).toBe(200);
     const [mail] = await server.mailTo('friend@example.test');
     expect(mail.subject).toContain('Rock <crawler> rear');
@@ -87,7 +102,9 @@ describe('share notice', () => {
   it('refuses a bad e-mail address with 400 and leaves the sketch private', async () => {
     const owner = await newMember(server.app, 'sharer2');
     const created = await owner.post('/api/sketches').send({ name: 'Private one', document: sketchFile() });
-    const res = await owner.post(`/api/sketches/${created.body.id}/share`).send({ mode: 'link', email: 'not an address' });
+    const res = await owner
+      .post(`/api/sketches/${created.body.id}/share`)
+      .send({ mode: 'link', email: 'not an address' });
     expect(res.status).toBe(400);
     expect((await owner.get(`/api/sketches/${created.body.id}`)).body.share).toBe('private');
   });
@@ -97,13 +114,18 @@ describe('a failing mail server', () => {
   it('retries, logs, and never fails the action', async () => {
     let calls = 0;
     const failing = {
-      sendMail: async () => { calls += 1; throw new Error('connection refused'); },
+      sendMail: async () => {
+        calls += 1;
+        throw new Error('connection refused');
+      },
       close: () => undefined,
     } as unknown as Transporter;
     const mailer = new Mailer(failing, { from: 'test@example.test', attempts: 3, retryDelayMs: 1, recordSent: true });
     const errors: unknown[] = [];
     const original = console.error;
-    console.error = (...args: unknown[]) => { errors.push(args); };
+    console.error = (...args: unknown[]) => {
+      errors.push(args);
+    };
     try {
       expect(() => mailer.queue({ to: 'x@example.test', subject: 's', text: 't', html: '<p>t</p>' })).not.toThrow();
       await mailer.idle();

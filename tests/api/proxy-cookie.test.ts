@@ -4,8 +4,12 @@ import { startTestServer, type TestServer } from './helpers';
 
 // Behind a TLS-terminating proxy (TRUST_PROXY=1) the cookie is Secure when the proxy says https.
 let server: TestServer;
-beforeAll(async () => { server = await startTestServer({ TRUST_PROXY: '1' }); });
-afterAll(async () => { await server.close(); });
+beforeAll(async () => {
+  server = await startTestServer({ TRUST_PROXY: '1' });
+});
+afterAll(async () => {
+  await server.close();
+});
 
 const cookieOf = (res: request.Response) =>
   ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('arcwright.sid=')) ?? '';

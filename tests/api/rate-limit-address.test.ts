@@ -3,8 +3,12 @@ import { Caller, demo, startTestServer, type TestServer } from './helpers';
 
 // Failed sign-ins counted per address, across accounts.
 let server: TestServer;
-beforeAll(async () => { server = await startTestServer({ LOGIN_MAX_PER_ADDRESS: '4', LOGIN_MAX_PER_ACCOUNT: '100' }); });
-afterAll(async () => { await server.close(); });
+beforeAll(async () => {
+  server = await startTestServer({ LOGIN_MAX_PER_ADDRESS: '4', LOGIN_MAX_PER_ACCOUNT: '100' });
+});
+afterAll(async () => {
+  await server.close();
+});
 
 describe('sign-in limit per address', () => {
   it('answers 429 once one address has failed too often, whichever accounts it tried', async () => {

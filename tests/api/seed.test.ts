@@ -6,8 +6,12 @@ import { demoSketches } from '../../server/seed/demo-sketches';
 import { starters } from '../../shared/kinematics';
 
 let server: TestServer;
-beforeAll(async () => { server = await startTestServer(); });
-afterAll(async () => { await server.close(); });
+beforeAll(async () => {
+  server = await startTestServer();
+});
+afterAll(async () => {
+  await server.close();
+});
 
 describe('demo data', () => {
   it('has the shop, the class with the student in it, and every demo account signs in', async () => {
@@ -27,13 +31,20 @@ describe('demo data', () => {
     expect(await Sketch.count()).toBe(expected.length);
     const maker = await new Caller(server.app).signIn(demo.maker.email, demo.maker.password);
     const list = await maker.get('/api/sketches?sort=name&order=asc');
-    const mine = expected.filter((d) => d.owner === demo.maker.email).map((d) => d.name).sort((a, b) => a.localeCompare(b));
-    expect(list.body.items.map((i: { name: string }) => i.name).sort((a: string, b: string) => a.localeCompare(b))).toEqual(mine);
+    const mine = expected
+      .filter((d) => d.owner === demo.maker.email)
+      .map((d) => d.name)
+      .sort((a, b) => a.localeCompare(b));
+    expect(
+      list.body.items.map((i: { name: string }) => i.name).sort((a: string, b: string) => a.localeCompare(b)),
+    ).toEqual(mine);
   });
 
   it('adds nothing when run again', async () => {
     const before = { users: await User.count(), sketches: await Sketch.count(), members: await ClassMember.count() };
     await seedDemoData(server.sequelize);
-    expect({ users: await User.count(), sketches: await Sketch.count(), members: await ClassMember.count() }).toEqual(before);
+    expect({ users: await User.count(), sketches: await Sketch.count(), members: await ClassMember.count() }).toEqual(
+      before,
+    );
   });
 });

@@ -13,7 +13,9 @@ beforeAll(async () => {
   alice = await newMember(server.app, 'alice');
   bob = await newMember(server.app, 'bob');
 });
-afterAll(async () => { await server.close(); });
+afterAll(async () => {
+  await server.close();
+});
 
 async function create(caller: Caller, name = 'Rear four-link A') {
   const res = await caller.post('/api/sketches').send({ name, document: sketchFile() });
@@ -26,8 +28,14 @@ describe('create and read', () => {
     const res = await alice.post('/api/sketches').send({ name: 'Trail rig rear', document: sketchFile('ignored') });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({
-      name: 'Trail rig rear', layout: 'four-link-lateral-rod', version: 1, mine: true, canEdit: true,
-      share: 'private', shareToken: null, deletedAt: null,
+      name: 'Trail rig rear',
+      layout: 'four-link-lateral-rod',
+      version: 1,
+      mine: true,
+      canEdit: true,
+      share: 'private',
+      shareToken: null,
+      deletedAt: null,
     });
     expect(res.body.document.name).toBe('Trail rig rear');
     expect(res.body.owner.name).toMatch(/alice/);
@@ -118,11 +126,24 @@ describe('save with versions', () => {
 
   it('refuses a save whose targets or tracing are malformed, naming the field, and keeps the stored version', async () => {
     const s = await create(alice);
-    const bad = await alice.put(`/api/sketches/${s.id}`).send({ document: { ...s.document, targets: { antiSquat: { min: 90, max: 60 } } }, version: 1 });
+    const bad = await alice
+      .put(`/api/sketches/${s.id}`)
+      .send({ document: { ...s.document, targets: { antiSquat: { min: 90, max: 60 } } }, version: 1 });
     expect(bad.status).toBe(400);
     expect(bad.body.details).toContain('document.targets.antiSquat: min must not be above max');
-    const photo = { upload: 'a1', url: '/api/uploads/a1', width: 10, height: 10, centre: { h: 0, v: 0 }, mmPerPx: 1, opacity: -1, locked: false };
-    const badPhoto = await alice.put(`/api/sketches/${s.id}`).send({ document: { ...s.document, tracing: { side: photo } }, version: 1 });
+    const photo = {
+      upload: 'a1',
+      url: '/api/uploads/a1',
+      width: 10,
+      height: 10,
+      centre: { h: 0, v: 0 },
+      mmPerPx: 1,
+      opacity: -1,
+      locked: false,
+    };
+    const badPhoto = await alice
+      .put(`/api/sketches/${s.id}`)
+      .send({ document: { ...s.document, tracing: { side: photo } }, version: 1 });
     expect(badPhoto.status).toBe(400);
     expect((badPhoto.body.details as string[]).some((d) => d.startsWith('document.tracing.side.opacity'))).toBe(true);
     const row = await Sketch.findByPk(s.id);
@@ -132,7 +153,9 @@ describe('save with versions', () => {
   it('lets exactly one of several concurrent saves of the same version through', async () => {
     const s = await create(alice);
     const results = await Promise.all(
-      [1, 2, 3, 4, 5].map((n) => alice.put(`/api/sketches/${s.id}`).send({ document: s.document, name: `Racer ${n}`, version: 1 })),
+      [1, 2, 3, 4, 5].map((n) =>
+        alice.put(`/api/sketches/${s.id}`).send({ document: s.document, name: `Racer ${n}`, version: 1 }),
+      ),
     );
     const statuses = results.map((r) => r.status).sort();
     expect(statuses).toEqual([200, 409, 409, 409, 409]);
@@ -144,7 +167,9 @@ describe('save with versions', () => {
 
   it('renames with name and refuses a bad version field', async () => {
     const s = await create(alice);
-    const renamed = await alice.put(`/api/sketches/${s.id}`).send({ document: s.document, name: 'Renamed', version: 1 });
+    const renamed = await alice
+      .put(`/api/sketches/${s.id}`)
+      .send({ document: s.document, name: 'Renamed', version: 1 });
     expect(renamed.body).toMatchObject({ name: 'Renamed', version: 2 });
     expect(renamed.body.document.name).toBe('Renamed');
     for (const version of [0, -1, 1.5, '2', null]) {
@@ -156,13 +181,21 @@ describe('save with versions', () => {
 describe('revisions', () => {
   it('lists revisions newest first, returns one, and restores it as a new version', async () => {
     const s = await create(alice, 'History one');
-    await alice.put(`/api/sketches/${s.id}`).send({ document: s.document, name: 'History two', version: 1 }).expect(200);
-    await alice.put(`/api/sketches/${s.id}`).send({ document: s.document, name: 'History three', version: 2 }).expect(200);
+    await alice
+      .put(`/api/sketches/${s.id}`)
+      .send({ document: s.document, name: 'History two', version: 1 })
+      .expect(200);
+    await alice
+      .put(`/api/sketches/${s.id}`)
+      .send({ document: s.document, name: 'History three', version: 2 })
+      .expect(200);
 
     const list = await alice.get(`/api/sketches/${s.id}/revisions`);
     expect(list.status).toBe(200);
     expect(list.body.items.map((r: { rev: number; name: string }) => [r.rev, r.name])).toEqual([
-      [3, 'History three'], [2, 'History two'], [1, 'History one'],
+      [3, 'History three'],
+      [2, 'History two'],
+      [1, 'History one'],
     ]);
     const one = await alice.get(`/api/sketches/${s.id}/revisions/1`);
     expect(one.body).toMatchObject({ rev: 1, version: 1, name: 'History one' });
@@ -198,7 +231,9 @@ describe('delete and undelete', () => {
     await alice.delete(`/api/sketches/${s.id}`).expect(204);
     await Sketch.update({ deletedAt: new Date(Date.now() - RESTORE_WINDOW_MS - 60_000) }, { where: { id: s.id } });
     expect((await alice.post(`/api/sketches/${s.id}/undelete`)).status).toBe(404);
-    expect((await alice.get('/api/sketches?deleted=1&pageSize=100')).body.items.some((i: { id: number }) => i.id === s.id)).toBe(false);
+    expect(
+      (await alice.get('/api/sketches?deleted=1&pageSize=100')).body.items.some((i: { id: number }) => i.id === s.id),
+    ).toBe(false);
   });
 });
 
@@ -218,7 +253,9 @@ describe('copy, import and export', () => {
     expect(imported.body.name).toBe('Imported rear');
     const exported = await alice.get(`/api/sketches/${imported.body.id}/export`);
     expect(exported.status).toBe(200);
-    expect(exported.headers['content-disposition']).toMatch(/^attachment; filename="?Imported-rear\.arcwright\.json"?$/);
+    expect(exported.headers['content-disposition']).toMatch(
+      /^attachment; filename="?Imported-rear\.arcwright\.json"?$/,
+    );
     const file = JSON.parse(exported.text);
     expect(file.format).toBe('arcwright.sketch');
     expect(file.points).toEqual(imported.body.document.points);

@@ -10,7 +10,9 @@ beforeAll(async () => {
   guest = new Caller(server.app);
   await guest.refreshToken();
 });
-afterAll(async () => { await server.close(); });
+afterAll(async () => {
+  await server.close();
+});
 
 describe('POST /api/sweep', () => {
   it('answers exactly what runSweep computes for the same file', async () => {

@@ -25,20 +25,31 @@ function tinyPng(): Buffer {
     return (c ^ 0xffffffff) >>> 0;
   };
   const chunk = (type: string, data: Buffer) => {
-    const len = Buffer.alloc(4); len.writeUInt32BE(data.length);
+    const len = Buffer.alloc(4);
+    len.writeUInt32BE(data.length);
     const td = Buffer.concat([Buffer.from(type, 'ascii'), data]);
-    const c = Buffer.alloc(4); c.writeUInt32BE(crc(td));
+    const c = Buffer.alloc(4);
+    c.writeUInt32BE(crc(td));
     return Buffer.concat([len, td, c]);
   };
   const ihdr = Buffer.from([0, 0, 0, 1, 0, 0, 0, 1, 8, 2, 0, 0, 0]);
   const idat = zlib.deflateSync(Buffer.from([0, 255, 0, 0]));
-  return Buffer.concat([Buffer.from([137, 80, 78, 71, 13, 10, 26, 10]), chunk('IHDR', ihdr), chunk('IDAT', idat), chunk('IEND', Buffer.alloc(0))]);
+  return Buffer.concat([
+    Buffer.from([137, 80, 78, 71, 13, 10, 26, 10]),
+    chunk('IHDR', ihdr),
+    chunk('IDAT', idat),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
 }
 
 /** The first bytes of a JPEG (SOI + JFIF APP0): enough for detection from the bytes. */
 const jpegBytes = Buffer.concat([
-  Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01, 0x01, 0x00, 0x00, 0x01, 0x00, 0x01, 0x00, 0x00]),
-  Buffer.alloc(64), Buffer.from([0xff, 0xd9]),
+  Buffer.from([
+    0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01, 0x01, 0x00, 0x00, 0x01, 0x00, 0x01, 0x00,
+    0x00,
+  ]),
+  Buffer.alloc(64),
+  Buffer.from([0xff, 0xd9]),
 ]);
 
 beforeAll(async () => {
@@ -47,12 +58,16 @@ beforeAll(async () => {
   bob = await newMember(server.app, 'bob');
   sketchId = (await alice.post('/api/sketches').send({ name: 'Traced rear', document: sketchFile() })).body.id;
 });
-afterAll(async () => { await server.close(); });
+afterAll(async () => {
+  await server.close();
+});
 
 describe('uploads', () => {
   it('stores a PNG under a server-made name and serves it to the owner with nosniff', async () => {
     const png = tinyPng();
-    const res = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', png, { filename: '../../evil.html', contentType: 'text/html' });
+    const res = await alice
+      .post(`/api/sketches/${sketchId}/uploads`)
+      .attach('file', png, { filename: '../../evil.html', contentType: 'text/html' });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ mime: 'image/png', size: png.length });
     expect(res.body.url).toBe(`/api/uploads/${res.body.id}`);
@@ -68,24 +83,35 @@ describe('uploads', () => {
   });
 
   it('accepts a JPEG, detected from its bytes', async () => {
-    const res = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', jpegBytes, { filename: 'photo.png', contentType: 'image/png' });
+    const res = await alice
+      .post(`/api/sketches/${sketchId}/uploads`)
+      .attach('file', jpegBytes, { filename: 'photo.png', contentType: 'image/png' });
     expect(res.status).toBe(201);
     expect(res.body.mime).toBe('image/jpeg');
   });
 
   it('refuses files that are not PNG or JPEG, whatever their name says', async () => {
     const before = await Upload.count();
-    const html = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', Buffer.from('<script>alert(1)</script>'), { filename: 'x.png', contentType: 'image/png' });
+    const html = await alice
+      .post(`/api/sketches/${sketchId}/uploads`)
+      .attach('file', Buffer.from('<script>alert(1)</script>'), { filename: 'x.png', contentType: 'image/png' });
     expect(html.status).toBe(415);
-    const gif = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', Buffer.from('GIF89a\x01\x00\x01\x00\x00\x00\x00;'), { filename: 'x.gif' });
+    const gif = await alice
+      .post(`/api/sketches/${sketchId}/uploads`)
+      .attach('file', Buffer.from('GIF89a\x01\x00\x01\x00\x00\x00\x00;'), { filename: 'x.gif' });
     expect(gif.status).toBe(415);
     expect(await Upload.count()).toBe(before);
   });
 
   it('refuses a missing file, a wrong field, two files and a file over 10 MB', async () => {
     expect((await alice.post(`/api/sketches/${sketchId}/uploads`).field('note', 'x')).status).toBe(400);
-    expect((await alice.post(`/api/sketches/${sketchId}/uploads`).attach('photo', tinyPng(), 'a.png')).status).toBe(400);
-    const two = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', tinyPng(), 'a.png').attach('file', tinyPng(), 'b.png');
+    expect((await alice.post(`/api/sketches/${sketchId}/uploads`).attach('photo', tinyPng(), 'a.png')).status).toBe(
+      400,
+    );
+    const two = await alice
+      .post(`/api/sketches/${sketchId}/uploads`)
+      .attach('file', tinyPng(), 'a.png')
+      .attach('file', tinyPng(), 'b.png');
     expect(two.status).toBe(400);
     const big = Buffer.concat([tinyPng(), Buffer.alloc(10 * 1024 * 1024)]);
     const tooBig = await alice.post(`/api/sketches/${sketchId}/uploads`).attach('file', big, 'big.png');

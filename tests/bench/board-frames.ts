@@ -29,7 +29,15 @@ import { starters } from '../../shared/kinematics';
 const ROOT = resolve(import.meta.dirname, '../..');
 const DIST = join(ROOT, 'dist');
 const CHROMIUM = '/usr/lib/chromium/chromium';
-const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+const CHROMIUM_ARGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
 const MAKER = { email: 'maker@demo.test', password: 'demo-maker-2026' };
 
 /** One frame at 60 Hz (ms): the frame-time target. */
@@ -79,13 +87,20 @@ function percentile(sorted: number[], p: number): number {
 
 /** Signs in through the API with the page's own cookies and creates the four-link starter sketch. */
 async function newStarterSketch(context: BrowserContext, base: string): Promise<number> {
-  const csrf = async () => ((await (await context.request.get(`${base}/api/auth/csrf`)).json()) as { token: string }).token;
-  const login = await context.request.post(`${base}/api/auth/login`, { data: MAKER, headers: { 'X-CSRF-Token': await csrf() } });
+  const csrf = async () =>
+    ((await (await context.request.get(`${base}/api/auth/csrf`)).json()) as { token: string }).token;
+  const login = await context.request.post(`${base}/api/auth/login`, {
+    data: MAKER,
+    headers: { 'X-CSRF-Token': await csrf() },
+  });
   if (!login.ok()) throw new Error(`sign-in failed: ${login.status()} ${await login.text()}`);
   const spec = starters['four-link-lateral-rod'];
   if (!spec) throw new Error('the four-link starter is missing');
   const document = { ...spec.build(), name: 'Bench: four-link drag' };
-  const made = await context.request.post(`${base}/api/sketches`, { data: { name: document.name, document }, headers: { 'X-CSRF-Token': await csrf() } });
+  const made = await context.request.post(`${base}/api/sketches`, {
+    data: { name: document.name, document },
+    headers: { 'X-CSRF-Token': await csrf() },
+  });
   if (!made.ok()) throw new Error(`creating the sketch failed: ${made.status()} ${await made.text()}`);
   return ((await made.json()) as { id: number }).id;
 }
@@ -94,7 +109,8 @@ async function openBoard(page: Page, base: string, id: number): Promise<void> {
   await page.goto(`${base}/sketches/${id}`);
   await page.waitForFunction((pivot) => !!window.arcwrightBoard?.side?.pivotAt(pivot), DRAG_PIVOT, { timeout: 30_000 });
   // The plots are loaded lazily: wait until they have drawn, so the drag measures the whole board.
-  if (!process.argv.includes('--without-sweep')) await page.locator('[data-test="plot-pinion"] canvas').waitFor({ state: 'visible', timeout: 30_000 });
+  if (!process.argv.includes('--without-sweep'))
+    await page.locator('[data-test="plot-pinion"] canvas').waitFor({ state: 'visible', timeout: 30_000 });
   await page.waitForTimeout(500);
 }
 
@@ -222,7 +238,10 @@ async function startProfiler(page: Page): Promise<{ stop(): Promise<string> }> {
       });
       const total = [...self.values()].reduce((a, b) => a + b, 0);
       const top = [...self].sort((a, b) => b[1] - a[1]).slice(0, 25);
-      return [`Main thread during the drag (sampling profile, ${ms(total)} in all), self time by function:`, ...top.map(([k, v]) => `  ${ms(v).padStart(10)}  ${k}`)].join('\n');
+      return [
+        `Main thread during the drag (sampling profile, ${ms(total)} in all), self time by function:`,
+        ...top.map(([k, v]) => `  ${ms(v).padStart(10)}  ${k}`),
+      ].join('\n');
     },
   };
 }
@@ -244,7 +263,8 @@ const ms = (v: number) => `${v.toFixed(1)} ms`;
 const kb = (v: number) => `${v.toFixed(1)} KB`;
 
 async function main() {
-  if (!existsSync(join(DIST, 'index.html'))) throw new Error('dist/ has no build: run `npx vite build` first (npm run bench:board does)');
+  if (!existsSync(join(DIST, 'index.html')))
+    throw new Error('dist/ has no build: run `npx vite build` first (npm run bench:board does)');
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
   const dir = mkdtempSync(join(tmpdir(), 'arcwright-bench-'));
@@ -281,7 +301,10 @@ async function main() {
     const id = await newStarterSketch(context, base);
     const page = context.pages()[0] ?? (await context.newPage());
     const withoutSweep = process.argv.includes('--without-sweep');
-    if (withoutSweep) await page.route('**/sweep.worker*.js', (r) => r.fulfill({ contentType: 'text/javascript', body: 'self.onmessage = () => {};' }));
+    if (withoutSweep)
+      await page.route('**/sweep.worker*.js', (r) =>
+        r.fulfill({ contentType: 'text/javascript', body: 'self.onmessage = () => {};' }),
+      );
     page.on('worker', (w) => scripts.add(w.url()));
     await openBoard(page, base, id);
     const bundle = bundleFigures(scripts);
@@ -290,7 +313,9 @@ async function main() {
     if (profiler) console.log(await profiler.stop());
     await page.screenshot({ path: join(ROOT, 'tests/e2e/artifacts/bench-board-after-drag.png') });
 
-    const load = loadavg().map((v) => v.toFixed(2)).join(' / ');
+    const load = loadavg()
+      .map((v) => v.toFixed(2))
+      .join(' / ');
     const lines = [
       `Machine: ${cpus().length} cores, load average ${load} (1 / 5 / 15 min; other work on the machine skews frame times)`,
       `Board frame time while dragging ${DRAG_PIVOT} of the four-link starter (${DRAG_STEPS} pointer moves, ${frames.frames} frames sampled)${withoutSweep ? ' WITHOUT the sweep (diagnostic)' : ''}:`,

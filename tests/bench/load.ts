@@ -39,7 +39,9 @@ async function waitForHealth(base: string, timeoutMs: number): Promise<void> {
     try {
       const res = await fetch(`${base}/api/health`);
       if (res.ok) return;
-    } catch { /* not up yet */ }
+    } catch {
+      /* not up yet */
+    }
     await new Promise((r) => setTimeout(r, 200));
   }
   throw new Error('server did not answer /api/health in time');
@@ -62,7 +64,11 @@ class Client {
     const headers: Record<string, string> = { cookie: this.cookie };
     if (body !== undefined) headers['content-type'] = 'application/json';
     if (method !== 'GET') headers['x-csrf-token'] = this.token;
-    const res = await fetch(this.base + url, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) });
+    const res = await fetch(this.base + url, {
+      method,
+      headers,
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
     const set = res.headers.getSetCookie().find((c) => c.startsWith('arcwright.sid='));
     if (set) this.cookie = set.split(';')[0];
     const text = await res.text();
@@ -93,12 +99,19 @@ async function main() {
   const server = spawn(process.execPath, [...profile, '--import', 'tsx', 'server/index.ts'], {
     cwd: root,
     env: {
-      ...process.env, PORT: String(port), DATABASE_PATH: dbPath, UPLOADS_DIR: path.join(dir, 'uploads'),
-      DIST_DIR: path.join(dir, 'no-client'), SIGNUP_MAX_PER_ADDRESS: String(CLIENTS * 2), NODE_ENV: 'development',
+      ...process.env,
+      PORT: String(port),
+      DATABASE_PATH: dbPath,
+      UPLOADS_DIR: path.join(dir, 'uploads'),
+      DIST_DIR: path.join(dir, 'no-client'),
+      SIGNUP_MAX_PER_ADDRESS: String(CLIENTS * 2),
+      NODE_ENV: 'development',
     },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
-  const stop = () => { if (server.exitCode === null) server.kill('SIGTERM'); };
+  const stop = () => {
+    if (server.exitCode === null) server.kill('SIGTERM');
+  };
   process.on('exit', stop);
 
   try {
@@ -109,8 +122,13 @@ async function main() {
     for (let i = 0; i < CLIENTS; i++) {
       const c = new Client(base);
       await c.refreshToken();
-      const signup = await c.call('POST', '/api/auth/signup', { email: `load-${i}@example.test`, password: `load-password-${i}`, name: `Load ${i}` });
-      if (signup.status !== 201) throw new Error(`sign-up ${i} answered ${signup.status}: ${JSON.stringify(signup.json)}`);
+      const signup = await c.call('POST', '/api/auth/signup', {
+        email: `load-${i}@example.test`,
+        password: `load-password-${i}`,
+        name: `Load ${i}`,
+      });
+      if (signup.status !== 201)
+        throw new Error(`sign-up ${i} answered ${signup.status}: ${JSON.stringify(signup.json)}`);
       await c.refreshToken();
       const created = await c.call('POST', '/api/sketches', { name: `Load ${i} v1`, document });
       if (created.status !== 201) throw new Error(`create ${i} answered ${created.status}`);
@@ -135,7 +153,10 @@ async function main() {
             continue;
           }
           latencies.push(performance.now() - t0);
-          if (res.status !== 200) { errors.push(`client ${i}: ${res.status} ${JSON.stringify(res.json)}`); continue; }
+          if (res.status !== 200) {
+            errors.push(`client ${i}: ${res.status} ${JSON.stringify(res.json)}`);
+            continue;
+          }
           cl.version = res.json.version;
           cl.acked.push({ version: res.json.version, name });
         }
@@ -148,8 +169,14 @@ async function main() {
 
     // Every acknowledged save must be a revision with that version and name.
     const db = new sqlite3.Database(dbPath, sqlite3.OPEN_READONLY);
-    const revisions = await queryAll<{ sketchId: number; version: number; name: string }>(db, 'SELECT sketchId, version, name FROM sketch_revisions');
-    const sketches = await queryAll<{ id: number; version: number; name: string }>(db, 'SELECT id, version, name FROM sketches');
+    const revisions = await queryAll<{ sketchId: number; version: number; name: string }>(
+      db,
+      'SELECT sketchId, version, name FROM sketch_revisions',
+    );
+    const sketches = await queryAll<{ id: number; version: number; name: string }>(
+      db,
+      'SELECT id, version, name FROM sketches',
+    );
     db.close();
     const have = new Set(revisions.map((r) => `${r.sketchId}/${r.version}/${r.name}`));
     const current = new Map(sketches.map((s) => [s.id, s]));
@@ -166,9 +193,15 @@ async function main() {
     }
 
     const sorted = [...latencies].sort((a, b) => a - b);
-    console.log(`requests: ${latencies.length} in ${elapsedS.toFixed(1)} s = ${(latencies.length / elapsedS).toFixed(0)} req/s`);
-    console.log(`latency ms: p50 ${percentile(sorted, 50).toFixed(1)}, p95 ${percentile(sorted, 95).toFixed(1)}, p99 ${percentile(sorted, 99).toFixed(1)}, max ${sorted.at(-1)?.toFixed(1)}`);
-    console.log(`acknowledged saves: ${acked}; missing from the database: ${missing}; failed requests: ${errors.length}`);
+    console.log(
+      `requests: ${latencies.length} in ${elapsedS.toFixed(1)} s = ${(latencies.length / elapsedS).toFixed(0)} req/s`,
+    );
+    console.log(
+      `latency ms: p50 ${percentile(sorted, 50).toFixed(1)}, p95 ${percentile(sorted, 95).toFixed(1)}, p99 ${percentile(sorted, 99).toFixed(1)}, max ${sorted.at(-1)?.toFixed(1)}`,
+    );
+    console.log(
+      `acknowledged saves: ${acked}; missing from the database: ${missing}; failed requests: ${errors.length}`,
+    );
     if (errors.length) console.log('first errors:', errors.slice(0, 5));
     fs.rmSync(dir, { recursive: true, force: true });
     process.exit(errors.length || missing || !acked ? 1 : 0);

@@ -51,7 +51,16 @@ for (const spec of Object.values(starters)) {
   ]);
 }
 
-const head = ['starter', 'rows', 'full sweep median ms', 'p90 ms', 'without validation ms', 'grid cells', '21×21 grid median ms', 'p90 ms'];
+const head = [
+  'starter',
+  'rows',
+  'full sweep median ms',
+  'p90 ms',
+  'without validation ms',
+  'grid cells',
+  '21×21 grid median ms',
+  'p90 ms',
+];
 const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
 const line = (cells: string[]) => `| ${cells.map((c, i) => c.padEnd(widths[i])).join(' | ')} |`;
 console.log(`Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}`);

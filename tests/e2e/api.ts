@@ -15,7 +15,10 @@ export async function ownerSharesStarter(browser: Browser, baseURL: string | und
     await page.goto('/sketches/new?starter=four-link-lateral-rod');
     await expect(page).toHaveURL(/\/sketches\/\d+$/);
     const id = Number(page.url().match(/(\d+)$/)![1]);
-    const share = await page.request.post(`/api/sketches/${id}/share`, { data: { mode: 'link' }, headers: { 'X-CSRF-Token': await csrf(page.request) } });
+    const share = await page.request.post(`/api/sketches/${id}/share`, {
+      data: { mode: 'link' },
+      headers: { 'X-CSRF-Token': await csrf(page.request) },
+    });
     expect(share.status()).toBe(200);
     return ((await share.json()) as { shareToken: string }).shareToken;
   } finally {

@@ -65,7 +65,9 @@ test('open a starter, drag a pivot, see the table and readout follow, undo it, t
   await snap(page, 'board-typed');
 });
 
-test('rear-view drags mirror the partner unless left and right are unlinked; snap keeps whole steps', async ({ page }) => {
+test('rear-view drags mirror the partner unless left and right are unlinked; snap keeps whole steps', async ({
+  page,
+}) => {
   await page.goto('/sketches/new?starter=four-link-lateral-rod');
   await expect(page).toHaveURL(/\/sketches\/\d+$/);
   await boardReady(page, 'SH.fl');
@@ -87,7 +89,9 @@ test('rear-view drags mirror the partner unless left and right are unlinked; sna
   await snap(page, 'board-rear-unlinked');
 });
 
-test('wheel zoom and fit; arrow keys nudge the selected pivot (Shift ten times); leaving saves first', async ({ page }) => {
+test('wheel zoom and fit; arrow keys nudge the selected pivot (Shift ten times); leaving saves first', async ({
+  page,
+}) => {
   await page.goto('/sketches/new?starter=four-link-lateral-rod');
   await expect(page).toHaveURL(/\/sketches\/\d+$/);
   await boardReady(page);
@@ -137,7 +141,11 @@ test('a save refused as stale shows the conflict, keeps the edit, and can save i
   const token = await csrf(page.request);
   const current = await (await page.request.get(`/api/sketches/${id}`)).json();
   const put = await page.request.put(`/api/sketches/${id}`, {
-    data: { document: { ...current.document, name: 'Changed elsewhere' }, name: 'Changed elsewhere', version: current.version },
+    data: {
+      document: { ...current.document, name: 'Changed elsewhere' },
+      name: 'Changed elsewhere',
+      version: current.version,
+    },
     headers: { 'X-CSRF-Token': token },
   });
   expect(put.status()).toBe(200);
@@ -178,19 +186,22 @@ test('revisions: compare an earlier version with the current sketch, then restor
   await expect(cell(page, 'UL.fl', 'z')).toHaveValue(z0);
 });
 
-anonymous('a read-only link opens the board without sign-in: no drags, and a copy needs an account', async ({ page, browser, baseURL }) => {
-  // The owner shares a sketch by link (through the API, signed in in a context of their own).
-  const shareToken = await ownerSharesStarter(browser, baseURL);
+anonymous(
+  'a read-only link opens the board without sign-in: no drags, and a copy needs an account',
+  async ({ page, browser, baseURL }) => {
+    // The owner shares a sketch by link (through the API, signed in in a context of their own).
+    const shareToken = await ownerSharesStarter(browser, baseURL);
 
-  await page.goto(`/shared/${shareToken}`);
-  await boardReady(page);
-  await expect($(page, 'readonly-banner')).toBeVisible();
-  await expect($(page, 'save-state')).toHaveAttribute('data-state', 'readonly');
-  await expect(cell(page, 'UL.fl', 'z')).toBeDisabled();
-  const z0 = await cell(page, 'UL.fl', 'z').inputValue();
-  await drag(page, 'side', 'UL.fl', 0, -40);
-  await expect(cell(page, 'UL.fl', 'z')).toHaveValue(z0);
-  await snap(page, 'board-shared-readonly');
-  await $(page, 'copy-to-library').click();
-  await expect(page).toHaveURL(/\/signin\?next=/);
-});
+    await page.goto(`/shared/${shareToken}`);
+    await boardReady(page);
+    await expect($(page, 'readonly-banner')).toBeVisible();
+    await expect($(page, 'save-state')).toHaveAttribute('data-state', 'readonly');
+    await expect(cell(page, 'UL.fl', 'z')).toBeDisabled();
+    const z0 = await cell(page, 'UL.fl', 'z').inputValue();
+    await drag(page, 'side', 'UL.fl', 0, -40);
+    await expect(cell(page, 'UL.fl', 'z')).toHaveValue(z0);
+    await snap(page, 'board-shared-readonly');
+    await $(page, 'copy-to-library').click();
+    await expect(page).toHaveURL(/\/signin\?next=/);
+  },
+);

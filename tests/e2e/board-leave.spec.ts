@@ -1,7 +1,9 @@
 import { test, expect } from './fixtures';
 import { $, boardReady } from './board';
 
-test('edits that cannot be saved: leaving the board asks first, Stay keeps them, and closing the tab warns too', async ({ page }) => {
+test('edits that cannot be saved: leaving the board asks first, Stay keeps them, and closing the tab warns too', async ({
+  page,
+}) => {
   await page.goto('/sketches/new?starter=four-link-lateral-rod');
   await expect(page).toHaveURL(/\/sketches\/\d+$/);
   await boardReady(page);
@@ -10,7 +12,11 @@ test('edits that cannot be saved: leaving the board asks first, Stay keeps them,
   // From here the server refuses every save, as when the connection has gone.
   await page.route('**/api/sketches/*', (route) =>
     route.request().method() === 'PUT'
-      ? route.fulfill({ status: 503, contentType: 'application/json', body: JSON.stringify({ error: 'The server is not answering.' }) })
+      ? route.fulfill({
+          status: 503,
+          contentType: 'application/json',
+          body: JSON.stringify({ error: 'The server is not answering.' }),
+        })
       : route.continue(),
   );
   const z = $(page, 'pivot-UL.fl-z');

@@ -6,7 +6,8 @@ import { screenToPlane, type ViewTransform } from '../../src/canvas/transform';
 // A touch screen: Chromium turns the touches below into pointer events, as on a tablet.
 test.use({ hasTouch: true });
 
-const sideTransform = (page: Page): Promise<ViewTransform> => page.evaluate(() => window.arcwrightBoard!.side!.transform());
+const sideTransform = (page: Page): Promise<ViewTransform> =>
+  page.evaluate(() => window.arcwrightBoard!.side!.transform());
 
 test('two fingers spreading on a view zoom it about the point between them, and move no pivot', async ({ page }) => {
   await page.goto('/sketches/new?starter=four-link-lateral-rod');
@@ -26,7 +27,8 @@ test('two fingers spreading on a view zoom it about the point between them, and 
     { x: mid.x + half, y: mid.y, id: 2 },
   ];
   await cdp.send('Input.dispatchTouchEvent', { type: 'touchStart', touchPoints: fingers(30) });
-  for (let half = 35; half <= 90; half += 5) await cdp.send('Input.dispatchTouchEvent', { type: 'touchMove', touchPoints: fingers(half) });
+  for (let half = 35; half <= 90; half += 5)
+    await cdp.send('Input.dispatchTouchEvent', { type: 'touchMove', touchPoints: fingers(half) });
   await cdp.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
 
   const after = await sideTransform(page);

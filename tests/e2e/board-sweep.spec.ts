@@ -32,13 +32,21 @@ function makePng(width: number, height: number): Buffer {
     }
     rows.push(row);
   }
-  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk('IHDR', ihdr), chunk('IDAT', deflateSync(Buffer.concat(rows))), chunk('IEND', Buffer.alloc(0))]);
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk('IHDR', ihdr),
+    chunk('IDAT', deflateSync(Buffer.concat(rows))),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
 }
 
 /** A fresh four-link starter sketch of the signed-in maker's, made through the API. */
 async function newFourLink(page: Page, name: string): Promise<number> {
   const document = { ...starters['four-link-lateral-rod']!.build(), name };
-  const res = await page.request.post('/api/sketches', { data: { name, document }, headers: { 'X-CSRF-Token': await csrf(page.request) } });
+  const res = await page.request.post('/api/sketches', {
+    data: { name, document },
+    headers: { 'X-CSRF-Token': await csrf(page.request) },
+  });
   expect(res.status()).toBe(201);
   return ((await res.json()) as { id: number }).id;
 }
@@ -79,7 +87,9 @@ test('dragging a pivot changes a travel plot and the readout; typing a coordinat
   await page.mouse.up();
 
   await expect($(page, 'readout-antisquat')).not.toHaveText(readoutBefore);
-  await expect.poll(async () => Buffer.compare(await $(page, 'plot-antisquat').screenshot(), plotBefore) !== 0).toBe(true);
+  await expect
+    .poll(async () => Buffer.compare(await $(page, 'plot-antisquat').screenshot(), plotBefore) !== 0)
+    .toBe(true);
   await snap(page, 'board-sweep-after-drag');
 
   // The travel slider moves the readout off ride height and the cursor with it.
@@ -124,20 +134,28 @@ test('targets shade the plots and missed ones are flagged', async ({ page }) => 
   await max.fill('90');
   await max.press('Enter');
   await expect(page.locator('[data-test="target-antiSquat-status"]')).toHaveAttribute('data-status', 'missed');
-  await expect.poll(async () => Buffer.compare(await $(page, 'plot-antisquat').screenshot(), plotBefore) !== 0).toBe(true);
+  await expect
+    .poll(async () => Buffer.compare(await $(page, 'plot-antisquat').screenshot(), plotBefore) !== 0)
+    .toBe(true);
   await $(page, 'tab-flags').click();
   await expect($(page, 'flag-target')).toContainText('Target missed: Anti-squat');
   await snap(page, 'board-sweep-targets');
 });
 
-test('a side photo uploads behind the side view, takes its scale from two clicked points, moves, and stays put when locked', async ({ page }) => {
+test('a side photo uploads behind the side view, takes its scale from two clicked points, moves, and stays put when locked', async ({
+  page,
+}) => {
   const id = await newFourLink(page, 'Sweep test: tracing');
   await openBoard(page, id);
   await $(page, 'tab-tracing').click();
 
   const width = 400;
   const height = 200;
-  await $(page, 'tracing-file').setInputFiles({ name: 'chassis-side.png', mimeType: 'image/png', buffer: makePng(width, height) });
+  await $(page, 'tracing-file').setInputFiles({
+    name: 'chassis-side.png',
+    mimeType: 'image/png',
+    buffer: makePng(width, height),
+  });
   const wheelbase = starters['four-link-lateral-rod']!.build().vehicle.wheelbase;
   const placed = initialPlacement('side', width, height, { wheelbase, track: 1600 });
   await expect($(page, 'tracing-scale')).toHaveText(`Scale: 1 photo pixel = ${placed.mmPerPx.toPrecision(3)} mm`);
@@ -168,7 +186,9 @@ test('a side photo uploads behind the side view, takes its scale from two clicke
 
   // Saved with the sketch: the document carries the tracing at its new scale.
   const saved = async () => {
-    const detail = (await (await page.request.get(`/api/sketches/${id}`)).json()) as { document: { tracing?: { side?: { mmPerPx: number; centre: PlanePoint } } } };
+    const detail = (await (await page.request.get(`/api/sketches/${id}`)).json()) as {
+      document: { tracing?: { side?: { mmPerPx: number; centre: PlanePoint } } };
+    };
     return detail.document.tracing?.side;
   };
   await expect.poll(async () => (await saved())?.mmPerPx ?? 0).toBeGreaterThan(placed.mmPerPx * 1.4);
@@ -181,7 +201,9 @@ test('a side photo uploads behind the side view, takes its scale from two clicke
   for (let i = 1; i <= 8; i++) await page.mouse.move(grip.x + 5 * i, grip.y);
   await page.mouse.up();
   const pxPerMmNow = (await sideTransform(page)).scale;
-  await expect.poll(async () => before.h - (await saved())!.centre.h, { timeout: 10_000 }).toBeGreaterThan((40 / pxPerMmNow) * 0.9);
+  await expect
+    .poll(async () => before.h - (await saved())!.centre.h, { timeout: 10_000 })
+    .toBeGreaterThan((40 / pxPerMmNow) * 0.9);
   const moved = (await saved())!.centre;
   expect(moved.h).toBeCloseTo(before.h - 40 / pxPerMmNow, 0);
 
@@ -195,12 +217,18 @@ test('a side photo uploads behind the side view, takes its scale from two clicke
   expect((await saved())!.centre).toEqual(moved);
 });
 
-test('a photo behind the rear view is its own: placed across the track, scaled from clicks in the rear view', async ({ page }) => {
+test('a photo behind the rear view is its own: placed across the track, scaled from clicks in the rear view', async ({
+  page,
+}) => {
   const id = await newFourLink(page, 'Sweep test: rear tracing');
   await openBoard(page, id);
   await $(page, 'tab-tracing').click();
   await $(page, 'tracing-view').getByRole('button', { name: 'rear view' }).click();
-  await $(page, 'tracing-file').setInputFiles({ name: 'axle-rear.png', mimeType: 'image/png', buffer: makePng(400, 200) });
+  await $(page, 'tracing-file').setInputFiles({
+    name: 'axle-rear.png',
+    mimeType: 'image/png',
+    buffer: makePng(400, 200),
+  });
   const track = starters['four-link-lateral-rod']!.build().vehicle.track;
   const placed = initialPlacement('rear', 400, 200, { wheelbase: 3000, track });
   await expect($(page, 'tracing-scale')).toHaveText(`Scale: 1 photo pixel = ${placed.mmPerPx.toPrecision(3)} mm`);
@@ -216,7 +244,12 @@ test('a photo behind the rear view is its own: placed across the track, scaled f
   await expect($(page, 'tracing-picking')).toHaveCount(0);
   await snap(page, 'board-sweep-tracing-rear');
 
-  const saved = async () => ((await (await page.request.get(`/api/sketches/${id}`)).json()) as { document: { tracing?: { side?: unknown; rear?: { mmPerPx: number } } } }).document.tracing;
+  const saved = async () =>
+    (
+      (await (await page.request.get(`/api/sketches/${id}`)).json()) as {
+        document: { tracing?: { side?: unknown; rear?: { mmPerPx: number } } };
+      }
+    ).document.tracing;
   const clickError = 2 / (800 * (await viewTransform(page, 'rear')).scale);
   await expect.poll(async () => (await saved())?.rear?.mmPerPx ?? 0).toBeGreaterThan(placed.mmPerPx * 1.4);
   const t = (await saved())!;
@@ -231,7 +264,11 @@ test('a file that is not a photo is refused with a message and changes nothing',
   const id = await newFourLink(page, 'Sweep test: bad photo');
   await openBoard(page, id);
   await $(page, 'tab-tracing').click();
-  await $(page, 'tracing-file').setInputFiles({ name: 'notes.txt', mimeType: 'text/plain', buffer: Buffer.from('not a photo') });
+  await $(page, 'tracing-file').setInputFiles({
+    name: 'notes.txt',
+    mimeType: 'text/plain',
+    buffer: Buffer.from('not a photo'),
+  });
   await expect($(page, 'tracing-error')).toContainText('“notes.txt” is not a PNG or JPEG photo.');
   await expect($(page, 'tracing-scale')).toHaveCount(0);
 });

@@ -4,7 +4,9 @@ import { ownerSharesStarter } from './api';
 import { starters } from '../../shared/kinematics';
 import { $, boardReady } from './board';
 
-test('the board menu opens the build sheet: caution, brackets and member lengths, and a print without the app around it', async ({ page }) => {
+test('the board menu opens the build sheet: caution, brackets and member lengths, and a print without the app around it', async ({
+  page,
+}) => {
   await page.goto('/sketches/new?starter=four-link-lateral-rod');
   await expect(page).toHaveURL(/\/sketches\/\d+$/);
   await boardReady(page);
@@ -19,7 +21,9 @@ test('the board menu opens the build sheet: caution, brackets and member lengths
   await expect($(page, 'sheet-pivot-UL.fl')).toContainText(ul.z.toFixed(1));
   const link = doc.members.find((m) => m.id === 'LLl')!;
   const [a, b] = [link.a, link.b].map((id) => doc.points.find((p) => p.id === id)!);
-  await expect($(page, 'sheet-member-LLl-length')).toHaveText(`${Math.hypot(a.x - b.x, a.y - b.y, a.z - b.z).toFixed(1)} mm`);
+  await expect($(page, 'sheet-member-LLl-length')).toHaveText(
+    `${Math.hypot(a.x - b.x, a.y - b.y, a.z - b.z).toFixed(1)} mm`,
+  );
   await expect($(page, 'sheet-geometry')).toContainText('Anti-squat at ride');
   await snap(page, 'build-sheet');
 
@@ -37,16 +41,19 @@ test('a build sheet for a sketch that is not there says so', async ({ page }) =>
   await expect($(page, 'sheet-error')).toContainText('The build sheet could not open: no such sketch.');
 });
 
-anonymous('a customer with the read-only link opens the build sheet from the board without signing in', async ({ page, browser, baseURL }) => {
-  const shareToken = await ownerSharesStarter(browser, baseURL);
+anonymous(
+  'a customer with the read-only link opens the build sheet from the board without signing in',
+  async ({ page, browser, baseURL }) => {
+    const shareToken = await ownerSharesStarter(browser, baseURL);
 
-  await page.goto(`/shared/${shareToken}`);
-  await boardReady(page);
-  await $(page, 'board-menu').click();
-  await $(page, 'open-build-sheet').click();
-  await expect(page).toHaveURL(new RegExp(`/shared/${shareToken}/sheet$`));
-  await expect($(page, 'sheet-caution')).toContainText('Geometry only.');
-  await expect($(page, 'sheet-pivot-UL.fl')).toBeVisible();
-  await page.getByLabel('Back to the board').click();
-  await expect(page).toHaveURL(new RegExp(`/shared/${shareToken}$`));
-});
+    await page.goto(`/shared/${shareToken}`);
+    await boardReady(page);
+    await $(page, 'board-menu').click();
+    await $(page, 'open-build-sheet').click();
+    await expect(page).toHaveURL(new RegExp(`/shared/${shareToken}/sheet$`));
+    await expect($(page, 'sheet-caution')).toContainText('Geometry only.');
+    await expect($(page, 'sheet-pivot-UL.fl')).toBeVisible();
+    await page.getByLabel('Back to the board').click();
+    await expect(page).toHaveURL(new RegExp(`/shared/${shareToken}$`));
+  },
+);

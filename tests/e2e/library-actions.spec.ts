@@ -21,7 +21,11 @@ test('import a sketch file, find it by search, delete it and undo the delete', a
   await expect(table.locator('tbody tr')).toHaveCount(1);
 
   await table.locator('tbody tr').first().getByRole('button', { name: 'Actions' }).click();
-  await page.getByRole('menuitem', { name: 'Delete' }).or(page.locator('.q-item', { hasText: 'Delete' })).first().click();
+  await page
+    .getByRole('menuitem', { name: 'Delete' })
+    .or(page.locator('.q-item', { hasText: 'Delete' }))
+    .first()
+    .click();
   await expect(page.getByText(`Deleted “${name}”`)).toBeVisible();
   await expect(page.getByTestId('empty-state')).toBeVisible();
   await snap(page, 'library-deleted-undo');
@@ -35,7 +39,14 @@ test('a file that is not a sketch is refused with the problems named, and nothin
   await page.getByTestId('import-input').setInputFiles({
     name: 'broken.json',
     mimeType: 'application/json',
-    buffer: Buffer.from(JSON.stringify({ format: 'arcwright.sketch', version: 1, name: 'broken', points: [{ id: 'A', body: 'frame', x: 'far' }] })),
+    buffer: Buffer.from(
+      JSON.stringify({
+        format: 'arcwright.sketch',
+        version: 1,
+        name: 'broken',
+        points: [{ id: 'A', body: 'frame', x: 'far' }],
+      }),
+    ),
   });
   const notice = page.locator('.q-notification').filter({ hasText: 'Could not import broken.json' });
   await expect(notice).toBeVisible();
@@ -44,6 +55,8 @@ test('a file that is not a sketch is refused with the problems named, and nothin
   await inputOf(page, 'search').fill('broken');
   await expect(page.getByTestId('empty-state')).toBeVisible();
 
-  await page.getByTestId('import-input').setInputFiles({ name: 'notes.json', mimeType: 'application/json', buffer: Buffer.from('{ not json') });
+  await page
+    .getByTestId('import-input')
+    .setInputFiles({ name: 'notes.json', mimeType: 'application/json', buffer: Buffer.from('{ not json') });
   await expect(page.locator('.q-notification').filter({ hasText: 'the file is not JSON' })).toBeVisible();
 });

@@ -17,15 +17,18 @@ test('a signed-in member sees the library with its table and can open the starte
   await snap(page, 'library-starter-dialog');
 });
 
-anonymous('a signed-out visitor is sent to sign in, and a wrong password is refused with a message', async ({ page }) => {
-  await page.goto('/library');
-  await expect(page).toHaveURL(/\/signin\?next=(%2F|\/)library/);
-  await inputOf(page, 'email').fill(DEMO.maker.email);
-  await inputOf(page, 'password').fill('not-the-password');
-  await page.getByTestId('submit').click();
-  await expect(page.getByTestId('error')).toBeVisible();
-  await snap(page, 'signin-refused');
-});
+anonymous(
+  'a signed-out visitor is sent to sign in, and a wrong password is refused with a message',
+  async ({ page }) => {
+    await page.goto('/library');
+    await expect(page).toHaveURL(/\/signin\?next=(%2F|\/)library/);
+    await inputOf(page, 'email').fill(DEMO.maker.email);
+    await inputOf(page, 'password').fill('not-the-password');
+    await page.getByTestId('submit').click();
+    await expect(page.getByTestId('error')).toBeVisible();
+    await snap(page, 'signin-refused');
+  },
+);
 
 anonymous('an admin sees the admin pages in the drawer and the user list', async ({ page }) => {
   await signIn(page, DEMO.admin);

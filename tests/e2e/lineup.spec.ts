@@ -8,12 +8,17 @@ import { $ } from './board';
 async function fourLink(page: Page, name: string, raise = 0): Promise<number> {
   const document = { ...starters['four-link-lateral-rod']!.build(), name };
   for (const p of document.points) if (p.id === 'UL.fl' || p.id === 'UL.fr') p.z += raise;
-  const res = await page.request.post('/api/sketches', { data: { name, document }, headers: { 'X-CSRF-Token': await csrf(page.request) } });
+  const res = await page.request.post('/api/sketches', {
+    data: { name, document },
+    headers: { 'X-CSRF-Token': await csrf(page.request) },
+  });
   expect(res.status()).toBe(201);
   return ((await res.json()) as { id: number }).id;
 }
 
-test('two variants ticked in the library line up: overlaid views and plots, and the brackets they share', async ({ page }) => {
+test('two variants ticked in the library line up: overlaid views and plots, and the brackets they share', async ({
+  page,
+}) => {
   const stock = await fourLink(page, 'Line-up test: stock mounts');
   const raised = await fourLink(page, 'Line-up test: raised upper mounts', 60);
   await page.reload();

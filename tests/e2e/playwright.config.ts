@@ -10,7 +10,8 @@ import { join, resolve } from 'node:path';
  * values are chosen once, in the runner, and reach the workers through the environment.
  */
 function freePort(): string {
-  const script = "const s=require('net').createServer().listen(0,'127.0.0.1',()=>{process.stdout.write(String(s.address().port));s.close()})";
+  const script =
+    "const s=require('net').createServer().listen(0,'127.0.0.1',()=>{process.stdout.write(String(s.address().port));s.close()})";
   return execFileSync(process.execPath, ['-e', script]).toString().trim();
 }
 

@@ -22,8 +22,13 @@ function rig(side: number, plan: number) {
   const len = Math.hypot(s.x, s.z);
   const u = { x: s.x / len, z: s.z / len };
   // Gearbox shaft direction (pointing rearward into the joint): the shaft direction turned by `side` in x–z, then given a plan-view slope.
-  const c = Math.cos(rad(side)), sn = Math.sin(rad(side));
-  const g = { x: u.x * c - u.z * sn, y: Math.tan(rad(plan)) * Math.hypot(u.x * c - u.z * sn, 0), z: u.x * sn + u.z * c };
+  const c = Math.cos(rad(side)),
+    sn = Math.sin(rad(side));
+  const g = {
+    x: u.x * c - u.z * sn,
+    y: Math.tan(rad(plan)) * Math.hypot(u.x * c - u.z * sn, 0),
+    z: u.x * sn + u.z * c,
+  };
   return translatingAxle(
     { frame: [-100, 550, 400], axle: [-100, -550, 400] },
     {
@@ -34,14 +39,18 @@ function rig(side: number, plan: number) {
         { id: 'DS.pa', body: 'axle', x: pin.x + 100 * u.x, y: 0, z: pin.z + 100 * u.z },
       ],
     },
-    { driveline: { output: 'DS.o', outputAxis: 'DS.oa', pinion: 'DS.p', pinionAxis: 'DS.pa' }, sweep: { droop: -10, bump: 10, step: 5, roll: 0, rollStep: 1 } },
+    {
+      driveline: { output: 'DS.o', outputAxis: 'DS.oa', pinion: 'DS.p', pinionAxis: 'DS.pa' },
+      sweep: { droop: -10, bump: 10, step: 5, roll: 0, rollStep: 1 },
+    },
   );
 }
 
 /** Max − min of ω2/ω1 over a turn, sampled every 0.5°. */
 function speedSwing(betaDeg: number): number {
   const b = rad(betaDeg);
-  let lo = Infinity, hi = -Infinity;
+  let lo = Infinity,
+    hi = -Infinity;
   for (let k = 0; k < 720; k++) {
     const phi = rad(k / 2);
     const w = Math.cos(b) / (1 - Math.sin(b) ** 2 * Math.cos(phi) ** 2);
@@ -52,7 +61,11 @@ function speedSwing(betaDeg: number): number {
 }
 
 describe('Cardan joint', () => {
-  const table: [number, number][] = [[3, 0.002743], [5, 0.007625], [10, 0.03062]];
+  const table: [number, number][] = [
+    [3, 0.002743],
+    [5, 0.007625],
+    [10, 0.03062],
+  ];
   for (const [beta, swing] of table) {
     it(`joint at ${beta}°: the solver reads ${beta}° and the speed swings by ${swing}`, () => {
       const r = runSweep(rig(beta, 0));
@@ -65,7 +78,7 @@ describe('Cardan joint', () => {
     });
   }
 
-  it('tanφ2 = tanφ1 / cosβ with the solver\'s 10° joint: φ1 = 30° gives φ2 = 30.38°', () => {
+  it("tanφ2 = tanφ1 / cosβ with the solver's 10° joint: φ1 = 30° gives φ2 = 30.38°", () => {
     const b = rad(runSweep(rig(10, 0)).ride.driveline!.outputAngle);
     const phi1 = rad(30);
     const phi2 = Math.atan(Math.tan(phi1) / Math.cos(b));
@@ -79,7 +92,9 @@ describe('Cardan joint', () => {
     // The exact 3-D angle between the two shafts, by mathjs (an independent library).
     const shaft = [p('DS.p').x - p('DS.o').x, p('DS.p').y - p('DS.o').y, p('DS.p').z - p('DS.o').z];
     const gearbox = [p('DS.o').x - p('DS.oa').x, p('DS.o').y - p('DS.oa').y, p('DS.o').z - p('DS.oa').z];
-    const exact = (Math.acos((dot(shaft, gearbox) as number) / ((norm(shaft) as number) * (norm(gearbox) as number))) * 180) / Math.PI;
+    const exact =
+      (Math.acos((dot(shaft, gearbox) as number) / ((norm(shaft) as number) * (norm(gearbox) as number))) * 180) /
+      Math.PI;
     expect(r.ride.driveline!.outputAngle).toBeCloseTo(exact, 9);
     // The √(T² + S²) rule is a small-angle approximation: a few hundredths of a degree off at 5°.
     expect(Math.abs(r.ride.driveline!.outputAngle - 5)).toBeLessThan(0.05);

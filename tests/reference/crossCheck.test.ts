@@ -53,7 +53,7 @@ describe('instant centre against mathjs intersect', () => {
     expect(c.v).toBeCloseTo(m[1], 9);
   });
 
-  it('example file: every heave row\'s instant centre is where mathjs crosses the left links', () => {
+  it("example file: every heave row's instant centre is where mathjs crosses the left links", () => {
     const d = exampleSketch();
     const sketch = parseSketch(d);
     const r = runSweep(d);

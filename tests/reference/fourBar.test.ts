@@ -27,7 +27,9 @@ function solverAngles(sketchDoc: SketchInput) {
   const result = runSweep(sketchDoc);
   return result.heave.map((row) => {
     const p = pointsAt(sketch, row.bodies);
-    const A = p['A.l'], B = p['B.l'], O4 = p['O4.l'];
+    const A = p['A.l'],
+      B = p['B.l'],
+      O4 = p['O4.l'];
     return {
       row,
       theta2: deg(Math.atan2(A.z - O2.z, A.x - O2.x)),
@@ -39,9 +41,39 @@ function solverAngles(sketchDoc: SketchInput) {
 
 describe('four-bar against Norton and Freudenstein', () => {
   const cases = [
-    { a: 400, b: 1200, c: 800, d: 1000, ride: 30, target: 40, branch: 'open' as const, expect3: 20.298, expect4: 57.325 },
-    { a: 400, b: 1200, c: 800, d: 1000, ride: 30, target: 40, branch: 'crossed' as const, expect3: -60.978, expect4: -98.005 },
-    { a: 200, b: 700, c: 900, d: 600, ride: 20, target: 30, branch: 'open' as const, expect3: 88.837, expect4: 117.286 },
+    {
+      a: 400,
+      b: 1200,
+      c: 800,
+      d: 1000,
+      ride: 30,
+      target: 40,
+      branch: 'open' as const,
+      expect3: 20.298,
+      expect4: 57.325,
+    },
+    {
+      a: 400,
+      b: 1200,
+      c: 800,
+      d: 1000,
+      ride: 30,
+      target: 40,
+      branch: 'crossed' as const,
+      expect3: -60.978,
+      expect4: -98.005,
+    },
+    {
+      a: 200,
+      b: 700,
+      c: 900,
+      d: 600,
+      ride: 20,
+      target: 30,
+      branch: 'open' as const,
+      expect3: 88.837,
+      expect4: 117.286,
+    },
   ];
 
   for (const k of cases) {
@@ -58,7 +90,9 @@ describe('four-bar against Norton and Freudenstein', () => {
         // The axle is the coupler: its pinion angle change is the coupler's rotation (−pitch).
         expect(Math.abs(r.row.pinionAngleChange! - (n.theta3 - ride.theta3))).toBeLessThan(ANGLE_TOL_DEG);
         // Freudenstein: K1·cosθ4 − K2·cosθ2 + K3 = cos(θ2 − θ4)
-        const K1 = k.d / k.a, K2 = k.d / k.c, K3 = (k.a ** 2 - k.b ** 2 + k.c ** 2 + k.d ** 2) / (2 * k.a * k.c);
+        const K1 = k.d / k.a,
+          K2 = k.d / k.c,
+          K3 = (k.a ** 2 - k.b ** 2 + k.c ** 2 + k.d ** 2) / (2 * k.a * k.c);
         const lhs = K1 * Math.cos(rad(r.theta4)) - K2 * Math.cos(rad(r.theta2)) + K3;
         expect(Math.abs(lhs - Math.cos(rad(r.theta2 - r.theta4)))).toBeLessThan(1e-8);
       }

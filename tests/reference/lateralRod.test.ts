@@ -17,8 +17,19 @@ const arc = (L: number, h0: number, z: number) => Math.sqrt(L * L - h0 * h0) - M
 
 describe('lateral rod arc', () => {
   it('level rod, L = 1000: z = 25/50/75/100 → 0.3125/1.2508/2.8165/5.0126 mm (references.md)', () => {
-    const r = runSweep(translatingAxle({ frame: [-100, 500, 400], axle: [-100, -500, 400] }, {}, { sweep: { droop: -100, bump: 100, step: 25, roll: 0, rollStep: 1 } }));
-    const table: [number, number][] = [[25, 0.3125], [50, 1.2508], [75, 2.8165], [100, 5.0126]];
+    const r = runSweep(
+      translatingAxle(
+        { frame: [-100, 500, 400], axle: [-100, -500, 400] },
+        {},
+        { sweep: { droop: -100, bump: 100, step: 25, roll: 0, rollStep: 1 } },
+      ),
+    );
+    const table: [number, number][] = [
+      [25, 0.3125],
+      [50, 1.2508],
+      [75, 2.8165],
+      [100, 5.0126],
+    ];
     for (const [z, dy] of table) {
       // The axle end swings towards the frame end (+y here) both ways from level.
       for (const t of [z, -z]) {
@@ -30,7 +41,13 @@ describe('lateral rod arc', () => {
 
   it('tilted rod follows the closed form through the travel', () => {
     const L = Math.hypot(1100, 120);
-    const r = runSweep(translatingAxle({ frame: [-100, 550, 480], axle: [-100, -550, 360] }, {}, { sweep: { droop: -150, bump: 150, step: 10, roll: 0, rollStep: 1 } }));
+    const r = runSweep(
+      translatingAxle(
+        { frame: [-100, 550, 480], axle: [-100, -550, 360] },
+        {},
+        { sweep: { droop: -150, bump: 150, step: 10, roll: 0, rollStep: 1 } },
+      ),
+    );
     for (const row of r.heave) {
       expect(Math.abs(row.lateralShift! - arc(L, -120, row.travel))).toBeLessThan(1e-3);
     }

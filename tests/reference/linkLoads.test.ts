@@ -18,7 +18,8 @@ import { doc } from './rigs';
 const LOAD_TOL_N = 1e-6;
 
 describe('link loads against hand statics (level three-link)', () => {
-  const zl = 250, zu = 600;
+  const zl = 250,
+    zu = 600;
   const sketch = doc(
     [
       { id: 'WC.l', body: 'axle', x: 0, y: 800, z: 400 },
@@ -38,7 +39,10 @@ describe('link loads against hand statics (level three-link)', () => {
       { id: 'UL', kind: 'link', group: 'upper', a: 'UL.f', b: 'UL.a' },
       { id: 'LR', kind: 'lateral-rod', a: 'LR.f', b: 'LR.a' },
     ],
-    { vehicle: { wheelbase: 3000, cgHeight: 600, track: 1600, tireRadius: 400 }, sweep: { droop: -50, bump: 50, step: 10, roll: 0, rollStep: 1, axleTorque: 4000 } },
+    {
+      vehicle: { wheelbase: 3000, cgHeight: 600, track: 1600, tireRadius: 400 },
+      sweep: { droop: -50, bump: 50, step: 10, roll: 0, rollStep: 1, axleTorque: 4000 },
+    },
   );
   const r = runSweep(sketch, { heaveOnly: true });
 
@@ -57,7 +61,8 @@ describe('link loads against hand statics (level three-link)', () => {
   });
 
   it('satisfies the fore-aft and pitch balance as written', () => {
-    const F = r.loads!.tractiveForce, f = r.ride.linkLoads!;
+    const F = r.loads!.tractiveForce,
+      f = r.ride.linkLoads!;
     expect(F + f.LLl + f.LLr + f.UL).toBeCloseTo(0, 6);
     expect(-400 * F + (f.LLl + f.LLr) * (zl - 400) + f.UL * (zu - 400)).toBeCloseTo(0, 3);
   });

@@ -29,7 +29,11 @@ export const RIG_LINK_MM = 20000;
  * parallelogram in side view, so no pitch; equal left and right, so no yaw) and a lateral
  * rod given by its two ends. At ride the axle points move straight up with the travel.
  */
-export function translatingAxle(rod: { frame: [number, number, number]; axle: [number, number, number] }, more: { points?: Pt[]; members?: Mb[] } = {}, extra: Partial<SketchInput> = {}): SketchInput {
+export function translatingAxle(
+  rod: { frame: [number, number, number]; axle: [number, number, number] },
+  more: { points?: Pt[]; members?: Mb[] } = {},
+  extra: Partial<SketchInput> = {},
+): SketchInput {
   const L = RIG_LINK_MM;
   const points: Pt[] = [
     { id: 'WC.l', body: 'axle', x: 0, y: 800, z: 400 },
@@ -65,8 +69,11 @@ export type Branch = 'open' | 'crossed';
 /** Norton's closed form (Design of Machinery, ch. 4), as written in references.md. */
 export function nortonAngles(a: number, b: number, c: number, d: number, theta2Deg: number, branch: Branch) {
   const t2 = rad(theta2Deg);
-  const K1 = d / a, K2 = d / c, K3 = (a * a - b * b + c * c + d * d) / (2 * a * c);
-  const K4 = d / b, K5 = (c * c - d * d - a * a - b * b) / (2 * a * b);
+  const K1 = d / a,
+    K2 = d / c,
+    K3 = (a * a - b * b + c * c + d * d) / (2 * a * c);
+  const K4 = d / b,
+    K5 = (c * c - d * d - a * a - b * b) / (2 * a * b);
   const A = Math.cos(t2) - K1 - K2 * Math.cos(t2) + K3;
   const B = -2 * Math.sin(t2);
   const C = K1 - (K2 + 1) * Math.cos(t2) + K3;
@@ -83,13 +90,24 @@ export function nortonAngles(a: number, b: number, c: number, d: number, theta2D
 export const O2 = { x: 1500, z: 300 };
 
 /** The four-bar as a sketch at crank angle θ2 (positions from Norton's closed form). */
-export function fourBarSketch(a: number, b: number, c: number, d: number, theta2: number, branch: Branch, travelTo: number): SketchInput {
+export function fourBarSketch(
+  a: number,
+  b: number,
+  c: number,
+  d: number,
+  theta2: number,
+  branch: Branch,
+  travelTo: number,
+): SketchInput {
   const { theta3 } = nortonAngles(a, b, c, d, theta2, branch);
   const A = { x: O2.x + a * Math.cos(rad(theta2)), z: O2.z + a * Math.sin(rad(theta2)) };
   const B = { x: A.x + b * Math.cos(rad(theta3)), z: A.z + b * Math.sin(rad(theta3)) };
   const O4 = { x: O2.x + d, z: O2.z };
   const pts: SketchInput['points'] = [];
-  for (const [side, y] of [['l', 400], ['r', -400]] as const) {
+  for (const [side, y] of [
+    ['l', 400],
+    ['r', -400],
+  ] as const) {
     pts.push(
       { id: `O2.${side}`, body: 'frame', x: O2.x, y, z: O2.z },
       { id: `O4.${side}`, body: 'frame', x: O4.x, y, z: O4.z },
@@ -103,6 +121,7 @@ export function fourBarSketch(a: number, b: number, c: number, d: number, theta2
     { id: `rocker.${s}`, kind: 'link' as const, a: `O4.${s}`, b: `B.${s}` },
   ]);
   const step = travelTo / 8;
-  return doc(pts, members, { sweep: { droop: -Math.abs(travelTo), bump: Math.abs(travelTo), step: Math.abs(step), roll: 0, rollStep: 1 } });
+  return doc(pts, members, {
+    sweep: { droop: -Math.abs(travelTo), bump: Math.abs(travelTo), step: Math.abs(step), roll: 0, rollStep: 1 },
+  });
 }
-

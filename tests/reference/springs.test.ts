@@ -30,7 +30,9 @@ describe('wheel rate from motion ratio', () => {
 
   it('motion ratio matches the slope of the spring length between rows', () => {
     const i = r.heave.findIndex((h) => h.travel === 0);
-    const slope = (r.heave[i + 1].members.SP.length - r.heave[i - 1].members.SP.length) / (r.heave[i + 1].travel - r.heave[i - 1].travel);
+    const slope =
+      (r.heave[i + 1].members.SP.length - r.heave[i - 1].members.SP.length) /
+      (r.heave[i + 1].travel - r.heave[i - 1].travel);
     // Central difference over ±5 mm: error of order (5 mm)² × curvature, well under 1e-3 here.
     expect(Math.abs(slope)).toBeCloseTo(r.ride.members.SP.motionRatio!, 3);
   });

@@ -26,7 +26,9 @@ const deg = (r: number) => (r * 180) / Math.PI;
 
 function rodrigues(p: P3, a: P3, u: P3, t: number): P3 {
   const v = { x: p.x - a.x, y: p.y - a.y, z: p.z - a.z };
-  const c = Math.cos(t), s = Math.sin(t), d = u.x * v.x + u.y * v.y + u.z * v.z;
+  const c = Math.cos(t),
+    s = Math.sin(t),
+    d = u.x * v.x + u.y * v.y + u.z * v.z;
   return {
     x: a.x + v.x * c + (u.y * v.z - u.z * v.y) * s + u.x * d * (1 - c),
     y: a.y + v.y * c + (u.z * v.x - u.x * v.z) * s + u.y * d * (1 - c),
@@ -59,19 +61,23 @@ describe('trailing arm, swept hinge, against Rodrigues rotation (mathjs)', () =>
   const sketch = parseSketch(doc);
   const r = runSweep(doc);
   const pt = (id: string) => sketch.points.find((p) => p.id === id)!;
-  const a = pt('HA.ol'), b = pt('HA.il'), wc = pt('WC.l'), shock = pt('SH.al');
+  const a = pt('HA.ol'),
+    b = pt('HA.il'),
+    wc = pt('WC.l'),
+    shock = pt('SH.al');
   const len = Math.hypot(b.x - a.x, b.y - a.y, b.z - a.z);
   const u = { x: (b.x - a.x) / len, y: (b.y - a.y) / len, z: (b.z - a.z) / len };
 
   it('turns the wheel centre, the other arm points and the spin axis by the rotation about the hinge axis', () => {
     for (const row of r.heave.filter((h) => h.travel % 25 === 0)) {
       // The arm angle that lifts the wheel centre by the travel (hand-written Rodrigues, bisection).
-      let lo = -0.6, hi = 0.6;
+      let lo = -0.6,
+        hi = 0.6;
       const lift = (t: number) => rodrigues(wc, a, u, t).z - wc.z - row.travel;
       const rising = lift(hi) > lift(lo);
       for (let i = 0; i < 80; i++) {
         const mid = (lo + hi) / 2;
-        if ((lift(mid) > 0) === rising) hi = mid;
+        if (lift(mid) > 0 === rising) hi = mid;
         else lo = mid;
       }
       const theta = (lo + hi) / 2;
@@ -81,7 +87,10 @@ describe('trailing arm, swept hinge, against Rodrigues rotation (mathjs)', () =>
         return { x: a.x + v[0], y: a.y + v[1], z: a.z + v[2] };
       };
       const placed = pointsAt(sketch, row.bodies);
-      for (const [id, p] of [['WC.l', wc], ['SH.al', shock]] as const) {
+      for (const [id, p] of [
+        ['WC.l', wc],
+        ['SH.al', shock],
+      ] as const) {
         const q = turn(p);
         expect(Math.hypot(placed[id].x - q.x, placed[id].y - q.y, placed[id].z - q.z)).toBeLessThan(POS_TOL_MM);
       }

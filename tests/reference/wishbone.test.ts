@@ -36,7 +36,11 @@ const xyz = (p: Vec3) => [p.x, p.y, p.z];
  * points farthest apart (an edge may lie in the plane or pierce it where another does).
  */
 function cutLine(p1: Vec3, p2: Vec3, j: Vec3, plane: number[], pick: (q: number[]) => YZ): [YZ, YZ] {
-  const hits = [[p1, p2], [p1, j], [p2, j]]
+  const hits = [
+    [p1, p2],
+    [p1, j],
+    [p2, j],
+  ]
     .map(([a, b]) => intersect(xyz(a), xyz(b), plane) as number[] | null)
     .filter((q): q is number[] => q !== null && q.every(Number.isFinite))
     .map(pick);
@@ -55,7 +59,8 @@ const cutByHand = (p1: Vec3, p2: Vec3, j: Vec3, X: number) => cutLine(p1, p2, j,
 /** The cut by the fore-aft plane y = Y: points (x, z). */
 const sideCutByHand = (p1: Vec3, p2: Vec3, j: Vec3, Y: number) => cutLine(p1, p2, j, [0, 1, 0, Y], (q) => [q[0], q[2]]);
 
-const close = (a: number, b: number, scale = 1) => expect(Math.abs(a - b)).toBeLessThan(Math.max(POS_TOL_MM, REL_TOL * scale));
+const close = (a: number, b: number, scale = 1) =>
+  expect(Math.abs(a - b)).toBeLessThan(Math.max(POS_TOL_MM, REL_TOL * scale));
 
 describe('equal, parallel wishbones (a parallelogram; plain geometry)', () => {
   const r = runSweep(wishboneSketch(parallelogram));
@@ -68,7 +73,7 @@ describe('equal, parallel wishbones (a parallelogram; plain geometry)', () => {
     }
   });
 
-  it('moves the wheel centre on the arms\' circle: track change √(L² − t²) − L', () => {
+  it("moves the wheel centre on the arms' circle: track change √(L² − t²) − L", () => {
     const L = 320; // front-view arm length, level at ride
     for (const h of r.heave) close(h.trackChange!, Math.sqrt(L * L - h.travel * h.travel) - L);
     expect(r.heave[0].trackChange!).toBeLessThan(-15);
@@ -104,7 +109,12 @@ function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
       if (!ic || Math.hypot(ic[0], ic[1]) > 1e6) {
         // The lines pass through parallel (the instant centre swaps sides): the patch line runs parallel to them.
         expect(row.frontViewInstantCenter).toBeNull();
-        const rc = intersect(cp, [cp[0] + up[1][0] - up[0][0], cp[1] + up[1][1] - up[0][1]], [0, 0], [0, 1]) as number[];
+        const rc = intersect(
+          cp,
+          [cp[0] + up[1][0] - up[0][0], cp[1] + up[1][1] - up[0][1]],
+          [0, 0],
+          [0, 1],
+        ) as number[];
         close(row.rollCenterHeight!, rc[1], 1000);
         continue;
       }
@@ -143,7 +153,9 @@ function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
 describe('instant centres and roll centre against mathjs', () => {
   crossChecks('starter', starters['double-wishbone']!.build());
   // An uneven sketch: every pivot moved differently, so nothing lines up by accident.
-  const skewed = structuredClone(starters['double-wishbone']!.build({ caster: 7, upperAxisAngle: 9, lowerAxisAngle: -4 })) as ReturnType<typeof wishboneSketch>;
+  const skewed = structuredClone(
+    starters['double-wishbone']!.build({ caster: 7, upperAxisAngle: 9, lowerAxisAngle: -4 }),
+  ) as ReturnType<typeof wishboneSketch>;
   skewed.points = skewed.points.map((q, i) => ({ ...q, x: q.x + ((i * 37) % 23) - 11, z: q.z + ((i * 53) % 17) - 8 }));
   crossChecks('skewed starter', skewed);
 });
@@ -188,8 +200,11 @@ describe('bump steer and the tie-rod line (common practice, no published source)
     expect(Math.abs(toeSlope({ ...shortLong, tieRodInner: [p[0], p[1] + 15] }))).toBeGreaterThan(1.5e-2);
   });
 
-  it('the classic construction (outer end on the ball joints\' line, inner end on the inner pivots\' line, through the instant centre) keeps bump steer near zero over ±50 mm', () => {
-    const bj: Line = { o: shortLong.lowerJoint, d: [shortLong.upperJoint[0] - shortLong.lowerJoint[0], shortLong.upperJoint[1] - shortLong.lowerJoint[1]] };
+  it("the classic construction (outer end on the ball joints' line, inner end on the inner pivots' line, through the instant centre) keeps bump steer near zero over ±50 mm", () => {
+    const bj: Line = {
+      o: shortLong.lowerJoint,
+      d: [shortLong.upperJoint[0] - shortLong.lowerJoint[0], shortLong.upperJoint[1] - shortLong.lowerJoint[1]],
+    };
     const t = (300 - bj.o[1]) / bj.d[1];
     const outer = along(bj, t);
     const rig0 = { ...shortLong, tieRodOuter: outer };
@@ -223,7 +238,8 @@ describe('a symmetric sketch gives mirror-image results (plain geometry)', () =>
 
   it('heave: the right knuckle mirrors the left (y, roll and yaw change sign)', () => {
     for (const h of r.heave) {
-      const a = h.bodies['knuckle-left']!, b = h.bodies['knuckle-right']!;
+      const a = h.bodies['knuckle-left']!,
+        b = h.bodies['knuckle-right']!;
       close(b.x, a.x);
       close(b.y, -a.y);
       close(b.z, a.z);

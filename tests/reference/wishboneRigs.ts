@@ -26,13 +26,20 @@ export interface WishboneRig {
 }
 
 /** A sketch of the rig, both sides, with a sweep of ±`travel` mm by `step` and ±`roll`°. */
-export function wishboneSketch(r: WishboneRig, sweep = { droop: -100, bump: 100, step: 5, roll: 5, rollStep: 1 }): SketchInput {
+export function wishboneSketch(
+  r: WishboneRig,
+  sweep = { droop: -100, bump: 100, step: 5, roll: 5, rollStep: 1 },
+): SketchInput {
   const ls = (r.lowerSpacing ?? 360) / 2;
   const us = (r.upperSpacing ?? 260) / 2;
   const points: Pt[] = [];
   const members: Mb[] = [];
-  for (const [s, sign, body] of [['l', 1, 'knuckle-left'], ['r', -1, 'knuckle-right']] as const) {
-    const at = (id: string, b: 'frame' | typeof body, x: number, yz: [Y, Z]) => points.push({ id: `${id}.${s}`, body: b, x, y: sign * yz[0], z: yz[1] });
+  for (const [s, sign, body] of [
+    ['l', 1, 'knuckle-left'],
+    ['r', -1, 'knuckle-right'],
+  ] as const) {
+    const at = (id: string, b: 'frame' | typeof body, x: number, yz: [Y, Z]) =>
+      points.push({ id: `${id}.${s}`, body: b, x, y: sign * yz[0], z: yz[1] });
     at('WC', body, 0, r.wheel);
     at('LWf', 'frame', ls, r.lowerInner);
     at('LWr', 'frame', -ls, r.lowerInner);

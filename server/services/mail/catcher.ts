@@ -38,7 +38,10 @@ export function startMailCatcher(): Promise<MailCatcher> {
           }),
         )
         // Answer the client only once the row is written, so a resolved sendMail means "in the outbox".
-        .then(() => callback(), (err: Error) => callback(err));
+        .then(
+          () => callback(),
+          (err: Error) => callback(err),
+        );
     },
   });
   return new Promise((resolve, reject) => {

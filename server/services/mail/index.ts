@@ -10,7 +10,10 @@ export interface MailSetup {
 }
 
 /** SMTP_URL when set; otherwise the in-process catcher that files every message in the outbox. */
-export async function setUpMail(config: ServerConfig, retry: Partial<Pick<MailerOptions, 'attempts' | 'retryDelayMs'>> = {}): Promise<MailSetup> {
+export async function setUpMail(
+  config: ServerConfig,
+  retry: Partial<Pick<MailerOptions, 'attempts' | 'retryDelayMs'>> = {},
+): Promise<MailSetup> {
   const options = { from: config.mailFrom, ...retry };
   if (config.smtpUrl) {
     const mailer = smtpMailer(config.smtpUrl, options);

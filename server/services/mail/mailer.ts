@@ -61,7 +61,12 @@ export class Mailer {
       try {
         const info = await this.transport.sendMail({ from: this.options.from, ...message });
         if (this.options.recordSent) {
-          await OutboxMessage.create({ ...message, from: this.options.from, messageId: info.messageId ?? null, via: 'smtp' });
+          await OutboxMessage.create({
+            ...message,
+            from: this.options.from,
+            messageId: info.messageId ?? null,
+            via: 'smtp',
+          });
         }
         return;
       } catch (err) {

@@ -28,7 +28,12 @@ function layout(paragraphs: string[], link: { label: string; url: string }, foot
 }
 
 /** The password-reset mail: a single-use link valid for `validMinutes`. */
-export function passwordResetMail(config: ServerConfig, to: { email: string; name: string }, token: string, validMinutes: number): MailMessage {
+export function passwordResetMail(
+  config: ServerConfig,
+  to: { email: string; name: string },
+  token: string,
+  validMinutes: number,
+): MailMessage {
   const url = `${config.publicUrl}/reset?token=${encodeURIComponent(token)}`;
   const footer = 'If you did not ask for this, ignore this mail: your password stays as it is.';
   return {
@@ -75,7 +80,10 @@ export function shareNoticeMail(
       `(${config.publicUrl})`,
     ].join('\n'),
     html: layout(
-      [`Hello,`, `${escapeHtml(args.from.name)} shared the ${PRODUCT} sketch <strong>${escapeHtml(args.sketchName)}</strong> with you.`],
+      [
+        `Hello,`,
+        `${escapeHtml(args.from.name)} shared the ${PRODUCT} sketch <strong>${escapeHtml(args.sketchName)}</strong> with you.`,
+      ],
       { label: 'Open the sketch', url: args.url },
       escapeHtml(footer),
     ),

@@ -11,7 +11,13 @@ import { vecAngle, vecDistance, vecSub, type Vec3 } from '../vec';
  * `output`/`outputAxis` (frame: the joint and a point ahead of it on the gearbox shaft),
  * `pinion`/`pinionAxis` (axle: the joint and a point behind it on the pinion shaft), mm.
  */
-export function drivelineReading(output: Vec3, outputAxis: Vec3, pinion: Vec3, pinionAxis: Vec3, rideLength: number): DrivelineReading {
+export function drivelineReading(
+  output: Vec3,
+  outputAxis: Vec3,
+  pinion: Vec3,
+  pinionAxis: Vec3,
+  rideLength: number,
+): DrivelineReading {
   const shaft = vecSub(pinion, output);
   const gearbox = vecSub(output, outputAxis); // pointing rearward into the joint
   const pinionShaft = vecSub(pinionAxis, pinion); // pointing rearward out of the joint

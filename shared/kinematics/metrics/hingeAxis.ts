@@ -38,7 +38,10 @@ export function axisInView(a: Vec3, b: Vec3, coord: 'x' | 'y', level: number): V
 }
 
 /** The line from `from` towards a view target, as a point and a direction; null when it has no direction. */
-export function lineToward(from: { u: number; v: number }, target: ViewTarget): { u: number; v: number; du: number; dv: number } | null {
+export function lineToward(
+  from: { u: number; v: number },
+  target: ViewTarget,
+): { u: number; v: number; du: number; dv: number } | null {
   const du = 'point' in target ? target.point.u - from.u : target.direction.u;
   const dv = 'point' in target ? target.point.v - from.v : target.direction.v;
   if (Math.hypot(du, dv) === 0) return null;

@@ -17,12 +17,21 @@ export const INSTANT_CENTER_FAR_LIMIT_MM = 1_000_000;
 
 /** Crossing of two lines in a plane, each through two points (u, v); null when parallel. */
 export function lineCrossing2d(
-  a1u: number, a1v: number, a2u: number, a2v: number,
-  b1u: number, b1v: number, b2u: number, b2v: number,
+  a1u: number,
+  a1v: number,
+  a2u: number,
+  a2v: number,
+  b1u: number,
+  b1v: number,
+  b2u: number,
+  b2v: number,
 ): { u: number; v: number } | null {
-  const du = a2u - a1u, dv = a2v - a1v;
-  const eu = b2u - b1u, ev = b2v - b1v;
-  const la = Math.hypot(du, dv), lb = Math.hypot(eu, ev);
+  const du = a2u - a1u,
+    dv = a2v - a1v;
+  const eu = b2u - b1u,
+    ev = b2v - b1v;
+  const la = Math.hypot(du, dv),
+    lb = Math.hypot(eu, ev);
   if (!(la > 0) || !(lb > 0)) return null;
   const cross = du * ev - dv * eu;
   if (Math.abs(cross) < PARALLEL_SINE_TOLERANCE * la * lb) return null;

@@ -20,7 +20,13 @@ export const KINGPIN_MIN_RISE_MM = 1e-6;
  * @param groundZ mm, ground height (0 at ride; in a heave row it has risen by the travel)
  * @param side which side the knuckle is on (inboard is −y on the left, +y on the right)
  */
-export function kingpinReading(lower: Vec3, upper: Vec3, wheelCentre: Vec3, groundZ: number, side: 'left' | 'right'): KingpinReading | null {
+export function kingpinReading(
+  lower: Vec3,
+  upper: Vec3,
+  wheelCentre: Vec3,
+  groundZ: number,
+  side: 'left' | 'right',
+): KingpinReading | null {
   const rise = upper.z - lower.z;
   if (!(rise > KINGPIN_MIN_RISE_MM)) return null;
   const s = side === 'left' ? 1 : -1;

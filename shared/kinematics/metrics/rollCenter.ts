@@ -25,7 +25,8 @@ type AxisPart = { point: Vec3 } | { direction: Vec3 };
 function planCrossing(l1: [Vec3, Vec3], l2: [Vec3, Vec3]): AxisPart | null {
   const c = lineCrossing2d(l1[0].x, l1[0].y, l1[1].x, l1[1].y, l2[0].x, l2[0].y, l2[1].x, l2[1].y);
   const zAt = (l: [Vec3, Vec3], x: number, y: number) => {
-    const dx = l[1].x - l[0].x, dy = l[1].y - l[0].y;
+    const dx = l[1].x - l[0].x,
+      dy = l[1].y - l[0].y;
     const t = Math.abs(dx) >= Math.abs(dy) ? (x - l[0].x) / dx : (y - l[0].y) / dy;
     return l[0].z + t * (l[1].z - l[0].z);
   };

@@ -66,9 +66,14 @@ export function viewLinesCrossing(l1: ViewLine, l2: ViewLine): ViewPoint | null 
  * one, else parallel to the two (parallel) wishbone lines, whose direction is `parallel`.
  * Returned as a point and a direction; null when neither is usable.
  */
-export function patchLine(cp: ViewPoint, ic: ViewPoint | null, parallel: ViewLine | null): { point: ViewPoint; direction: ViewPoint } | null {
+export function patchLine(
+  cp: ViewPoint,
+  ic: ViewPoint | null,
+  parallel: ViewLine | null,
+): { point: ViewPoint; direction: ViewPoint } | null {
   if (ic) {
-    const du = ic.u - cp.u, dv = ic.v - cp.v;
+    const du = ic.u - cp.u,
+      dv = ic.v - cp.v;
     const len = Math.hypot(du, dv);
     return len > 0 ? { point: cp, direction: { u: du / len, v: dv / len } } : null;
   }

@@ -70,7 +70,10 @@ export function solidAxleBase(p: Params): { points: PointIn[]; members: MemberIn
 
   const llA = { x: 30, z: wc - p.lowerDrop };
   const llF = linkFrameEnd(llA.x, llA.z, p.lowerLength, p.lowerAngle);
-  points.push(...pair('LL', 'frame', llF.x, p.lowerSpread / 2, llF.z), ...pair('LL', 'axle', llA.x, p.lowerSpread / 2, llA.z));
+  points.push(
+    ...pair('LL', 'frame', llF.x, p.lowerSpread / 2, llF.z),
+    ...pair('LL', 'axle', llA.x, p.lowerSpread / 2, llA.z),
+  );
   members.push(
     { id: 'LLl', kind: 'link', group: 'lower', a: 'LL.fl', b: 'LL.al' },
     { id: 'LLr', kind: 'link', group: 'lower', a: 'LL.fr', b: 'LL.ar' },
@@ -92,7 +95,10 @@ export function solidAxleBase(p: Params): { points: PointIn[]; members: MemberIn
 
   // Coil springs seated on the axle tube above the lower links.
   const spFz = Math.max(p.rideHeight + 120, wc + 15 + 200);
-  points.push(...pair('SP', 'frame', -60, p.lowerSpread / 2, spFz), ...pair('SP', 'axle', -60, p.lowerSpread / 2, wc + 15));
+  points.push(
+    ...pair('SP', 'frame', -60, p.lowerSpread / 2, spFz),
+    ...pair('SP', 'axle', -60, p.lowerSpread / 2, wc + 15),
+  );
   members.push(
     { id: 'SPl', kind: 'spring', a: 'SP.fl', b: 'SP.al', rate: p.springRate },
     { id: 'SPr', kind: 'spring', a: 'SP.fr', b: 'SP.ar', rate: p.springRate },
@@ -101,7 +107,9 @@ export function solidAxleBase(p: Params): { points: PointIn[]; members: MemberIn
   // A one-piece driveshaft from the gearbox output, both joints straight at ride.
   const out = { x: 1600, z: wc + 90 };
   const pin = { x: 190, z: wc + 15 };
-  const dx = out.x - pin.x, dz = out.z - pin.z, len = Math.hypot(dx, dz);
+  const dx = out.x - pin.x,
+    dz = out.z - pin.z,
+    len = Math.hypot(dx, dz);
   points.push(
     { id: 'DS.o', body: 'frame', x: out.x, y: 0, z: r1(out.z) },
     { id: 'DS.oa', body: 'frame', x: r1(out.x + (100 * dx) / len), y: 0, z: r1(out.z + (100 * dz) / len) },
@@ -112,7 +120,13 @@ export function solidAxleBase(p: Params): { points: PointIn[]; members: MemberIn
 }
 
 /** The document around points and members. */
-export function sketchShell(layout: SketchInput['layout'], name: string, p: Params, points: PointIn[], members: MemberIn[]): SketchInput {
+export function sketchShell(
+  layout: SketchInput['layout'],
+  name: string,
+  p: Params,
+  points: PointIn[],
+  members: MemberIn[],
+): SketchInput {
   return {
     format: 'arcwright.sketch',
     version: 1,

@@ -1,5 +1,14 @@
 import { parseSketch } from '../../schema/sketch';
-import { baseParams, lateralRod, linkFrameEnd, pair, paramsResolve, rodParams, sketchShell, solidAxleBase } from './common';
+import {
+  baseParams,
+  lateralRod,
+  linkFrameEnd,
+  pair,
+  paramsResolve,
+  rodParams,
+  sketchShell,
+  solidAxleBase,
+} from './common';
 import type { StarterParam, StarterSpec } from './types';
 
 const params: StarterParam[] = [
@@ -12,7 +21,8 @@ const params: StarterParam[] = [
 export const fourLinkLateralRod: StarterSpec = {
   layout: 'four-link-lateral-rod',
   label: 'Four-link with lateral rod',
-  description: 'Two lower and two upper links, parallel in plan view, locate the axle fore-aft and in pitch; a lateral rod locates it sideways. Binds in articulation.',
+  description:
+    'Two lower and two upper links, parallel in plan view, locate the axle fore-aft and in pitch; a lateral rod locates it sideways. Binds in articulation.',
   params,
   build(given) {
     const p = paramsResolve(params, given);
@@ -20,7 +30,12 @@ export const fourLinkLateralRod: StarterSpec = {
     const ulA = { x: 70, z: p.tireRadius + p.upperRise };
     const ulF = linkFrameEnd(ulA.x, ulA.z, p.upperLength, p.upperAngle);
     const rod = lateralRod(p);
-    const points = [...base.points, ...pair('UL', 'frame', ulF.x, p.upperSpread / 2, ulF.z), ...pair('UL', 'axle', ulA.x, p.upperSpread / 2, ulA.z), ...rod.points];
+    const points = [
+      ...base.points,
+      ...pair('UL', 'frame', ulF.x, p.upperSpread / 2, ulF.z),
+      ...pair('UL', 'axle', ulA.x, p.upperSpread / 2, ulA.z),
+      ...rod.points,
+    ];
     const members = [
       ...base.members,
       { id: 'ULl', kind: 'link' as const, group: 'upper' as const, a: 'UL.fl', b: 'UL.al' },

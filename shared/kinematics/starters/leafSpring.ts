@@ -23,13 +23,41 @@ const params: StarterParam[] = [
   { key: 'rideHeight', label: 'Frame rail height at ride', unit: 'mm', default: 620, min: 350, max: 1200 },
   { key: 'springSpread', label: 'Spring spacing', unit: 'mm', default: 1100, min: 600, max: 1600 },
   { key: 'springLength', label: 'Spring length (eye to eye)', unit: 'mm', default: 1400, min: 800, max: 2000 },
-  { key: 'frontShare', label: 'Seat position: front half share of the length', unit: '%', default: 47, min: 30, max: 70 },
+  {
+    key: 'frontShare',
+    label: 'Seat position: front half share of the length',
+    unit: '%',
+    default: 47,
+    min: 30,
+    max: 70,
+  },
   { key: 'springArc', label: 'Spring arc at ride (eyes above the seat)', unit: 'mm', default: 70, min: -60, max: 200 },
-  { key: 'seatHeight', label: 'Axle seat above wheel centre (negative: underslung)', unit: 'mm', default: 65, min: -150, max: 150 },
+  {
+    key: 'seatHeight',
+    label: 'Axle seat above wheel centre (negative: underslung)',
+    unit: 'mm',
+    default: 65,
+    min: -150,
+    max: 150,
+  },
   { key: 'shackleLength', label: 'Shackle length', unit: 'mm', default: 110, min: 50, max: 250 },
-  { key: 'shackleAngle', label: 'Shackle angle from vertical (eye rearward +)', unit: 'deg', default: 12, min: -30, max: 45 },
+  {
+    key: 'shackleAngle',
+    label: 'Shackle angle from vertical (eye rearward +)',
+    unit: 'deg',
+    default: 12,
+    min: -30,
+    max: 45,
+  },
   { key: 'springRate', label: 'Spring rate at the seat (each spring)', unit: 'N/mm', default: 150, min: 20, max: 600 },
-  { key: 'shockStagger', label: 'Shock stagger (left ahead, right behind the axle)', unit: 'mm', default: 120, min: 0, max: 300 },
+  {
+    key: 'shockStagger',
+    label: 'Shock stagger (left ahead, right behind the axle)',
+    unit: 'mm',
+    default: 120,
+    min: 0,
+    max: 300,
+  },
 ];
 
 /** Shock stroke left either side of the default sweep range, mm (wider than the coil starters': the axle pitches as the spring bends). */
@@ -58,7 +86,13 @@ function side(p: Params, s: 'l' | 'r', y: number, shockX: number): { points: Poi
   const shAz = p.tireRadius - 140;
   const shFz = Math.max(p.rideHeight + 280, shAz + 380);
   const shRide = Math.hypot(20, shFz - shAz);
-  const pt = (id: string, body: PointIn['body'], q: { x: number; z: number }, yy = y): PointIn => ({ id: `${id}.${s}`, body, x: r1(q.x), y: r1(yy), z: r1(q.z) });
+  const pt = (id: string, body: PointIn['body'], q: { x: number; z: number }, yy = y): PointIn => ({
+    id: `${id}.${s}`,
+    body,
+    x: r1(q.x),
+    y: r1(yy),
+    z: r1(q.z),
+  });
   const shockY = y > 0 ? y + 90 : y - 90;
   return {
     points: [
@@ -102,7 +136,9 @@ export const leafSpring: StarterSpec = {
     // A one-piece driveshaft from the gearbox output, both joints straight at ride (as the link starters).
     const out = { x: 1600, z: wc + 90 };
     const pin = { x: 190, z: wc + 15 };
-    const dx = out.x - pin.x, dz = out.z - pin.z, len = Math.hypot(dx, dz);
+    const dx = out.x - pin.x,
+      dz = out.z - pin.z,
+      len = Math.hypot(dx, dz);
     const doc: SketchInput = {
       format: 'arcwright.sketch',
       version: 1,

@@ -1,10 +1,26 @@
 import { parseSketch } from '../../schema/sketch';
-import { baseParams, lateralRod, linkFrameEnd, paramsResolve, r1, rodParams, sketchShell, solidAxleBase } from './common';
+import {
+  baseParams,
+  lateralRod,
+  linkFrameEnd,
+  paramsResolve,
+  r1,
+  rodParams,
+  sketchShell,
+  solidAxleBase,
+} from './common';
 import type { StarterParam, StarterSpec } from './types';
 
 const params: StarterParam[] = [
   ...baseParams.map((p) => (p.key === 'upperLength' ? { ...p, default: 750 } : p)),
-  { key: 'upperOffset', label: 'Upper link offset from centre (left +)', unit: 'mm', default: 150, min: -400, max: 400 },
+  {
+    key: 'upperOffset',
+    label: 'Upper link offset from centre (left +)',
+    unit: 'mm',
+    default: 150,
+    min: -400,
+    max: 400,
+  },
   ...rodParams,
 ];
 
@@ -12,7 +28,8 @@ const params: StarterParam[] = [
 export const threeLinkLateralRod: StarterSpec = {
   layout: 'three-link-lateral-rod',
   label: 'Three-link with lateral rod',
-  description: 'Two lower links and one upper link near the centre locate the axle fore-aft and in pitch; a lateral rod locates it sideways. Articulates without bind.',
+  description:
+    'Two lower links and one upper link near the centre locate the axle fore-aft and in pitch; a lateral rod locates it sideways. Articulates without bind.',
   params,
   build(given) {
     const p = paramsResolve(params, given);
@@ -26,7 +43,11 @@ export const threeLinkLateralRod: StarterSpec = {
       { id: 'UL.a', body: 'axle' as const, x: ulA.x, y: r1(p.upperOffset), z: r1(ulA.z) },
       ...rod.points,
     ];
-    const members = [...base.members, { id: 'UL', kind: 'link' as const, group: 'upper' as const, a: 'UL.f', b: 'UL.a' }, ...rod.members];
+    const members = [
+      ...base.members,
+      { id: 'UL', kind: 'link' as const, group: 'upper' as const, a: 'UL.f', b: 'UL.a' },
+      ...rod.members,
+    ];
     return parseSketch(sketchShell('three-link-lateral-rod', 'New three-link with lateral rod', p, points, members));
   },
 };

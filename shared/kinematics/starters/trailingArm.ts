@@ -15,16 +15,58 @@ const params: StarterParam[] = [
   { key: 'wheelbase', label: 'Wheelbase', unit: 'mm', default: 3100, min: 2000, max: 5000 },
   { key: 'cgHeight', label: 'Centre of gravity height', unit: 'mm', default: 650, min: 300, max: 1500 },
   { key: 'rideHeight', label: 'Frame rail height at ride', unit: 'mm', default: 560, min: 350, max: 1200 },
-  { key: 'armLength', label: 'Arm length (wheel centre to hinge axis, side view)', unit: 'mm', default: 480, min: 250, max: 900 },
-  { key: 'hingeRise', label: 'Hinge axis above wheel centre (side view)', unit: 'mm', default: 40, min: -150, max: 200 },
-  { key: 'sweepAngle', label: 'Hinge sweep angle (plan view, inboard end rearward)', unit: 'deg', default: 18, min: 0, max: 35 },
+  {
+    key: 'armLength',
+    label: 'Arm length (wheel centre to hinge axis, side view)',
+    unit: 'mm',
+    default: 480,
+    min: 250,
+    max: 900,
+  },
+  {
+    key: 'hingeRise',
+    label: 'Hinge axis above wheel centre (side view)',
+    unit: 'mm',
+    default: 40,
+    min: -150,
+    max: 200,
+  },
+  {
+    key: 'sweepAngle',
+    label: 'Hinge sweep angle (plan view, inboard end rearward)',
+    unit: 'deg',
+    default: 18,
+    min: 0,
+    max: 35,
+  },
   { key: 'axisTilt', label: 'Hinge tilt (rear view, inboard end up)', unit: 'deg', default: 0, min: -10, max: 10 },
   { key: 'hingeInset', label: 'Outer pivot inboard of the wheel centre', unit: 'mm', default: 200, min: 100, max: 500 },
   { key: 'hingeSpan', label: 'Pivot spacing (across the car)', unit: 'mm', default: 300, min: 120, max: 600 },
-  { key: 'springPosition', label: 'Spring seat, share of the arm from the wheel', unit: '%', default: 30, min: 0, max: 70 },
+  {
+    key: 'springPosition',
+    label: 'Spring seat, share of the arm from the wheel',
+    unit: '%',
+    default: 30,
+    min: 0,
+    max: 70,
+  },
   { key: 'springRate', label: 'Spring rate', unit: 'N/mm', default: 60, min: 5, max: 300 },
-  { key: 'driveInset', label: 'Half-shaft inner joint from the centreline', unit: 'mm', default: 140, min: 60, max: 400 },
-  { key: 'driveRise', label: 'Half-shaft inner joint above wheel centre', unit: 'mm', default: 10, min: -150, max: 200 },
+  {
+    key: 'driveInset',
+    label: 'Half-shaft inner joint from the centreline',
+    unit: 'mm',
+    default: 140,
+    min: 60,
+    max: 400,
+  },
+  {
+    key: 'driveRise',
+    label: 'Half-shaft inner joint above wheel centre',
+    unit: 'mm',
+    default: 10,
+    min: -150,
+    max: 200,
+  },
 ];
 
 /** Shock stroke left either side of the default sweep range, mm (as the solid-axle starters). */
@@ -37,7 +79,8 @@ type P3 = { x: number; y: number; z: number };
 /** Rodrigues' rotation of `p` by `angle` (rad) about the unit axis `u` through `a`. */
 function rotateAbout(p: P3, a: P3, u: P3, angle: number): P3 {
   const v = { x: p.x - a.x, y: p.y - a.y, z: p.z - a.z };
-  const c = Math.cos(angle), s = Math.sin(angle);
+  const c = Math.cos(angle),
+    s = Math.sin(angle);
   const dot = u.x * v.x + u.y * v.y + u.z * v.z;
   const cr = { x: u.y * v.z - u.z * v.y, y: u.z * v.x - u.x * v.z, z: u.x * v.y - u.y * v.x };
   return {
@@ -50,11 +93,12 @@ function rotateAbout(p: P3, a: P3, u: P3, angle: number): P3 {
 /** The arm angle (rad) that lifts `wheel` by `travel` (mm), by bisection on the arm's swing. */
 function angleFor(wheel: P3, a: P3, u: P3, travel: number): number {
   const lift = (t: number) => rotateAbout(wheel, a, u, t).z - wheel.z - travel;
-  let lo = -Math.PI / 2, hi = Math.PI / 2;
+  let lo = -Math.PI / 2,
+    hi = Math.PI / 2;
   const rising = lift(hi) > lift(lo);
   for (let i = 0; i < 60; i++) {
     const mid = (lo + hi) / 2;
-    if ((lift(mid) > 0) === rising) hi = mid;
+    if (lift(mid) > 0 === rising) hi = mid;
     else lo = mid;
   }
   return (lo + hi) / 2;
@@ -66,10 +110,12 @@ function leftSide(p: Params): { points: PointIn[]; members: MemberIn[] } {
   const wc = { x: 0, y: half, z: p.tireRadius };
   // The axis crosses the wheel's fore-aft plane at the side-view instant centre.
   const ic = { x: p.armLength, y: half, z: p.tireRadius + p.hingeRise };
-  const tanSweep = Math.tan(degToRad(p.sweepAngle)), tanTilt = Math.tan(degToRad(p.axisTilt));
+  const tanSweep = Math.tan(degToRad(p.sweepAngle)),
+    tanTilt = Math.tan(degToRad(p.axisTilt));
   // Moving inboard by d along y: rearward by d·tan(sweep), up by d·tan(tilt).
   const along = (d: number) => ({ x: ic.x - d * tanSweep, y: ic.y - d, z: ic.z + d * tanTilt });
-  const outer = along(p.hingeInset), inner = along(p.hingeInset + p.hingeSpan);
+  const outer = along(p.hingeInset),
+    inner = along(p.hingeInset + p.hingeSpan);
   const len = Math.hypot(inner.x - outer.x, inner.y - outer.y, inner.z - outer.z);
   const u = { x: (inner.x - outer.x) / len, y: (inner.y - outer.y) / len, z: (inner.z - outer.z) / len };
 

@@ -4,7 +4,14 @@ import type { StarterParam, StarterSpec } from './types';
 
 const params: StarterParam[] = [
   ...baseParams.map((p) => (p.key === 'upperLength' ? { ...p, default: 650 } : p)),
-  { key: 'upperFrameSpread', label: 'Upper links, spacing at the frame', unit: 'mm', default: 900, min: 400, max: 1400 },
+  {
+    key: 'upperFrameSpread',
+    label: 'Upper links, spacing at the frame',
+    unit: 'mm',
+    default: 900,
+    min: 400,
+    max: 1400,
+  },
   { key: 'upperAxleSpread', label: 'Upper links, spacing at the axle', unit: 'mm', default: 300, min: 100, max: 900 },
 ];
 
@@ -12,7 +19,8 @@ const params: StarterParam[] = [
 export const triangulatedFourLink: StarterSpec = {
   layout: 'triangulated-four-link',
   label: 'Triangulated four-link',
-  description: 'Two parallel lower links and two upper links angled in plan view towards the axle centre; the angled uppers locate the axle sideways, so there is no lateral rod and no bind.',
+  description:
+    'Two parallel lower links and two upper links angled in plan view towards the axle centre; the angled uppers locate the axle sideways, so there is no lateral rod and no bind.',
   params,
   build(given) {
     const p = paramsResolve(params, given);

@@ -56,7 +56,11 @@ export function compareSketches(from: Sketch, to: Sketch): SketchComparison {
     removedPivots: [...before.keys()].filter((id) => !after.has(id)),
     addedMembers: [...membersAfter.keys()].filter((id) => !membersBefore.has(id)),
     removedMembers: [...membersBefore.keys()].filter((id) => !membersAfter.has(id)),
-    changedMembers: [...membersBefore.entries()].filter(([id, m]) => membersAfter.has(id) && !deepEqual(m, membersAfter.get(id))).map(([id]) => id),
-    changedSettings: [...settings].filter((k) => !deepEqual((from as Record<string, unknown>)[k], (to as Record<string, unknown>)[k])),
+    changedMembers: [...membersBefore.entries()]
+      .filter(([id, m]) => membersAfter.has(id) && !deepEqual(m, membersAfter.get(id)))
+      .map(([id]) => id),
+    changedSettings: [...settings].filter(
+      (k) => !deepEqual((from as Record<string, unknown>)[k], (to as Record<string, unknown>)[k]),
+    ),
   };
 }

@@ -40,7 +40,8 @@ function memberIndex(doc: Sketch, id: string): number {
 }
 
 function checkNewId(taken: Iterable<string>, id: string, what: 'pivot' | 'member'): void {
-  if (id.trim() !== id || id.length === 0) throw new BoardEditError(`A ${what} name must not be empty or start or end with a space.`);
+  if (id.trim() !== id || id.length === 0)
+    throw new BoardEditError(`A ${what} name must not be empty or start or end with a space.`);
   if (id.length > MAX_ID_LENGTH) throw new BoardEditError(`A ${what} name has at most ${MAX_ID_LENGTH} characters.`);
   for (const t of taken) if (t === id) throw new BoardEditError(`There is already a ${what} called '${id}'.`);
 }
@@ -60,12 +61,17 @@ export function memberLength(doc: Sketch, m: Member): Mm | null {
  * Moves pivots by the given deltas (mm). With `pairs`, each moved pivot's partner that is not
  * itself being moved follows with the mirror-image delta (y negated).
  */
-export function movePoints(doc: Sketch, deltas: ReadonlyMap<string, Delta>, pairs?: ReadonlyMap<string, string>): Sketch {
+export function movePoints(
+  doc: Sketch,
+  deltas: ReadonlyMap<string, Delta>,
+  pairs?: ReadonlyMap<string, string>,
+): Sketch {
   const all = new Map(deltas);
   if (pairs) {
     for (const [id, d] of deltas) {
       const partner = pairs.get(id);
-      if (partner && !deltas.has(partner)) all.set(partner, { x: d.x, y: d.y === undefined ? undefined : -d.y, z: d.z });
+      if (partner && !deltas.has(partner))
+        all.set(partner, { x: d.x, y: d.y === undefined ? undefined : -d.y, z: d.z });
     }
   }
   for (const id of all.keys()) pointIndex(doc, id);
@@ -78,7 +84,13 @@ export function movePoints(doc: Sketch, deltas: ReadonlyMap<string, Delta>, pair
 }
 
 /** Sets one coordinate of a pivot (mm); with `pairs` the partner moves by the mirror-image delta. */
-export function setPointCoordinate(doc: Sketch, id: string, axis: Axis, value: Mm, pairs?: ReadonlyMap<string, string>): Sketch {
+export function setPointCoordinate(
+  doc: Sketch,
+  id: string,
+  axis: Axis,
+  value: Mm,
+  pairs?: ReadonlyMap<string, string>,
+): Sketch {
   const p = doc.points[pointIndex(doc, id)];
   const delta: Delta = { [axis]: value - p[axis] };
   return movePoints(doc, new Map([[id, delta]]), pairs);
@@ -88,15 +100,24 @@ export function setPointCoordinate(doc: Sketch, id: string, axis: Axis, value: M
 export function renamePoint(doc: Sketch, from: string, to: string): Sketch {
   const i = pointIndex(doc, from);
   if (from === to) return doc;
-  checkNewId(doc.points.map((p) => p.id), to, 'pivot');
+  checkNewId(
+    doc.points.map((p) => p.id),
+    to,
+    'pivot',
+  );
   const ref = (v: string) => (v === from ? to : v);
   const points = doc.points.slice();
   points[i] = { ...points[i], id: to };
   const members = doc.members.map((m) => (m.a === from || m.b === from ? { ...m, a: ref(m.a), b: ref(m.b) } : m));
-  const wheels = doc.wheels.left === from || doc.wheels.right === from ? { ...doc.wheels, left: ref(doc.wheels.left), right: ref(doc.wheels.right) } : doc.wheels;
+  const wheels =
+    doc.wheels.left === from || doc.wheels.right === from
+      ? { ...doc.wheels, left: ref(doc.wheels.left), right: ref(doc.wheels.right) }
+      : doc.wheels;
   let driveline = doc.driveline;
   if (driveline && Object.values(driveline).includes(from)) {
-    driveline = Object.fromEntries(Object.entries(driveline).map(([k, v]) => [k, typeof v === 'string' ? ref(v) : v])) as typeof driveline;
+    driveline = Object.fromEntries(
+      Object.entries(driveline).map(([k, v]) => [k, typeof v === 'string' ? ref(v) : v]),
+    ) as typeof driveline;
   }
   return { ...doc, points, members, wheels, ...(driveline ? { driveline } : {}) };
 }
@@ -105,7 +126,11 @@ export function renamePoint(doc: Sketch, from: string, to: string): Sketch {
 export function renameMember(doc: Sketch, from: string, to: string): Sketch {
   const i = memberIndex(doc, from);
   if (from === to) return doc;
-  checkNewId(doc.members.map((m) => m.id), to, 'member');
+  checkNewId(
+    doc.members.map((m) => m.id),
+    to,
+    'member',
+  );
   const members = doc.members.slice();
   members[i] = { ...members[i], id: to };
   return { ...doc, members };
@@ -122,7 +147,11 @@ export function pointReferences(doc: Sketch, id: string): string[] {
 
 /** Adds a pivot. */
 export function addPoint(doc: Sketch, point: Point): Sketch {
-  checkNewId(doc.points.map((p) => p.id), point.id, 'pivot');
+  checkNewId(
+    doc.points.map((p) => p.id),
+    point.id,
+    'pivot',
+  );
   return { ...doc, points: [...doc.points, point] };
 }
 
@@ -138,7 +167,11 @@ export function deletePoint(doc: Sketch, id: string): Sketch {
 export function addMember(doc: Sketch, member: Member, newPoints: readonly Point[] = []): Sketch {
   let out = doc;
   for (const p of newPoints) out = addPoint(out, p);
-  checkNewId(out.members.map((m) => m.id), member.id, 'member');
+  checkNewId(
+    out.members.map((m) => m.id),
+    member.id,
+    'member',
+  );
   for (const end of [member.a, member.b]) pointIndex(out, end);
   if (member.a === member.b) throw new BoardEditError('A member joins two different pivots.');
   return { ...out, members: [...out.members, member] };
@@ -177,7 +210,8 @@ export function setMemberKind(doc: Sketch, id: string, kind: MemberKind, hingeBo
   if (kind === 'hinge') {
     const a = doc.points[pointIndex(doc, old.a)];
     const b = doc.points[pointIndex(doc, old.b)];
-    if (a.body !== 'frame' || b.body !== 'frame') throw new BoardEditError('A hinge axis runs between two frame pivots.');
+    if (a.body !== 'frame' || b.body !== 'frame')
+      throw new BoardEditError('A hinge axis runs between two frame pivots.');
     const body = hingeBody ?? (a.y + b.y >= 0 ? 'arm-left' : 'arm-right');
     kept.body = body;
   }
@@ -202,7 +236,12 @@ export function setMemberEnds(doc: Sketch, id: string, a: string, b: string): Sk
 /** Member fields a user sets in the member table. `undefined` removes the field. */
 export type MemberField = 'minLength' | 'maxLength' | 'rate' | 'group';
 
-export function setMemberField(doc: Sketch, id: string, field: MemberField, value: number | string | undefined): Sketch {
+export function setMemberField(
+  doc: Sketch,
+  id: string,
+  field: MemberField,
+  value: number | string | undefined,
+): Sketch {
   const i = memberIndex(doc, id);
   const m = doc.members[i] as Record<string, unknown>;
   if (m[field] === value) return doc;

@@ -111,7 +111,12 @@ export class History {
    * Records the step from `before` to `after`. Returns false when nothing changed.
    * With a `coalesce` key equal to the top entry's and within `windowMs`, the step joins it.
    */
-  record(label: string, before: unknown, after: unknown, opts: { coalesce?: string; windowMs?: number; now?: number } = {}): boolean {
+  record(
+    label: string,
+    before: unknown,
+    after: unknown,
+    opts: { coalesce?: string; windowMs?: number; now?: number } = {},
+  ): boolean {
     const now = opts.now ?? Date.now();
     const top = this.undoStack.at(-1);
     if (opts.coalesce && top?.coalesce === opts.coalesce && now - top.at <= (opts.windowMs ?? 1000)) {

@@ -34,7 +34,11 @@ export function parseLength(text: string, unit: LengthUnit, rules: LengthRules =
   const min = rules.min ?? -MAX_COORDINATE_MM;
   const max = rules.max ?? MAX_COORDINATE_MM;
   const show = (v: Mm) => `${+mmToUnit(v, unit).toFixed(unit === 'in' ? 2 : 0)} ${unit}`;
-  if (rules.exclusiveMin ? !(mm > min) : mm < min) return { ok: false, error: rules.exclusiveMin ? `Must be more than ${show(min)}.` : `Must be at least ${show(min)}.` };
+  if (rules.exclusiveMin ? !(mm > min) : mm < min)
+    return {
+      ok: false,
+      error: rules.exclusiveMin ? `Must be more than ${show(min)}.` : `Must be at least ${show(min)}.`,
+    };
   if (mm > max) return { ok: false, error: `Must be at most ${show(max)}.` };
   return { ok: true, mm };
 }

@@ -9,12 +9,19 @@ export const LINEUP_MAX = 4;
 /** The ids in a line-up address (`?ids=3,7,12`), or why they cannot be lined up. */
 export function parseLineupIds(raw: unknown): { ok: true; ids: number[] } | { ok: false; error: string } {
   const text = Array.isArray(raw) ? raw.join(',') : String(raw ?? '');
-  const parts = text.split(',').map((s) => s.trim()).filter(Boolean);
+  const parts = text
+    .split(',')
+    .map((s) => s.trim())
+    .filter(Boolean);
   const ids = parts.map(Number);
-  if (ids.some((n) => !Number.isInteger(n) || n <= 0)) return { ok: false, error: 'This line-up address names something that is not a sketch.' };
+  if (ids.some((n) => !Number.isInteger(n) || n <= 0))
+    return { ok: false, error: 'This line-up address names something that is not a sketch.' };
   const unique = [...new Set(ids)];
   if (unique.length < LINEUP_MIN || unique.length > LINEUP_MAX) {
-    return { ok: false, error: `A line-up compares ${LINEUP_MIN} to ${LINEUP_MAX} sketches; pick them in the library.` };
+    return {
+      ok: false,
+      error: `A line-up compares ${LINEUP_MIN} to ${LINEUP_MAX} sketches; pick them in the library.`,
+    };
   }
   return { ok: true, ids: unique };
 }

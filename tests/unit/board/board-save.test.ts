@@ -6,7 +6,8 @@ import { AUTOSAVE_DELAY_MS, useBoardStore } from '../../../src/stores/board';
 import { detailOf, fourLink } from './fixture';
 
 const calls: { method: string; url: string; body?: unknown }[] = [];
-let putAnswer: (body: { document: unknown; version: number }) => unknown = (b) => detailOf(b.document as never, { version: b.version + 1 });
+let putAnswer: (body: { document: unknown; version: number }) => unknown = (b) =>
+  detailOf(b.document as never, { version: b.version + 1 });
 
 vi.mock('../../../src/api/http', async (importOriginal) => {
   const real = await importOriginal<typeof import('../../../src/api/http')>();
@@ -15,10 +16,25 @@ vi.mock('../../../src/api/http', async (importOriginal) => {
     api: {
       get: vi.fn(async (url: string) => {
         calls.push({ method: 'GET', url });
-        if (url.endsWith('/revisions')) return { items: [{ rev: 1, version: 1, name: 'r1', createdAt: 'x' }, { rev: 2, version: 2, name: 'r2', createdAt: 'y' }] };
+        if (url.endsWith('/revisions'))
+          return {
+            items: [
+              { rev: 1, version: 1, name: 'r1', createdAt: 'x' },
+              { rev: 2, version: 2, name: 'r2', createdAt: 'y' },
+            ],
+          };
         if (url.includes('/revisions/1')) {
           const d = fourLink();
-          return { rev: 1, version: 1, name: 'r1', createdAt: 'x', document: { ...d, points: d.points.map((p) => (p.id === 'UL.fl' ? { ...p, x: p.x - 40, z: p.z + 30 } : p)) } };
+          return {
+            rev: 1,
+            version: 1,
+            name: 'r1',
+            createdAt: 'x',
+            document: {
+              ...d,
+              points: d.points.map((p) => (p.id === 'UL.fl' ? { ...p, x: p.x - 40, z: p.z + 30 } : p)),
+            },
+          };
         }
         return detailOf({ ...fourLink(), name: 'Changed elsewhere' }, { version: 9 });
       }),

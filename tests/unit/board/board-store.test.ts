@@ -161,7 +161,9 @@ describe('board store: edits', () => {
     expect(inUse.ok).toBe(false);
     if (!inUse.ok) expect(inUse.error).toMatch(/member LLl/);
     expect(board.deletePoint('LR.f').ok).toBe(true);
-    const add = board.addMember({ id: 'LR2', kind: 'lateral-rod', a: 'LR.a', b: 'N.f' }, [{ id: 'N.f', body: 'frame', x: -70, y: 600, z: 520 }]);
+    const add = board.addMember({ id: 'LR2', kind: 'lateral-rod', a: 'LR.a', b: 'N.f' }, [
+      { id: 'N.f', body: 'frame', x: -70, y: 600, z: 520 },
+    ]);
     expect(add).toEqual({ ok: true });
     expect(board.selectedMember).toBe('LR2');
     expect(board.addMember({ id: 'LR2', kind: 'link', a: 'LR.a', b: 'N.f' }).ok).toBe(false);
@@ -171,7 +173,10 @@ describe('board store: edits', () => {
     const before = board.document;
     // Putting LL.fl on top of LL.al makes a zero-length link.
     board.setMirrorLinked(false);
-    const r = board.commit('bad', (d) => ({ ...d, points: d.points.map((p) => (p.id === 'LL.fl' ? { ...p, x: 30, y: 470, z: 235 } : p)) }));
+    const r = board.commit('bad', (d) => ({
+      ...d,
+      points: d.points.map((p) => (p.id === 'LL.fl' ? { ...p, x: 30, y: 470, z: 235 } : p)),
+    }));
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.error).toMatch(/zero length/);
     expect(board.document).toBe(before);

@@ -1,6 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import {
-  boundsOf, fitTransform, gridStep, gridValues, planeOf, planeToScreen, screenToPlane, snapTo, toScreen, withPlane, zoomAt, MAX_SCALE,
+  boundsOf,
+  fitTransform,
+  gridStep,
+  gridValues,
+  planeOf,
+  planeToScreen,
+  screenToPlane,
+  snapTo,
+  toScreen,
+  withPlane,
+  zoomAt,
+  MAX_SCALE,
 } from '../../../src/canvas/transform';
 import { MM_PER_INCH } from '../../../shared/units';
 
@@ -27,7 +38,11 @@ describe('view transform', () => {
   });
 
   it('screen and plane positions convert back and forth', () => {
-    for (const q of [{ h: 0, v: 0 }, { h: 1234.5, v: -67.25 }, { h: -800, v: 900 }]) {
+    for (const q of [
+      { h: 0, v: 0 },
+      { h: 1234.5, v: -67.25 },
+      { h: -800, v: 900 },
+    ]) {
       const back = screenToPlane(t, planeToScreen(t, q));
       expect(back.h).toBeCloseTo(q.h, 9);
       expect(back.v).toBeCloseTo(q.v, 9);
@@ -56,7 +71,10 @@ describe('view transform', () => {
   });
 
   it('fit shows the whole box inside the margins, centred', () => {
-    const b = boundsOf([{ h: -1000, v: 0 }, { h: 1500, v: 800 }])!;
+    const b = boundsOf([
+      { h: -1000, v: 0 },
+      { h: 1500, v: 800 },
+    ])!;
     const f = fitTransform(b, 800, 600, 40);
     const corners = [planeToScreen(f, { h: b.hMin, v: b.vMin }), planeToScreen(f, { h: b.hMax, v: b.vMax })];
     for (const c of corners) {

@@ -37,7 +37,11 @@ describe('diffDocs / applyChanges', () => {
 
   it('random edit sequences undo to the exact starting document (property)', () => {
     const ids = fourLink().points.map((p) => p.id);
-    const step = fc.record({ id: fc.constantFrom(...ids), dx: fc.integer({ min: -50, max: 50 }), dz: fc.double({ min: -30, max: 30, noNaN: true }) });
+    const step = fc.record({
+      id: fc.constantFrom(...ids),
+      dx: fc.integer({ min: -50, max: 50 }),
+      dz: fc.double({ min: -30, max: 30, noNaN: true }),
+    });
     fc.assert(
       fc.property(fc.array(step, { minLength: 1, maxLength: 25 }), (steps) => {
         const h = new History();

@@ -29,7 +29,10 @@ export async function mountOnBoard(component: unknown, doc: Sketch = fourLink(),
   setActivePinia(pinia);
   const board = useBoardStore();
   board.setLoaded(detailOf(doc, over));
-  const wrapper = mount(component as never, { attachTo: document.body, global: { plugins: [[Quasar, { plugins: { Notify } }], pinia] } });
+  const wrapper = mount(component as never, {
+    attachTo: document.body,
+    global: { plugins: [[Quasar, { plugins: { Notify } }], pinia] },
+  });
   await nextFrame();
   return { wrapper, board, pinia };
 }

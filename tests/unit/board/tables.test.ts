@@ -23,7 +23,8 @@ async function type(input: Omit<DOMWrapper<Element>, 'exists'>, text: string) {
   await nextFrame();
 }
 
-const point = (board: { document: { points: { id: string; x: number; y: number; z: number }[] } | null }, id: string) => board.document!.points.find((p) => p.id === id)!;
+const point = (board: { document: { points: { id: string; x: number; y: number; z: number }[] } | null }, id: string) =>
+  board.document!.points.find((p) => p.id === id)!;
 
 describe('pivot table', () => {
   it('lists every pivot with x, y and z in mm', async () => {

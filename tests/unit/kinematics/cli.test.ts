@@ -39,7 +39,10 @@ describe('sweep command', () => {
     const cases: [string[], RegExp][] = [
       [['missing.json'], /^missing\.json: no such file$/],
       [[write('text.json', 'not json at all')], /^text\.json: not JSON/],
-      [[write('bad.json', JSON.stringify({ ...exampleSketch(), points: 'none' }))], /^bad\.json: points: expected a list$/],
+      [
+        [write('bad.json', JSON.stringify({ ...exampleSketch(), points: 'none' }))],
+        /^bad\.json: points: expected a list$/,
+      ],
       [[], /^no sketch file given$/],
       [[good, '--xml'], /^unknown option '--xml'$/],
     ];
@@ -50,24 +53,35 @@ describe('sweep command', () => {
       expect(out.stderr![0]).toMatch(first);
     }
     const many = sweepCommand([write('many.json', JSON.stringify({ ...exampleSketch(), name: 3, layout: 'x' }))], dir);
-    expect(many.stderr).toEqual(["many.json: name: expected a string", expect.stringMatching(/^many\.json: layout: expected one of/)]);
+    expect(many.stderr).toEqual([
+      'many.json: name: expected a string',
+      expect.stringMatching(/^many\.json: layout: expected one of/),
+    ]);
   });
 
   it('behaves the same as a process: exit code 2, no stack trace, empty stdout', () => {
     const root = path.resolve(__dirname, '../../..');
-    const run = spawnSync(process.execPath, [path.join(root, 'node_modules/tsx/dist/cli.mjs'), path.join(root, 'shared/cli/sweep.ts'), 'missing.json'], {
-      cwd: dir,
-      encoding: 'utf8',
-      env: { ...process.env, INIT_CWD: dir },
-    });
+    const run = spawnSync(
+      process.execPath,
+      [path.join(root, 'node_modules/tsx/dist/cli.mjs'), path.join(root, 'shared/cli/sweep.ts'), 'missing.json'],
+      {
+        cwd: dir,
+        encoding: 'utf8',
+        env: { ...process.env, INIT_CWD: dir },
+      },
+    );
     expect(run.status).toBe(2);
     expect(run.stdout).toBe('');
     expect(run.stderr).toBe('missing.json: no such file\n');
-    const ok = spawnSync(process.execPath, [path.join(root, 'node_modules/tsx/dist/cli.mjs'), path.join(root, 'shared/cli/sweep.ts'), good, '--csv'], {
-      cwd: dir,
-      encoding: 'utf8',
-      env: { ...process.env, INIT_CWD: dir },
-    });
+    const ok = spawnSync(
+      process.execPath,
+      [path.join(root, 'node_modules/tsx/dist/cli.mjs'), path.join(root, 'shared/cli/sweep.ts'), good, '--csv'],
+      {
+        cwd: dir,
+        encoding: 'utf8',
+        env: { ...process.env, INIT_CWD: dir },
+      },
+    );
     expect(ok.status).toBe(0);
     expect(ok.stdout).toBe(heaveRowsCsv(runSweep(exampleSketch())));
   }, 30000);

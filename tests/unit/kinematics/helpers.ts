@@ -9,10 +9,15 @@ export function exampleSketch(): SketchInput {
 }
 
 /** Every number inside a value, with its path. */
-export function numbersIn(v: unknown, path = '', out: { path: string; value: number }[] = []): { path: string; value: number }[] {
+export function numbersIn(
+  v: unknown,
+  path = '',
+  out: { path: string; value: number }[] = [],
+): { path: string; value: number }[] {
   if (typeof v === 'number') out.push({ path, value: v });
   else if (Array.isArray(v)) v.forEach((x, i) => numbersIn(x, `${path}[${i}]`, out));
-  else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) numbersIn(x, path ? `${path}.${k}` : k, out);
+  else if (v && typeof v === 'object')
+    for (const [k, x] of Object.entries(v)) numbersIn(x, path ? `${path}.${k}` : k, out);
   return out;
 }
 
@@ -24,7 +29,10 @@ export function nonFinite(v: unknown): string[] {
 }
 
 /** A deep copy of a sketch with every point moved by `f`. */
-export function mapPoints(doc: SketchInput, f: (p: { x: number; y: number; z: number }) => { x: number; y: number; z: number }): SketchInput {
+export function mapPoints(
+  doc: SketchInput,
+  f: (p: { x: number; y: number; z: number }) => { x: number; y: number; z: number },
+): SketchInput {
   const copy = structuredClone(doc);
   copy.points = copy.points.map((p) => ({ ...p, ...f(p) }));
   return copy;

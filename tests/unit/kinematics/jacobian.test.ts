@@ -12,13 +12,17 @@ const FD_TOLERANCE = 1e-5;
 function checkJacobian(sketch: ReturnType<typeof parseSketch>) {
   const model = linkageModelBuild(sketch);
   const work = residualWorkCreate(model);
-  const m = model.residualCount, n = model.stateSize;
+  const m = model.residualCount,
+    n = model.stateSize;
   const state = Float64Array.from({ length: n }, (_, i) => (i % 6 < 3 ? 20 * Math.sin(i + 1) : 0.05 * Math.cos(i + 2)));
-  const r = new Float64Array(m), J = new Float64Array(m * n);
+  const r = new Float64Array(m),
+    J = new Float64Array(m * n);
   residualsEvaluate(model, state, work, r, J);
-  const rp = new Float64Array(m), rm = new Float64Array(m);
+  const rp = new Float64Array(m),
+    rm = new Float64Array(m);
   for (let c = 0; c < n; c++) {
-    const sp = new Float64Array(state), sm = new Float64Array(state);
+    const sp = new Float64Array(state),
+      sm = new Float64Array(state);
     sp[c] += FD_STEP;
     sm[c] -= FD_STEP;
     residualsEvaluate(model, sp, work, rp, null);

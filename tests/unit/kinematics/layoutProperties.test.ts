@@ -17,7 +17,11 @@ const MIRROR_TOL = 1e-5;
 
 type PoseLike = { x: number; y: number; z: number; roll: number; pitch: number; yaw: number };
 const mirrorBody = (id: string): MovingBodyId =>
-  (id.endsWith('-left') ? id.replace('-left', '-right') : id.endsWith('-right') ? id.replace('-right', '-left') : id) as MovingBodyId;
+  (id.endsWith('-left')
+    ? id.replace('-left', '-right')
+    : id.endsWith('-right')
+      ? id.replace('-right', '-left')
+      : id) as MovingBodyId;
 /** The mirror image in y = 0 of a pose: x, z and pitch alike, y, roll and yaw opposite. */
 function expectMirror(p: PoseLike, q: PoseLike) {
   for (const k of ['x', 'z', 'pitch'] as const) expect(Math.abs(p[k] - q[k])).toBeLessThan(MIRROR_TOL);
@@ -25,7 +29,8 @@ function expectMirror(p: PoseLike, q: PoseLike) {
 }
 
 function paramsOf(spec: StarterSpec) {
-  return fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: spec.params.length, maxLength: spec.params.length })
+  return fc
+    .array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: spec.params.length, maxLength: spec.params.length })
     .map((u) => Object.fromEntries(spec.params.map((p, i) => [p.key, p.min + u[i] * (p.max - p.min)])));
 }
 
@@ -40,7 +45,8 @@ for (const spec of [leafSpring, trailingArm]) {
           expect(nonFinite(r)).toEqual([]);
           for (const h of r.heave) {
             for (const [id, pose] of Object.entries(h.bodies)) expectMirror(pose!, h.bodies[mirrorBody(id)]!);
-            if (h.halfShafts) expect(Math.abs(h.halfShafts.left!.plunge - h.halfShafts.right!.plunge)).toBeLessThan(MIRROR_TOL);
+            if (h.halfShafts)
+              expect(Math.abs(h.halfShafts.left!.plunge - h.halfShafts.right!.plunge)).toBeLessThan(MIRROR_TOL);
           }
           for (const row of r.roll) {
             const m = r.roll.find((q) => q.roll === -row.roll);

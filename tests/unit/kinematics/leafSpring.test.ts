@@ -15,7 +15,8 @@ const HELD_TOL_MM = 2e-3;
 /** Mirror images agree to this (mm or deg): solver convergence. */
 const MIRROR_TOL = 1e-6;
 
-const dist = (p: { x: number; y: number; z: number }, q: { x: number; y: number; z: number }) => Math.hypot(p.x - q.x, p.y - q.y, p.z - q.z);
+const dist = (p: { x: number; y: number; z: number }, q: { x: number; y: number; z: number }) =>
+  Math.hypot(p.x - q.x, p.y - q.y, p.z - q.z);
 
 describe('leaf-spring starter', () => {
   const sketch = leafSpring.build();
@@ -40,7 +41,11 @@ describe('leaf-spring starter', () => {
     for (const row of [...result.heave, ...result.roll]) {
       const pts = pointsAt(s, row.bodies);
       for (const side of ['l', 'r']) {
-        for (const [a, b] of [[`LF.${side}`, `LA.${side}`], [`LE.${side}`, `LB.${side}`], [`LH.${side}`, `LE.${side}`]]) {
+        for (const [a, b] of [
+          [`LF.${side}`, `LA.${side}`],
+          [`LE.${side}`, `LB.${side}`],
+          [`LH.${side}`, `LE.${side}`],
+        ]) {
           expect(Math.abs(dist(pts[a], pts[b]) - dist(ride[a], ride[b]))).toBeLessThan(HELD_TOL_MM);
         }
         // The shackle swings in its hanger's fore-aft plane.
@@ -114,7 +119,7 @@ describe('wind-up', () => {
     expect(w.driveline!.pinionAngle).toBeGreaterThan(result.ride.driveline!.pinionAngle);
   });
 
-  it('scales with the axle torque (option or file), reverses with it, and needs the halves\' rates', () => {
+  it("scales with the axle torque (option or file), reverses with it, and needs the halves' rates", () => {
     const twice = runSweep(sketch, { sweep: { axleTorque: 8000 }, heaveOnly: true }).windUp!;
     expect(twice.angle).toBeCloseTo(2 * w.angle, 9);
     const back = runSweep({ ...sketch, sweep: { ...sketch.sweep, axleTorque: -4000 } }, { heaveOnly: true }).windUp!;
@@ -166,6 +171,9 @@ describe('format additions', () => {
     const doc = structuredClone(leafSpring.build()) as SketchInput;
     doc.sweep = { ...doc.sweep, axleTorque: 1e9, linkLoadLimit: -5 };
     const res = checkSketch(doc);
-    expect(res.ok ? [] : res.problems).toEqual(['sweep.axleTorque: must be at most 200000', 'sweep.linkLoadLimit: must be greater than 0']);
+    expect(res.ok ? [] : res.problems).toEqual([
+      'sweep.axleTorque: must be at most 200000',
+      'sweep.linkLoadLimit: must be greater than 0',
+    ]);
   });
 });

@@ -21,9 +21,11 @@ describe('link loads', () => {
     const F = loads.tractiveForce;
     expect(F).toBeCloseTo((4000 * 1000) / doc.vehicle.tireRadius, 9);
     const pts = Object.fromEntries(doc.points.map((p) => [p.id, p]));
-    let fx = 0, fz = 0;
+    let fx = 0,
+      fz = 0;
     for (const m of doc.members.filter((x) => x.kind === 'link' || x.kind === 'lateral-rod')) {
-      const a = pts[m.a], b = pts[m.b];
+      const a = pts[m.a],
+        b = pts[m.b];
       const L = Math.hypot(a.x - b.x, a.y - b.y, a.z - b.z);
       const f = result.ride.linkLoads![m.id];
       // Tension pulls the axle end towards the frame end.
@@ -47,7 +49,9 @@ describe('link loads', () => {
   it('are linear in the torque and reverse with it', () => {
     const half = runSweep(doc, { sweep: { axleTorque: -2000 }, heaveOnly: true });
     for (const id of Object.keys(loads.members)) {
-      expect(Math.abs(half.ride.linkLoads![id] + loads.members[id].ride / 2)).toBeLessThan(LOAD_TOL * loads.tractiveForce);
+      expect(Math.abs(half.ride.linkLoads![id] + loads.members[id].ride / 2)).toBeLessThan(
+        LOAD_TOL * loads.tractiveForce,
+      );
     }
   });
 
@@ -67,7 +71,9 @@ describe('link loads', () => {
     const e = r.limits.events.find((x) => x.kind === 'load-limit' && x.member === 'UL')!;
     const dir = Math.sign(e.at);
     // The two rows either side of the crossing, on the event's side of ride.
-    const side = r.heave.filter((h) => Math.sign(h.travel) === dir || h.travel === 0).sort((p, q) => Math.abs(p.travel) - Math.abs(q.travel));
+    const side = r.heave
+      .filter((h) => Math.sign(h.travel) === dir || h.travel === 0)
+      .sort((p, q) => Math.abs(p.travel) - Math.abs(q.travel));
     const k = side.findIndex((h) => Math.abs(h.linkLoads!.UL) > limit);
     const [before, after] = [side[k - 1], side[k]];
     expect(Math.abs(before.travel)).toBeLessThanOrEqual(Math.abs(e.at));
@@ -109,7 +115,8 @@ describe('link loads', () => {
     expect(s.max).toBeGreaterThan(0);
     const e = r.limits.events.filter((x) => x.kind === 'load-reversal');
     expect(e.map((x) => x.member)).toEqual(['UL']);
-    const below = r.heave.find((h) => h.travel === -10)!.linkLoads!.UL, above = r.heave.find((h) => h.travel === 10)!.linkLoads!.UL;
+    const below = r.heave.find((h) => h.travel === -10)!.linkLoads!.UL,
+      above = r.heave.find((h) => h.travel === 10)!.linkLoads!.UL;
     expect(Math.sign(below)).not.toBe(Math.sign(above));
     expect(e[0].at).toBeCloseTo(-10 + (20 * below) / (below - above), 9);
     expect(r.loads!.members.LLl.reverses).toBe(false);

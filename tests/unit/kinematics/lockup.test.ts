@@ -18,14 +18,18 @@ function shortRodSketch(): SketchInput {
   f.z = a.z;
   doc.sweep = { droop: -150, bump: 400, step: 10, roll: 8, rollStep: 1 };
   // Shocks long enough not to matter here.
-  for (const m of doc.members) if (m.kind === 'shock') { m.minLength = 10; m.maxLength = 2000; }
+  for (const m of doc.members)
+    if (m.kind === 'shock') {
+      m.minLength = 10;
+      m.maxLength = 2000;
+    }
   return doc;
 }
 
 describe('lock-up', () => {
   const r = runSweep(shortRodSketch());
 
-  it('stops the heave sweep at the rod\'s reach and says so', () => {
+  it("stops the heave sweep at the rod's reach and says so", () => {
     const lock = r.limits.events.filter((e) => e.kind === 'lock-up');
     expect(lock).toHaveLength(1);
     expect(lock[0].sweep).toBe('heave');

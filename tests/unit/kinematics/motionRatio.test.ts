@@ -19,7 +19,10 @@ describe('motion ratio against central differences', () => {
   for (const spec of Object.values(starters)) {
     it(`${spec!.layout}`, () => {
       const r = runSweep(spec!.build(), { heaveOnly: true });
-      const shocks = spec!.build().members.filter((m) => m.kind === 'shock' || m.kind === 'spring').map((m) => m.id);
+      const shocks = spec!
+        .build()
+        .members.filter((m) => m.kind === 'shock' || m.kind === 'spring')
+        .map((m) => m.id);
       expect(shocks.length).toBeGreaterThan(0);
       for (let i = 1; i < r.heave.length - 1; i++) {
         const [a, b, c] = [r.heave[i - 1], r.heave[i], r.heave[i + 1]];

@@ -85,7 +85,8 @@ function expectSameRelative(a: SweepResult, b: SweepResult) {
     expect(hb.bind).toBeCloseTo(ha.bind, 6);
     for (const id of Object.keys(ha.members)) {
       expect(hb.members[id].length).toBeCloseTo(ha.members[id].length, 6);
-      if (ha.members[id].motionRatio !== undefined) expect(hb.members[id].motionRatio!).toBeCloseTo(ha.members[id].motionRatio!, 6);
+      if (ha.members[id].motionRatio !== undefined)
+        expect(hb.members[id].motionRatio!).toBeCloseTo(ha.members[id].motionRatio!, 6);
     }
     expect(hb.driveline!.outputAngle).toBeCloseTo(ha.driveline!.outputAngle, 6);
   });

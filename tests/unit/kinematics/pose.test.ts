@@ -2,7 +2,6 @@ import { describe, expect, it } from 'vitest';
 import { poseApply, rotationSetCreate, rotationSetFill } from '../../../shared/kinematics/pose';
 import { degToRad } from '../../../shared/units';
 
-
 describe('pose maths', () => {
   it('follows ISO 8855 signs: roll lifts the left side, pitch drops the nose, yaw turns the nose left', () => {
     const ref = { x: 0, y: 0, z: 0 };
@@ -29,7 +28,8 @@ describe('pose maths', () => {
     const Rz = [Math.cos(y), -Math.sin(y), 0, Math.sin(y), Math.cos(y), 0, 0, 0, 1];
     const mul = (a: number[], b: number[]) =>
       Array.from({ length: 9 }, (_, k) => {
-        const i = Math.floor(k / 3), j = k % 3;
+        const i = Math.floor(k / 3),
+          j = k % 3;
         return a[i * 3] * b[j] + a[i * 3 + 1] * b[3 + j] + a[i * 3 + 2] * b[6 + j];
       });
     const R = mul(Rz, mul(Ry, Rx));
@@ -42,8 +42,10 @@ describe('pose maths', () => {
     const rs = rotationSetCreate();
     rotationSetFill(rs, angles[0], angles[1], angles[2]);
     for (let k = 0; k < 3; k++) {
-      const plus = rotationSetCreate(), minus = rotationSetCreate();
-      const a1 = [...angles], a2 = [...angles];
+      const plus = rotationSetCreate(),
+        minus = rotationSetCreate();
+      const a1 = [...angles],
+        a2 = [...angles];
       a1[k] += h;
       a2[k] -= h;
       rotationSetFill(plus, a1[0], a1[1], a1[2]);

@@ -20,7 +20,12 @@ const validSketch = fc
   .map(({ spec, values, jitter, roll }) => {
     const params = Object.fromEntries(spec.params.map((p, i) => [p.key, p.min + values[i] * (p.max - p.min)]));
     const doc = structuredClone(spec.build(params)) as SketchInput;
-    doc.points = doc.points.map((p, i) => ({ ...p, x: p.x + jitter[3 * i], y: p.y + jitter[3 * i + 1], z: p.z + jitter[3 * i + 2] }));
+    doc.points = doc.points.map((p, i) => ({
+      ...p,
+      x: p.x + jitter[3 * i],
+      y: p.y + jitter[3 * i + 1],
+      z: p.z + jitter[3 * i + 2],
+    }));
     doc.sweep = { ...doc.sweep, roll, step: 10 };
     return doc;
   });
@@ -29,10 +34,21 @@ const validSketch = fc
 const coord = fc.integer({ min: -1500, max: 1500 });
 const randomSketch = fc
   .record({
-    frame: fc.array(fc.record({ x: coord, y: coord, z: fc.integer({ min: 0, max: 1200 }) }), { minLength: 1, maxLength: 8 }),
-    axle: fc.array(fc.record({ x: coord, y: coord, z: fc.integer({ min: 0, max: 1200 }) }), { minLength: 0, maxLength: 8 }),
+    frame: fc.array(fc.record({ x: coord, y: coord, z: fc.integer({ min: 0, max: 1200 }) }), {
+      minLength: 1,
+      maxLength: 8,
+    }),
+    axle: fc.array(fc.record({ x: coord, y: coord, z: fc.integer({ min: 0, max: 1200 }) }), {
+      minLength: 0,
+      maxLength: 8,
+    }),
     links: fc.array(
-      fc.record({ f: fc.nat(7), a: fc.nat(9), kind: fc.constantFrom('link', 'lateral-rod', 'shock', 'spring'), group: fc.constantFrom('upper', 'lower', undefined) }),
+      fc.record({
+        f: fc.nat(7),
+        a: fc.nat(9),
+        kind: fc.constantFrom('link', 'lateral-rod', 'shock', 'spring'),
+        group: fc.constantFrom('upper', 'lower', undefined),
+      }),
       { maxLength: 8 },
     ),
     droop: fc.integer({ min: -300, max: -1 }),
@@ -52,12 +68,21 @@ const randomSketch = fc
       const a = points.find((p) => p.id === axleIds[l.a % axleIds.length])!;
       if (Math.hypot(f.x - a.x, f.y - a.y, f.z - a.z) < 1) return;
       const base = { id: `M${i}`, a: f.id, b: a.id };
-      members.push(l.kind === 'link' ? { ...base, kind: 'link', ...(l.group ? { group: l.group } : {}) } : { ...base, kind: l.kind } as SketchInput['members'][number]);
+      members.push(
+        l.kind === 'link'
+          ? { ...base, kind: 'link', ...(l.group ? { group: l.group } : {}) }
+          : ({ ...base, kind: l.kind } as SketchInput['members'][number]),
+      );
     });
     const doc: SketchInput = {
-      format: 'arcwright.sketch', version: 1, name: 'random', layout: 'four-link-lateral-rod',
+      format: 'arcwright.sketch',
+      version: 1,
+      name: 'random',
+      layout: 'four-link-lateral-rod',
       vehicle: { wheelbase: 3000, cgHeight: 600, track: 1600, tireRadius: 400 },
-      points, members, wheels: { left: 'WC.l', right: 'WC.r' },
+      points,
+      members,
+      wheels: { left: 'WC.l', right: 'WC.r' },
       sweep: { droop, bump, step: 10, roll: 8, rollStep: 2 },
     };
     return doc;
@@ -91,21 +116,46 @@ describe('property: valid sketches', () => {
 
 type Breaker = (d: any) => void;
 const breakers: fc.Arbitrary<Breaker> = fc.oneof(
-  fc.record({ i: fc.nat(23), k: fc.constantFrom('x', 'y', 'z'), v: fc.constantFrom<unknown>('12', null, true, [], {}, undefined) }).map(
-    ({ i, k, v }) => (d: any) => { if (d.points?.[i]) d.points[i][k] = v; else d.points = 'gone'; },
-  ),
-  fc.record({ i: fc.nat(8), end: fc.constantFrom('a', 'b'), ref: fc.string({ minLength: 1, maxLength: 8 }) }).map(
-    ({ i, end, ref }) => (d: any) => { if (d.members?.[i]) d.members[i][end] = `missing:${ref}`; else d.members = 'gone'; },
-  ),
-  fc.nat(23).map((i) => (d: any) => { if (d.points?.[i]) d.points.push({ ...d.points[i] }); else d.points = 'gone'; }),
-  fc.constantFrom('format', 'version', 'name', 'layout', 'vehicle', 'points', 'members', 'wheels').map(
-    (k) => (d: any) => { delete d[k]; },
-  ),
-  fc.record({ k: fc.constantFrom('droop', 'bump', 'step', 'rollStep'), v: fc.constantFrom(0, -0, 'x', 1e9) }).map(
-    ({ k, v }) => (d: any) => { d.sweep = { ...d.sweep, [k]: k === 'droop' && v === 1e9 ? 5 : v }; },
-  ),
-  fc.nat(8).map((i) => (d: any) => { if (d.members?.[i]) d.members[i].b = d.members[i].a; else d.members = 'gone'; }),
-  fc.anything().filter((v) => typeof v !== 'object' || v === null || Array.isArray(v)).map((v) => (d: any) => { d.vehicle = v; }),
+  fc
+    .record({
+      i: fc.nat(23),
+      k: fc.constantFrom('x', 'y', 'z'),
+      v: fc.constantFrom<unknown>('12', null, true, [], {}, undefined),
+    })
+    .map(({ i, k, v }) => (d: any) => {
+      if (d.points?.[i]) d.points[i][k] = v;
+      else d.points = 'gone';
+    }),
+  fc
+    .record({ i: fc.nat(8), end: fc.constantFrom('a', 'b'), ref: fc.string({ minLength: 1, maxLength: 8 }) })
+    .map(({ i, end, ref }) => (d: any) => {
+      if (d.members?.[i]) d.members[i][end] = `missing:${ref}`;
+      else d.members = 'gone';
+    }),
+  fc.nat(23).map((i) => (d: any) => {
+    if (d.points?.[i]) d.points.push({ ...d.points[i] });
+    else d.points = 'gone';
+  }),
+  fc
+    .constantFrom('format', 'version', 'name', 'layout', 'vehicle', 'points', 'members', 'wheels')
+    .map((k) => (d: any) => {
+      delete d[k];
+    }),
+  fc
+    .record({ k: fc.constantFrom('droop', 'bump', 'step', 'rollStep'), v: fc.constantFrom(0, -0, 'x', 1e9) })
+    .map(({ k, v }) => (d: any) => {
+      d.sweep = { ...d.sweep, [k]: k === 'droop' && v === 1e9 ? 5 : v };
+    }),
+  fc.nat(8).map((i) => (d: any) => {
+    if (d.members?.[i]) d.members[i].b = d.members[i].a;
+    else d.members = 'gone';
+  }),
+  fc
+    .anything()
+    .filter((v) => typeof v !== 'object' || v === null || Array.isArray(v))
+    .map((v) => (d: any) => {
+      d.vehicle = v;
+    }),
 );
 
 describe('property: broken documents', () => {

@@ -10,7 +10,7 @@ const LENGTH_TOL_MM = 1e-6;
 describe('runSweep on the example file', () => {
   const result = runSweep(exampleSketch());
 
-  it('covers the file\'s range and starts from ride height', () => {
+  it("covers the file's range and starts from ride height", () => {
     expect(result.heave.map((r) => r.travel)).toEqual(Array.from({ length: 49 }, (_, i) => -130 + 5 * i));
     expect(result.roll.length).toBe(15);
     expect(result.ride.travel).toBe(0);
@@ -42,7 +42,8 @@ describe('runSweep on the example file', () => {
 
   it('keeps every link at its ride length in heave (exactly located, no bind)', () => {
     for (const r of result.heave) {
-      for (const id of ['LLl', 'ULl', 'LLr', 'ULr', 'LR']) expect(Math.abs(r.members[id].lengthChange)).toBeLessThan(LENGTH_TOL_MM);
+      for (const id of ['LLl', 'ULl', 'LLr', 'ULr', 'LR'])
+        expect(Math.abs(r.members[id].lengthChange)).toBeLessThan(LENGTH_TOL_MM);
       expect(r.bind).toBeLessThan(LENGTH_TOL_MM);
     }
   });
@@ -123,7 +124,11 @@ describe('runSweep options and input', () => {
 });
 
 /** The solid-axle starters share this block's numbers; other layouts have their own tests. */
-const SOLID_AXLE_LAYOUTS: readonly string[] = ['four-link-lateral-rod', 'triangulated-four-link', 'three-link-lateral-rod'];
+const SOLID_AXLE_LAYOUTS: readonly string[] = [
+  'four-link-lateral-rod',
+  'triangulated-four-link',
+  'three-link-lateral-rod',
+];
 
 describe('starters', () => {
   for (const spec of Object.values(starters).filter((x) => SOLID_AXLE_LAYOUTS.includes(x!.layout))) {
@@ -189,7 +194,8 @@ describe('a hinged arm (generic bodies)', () => {
     expect(r.heave).toHaveLength(21);
     expect(nonFinite(r)).toEqual([]);
     const sketch = parseSketch(doc);
-    const a = { x: 450, y: 250, z: 380 }, b = { x: 420, y: 650, z: 380 };
+    const a = { x: 450, y: 250, z: 380 },
+      b = { x: 420, y: 650, z: 380 };
     const axisDistance = (p: { x: number; y: number; z: number }) => {
       const u = { x: b.x - a.x, y: b.y - a.y, z: b.z - a.z };
       const w = { x: p.x - a.x, y: p.y - a.y, z: p.z - a.z };

@@ -48,7 +48,8 @@ describe('trailing-arm starter', () => {
 
   it('keeps each wheel centre at its distance from the hinge axis and reports the contract fields', () => {
     const s = parseSketch(sketch);
-    const a = s.points.find((p) => p.id === 'HA.ol')!, b = s.points.find((p) => p.id === 'HA.il')!;
+    const a = s.points.find((p) => p.id === 'HA.ol')!,
+      b = s.points.find((p) => p.id === 'HA.il')!;
     const u = { x: b.x - a.x, y: b.y - a.y, z: b.z - a.z };
     const axisDistance = (p: { x: number; y: number; z: number }) => {
       const w = { x: p.x - a.x, y: p.y - a.y, z: p.z - a.z };
@@ -72,7 +73,11 @@ describe('trailing-arm starter', () => {
       expect(r.antiSquat!).toBeCloseTo((100 * tan) / (s.vehicle.cgHeight / s.vehicle.wheelbase), 6);
       // Half-shaft: length between the joints as placed, plunge from ride.
       const hs = r.halfShafts!.left!;
-      const len = Math.hypot(pts['HS.ol'].x - pts['HS.il'].x, pts['HS.ol'].y - pts['HS.il'].y, pts['HS.ol'].z - pts['HS.il'].z);
+      const len = Math.hypot(
+        pts['HS.ol'].x - pts['HS.il'].x,
+        pts['HS.ol'].y - pts['HS.il'].y,
+        pts['HS.ol'].z - pts['HS.il'].z,
+      );
       expect(hs.length).toBeCloseTo(len, 9);
       expect(hs.plunge).toBeCloseTo(len - result.ride.halfShafts!.left!.length, 9);
     }
@@ -99,7 +104,14 @@ describe('trailing-arm starter', () => {
     for (const r of result.roll.filter((q) => q.roll !== 0)) {
       const s = parseSketch(sketch);
       const wcRoll = pointsAt(s, r.bodies)['WC.l'];
-      const heaveAt = runSweep(sketch, { sweep: { droop: -Math.max(1, Math.abs(r.leftTravel)), bump: Math.max(1, Math.abs(r.leftTravel)), step: Math.abs(r.leftTravel) }, heaveOnly: true });
+      const heaveAt = runSweep(sketch, {
+        sweep: {
+          droop: -Math.max(1, Math.abs(r.leftTravel)),
+          bump: Math.max(1, Math.abs(r.leftTravel)),
+          step: Math.abs(r.leftTravel),
+        },
+        heaveOnly: true,
+      });
       const row = heaveAt.heave.find((h) => Math.abs(h.travel - r.leftTravel) < LENGTH_TOL_MM)!;
       const wcHeave = pointsAt(s, row.bodies)['WC.l'];
       expect(Math.abs(wcRoll.x - wcHeave.x) + Math.abs(wcRoll.y - wcHeave.y)).toBeLessThan(1e-5);
@@ -116,7 +128,8 @@ describe('trailing-arm starter', () => {
     const narrow = trailingArm.build({ track: 1400, tireRadius: 300 });
     expect(narrow.points.find((p) => p.id === 'WC.l')).toMatchObject({ x: 0, y: 700, z: 300 });
     const pure = trailingArm.build({ sweepAngle: 0, axisTilt: 0 });
-    const a = pure.points.find((p) => p.id === 'HA.ol')!, b = pure.points.find((p) => p.id === 'HA.il')!;
+    const a = pure.points.find((p) => p.id === 'HA.ol')!,
+      b = pure.points.find((p) => p.id === 'HA.il')!;
     expect(Math.abs(a.x - b.x) + Math.abs(a.z - b.z)).toBeLessThan(ANGLE_TOL_DEG);
   });
 });

@@ -50,7 +50,9 @@ describe('double-wishbone starter', () => {
 
   it('reads the kingpin axis at ride as its closed form from the ball joints (plain geometry)', () => {
     const p = (id: string) => sketch.points.find((q) => q.id === id)!;
-    const L = p('LW.bj.l'), U = p('UW.bj.l'), W = p('WC.l');
+    const L = p('LW.bj.l'),
+      U = p('UW.bj.l'),
+      W = p('WC.l');
     const rise = U.z - L.z;
     const kp = r.ride.kingpin!;
     expect(kp.inclination).toBeCloseTo((Math.atan((L.y - U.y) / rise) * 180) / Math.PI, 9);
@@ -113,7 +115,7 @@ describe('anti-dive and the front brake share', () => {
 });
 
 describe('structure, lock-up and notes', () => {
-  it('without a tie rod the knuckle\'s steer is unlocated: a warning, no NaN', () => {
+  it("without a tie rod the knuckle's steer is unlocated: a warning, no NaN", () => {
     const doc = structuredClone(spec.build()) as SketchInput;
     doc.members = doc.members.filter((m) => m.id !== 'TRl');
     const r = runSweep(doc);
@@ -149,11 +151,23 @@ describe('structure, lock-up and notes', () => {
   });
 
   it('writes the independent-wheel columns into the CSV', () => {
-    const header = heaveRowsCsv(runSweep(spec.build(), { heaveOnly: true })).split('\r\n')[0].split(',');
-    for (const c of ['camberChange', 'toeChange', 'trackChange', 'casterChange', 'frontViewInstantCenter.y', 'antiDive', 'kingpin.scrubRadius']) {
+    const header = heaveRowsCsv(runSweep(spec.build(), { heaveOnly: true }))
+      .split('\r\n')[0]
+      .split(',');
+    for (const c of [
+      'camberChange',
+      'toeChange',
+      'trackChange',
+      'casterChange',
+      'frontViewInstantCenter.y',
+      'antiDive',
+      'kingpin.scrubRadius',
+    ]) {
       expect(header).toContain(c);
     }
-    const solid = heaveRowsCsv(runSweep(starters['three-link-lateral-rod']!.build(), { heaveOnly: true })).split('\r\n')[0];
+    const solid = heaveRowsCsv(runSweep(starters['three-link-lateral-rod']!.build(), { heaveOnly: true })).split(
+      '\r\n',
+    )[0];
     expect(solid).not.toContain('camberChange');
   });
 });

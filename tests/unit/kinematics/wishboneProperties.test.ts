@@ -15,7 +15,10 @@ const POINTS = spec.build().points.length;
 
 const wishboneSketch = fc
   .record({
-    values: fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: spec.params.length, maxLength: spec.params.length }),
+    values: fc.array(fc.double({ min: 0, max: 1, noNaN: true }), {
+      minLength: spec.params.length,
+      maxLength: spec.params.length,
+    }),
     jitter: fc.array(fc.double({ min: -60, max: 60, noNaN: true }), { minLength: 3 * POINTS, maxLength: 3 * POINTS }),
     drop: fc.array(fc.nat(13), { maxLength: 3 }),
     droop: fc.integer({ min: -250, max: -5 }),
@@ -25,7 +28,12 @@ const wishboneSketch = fc
   .map(({ values, jitter, drop, droop, bump, roll }) => {
     const params = Object.fromEntries(spec.params.map((p, i) => [p.key, p.min + values[i] * (p.max - p.min)]));
     const doc = structuredClone(spec.build(params)) as SketchInput;
-    doc.points = doc.points.map((p, i) => ({ ...p, x: p.x + jitter[3 * i], y: p.y + jitter[3 * i + 1], z: p.z + jitter[3 * i + 2] }));
+    doc.points = doc.points.map((p, i) => ({
+      ...p,
+      x: p.x + jitter[3 * i],
+      y: p.y + jitter[3 * i + 1],
+      z: p.z + jitter[3 * i + 2],
+    }));
     const dropped = new Set(drop.map((i) => doc.members[i].id));
     doc.members = doc.members.filter((m) => !dropped.has(m.id));
     doc.sweep = { droop, bump, step: 10, roll, rollStep: 1 };
@@ -44,7 +52,16 @@ describe('property: double-wishbone sketches', () => {
           expect(h.travel).toBeGreaterThanOrEqual(doc.sweep!.droop!);
           expect(h.travel).toBeLessThanOrEqual(doc.sweep!.bump!);
           if (!hasPlan) continue;
-          for (const k of ['camberChange', 'toeChange', 'trackChange', 'casterChange', 'frontViewInstantCenter', 'kingpin', 'antiDive', 'rollCenterHeight'] as const) {
+          for (const k of [
+            'camberChange',
+            'toeChange',
+            'trackChange',
+            'casterChange',
+            'frontViewInstantCenter',
+            'kingpin',
+            'antiDive',
+            'rollCenterHeight',
+          ] as const) {
             expect(h[k]).not.toBeUndefined();
           }
         }

@@ -39,7 +39,10 @@ describe('the bracket list of a line-up', () => {
 
   it('marks a pivot that only some variants have as partial, with no position for the others', () => {
     const a = fourLink();
-    const b = { ...fourLink(), points: [...fourLink().points, { id: 'TB.f', body: 'frame' as const, x: 500, y: 0, z: 600 }] };
+    const b = {
+      ...fourLink(),
+      points: [...fourLink().points, { id: 'TB.f', body: 'frame' as const, x: 500, y: 0, z: 600 }],
+    };
     const row = bracketList([a, b]).find((r) => r.id === 'TB.f')!;
     expect(row.status).toBe('partial');
     expect(row.at).toEqual([null, { x: 500, y: 0, z: 600 }]);

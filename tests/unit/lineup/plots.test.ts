@@ -17,7 +17,9 @@ describe('the line-up plots', () => {
     expect(antiSquat.series.map((s) => s.label)).toEqual(['variant 1', 'variant 2']);
     expect(antiSquat.series.map((s) => s.color)).toEqual(VARIANT_COLORS.slice(0, 2));
     variants.forEach((v, i) => {
-      const own = buildPlots(v.result, { members: v.document.members, hasAxle: true }, {}, [], 'mm').find((p) => p.key === 'antisquat')!;
+      const own = buildPlots(v.result, { members: v.document.members, hasAxle: true }, {}, [], 'mm').find(
+        (p) => p.key === 'antisquat',
+      )!;
       expect(antiSquat.series[i].points).toEqual(own.series[0].points);
     });
     // Raising the upper links' frame ends changes the anti-squat: the two curves differ.
@@ -29,7 +31,13 @@ describe('the line-up plots', () => {
 
   it('leave out a variant that could not be swept, keeping the others', () => {
     const a = fourLink();
-    const plots = lineupPlots([{ name: 'ok', document: a, result: runSweep(a) }, { name: 'broken', document: a, result: null }], 'mm');
+    const plots = lineupPlots(
+      [
+        { name: 'ok', document: a, result: runSweep(a) },
+        { name: 'broken', document: a, result: null },
+      ],
+      'mm',
+    );
     expect(plots.find((p) => p.key === 'pinion')!.series.map((s) => s.label)).toEqual(['ok']);
   });
 });

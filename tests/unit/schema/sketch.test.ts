@@ -20,33 +20,77 @@ describe('sketch schema', () => {
   it('accepts the example file and fills the sweep defaults', () => {
     const s = parseSketch(exampleSketch());
     expect(s.points).toHaveLength(24);
-    expect(s.sweep).toMatchObject({ droop: -130, bump: 110, step: 5, roll: 7, rollStep: 1, bindThreshold: 1.5, jointAngleLimit: 3 });
+    expect(s.sweep).toMatchObject({
+      droop: -130,
+      bump: 110,
+      step: 5,
+      roll: 7,
+      rollStep: 1,
+      bindThreshold: 1.5,
+      jointAngleLimit: 3,
+    });
   });
 
   it('fills the whole sweep block when it is missing', () => {
     const s = parseSketch(edit((d) => delete d.sweep));
-    expect(s.sweep).toEqual({ droop: -150, bump: 150, step: 5, roll: 8, rollStep: 1, bindThreshold: 1.5, jointAngleLimit: 3 });
+    expect(s.sweep).toEqual({
+      droop: -150,
+      bump: 150,
+      step: 5,
+      roll: 8,
+      rollStep: 1,
+      bindThreshold: 1.5,
+      jointAngleLimit: 3,
+    });
   });
 
   it('keeps fields it does not know (a richer document survives a round trip)', () => {
-    const s = parseSketch(edit((d) => { d.notes = 'keep me'; d.points[0].label = 'hub'; }));
+    const s = parseSketch(
+      edit((d) => {
+        d.notes = 'keep me';
+        d.points[0].label = 'hub';
+      }),
+    );
     expect((s as Record<string, unknown>).notes).toBe('keep me');
     expect((s.points[0] as Record<string, unknown>).label).toBe('hub');
   });
 
   it('checks the board fields, targets and tracing, and keeps what it does not know in them', () => {
-    const photo = { upload: 'a1', url: '/api/uploads/a1', width: 1600, height: 900, centre: { h: 0, v: 400 }, mmPerPx: 2.5, opacity: 0.5, locked: false };
-    const s = parseSketch(edit((d) => {
-      d.targets = { antiSquat: { min: 60, max: 90 }, camberGain: { max: 1 } };
-      d.tracing = { side: { ...photo, caption: 'shop photo' } };
-    }));
+    const photo = {
+      upload: 'a1',
+      url: '/api/uploads/a1',
+      width: 1600,
+      height: 900,
+      centre: { h: 0, v: 400 },
+      mmPerPx: 2.5,
+      opacity: 0.5,
+      locked: false,
+    };
+    const s = parseSketch(
+      edit((d) => {
+        d.targets = { antiSquat: { min: 60, max: 90 }, camberGain: { max: 1 } };
+        d.tracing = { side: { ...photo, caption: 'shop photo' } };
+      }),
+    );
     expect((s.targets as Record<string, unknown>).camberGain).toEqual({ max: 1 });
     expect((s.tracing!.side as Record<string, unknown>).caption).toBe('shop photo');
 
-    expect(problemsOf(edit((d) => (d.targets = { antiSquat: { min: 90, max: 60 } })))).toContain('targets.antiSquat: min must not be above max');
-    expect(problemsOf(edit((d) => (d.targets = { lateralShift: { max: 'wide' } })))).toContain('targets.lateralShift.max: expected a number');
-    expect(problemsOf(edit((d) => (d.tracing = { side: { ...photo, opacity: 2 } }))).some((p) => p.startsWith('tracing.side.opacity'))).toBe(true);
-    expect(problemsOf(edit((d) => (d.tracing = { rear: { ...photo, mmPerPx: 0 } }))).some((p) => p.startsWith('tracing.rear.mmPerPx'))).toBe(true);
+    expect(problemsOf(edit((d) => (d.targets = { antiSquat: { min: 90, max: 60 } })))).toContain(
+      'targets.antiSquat: min must not be above max',
+    );
+    expect(problemsOf(edit((d) => (d.targets = { lateralShift: { max: 'wide' } })))).toContain(
+      'targets.lateralShift.max: expected a number',
+    );
+    expect(
+      problemsOf(edit((d) => (d.tracing = { side: { ...photo, opacity: 2 } }))).some((p) =>
+        p.startsWith('tracing.side.opacity'),
+      ),
+    ).toBe(true);
+    expect(
+      problemsOf(edit((d) => (d.tracing = { rear: { ...photo, mmPerPx: 0 } }))).some((p) =>
+        p.startsWith('tracing.rear.mmPerPx'),
+      ),
+    ).toBe(true);
   });
 
   it('names the path of a non-number', () => {
@@ -72,7 +116,14 @@ describe('sketch schema', () => {
   });
 
   it('refuses a zero-length link', () => {
-    const p = problemsOf(edit((d) => { d.points[2].x = 980; d.points[2].y = 470; d.points[2].z = 330; d.points[2].body = 'axle'; }));
+    const p = problemsOf(
+      edit((d) => {
+        d.points[2].x = 980;
+        d.points[2].y = 470;
+        d.points[2].z = 330;
+        d.points[2].body = 'axle';
+      }),
+    );
     expect(p.some((l) => l.startsWith('members[0]: zero length'))).toBe(true);
   });
 
@@ -93,26 +144,39 @@ describe('sketch schema', () => {
       d.points = Array.from({ length: MAX_POINTS + 1 }, (_, i) => ({ id: `P${i}`, body: 'frame', x: i, y: 0, z: 0 }));
     });
     expect(problemsOf(many)).toContain('points: at most 200 items');
-    const rows = problemsOf(edit((d) => { d.sweep.step = 0.1; }));
+    const rows = problemsOf(
+      edit((d) => {
+        d.sweep.step = 0.1;
+      }),
+    );
     expect(rows.some((l) => l.startsWith('sweep: at most 2000 rows a sweep'))).toBe(true);
   });
 
   it('checks shocks, hinges and the driveline', () => {
-    expect(problemsOf(edit((d) => (d.members[2].minLength = 600)))).toContain('members[2].maxLength: must be greater than minLength (600)');
-    const hinge = problemsOf(edit((d) => d.members.push({ id: 'H', kind: 'hinge', body: 'arm-left', a: 'LL.fl', b: 'LL.al' })));
+    expect(problemsOf(edit((d) => (d.members[2].minLength = 600)))).toContain(
+      'members[2].maxLength: must be greater than minLength (600)',
+    );
+    const hinge = problemsOf(
+      edit((d) => d.members.push({ id: 'H', kind: 'hinge', body: 'arm-left', a: 'LL.fl', b: 'LL.al' })),
+    );
     expect(hinge).toContain("members[9].b: a hinge axis point must be on the frame ('LL.al' is on 'axle')");
     expect(hinge).toContain("members[9].body: no point is on 'arm-left'");
-    expect(problemsOf(edit((d) => (d.driveline.pinion = 'DS.o')))[0]).toMatch(/^driveline\.pinion: 'DS\.o' must be on a moving body/);
+    expect(problemsOf(edit((d) => (d.driveline.pinion = 'DS.o')))[0]).toMatch(
+      /^driveline\.pinion: 'DS\.o' must be on a moving body/,
+    );
   });
 
   it('names a wrong kind, format and version', () => {
-    expect(problemsOf(edit((d) => (d.members[0].kind = 'rod')))[0]).toMatch(/^members\[0\]\.kind: expected one of 'link', 'lateral-rod'/);
+    expect(problemsOf(edit((d) => (d.members[0].kind = 'rod')))[0]).toMatch(
+      /^members\[0\]\.kind: expected one of 'link', 'lateral-rod'/,
+    );
     expect(problemsOf(edit((d) => (d.format = 'other')))).toContain("format: expected 'arcwright.sketch'");
     expect(problemsOf(edit((d) => (d.version = 2)))).toContain('version: expected 1');
   });
 
   it('refuses documents that are not objects', () => {
-    for (const doc of [null, 3, 'text', [], undefined]) expect(problemsOf(doc)).toEqual(['(document): expected an object']);
+    for (const doc of [null, 3, 'text', [], undefined])
+      expect(problemsOf(doc)).toEqual(['(document): expected an object']);
   });
 
   it('parseSketch throws SketchValidationError carrying the problems', () => {

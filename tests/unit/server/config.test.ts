@@ -15,8 +15,20 @@ describe('server configuration', () => {
   });
 
   it('reads the environment and drops a trailing slash from PUBLIC_URL', () => {
-    const c = loadConfig({ PORT: '8080', PUBLIC_URL: 'https://arcwright.example.test/', COOKIE_SECURE: '1', TRUST_PROXY: '2', SMTP_URL: 'smtp://mail.example.test:25' });
-    expect(c).toMatchObject({ port: 8080, publicUrl: 'https://arcwright.example.test', cookieSecure: true, trustProxy: 2, smtpUrl: 'smtp://mail.example.test:25' });
+    const c = loadConfig({
+      PORT: '8080',
+      PUBLIC_URL: 'https://arcwright.example.test/',
+      COOKIE_SECURE: '1',
+      TRUST_PROXY: '2',
+      SMTP_URL: 'smtp://mail.example.test:25',
+    });
+    expect(c).toMatchObject({
+      port: 8080,
+      publicUrl: 'https://arcwright.example.test',
+      cookieSecure: true,
+      trustProxy: 2,
+      smtpUrl: 'smtp://mail.example.test:25',
+    });
   });
 
   it('names the variable when a value is bad', () => {

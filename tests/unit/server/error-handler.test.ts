@@ -7,7 +7,9 @@ import { HttpError } from '../../../server/middleware/http-error';
 
 function appThrowing(err: unknown) {
   const app = express();
-  app.get('/boom', () => { throw err; });
+  app.get('/boom', () => {
+    throw err;
+  });
   app.use(errorHandler);
   return app;
 }

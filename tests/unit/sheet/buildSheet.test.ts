@@ -14,7 +14,9 @@ describe('the build sheet', () => {
     const expected = Math.sqrt((a.x - b.x) ** 2 + (a.y - b.y) ** 2 + (a.z - b.z) ** 2);
     expect(sheet.members.find((m) => m.id === 'ULl')!.length).toBe(`${expected.toFixed(1)} mm`);
     // 25.4 mm to the inch (the international inch, by definition).
-    expect(buildSheet(doc, null, null, 'in').members.find((m) => m.id === 'ULl')!.length).toBe(`${(expected / 25.4).toFixed(2)} in`);
+    expect(buildSheet(doc, null, null, 'in').members.find((m) => m.id === 'ULl')!.length).toBe(
+      `${(expected / 25.4).toFixed(2)} in`,
+    );
   });
 
   it('lists frame brackets apart from the moving pivots, every pivot once', () => {
@@ -32,7 +34,9 @@ describe('the build sheet', () => {
     const shock = doc.members.find((m) => m.kind === 'shock')!;
     const lengths = result.heave.map((r) => r.members[shock.id].length);
     const note = buildSheet(doc, result, null, 'mm').members.find((m) => m.id === shock.id)!.note;
-    expect(note).toContain(`${Math.min(...lengths).toFixed(1)} mm to ${Math.max(...lengths).toFixed(1)} mm over the travel`);
+    expect(note).toContain(
+      `${Math.min(...lengths).toFixed(1)} mm to ${Math.max(...lengths).toFixed(1)} mm over the travel`,
+    );
     expect(note).toMatch(/^stroke \d/);
   });
 

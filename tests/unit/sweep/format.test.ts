@@ -5,7 +5,10 @@ import { MISSING, showAngle, showLength, showPercent, showPosition, showRatio, f
 describe('numbers on the board', () => {
   it('never show NaN: a missing number is a dash with its reason', () => {
     for (const v of [null, undefined, Number.NaN, Number.POSITIVE_INFINITY]) {
-      expect(showLength(v as number | null, 'mm', 'links parallel: no instant centre')).toEqual({ text: MISSING, reason: 'links parallel: no instant centre' });
+      expect(showLength(v as number | null, 'mm', 'links parallel: no instant centre')).toEqual({
+        text: MISSING,
+        reason: 'links parallel: no instant centre',
+      });
       expect(showAngle(v as number | null).text).toBe(MISSING);
       expect(showPercent(v as number | null).text).toBe(MISSING);
       expect(showRatio(v as number | null).text).toBe(MISSING);
@@ -14,11 +17,15 @@ describe('numbers on the board', () => {
 
   it('show any finite number as digits, in either unit', () => {
     fc.assert(
-      fc.property(fc.double({ min: -1e5, max: 1e5, noNaN: true }), fc.constantFrom('mm' as const, 'in' as const), (v, u) => {
-        const shown = showLength(v, u, undefined, true).text;
-        expect(shown).not.toMatch(/NaN|Infinity|undefined/);
-        expect(shown.endsWith(` ${u}`)).toBe(true);
-      }),
+      fc.property(
+        fc.double({ min: -1e5, max: 1e5, noNaN: true }),
+        fc.constantFrom('mm' as const, 'in' as const),
+        (v, u) => {
+          const shown = showLength(v, u, undefined, true).text;
+          expect(shown).not.toMatch(/NaN|Infinity|undefined/);
+          expect(shown.endsWith(` ${u}`)).toBe(true);
+        },
+      ),
     );
   });
 

@@ -10,7 +10,10 @@ const TOL = 1e-9;
 
 function sweepOf(layout: keyof typeof starters): { result: SweepResult; ctx: SweepContext } {
   const sketch = starters[layout]!.build();
-  return { result: runSweep(sketch), ctx: { members: sketch.members, hasAxle: sketch.points.some((p) => p.body === 'axle') } };
+  return {
+    result: runSweep(sketch),
+    ctx: { members: sketch.members, hasAxle: sketch.points.some((p) => p.body === 'axle') },
+  };
 }
 
 describe('travel plots of a solid axle', () => {
@@ -18,7 +21,15 @@ describe('travel plots of a solid axle', () => {
 
   it('plots the travel quantities, the shocks, then bind and roll steer in roll', () => {
     const plots = buildPlots(result, ctx, {}, [], 'mm');
-    expect(plots.map((p) => p.key)).toEqual(['pinion', 'lateral', 'antisquat', 'foreaft', 'shocks', 'bind', 'rollsteer']);
+    expect(plots.map((p) => p.key)).toEqual([
+      'pinion',
+      'lateral',
+      'antisquat',
+      'foreaft',
+      'shocks',
+      'bind',
+      'rollsteer',
+    ]);
     expect(plots.filter((p) => p.sweep === 'roll').map((p) => p.key)).toEqual(['bind', 'rollsteer']);
   });
 
@@ -42,7 +53,10 @@ describe('travel plots of a solid axle', () => {
     const shocks = buildPlots(result, ctx, {}, [], 'mm').find((p) => p.key === 'shocks')!;
     const shl = ctx.members.find((m) => m.id === 'SHl')!;
     const limits = shocks.series.filter((s) => s.label.startsWith('SHl ') && s.dash);
-    expect(limits.map((s) => s.points[0].y)).toEqual([shl.kind === 'shock' ? shl.minLength : NaN, shl.kind === 'shock' ? shl.maxLength : NaN]);
+    expect(limits.map((s) => s.points[0].y)).toEqual([
+      shl.kind === 'shock' ? shl.minLength : NaN,
+      shl.kind === 'shock' ? shl.maxLength : NaN,
+    ]);
   });
 
   it('shades a target band in plot units, red where the target is missed', () => {

@@ -23,7 +23,8 @@ async function mountOnBoard<T>(component: T, doc?: Sketch) {
   return { ...stores, wrapper };
 }
 
-const valueOf = (w: ReturnType<typeof mount>, key: string) => w.get(`[data-test="readout-${key}"] .board-readout__value`);
+const valueOf = (w: ReturnType<typeof mount>, key: string) =>
+  w.get(`[data-test="readout-${key}"] .board-readout__value`);
 
 describe('the readout', () => {
   it('shows the ride row by default, in mm, with the sweep’s own numbers', async () => {
@@ -96,7 +97,9 @@ describe('the flags', () => {
     board.setMemberField('SHl', 'maxLength', Math.round(rideLen + 20));
     await settled(sweep);
     await flushPromises();
-    const item = wrapper.findAll('[data-test="flag-shock-extended"]').find((w) => w.attributes('data-member') === 'SHl');
+    const item = wrapper
+      .findAll('[data-test="flag-shock-extended"]')
+      .find((w) => w.attributes('data-member') === 'SHl');
     expect(item).toBeDefined();
     expect(item!.text()).toContain('Shock tops out');
     expect(item!.find('.board-flags__where').text()).toMatch(/^(\u2212\d+\.\d mm droop|[+\u2212]\d+\.\d° roll)$/);
@@ -110,7 +113,10 @@ describe('the flags', () => {
     expect(count).toBe(sweep.flags.filter((f) => f.severity !== 'info').length);
     expect(count).toBeGreaterThan(0);
     // A generous joint-angle limit and a short sweep leave nothing to flag.
-    board.commit('Quiet sweep', (d) => ({ ...d, sweep: { ...d.sweep, droop: -20, bump: 20, roll: 1, jointAngleLimit: 20 } }));
+    board.commit('Quiet sweep', (d) => ({
+      ...d,
+      sweep: { ...d.sweep, droop: -20, bump: 20, roll: 1, jointAngleLimit: 20 },
+    }));
     await settled(sweep);
     await flushPromises();
     expect(sweep.flags).toEqual([]);

@@ -37,7 +37,8 @@ async function mountOnBoard(doc: Sketch) {
   return { ...stores, wrapper };
 }
 
-const valueOf = (w: ReturnType<typeof mount>, key: string) => w.get(`[data-test="readout-${key}"] .board-readout__value`);
+const valueOf = (w: ReturnType<typeof mount>, key: string) =>
+  w.get(`[data-test="readout-${key}"] .board-readout__value`);
 
 async function typeInto(w: ReturnType<typeof mount>, testId: string, text: string) {
   const input = w.get(`[data-test="${testId}"]`);
@@ -62,7 +63,9 @@ describe('the readout on a leaf-sprung axle', () => {
     for (const s of shocks) {
       expect(valueOf(wrapper, `wu-${s.id}`).text()).toMatch(/^([+−]?\d+\.\d mm)$/);
       expect(valueOf(wrapper, `wu-${s.id}`).text()).toBe(`${fixed(w.members[s.id]!.lengthChange, 1, true)} mm`);
-      expect(valueOf(wrapper, `dl-${s.id}`).text()).toBe(`${fixed(result.ride.members[s.id]!.lengthChange, 1, true)} mm`);
+      expect(valueOf(wrapper, `dl-${s.id}`).text()).toBe(
+        `${fixed(result.ride.members[s.id]!.lengthChange, 1, true)} mm`,
+      );
     }
     expect(wrapper.text()).not.toMatch(/NaN|undefined|Infinity/);
   });
@@ -106,7 +109,8 @@ describe('the readout on a four-link axle', () => {
     const ride = sweep.result!.ride.linkLoads!;
     const linked = doc.members.filter((m) => m.kind === 'link' || m.kind === 'lateral-rod');
     expect(Object.keys(loads.members).sort()).toEqual(linked.map((m) => m.id).sort());
-    for (const m of linked) expect(valueOf(wrapper, `load-${m.id}`).text()).toContain(`${fixed(ride[m.id]!, 0, true)} N`);
+    for (const m of linked)
+      expect(valueOf(wrapper, `load-${m.id}`).text()).toContain(`${fixed(ride[m.id]!, 0, true)} N`);
     expect(loads.indeterminate).toBe(true);
     expect(valueOf(wrapper, 'load-split').text()).toBe('indeterminate');
     expect(valueOf(wrapper, `load-${linked[0]!.id}`).text().startsWith('≈')).toBe(true);
@@ -117,7 +121,8 @@ describe('the readout on a four-link axle', () => {
     const at = new Map(doc.points.map((p) => [p.id, p]));
     let sumX = loads.tractiveForce;
     for (const m of linked) {
-      const a = at.get(m.a)!, b = at.get(m.b)!;
+      const a = at.get(m.a)!,
+        b = at.get(m.b)!;
       const [axleEnd, frameEnd] = a.body === 'frame' ? [b, a] : [a, b];
       const len = Math.hypot(frameEnd.x - axleEnd.x, frameEnd.y - axleEnd.y, frameEnd.z - axleEnd.z);
       sumX += (ride[m.id]! * (frameEnd.x - axleEnd.x)) / len;
@@ -129,7 +134,9 @@ describe('the readout on a four-link axle', () => {
   it('marks a load over the user’s limit, set and cleared through the input', async () => {
     const { wrapper, sweep, board } = await mountOnBoard(fourLink());
     const loads = sweep.result!.loads!;
-    const biggest = Object.entries(loads.members).sort((x, y) => Math.max(Math.abs(y[1].min), Math.abs(y[1].max)) - Math.max(Math.abs(x[1].min), Math.abs(x[1].max)))[0]!;
+    const biggest = Object.entries(loads.members).sort(
+      (x, y) => Math.max(Math.abs(y[1].min), Math.abs(y[1].max)) - Math.max(Math.abs(x[1].min), Math.abs(x[1].max)),
+    )[0]!;
     const peak = Math.max(Math.abs(biggest[1].min), Math.abs(biggest[1].max));
     await typeInto(wrapper, 'readout-load-limit', String(Math.floor(peak / 2)));
     await settled(sweep);
@@ -150,7 +157,13 @@ describe('load lines without numbers', () => {
   it('shows "—" with a reason for a row where the links do not locate the axle', () => {
     const row = { travel: 0, members: {}, linkLoads: {} } as never;
     const ctx = { ...EMPTY_CONTEXT, hasAxle: true, members: [{ id: 'LL', kind: 'link', a: 'p', b: 'q' }] as never };
-    const loads = { torque: 4000, tractiveForce: 12000, limit: null, indeterminate: false, members: { LL: { ride: 1, min: 1, max: 1, reverses: false, overLimit: false } } };
+    const loads = {
+      torque: 4000,
+      tractiveForce: 12000,
+      limit: null,
+      indeterminate: false,
+      members: { LL: { ride: 1, min: 1, max: 1, reverses: false, overLimit: false } },
+    };
     const lines = readoutLines({ sweep: 'heave', row }, ctx, 'mm', { loads });
     const l = lines.find((x) => x.key === 'load-LL')!;
     expect(l.text).toBe('—');

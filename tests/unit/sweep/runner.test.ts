@@ -35,7 +35,10 @@ describe('latest-wins sweep runner', () => {
   it('keeps one request in the worker and drops those a newer one supersedes', () => {
     const w = new HeldWorker();
     const answers: SweepAnswer[] = [];
-    const runner = createSweepRunner((a) => answers.push(a), { useWorker: true, createWorker: () => w as unknown as Worker });
+    const runner = createSweepRunner((a) => answers.push(a), {
+      useWorker: true,
+      createWorker: () => w as unknown as Worker,
+    });
 
     runner.request(docWithTrack(1500));
     runner.request(docWithTrack(1510));
@@ -56,7 +59,10 @@ describe('latest-wins sweep runner', () => {
   it('throws away an answer older than the one already shown', () => {
     const w = new HeldWorker();
     const answers: SweepAnswer[] = [];
-    const runner = createSweepRunner((a) => answers.push(a), { useWorker: true, createWorker: () => w as unknown as Worker });
+    const runner = createSweepRunner((a) => answers.push(a), {
+      useWorker: true,
+      createWorker: () => w as unknown as Worker,
+    });
     runner.request(docWithTrack(1500));
     const stale = computeSweep(w.sent[0]);
     w.answer(0);
@@ -90,7 +96,10 @@ describe('latest-wins sweep runner', () => {
   it('falls back to the main thread when the worker fails to load, and still answers the request', async () => {
     const w = new HeldWorker();
     const answers: SweepAnswer[] = [];
-    const runner = createSweepRunner((a) => answers.push(a), { useWorker: true, createWorker: () => w as unknown as Worker });
+    const runner = createSweepRunner((a) => answers.push(a), {
+      useWorker: true,
+      createWorker: () => w as unknown as Worker,
+    });
     runner.request(docWithTrack(1500));
     w.fail();
     expect(w.terminated).toBe(true);
@@ -108,13 +117,17 @@ describe('latest-wins sweep runner', () => {
     runner.request(bad);
     await runner.whenIdle();
     expect(answers[0].ok).toBe(false);
-    if (!answers[0].ok) expect(answers[0].problems.some((p) => p.includes("members[0].a") && p.includes("'nowhere'"))).toBe(true);
+    if (!answers[0].ok)
+      expect(answers[0].problems.some((p) => p.includes('members[0].a') && p.includes("'nowhere'"))).toBe(true);
   });
 
   it('validates on the page: the worker gets the parsed sketch, an invalid one never reaches it', () => {
     const w = new HeldWorker();
     const answers: SweepAnswer[] = [];
-    const runner = createSweepRunner((a) => answers.push(a), { useWorker: true, createWorker: () => w as unknown as Worker });
+    const runner = createSweepRunner((a) => answers.push(a), {
+      useWorker: true,
+      createWorker: () => w as unknown as Worker,
+    });
     // A document without its sweep block: the schema fills in the defaults the solver reads.
     const { sweep: _omitted, ...withoutSweep } = docWithTrack(1500);
     runner.request(withoutSweep);

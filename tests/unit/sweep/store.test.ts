@@ -175,7 +175,12 @@ describe('targets live in the document', () => {
     expect(sweep.setTargets(startingTargets).ok).toBe(true);
     expect((board.sketch as { targets?: unknown }).targets).toEqual(startingTargets);
     expect(sweep.targets).toEqual(startingTargets);
-    expect(sweep.targetChecks.map((c) => c.metric).sort()).toEqual(['antiSquat', 'articulation', 'lateralShift', 'pinionAngleChange']);
+    expect(sweep.targetChecks.map((c) => c.metric).sort()).toEqual([
+      'antiSquat',
+      'articulation',
+      'lateralShift',
+      'pinionAngleChange',
+    ]);
     board.undo();
     expect(board.sketch).toEqual(before);
     expect(sweep.targets).toEqual({});

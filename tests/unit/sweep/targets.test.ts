@@ -25,21 +25,40 @@ function heave(travel: number, over: Partial<HeaveRow> = {}): HeaveRow {
 }
 
 function roll(deg: number, over: Partial<RollRow> = {}): RollRow {
-  return { roll: deg, pose: { ...pose, roll: deg }, bodies: {}, leftTravel: 0, rightTravel: 0, rollSteer: deg === 0 ? null : 0, bind: 0, members: {}, ...over };
+  return {
+    roll: deg,
+    pose: { ...pose, roll: deg },
+    bodies: {},
+    leftTravel: 0,
+    rightTravel: 0,
+    rollSteer: deg === 0 ? null : 0,
+    bind: 0,
+    members: {},
+    ...over,
+  };
 }
 
 function result(heaveRows: HeaveRow[], rollRows: RollRow[] = [], articulation = 8): SweepResult {
   return {
     heave: heaveRows,
     roll: rollRows,
-    limits: { droop: heaveRows[0]?.travel ?? 0, bump: heaveRows.at(-1)?.travel ?? 0, articulation, rollMin: -articulation, rollMax: articulation, events: [] },
+    limits: {
+      droop: heaveRows[0]?.travel ?? 0,
+      bump: heaveRows.at(-1)?.travel ?? 0,
+      articulation,
+      rollMin: -articulation,
+      rollMax: articulation,
+      events: [],
+    },
     warnings: [],
     ride: heaveRows.find((r) => r.travel === 0) ?? heave(0),
   };
 }
 
 // Pinion angle change rising 1° per 20 mm of bump, falling the same in droop: −5° … +5° over −100 … +100 mm.
-const linearPinion = result([-100, -80, -60, -40, -20, 0, 20, 40, 60, 80, 100].map((t) => heave(t, { pinionAngleChange: t / 20 })));
+const linearPinion = result(
+  [-100, -80, -60, -40, -20, 0, 20, 40, 60, 80, 100].map((t) => heave(t, { pinionAngleChange: t / 20 })),
+);
 
 describe('checking target bands against a sweep', () => {
   it('finds where a band is first left, counting outwards from ride', () => {
@@ -100,16 +119,25 @@ describe('typing a band', () => {
 
   it('keeps angles and percentages as typed, whatever the length unit', () => {
     expect(editTarget({}, 'antiSquat', 'min', '60', 'in')).toEqual({ ok: true, targets: { antiSquat: { min: 60 } } });
-    expect(editTarget({}, 'pinionAngleChange', 'min', '\u22123', 'mm')).toEqual({ ok: true, targets: { pinionAngleChange: { min: -3 } } });
+    expect(editTarget({}, 'pinionAngleChange', 'min', '\u22123', 'mm')).toEqual({
+      ok: true,
+      targets: { pinionAngleChange: { min: -3 } },
+    });
   });
 
   it('refuses text that is not a number, and a band upside down, changing nothing', () => {
     expect(editTarget({}, 'antiSquat', 'min', 'sixty', 'mm')).toEqual({ ok: false, error: '“sixty” is not a number.' });
-    expect(editTarget({ antiSquat: { max: 50 } }, 'antiSquat', 'min', '60', 'mm')).toEqual({ ok: false, error: 'The lower end is above the upper end.' });
+    expect(editTarget({ antiSquat: { max: 50 } }, 'antiSquat', 'min', '60', 'mm')).toEqual({
+      ok: false,
+      error: 'The lower end is above the upper end.',
+    });
   });
 
   it('opens an end when its box is emptied, and drops a band left empty', () => {
-    expect(editTarget({ antiSquat: { min: 60, max: 90 } }, 'antiSquat', 'max', '', 'mm')).toEqual({ ok: true, targets: { antiSquat: { min: 60 } } });
+    expect(editTarget({ antiSquat: { min: 60, max: 90 } }, 'antiSquat', 'max', '', 'mm')).toEqual({
+      ok: true,
+      targets: { antiSquat: { min: 60 } },
+    });
     expect(editTarget({ antiSquat: { min: 60 } }, 'antiSquat', 'min', ' ', 'mm')).toEqual({ ok: true, targets: {} });
   });
 });
@@ -126,8 +154,10 @@ describe('flags for missed targets', () => {
 
 describe('the sweep’s notes', () => {
   it('are not flags: only events and missed targets are, so the readout alone shows the notes', () => {
-    const r = { ...result([-50, 0, 50].map((t) => heave(t))), warnings: ['The leaf springs locate the axle sideways; no lateral rod is modelled.'] };
+    const r = {
+      ...result([-50, 0, 50].map((t) => heave(t))),
+      warnings: ['The leaf springs locate the axle sideways; no lateral rod is modelled.'],
+    };
     expect(buildFlags(r, [], [], 'mm')).toEqual([]);
   });
 });
-

@@ -81,7 +81,10 @@ describe('a tracing photo on the side view', () => {
     const a = planeAtImagePx(photo, 300, 800, view);
     const near = planeAtImagePx(photo, 301, 800, view);
     expect(rescaleFromPicks(photo, a, near, 3250)).toMatchObject({ ok: false });
-    expect(rescaleFromPicks(photo, a, planeAtImagePx(photo, 1600, 800, view), 0)).toMatchObject({ ok: false, error: 'The real distance must be a length above zero.' });
+    expect(rescaleFromPicks(photo, a, planeAtImagePx(photo, 1600, 800, view), 0)).toMatchObject({
+      ok: false,
+      error: 'The real distance must be a length above zero.',
+    });
   });
 
   it('starts about the size of a vehicle of that wheelbase, standing on the ground', () => {
@@ -95,8 +98,12 @@ describe('what may be a tracing', () => {
   it('takes PNG and JPEG up to 10 MB and names the problem otherwise', () => {
     expect(photoProblem({ type: 'image/png', size: 1000, name: 'frame.png' })).toBeNull();
     expect(photoProblem({ type: 'image/jpeg', size: MAX_TRACING_BYTES, name: 'frame.jpg' })).toBeNull();
-    expect(photoProblem({ type: 'image/gif', size: 1000, name: 'frame.gif' })).toBe('“frame.gif” is not a PNG or JPEG photo.');
-    expect(photoProblem({ type: 'image/png', size: MAX_TRACING_BYTES + 1, name: 'big.png' })).toBe('“big.png” is 10.0 MB; a tracing may be up to 10 MB.');
+    expect(photoProblem({ type: 'image/gif', size: 1000, name: 'frame.gif' })).toBe(
+      '“frame.gif” is not a PNG or JPEG photo.',
+    );
+    expect(photoProblem({ type: 'image/png', size: MAX_TRACING_BYTES + 1, name: 'big.png' })).toBe(
+      '“big.png” is 10.0 MB; a tracing may be up to 10 MB.',
+    );
   });
 
   it('reads the document field per view, ignoring a malformed one, and writes it back', () => {
