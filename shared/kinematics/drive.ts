@@ -1,7 +1,7 @@
 /**
  * What a sweep imposes. A row is set by two numbers, heave travel (mm) and roll (deg);
  * the heave sweep holds roll at 0, the roll sweep holds travel at 0, the grid varies both.
- * - solid axle: z = travel, roll = roll (sketch-format.md);
+ * - solid axle: z = travel, roll = roll (docs/sketch-format.md);
  * - wheel carrier (arm, knuckle): its wheel centre's z = travel ± halfTrack·tan(roll),
  *   left side up for positive roll, as the axle's wheels would move;
  * - free bodies: nothing imposed (a body of one point: its rotation, which moves nothing, is held).

@@ -1,7 +1,7 @@
 /**
  * Half-shafts from a frame-mounted drive unit to independent wheels (sketch `halfShafts`):
  * length, plunge from ride, and the two joints' operating angles in 3-D (the compound angle,
- * references.md), read with the same formula as the driveshaft (metrics/driveline.ts: the
+ * docs/references.md), read with the same formula as the driveshaft (metrics/driveline.ts: the
  * inner joint takes the drive unit's output axis, the outer joint the wheel's spin axis).
  */
 import type { Sketch } from '../schema/sketch';

@@ -1,7 +1,7 @@
 /**
  * Leaf springs in the linkage model: the SAE three-link approximation (SAE AE-11 Spring
  * Design Manual; Blundell & Harty, Multibody Systems Approach to Vehicle Dynamics,
- * fig. 6.15 — references.md, from memory, unverified). Each half of a spring is a link from
+ * fig. 6.15 — docs/references.md, from memory, unverified). Each half of a spring is a link from
  * its eye (the frame hanger, or the shackle's lower eye) to a pivot on the rigid centre block
  * (the axle seat), and the shackle is the third link. The bodies and constraints it brings:
  * - `leaf-half`: its length (a distance constraint, like a link), and its bend at the axle

@@ -120,7 +120,7 @@ function bodyReference(sketch: Sketch, body: MovingBodyId): Vec3 {
   const pts = sketch.points.filter((p) => p.body === body);
   const wl = sketch.points.find((p) => p.id === sketch.wheels.left);
   const wr = sketch.points.find((p) => p.id === sketch.wheels.right);
-  // sketch-format.md: the axle reference point is the midpoint of the two wheel centres.
+  // docs/sketch-format.md: the axle reference point is the midpoint of the two wheel centres.
   if (wl && wr && wl.body === body && wr.body === body) return vecMid(wl, wr);
   const wheel = [wl, wr].find((w) => w && w.body === body);
   if (wheel) return vec(wheel.x, wheel.y, wheel.z);

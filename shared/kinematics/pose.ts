@@ -1,7 +1,7 @@
 /**
  * Pose maths. A pose is (x, y, z, roll, pitch, yaw): the translation of a body's
  * reference point from its ride position and the rotation R = Rz(yaw)·Ry(pitch)·Rx(roll)
- * about that point (sketch-format.md; ISO 8855 signs). Inside the core a pose is six
+ * about that point (docs/sketch-format.md; ISO 8855 signs). Inside the core a pose is six
  * numbers in a Float64Array slot, translations in mm and angles in radians.
  */
 import { degToRad, radToDeg } from '../units';

@@ -1,6 +1,6 @@
 /**
  * Turning solved poses into result rows: place the points, then read every metric of
- * sketch-format.md off them. The plan (which links stand for which group, which rod gives
+ * docs/sketch-format.md off them. The plan (which links stand for which group, which rod gives
  * the roll centre) is made once per sweep.
  */
 import type { MovingBodyId, SketchMember } from '../schema/sketch';

@@ -1,5 +1,5 @@
 /**
- * Trailing-arm (and semi-trailing-arm) readings of one row (sketch-format.md, "Trailing-arm
+ * Trailing-arm (and semi-trailing-arm) readings of one row (docs/sketch-format.md, "Trailing-arm
  * layouts"), added to the generic rows by rows.ts when wheels ride on arms with hinges:
  * - heave, for the left arm: camber, toe, track change (metrics/wheel.ts); the side-view
  *   instant centre where the hinge axis meets the fore-aft plane through the wheel centre,
@@ -79,7 +79,7 @@ export function trailingArmHeaveFields(
 
   const side = axisInView(s.axisA, s.axisB, 'y', wc.y);
   const instantCenter = side && 'point' in side ? { x: side.point.u, z: side.point.v } : null;
-  // Frame-mounted drive: the line runs from the wheel centre (sketch-format.md, anti-squat).
+  // Frame-mounted drive: the line runs from the wheel centre (docs/sketch-format.md, anti-squat).
   const parallelSlope =
     side && 'direction' in side && side.direction.u !== 0 ? side.direction.v / side.direction.u : null;
   const antiSquat = antiSquatPercent(instantCenter, { x: wc.x, z: wc.z }, plan.cgHeight, plan.wheelbase, parallelSlope);

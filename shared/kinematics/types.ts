@@ -1,5 +1,5 @@
 /**
- * The sweep result: the contract of sketch-format.md ("Sweep result"), plus the agreed
+ * The sweep result: the contract of docs/sketch-format.md ("Sweep result"), plus the agreed
  * additions (`bodies` per row, `lengthChange` per member, `ride`, event `sweep`, and a
  * few fields marked "addition" below). Every number is finite; "does not apply" or
  * "does not exist" is `null`, never NaN.
@@ -112,7 +112,7 @@ export interface HeaveRow {
   trackChange?: Mm;
   /** deg, change of the left kingpin axis' side-view angle, positive when its top moves rearward (addition: double wishbone) */
   casterChange?: Deg | null;
-  /** front-view instant centre of the left knuckle (sketch-format.md construction); null when the wishbone lines are parallel (addition: double wishbone) */
+  /** front-view instant centre of the left knuckle (docs/sketch-format.md construction); null when the wishbone lines are parallel (addition: double wishbone) */
   frontViewInstantCenter?: FrontPoint | null;
   /** the left kingpin axis at this row (addition: double wishbone); null when the ball joints are level */
   kingpin?: KingpinReading | null;

@@ -1,13 +1,13 @@
 /**
  * Axle wind-up of a leaf-sprung axle at ride height.
  *
- * Rate (cantilever model; references.md gives K_vertical·L1·L2 as a derivation, not a
+ * Rate (cantilever model; docs/references.md gives K_vertical·L1·L2 as a derivation, not a
  * published value): each half of a spring is a cantilever clamped at the seat, of length L_i
  * (seat to eye, side view) and vertical rate k_i at its eye. Turning the seat by a small angle φ
  * lifts one eye's cantilever tip by L_i·φ relative to the seat, so the eye pushes back with
  * k_i·L_i·φ at lever L_i: the spring resists with T = (k1·L1² + k2·L2²)·φ. A spring whose seat
  * stays level under a vertical load K·δ has k1·L1 = k2·L2 with k1 + k2 = K, so k1 = K·L2/(L1+L2),
- * k2 = K·L1/(L1+L2), and the rate is K·L1·L2 — the form in references.md. Each half's `rate`
+ * k2 = K·L1/(L1+L2), and the rate is K·L1·L2 — the form in docs/references.md. Each half's `rate`
  * is its k_i; the rates of both springs add. The SAE three-link model gives the same rate for
  * small angles (its link of length ℓ = ¾·L_i with a torsional spring k_i·ℓ² at its root).
  *

@@ -1,5 +1,5 @@
 /**
- * Finding the double wishbones of a sketch (sketch-format.md): on each knuckle that carries
+ * Finding the double wishbones of a sketch (docs/sketch-format.md): on each knuckle that carries
  * a wheel, an upper and a lower wishbone, each two `link`s of that `group` from two frame
  * pivots to one ball-joint point on the knuckle, and a `tie-rod` from the frame (the rack
  * end) to the knuckle (the steering arm). Found from the points and members, never from

@@ -1,5 +1,5 @@
 /**
- * Double-wishbone readings of one row (sketch-format.md, "Double-wishbone layouts"), added to
+ * Double-wishbone readings of one row (docs/sketch-format.md, "Double-wishbone layouts"), added to
  * the generic heave and roll rows by rows.ts when the sketch has knuckles on wishbones:
  * - heave: the left wheel's camber, toe (bump steer), track and caster change; the front-view
  *   instant centre and the roll-centre height by the format's construction; the side-view

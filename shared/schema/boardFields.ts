@@ -1,5 +1,5 @@
 /**
- * The sketch's optional board fields (additions to format v1; DEVELOPERS.md): the designer's
+ * The sketch's optional board fields (additions to format v1; docs/sketch-format.md): the designer's
  * `targets` and the `tracing` photos behind the views. They do not change the sweep, but they
  * save, export and import with the sketch, so the server checks them like every other field.
  * Objects are loose, as in the rest of the format: a key this build does not know survives.

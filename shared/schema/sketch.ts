@@ -1,5 +1,5 @@
 /**
- * Sketch exchange format, version 1 (../shared/design/sketch-format.md, a contract).
+ * Sketch exchange format, version 1 (docs/sketch-format.md, a contract).
  * One zod schema validates the file for the client, the server and the command line;
  * the types are inferred from it. Objects are "loose": fields this build does not know
  * are kept, so a richer document (or a later minor addition) survives a round trip.
@@ -55,7 +55,7 @@ export const memberSchema = z.discriminatedUnion('kind', [
   }),
   z.looseObject({ ...memberBase, kind: z.literal('spring'), rate: z.number().positive().max(1e6).optional() }),
   z.looseObject({ ...memberBase, kind: z.literal('hinge'), body: z.enum(['arm-left', 'arm-right']) }),
-  // Leaf-spring layouts (addition; DEVELOPERS notes): one half of a leaf spring as the SAE
+  // Leaf-spring layouts (addition; docs/design/leaf-spring.md): one half of a leaf spring as the SAE
   // three-link model's equivalent link, from its eye `a` (frame hanger or shackle) to its
   // pivot `b` on the axle, bending about `seat` (the axle point at the spring's seat centre);
   // `rate` (N/mm) is this half's share of the spring's vertical rate at the seat.

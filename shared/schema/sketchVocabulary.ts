@@ -1,5 +1,5 @@
 /**
- * The words and bounds of the sketch format (../shared/design/sketch-format.md) that the
+ * The words and bounds of the sketch format (docs/sketch-format.md) that the
  * solver reads as values: layouts, bodies, member kinds, size bounds and defaults. They live
  * apart from the zod schema (sketch.ts, which re-exports them) so that the kinematics core can
  * import them without the validator: the board's sweep worker runs on sketches the page has
@@ -71,7 +71,7 @@ export const DEFAULT_BIND_THRESHOLD_MM = 1.5;
 export const DEFAULT_AXLE_TORQUE_NM = 4000;
 /** N·m, the largest axle torque a file may ask for (a heavy truck's first gear is well below). */
 export const MAX_AXLE_TORQUE_NM = 200_000;
-/** Common practice for smooth running at road speed (references.md, driveline guides); no published source. */
+/** Common practice for smooth running at road speed (docs/references.md, driveline guides); no published source. */
 export const DEFAULT_JOINT_ANGLE_LIMIT_DEG = 3;
 
 /** Share of the braking force on the front axle when a file gives none (%; common practice for road vehicles, no published source). */

@@ -1,5 +1,5 @@
 /**
- * The product's caution (product.md, "Cautions to show"): shown on the board once per user,
+ * The product's caution (the same words as README.md, "Cautions"): shown on the board once per user,
  * dismissible, and always reachable from the board's menu. Which users have dismissed it is
  * kept in localStorage, so it stays dismissed across visits on this browser.
  */

@@ -1,6 +1,6 @@
 /**
  * The sweep range of a sketch as the sliders and plots use it: the file's `sweep` block
- * with the format's defaults filled in (sketch-format.md; shared/schema/sketch.ts).
+ * with the format's defaults filled in (docs/sketch-format.md; shared/schema/sketch.ts).
  */
 import { sweepSettingsSchema } from '../../shared/schema/sketch';
 import type { Deg, Mm } from '../../shared/units';

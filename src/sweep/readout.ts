@@ -69,7 +69,7 @@ function reasons(ctx: SweepContext) {
   };
 }
 
-/** Optional fields that independent layouts add to heave rows (sketch-format.md). */
+/** Optional fields that independent layouts add to heave rows (docs/sketch-format.md). */
 interface IndependentFields {
   camberChange?: number | null;
   toeChange?: number | null;

@@ -2,7 +2,7 @@
  * Anti-squat of a solid drive axle: the line from the contact patch through the side-view
  * instant centre, %AS = 100 · tanθ / (h/L) (Milliken & Milliken, Race Car Vehicle Dynamics,
  * ch. 17; Gillespie, Fundamentals of Vehicle Dynamics, ch. 2 — formula forms from memory,
- * unverified). Worked check (references.md): L = 2700, h = 500, IC 1000 ahead and 300 high
+ * unverified). Worked check (docs/references.md): L = 2700, h = 500, IC 1000 ahead and 300 high
  * → 162.0 %. The instant centre is cross-checked with mathjs `intersect`.
  */
 import { intersect } from 'mathjs';

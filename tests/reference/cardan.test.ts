@@ -1,6 +1,6 @@
 /**
  * Universal (Cardan) joint: tanφ2 = tanφ1 / cosβ, ω2/ω1 = cosβ / (1 − sin²β·cos²φ1); the speed
- * ratio swings between cosβ and 1/cosβ (standard kinematics texts). references.md:
+ * ratio swings between cosβ and 1/cosβ (standard kinematics texts). docs/references.md:
  * 1/cosβ − cosβ = 0.002743 at 3°, 0.007625 at 5°, 0.03062 at 10°.
  * The rig's driveline is built with a known joint angle β at the output; the solver's
  * operating angle must be β, and the speed fluctuation computed from it the table's.

@@ -1,5 +1,5 @@
 /**
- * Cross-checks with general-purpose geometry libraries (references.md):
+ * Cross-checks with general-purpose geometry libraries (docs/references.md):
  * - @flatten-js/core circle–circle intersection gives the four-bar's coupler joint B from
  *   the crank joint A (both branches); the solver's B must be one of them at every row;
  * - mathjs `intersect` gives line crossings: the side-view instant centre of the example

@@ -6,7 +6,7 @@
  * the pinion angle change) and rocker angle (θ4) are checked against:
  * - R. L. Norton, Design of Machinery, ch. 4: closed-form θ3 and θ4, open and crossed branches;
  * - F. Freudenstein's equation (Trans. ASME 1955; Ghosal, Resonance, Aug 2010);
- * - the worked example of references.md (believed to be Norton's Example 4-1; inputs from
+ * - the worked example of docs/references.md (believed to be Norton's Example 4-1; inputs from
  *   memory, outputs recomputed two independent ways) and its second case.
  */
 import { describe, expect, it } from 'vitest';
@@ -104,7 +104,7 @@ describe('four-bar against Norton and Freudenstein', () => {
       expect(Math.abs(last.theta3 - k.expect3)).toBeLessThan(TABLE_TOL_DEG);
       expect(Math.abs(last.theta4 - k.expect4)).toBeLessThan(TABLE_TOL_DEG);
       if (k.branch === 'open' && k.a === 400) {
-        // Transmission angle µ = θ4 − θ3 = 37.03° (references.md).
+        // Transmission angle µ = θ4 − θ3 = 37.03° (docs/references.md).
         expect(Math.abs(last.theta4 - last.theta3 - 37.03)).toBeLessThan(0.005);
       }
     });

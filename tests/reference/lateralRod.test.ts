@@ -1,6 +1,6 @@
 /**
  * Lateral rod (track bar) arc: rod length L, axle end h0 above the frame end,
- * Δy(z) = √(L² − h0²) − √(L² − (h0+z)²) (plain arc geometry; table in references.md).
+ * Δy(z) = √(L² − h0²) − √(L² − (h0+z)²) (plain arc geometry; table in docs/references.md).
  * Roll centre: where the rod's rear-view line crosses the vehicle centreline (course notes on
  * rigid-axle roll centres; Heisler, Advanced Vehicle Technology, fig. 10.28).
  * The rig translates the axle on four 20 m parallel links, so the rod alone sets y; the

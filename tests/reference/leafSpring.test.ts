@@ -1,7 +1,7 @@
 /**
  * The leaf-spring model against the SAE three-link description (SAE AE-11 Spring Design
  * Manual; Blundell & Harty, Multibody Systems Approach to Vehicle Dynamics, fig. 6.15 —
- * references.md: "each half of the spring acts like a rigid link pivoted near its eye, of
+ * docs/references.md: "each half of the spring acts like a rigid link pivoted near its eye, of
  * about ¾ of the cantilever length (from memory, unverified), with a rigid centre block at the
  * axle seat and the shackle as a third link").
  *
@@ -11,7 +11,7 @@
  * (@flatten-js/core circle intersection), and the spring settles at the pitch of least bending
  * energy Σ k_i·ℓ_i²·sin²(bend_i) (the model's stated energy, leafSpring.ts), found by
  * golden-section search. The sweep (3-D, both springs, least squares) must agree.
- * The wind-up rate K·L1·L2 is a derivation (cantilever model; references.md, not a published value).
+ * The wind-up rate K·L1·L2 is a derivation (cantilever model; docs/references.md, not a published value).
  */
 import Flatten from '@flatten-js/core';
 import { describe, expect, it } from 'vitest';

@@ -66,7 +66,7 @@ const deg = (r: number) => (r * 180) / Math.PI;
 
 export type Branch = 'open' | 'crossed';
 
-/** Norton's closed form (Design of Machinery, ch. 4), as written in references.md. */
+/** Norton's closed form (Design of Machinery, ch. 4), as written in docs/references.md. */
 export function nortonAngles(a: number, b: number, c: number, d: number, theta2Deg: number, branch: Branch) {
   const t2 = rad(theta2Deg);
   const K1 = d / a,

@@ -8,7 +8,7 @@
  *   Rodrigues formula, v' = v·cosθ + (u × v)·sinθ + u·(u·v)·(1 − cosθ) (O. Rodrigues, 1840;
  *   any kinematics text); the rotation itself is mathjs `rotationMatrix(θ, u)` (a
  *   general-purpose library). Camber and toe are then the rear- and top-view angles of the
- *   rotated spin axis (sketch-format.md definitions).
+ *   rotated spin axis (docs/sketch-format.md definitions).
  */
 import { multiply, rotationMatrix } from 'mathjs';
 import { describe, expect, it } from 'vitest';

@@ -2,7 +2,7 @@
  * Double-wishbone checks against plain geometry and a general-purpose library:
  * - equal, parallel wishbones (a parallelogram in the front view) give no camber change in
  *   heave, and the wheel centre follows the arms' circle (plain geometry);
- * - the front-view instant centre and roll centre (sketch-format.md's construction) and the
+ * - the front-view instant centre and roll centre (docs/sketch-format.md's construction) and the
  *   side-view instant centre, rebuilt by hand at every row with mathjs `intersect` (line–plane
  *   and line–line), not the solver's own code;
  * - anti-dive from that side-view instant centre by the published formula (Milliken &

@@ -2,7 +2,7 @@
  * Anti-squat of a solid drive axle: the line from the tyre contact patch through the
  * side-view instant centre; %AS = 100 · tanθ / (h / L) (Milliken & Milliken, Race Car
  * Vehicle Dynamics, ch. 17; Gillespie, Fundamentals of Vehicle Dynamics, ch. 2 — formula
- * forms from memory, unverified), in the form of sketch-format.md:
+ * forms from memory, unverified), in the form of docs/sketch-format.md:
  *   100 · ((IC.z − cp.z) / (IC.x − cp.x)) / (cgHeight / wheelbase).
  */
 import type { SidePoint } from '../types';

@@ -1,7 +1,7 @@
 /**
  * Driveshaft readings: shaft length, plunge from ride, and the operating angle of each
  * joint (the angle between the shafts it joins, in 3-D, so a joint bent in both views gets
- * its compound angle — references.md, driveline installation guides).
+ * its compound angle — docs/references.md, driveline installation guides).
  */
 import { radToDeg } from '../../units';
 import type { DrivelineReading } from '../types';

@@ -1,11 +1,11 @@
 /**
  * Instant centres of an arm turning about a fixed hinge axis. A body with one fixed axis has
  * that axis as its instant axis, so its instant centre in any view plane is where the axis
- * pierces the plane (plain geometry; sketch-format.md, trailing-arm layouts):
+ * pierces the plane (plain geometry; docs/sketch-format.md, trailing-arm layouts):
  * - side view: the vertical fore-aft plane through the wheel centre (y = wheel y);
  * - rear view: the vertical cross plane through the wheel centre (x = wheel x).
  * The rear-view line from the contact patch through that centre crosses y = 0 at the roll
- * centre, as for any independent suspension (the construction sketch-format.md gives for
+ * centre, as for any independent suspension (the construction docs/sketch-format.md gives for
  * double wishbones); an axis parallel to the cross plane (a pure trailing arm) puts the
  * centre at infinity along the axis, and the line from the patch runs parallel to the axis.
  */

@@ -1,6 +1,6 @@
 /**
  * Side-view (x–z) instant centre: where the lines of the left side's upper and lower links
- * cross (sketch-format.md). A single central link stands for its group.
+ * cross (docs/sketch-format.md). A single central link stands for its group.
  */
 import type { Sketch, SketchMember } from '../../schema/sketch';
 import type { SidePoint } from '../types';

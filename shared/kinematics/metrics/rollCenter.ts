@@ -1,6 +1,6 @@
 /**
  * Roll-centre height of a solid axle.
- * - With a lateral rod: z where the rod's rear-view (y–z) line crosses y = 0 (sketch-format.md;
+ * - With a lateral rod: z where the rod's rear-view (y–z) line crosses y = 0 (docs/sketch-format.md;
  *   Heisler, Advanced Vehicle Technology, fig. 10.28).
  * - Without one (a triangulated four-link): the roll axis joins the plan-view crossing of the
  *   upper links to that of the lower links (or runs parallel to the lower links when they

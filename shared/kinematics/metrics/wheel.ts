@@ -1,6 +1,6 @@
 /**
  * Attitude of an independent wheel from the pose of the body that carries it (a trailing
- * arm or a knuckle), as changes from ride (sketch-format.md, trailing-arm and
+ * arm or a knuckle), as changes from ride (docs/sketch-format.md, trailing-arm and
  * double-wishbone heave rows):
  * - `camberChange` (deg, rear view, positive when the top of the wheel leans out),
  * - `toeChange` (deg, top view, positive toe-in),

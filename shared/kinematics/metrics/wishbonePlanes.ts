@@ -1,5 +1,5 @@
 /**
- * The wishbone-plane construction of a double-wishbone knuckle (sketch-format.md): each
+ * The wishbone-plane construction of a double-wishbone knuckle (docs/sketch-format.md): each
  * wishbone is a plane through its two inner pivots and its ball joint; a vertical plane
  * through the wheel centre cuts the two wishbone planes in two lines, whose crossing is the
  * instant centre in that view.

@@ -2,7 +2,7 @@
  * A live axle on two semi-elliptic leaf springs, each with its front eye on a frame hanger and
  * its rear eye on a shackle to a second hanger, built as the SAE three-link model
  * (leafSpring.ts): each half becomes a link from its eye to a pivot a quarter of the way from
- * the seat towards that eye (the link is about ¾ of the cantilever length — references.md,
+ * the seat towards that eye (the link is about ¾ of the cantilever length — docs/references.md,
  * from memory, unverified), the shackle is the third link. Shocks are staggered, the left one
  * ahead of the axle and the right one behind, to fight axle wind-up. Geometry is invented and
  * plausible for a mid-size truck rear.
@@ -79,7 +79,7 @@ function side(p: Params, s: 'l' | 'r', y: number, shockX: number): { points: Poi
   const a = degToRad(p.shackleAngle);
   const hanger = { x: rear.x + p.shackleLength * Math.sin(a), z: rear.z + p.shackleLength * Math.cos(a) };
   // Cantilever rates that leave the seat level under a vertical load (k1·L1 = k2·L2), so the
-  // spring's wind-up rate is K·L1·L2 (windUp.ts, references.md).
+  // spring's wind-up rate is K·L1·L2 (windUp.ts, docs/references.md).
   const k1 = (p.springRate * l2) / p.springLength;
   const k2 = (p.springRate * l1) / p.springLength;
   const shackleBody = s === 'l' ? 'shackle-left' : 'shackle-right';

@@ -16,7 +16,7 @@ describe('link loads', () => {
   const loads = result.loads!;
 
   it('balance the tractive force and lift the frame by the anti-squat share of the load transfer', () => {
-    // Milliken & Milliken / Gillespie (references.md): the links' vertical force on the sprung
+    // Milliken & Milliken / Gillespie (docs/references.md): the links' vertical force on the sprung
     // mass is %AS/100 × F·h/L. Computed here from the placed links and their loads.
     const F = loads.tractiveForce;
     expect(F).toBeCloseTo((4000 * 1000) / doc.vehicle.tireRadius, 9);

@@ -11,7 +11,7 @@ const MR_TOL = 2e-3;
 /**
  * Leaf springs: the sensitivity is the Gauss–Newton one, which leaves out the curvature of the
  * springs' bending rows (they are not zero away from ride); measured against 0.5 mm differences
- * that costs up to 2.1e-3 at ±140 mm, 0.2 % of the ratio (DEVELOPERS notes).
+ * that costs up to 2.1e-3 at ±140 mm, 0.2 % of the ratio (docs/design/leaf-spring.md).
  */
 const MR_TOL_SOFT = 3e-3;
 

@@ -1,6 +1,6 @@
 /**
  * Trailing-arm layout: the starter sweeps its whole range, gives the per-side readings of
- * sketch-format.md, and the half-shaft readings follow their definitions.
+ * docs/sketch-format.md, and the half-shaft readings follow their definitions.
  */
 import { describe, expect, it } from 'vitest';
 import { pointsAt, runSweep } from '../../../shared/kinematics';
@@ -68,7 +68,7 @@ describe('trailing-arm starter', () => {
       const t = (wc.y - a.y) / u.y;
       expect(r.instantCenter!.x).toBeCloseTo(a.x + t * u.x, 6);
       expect(r.instantCenter!.z).toBeCloseTo(a.z + t * u.z, 6);
-      // Anti-squat from the wheel centre (frame-mounted drive; sketch-format.md).
+      // Anti-squat from the wheel centre (frame-mounted drive; docs/sketch-format.md).
       const tan = (r.instantCenter!.z - wc.z) / (r.instantCenter!.x - wc.x);
       expect(r.antiSquat!).toBeCloseTo((100 * tan) / (s.vehicle.cgHeight / s.vehicle.wheelbase), 6);
       // Half-shaft: length between the joints as placed, plunge from ride.

@@ -1,6 +1,6 @@
 /**
  * Wheel attitude from a carrier's pose: signs of camber and toe on both sides (plain
- * geometry, sketch-format.md sign conventions), a wheel turning about its own axis, the
+ * geometry, docs/sketch-format.md sign conventions), a wheel turning about its own axis, the
  * track and fore-aft changes, and a given static spin axis.
  */
 import { describe, expect, it } from 'vitest';
@@ -59,7 +59,7 @@ describe('wheel attitude', () => {
   it('matches the rear-view and top-view angles of the axis rotated by mathjs (compound rotation)', () => {
     const [r, p, y] = [4, -6, 3];
     const rad = (d: number) => (d * Math.PI) / 180;
-    // Independent rotation: mathjs rotationMatrix about z, y, x composed as Rz·Ry·Rx (ISO 8855, sketch-format.md).
+    // Independent rotation: mathjs rotationMatrix about z, y, x composed as Rz·Ry·Rx (ISO 8855, docs/sketch-format.md).
     const R = multiply(
       multiply(rotationMatrix(rad(y), [0, 0, 1]), rotationMatrix(rad(p), [0, 1, 0])),
       rotationMatrix(rad(r), [1, 0, 0]),

@@ -39,7 +39,7 @@ describe('the sweep store follows the board', () => {
     const { board, sweep } = await onBoard();
     const doc = board.sketch!;
     // Side-view instant centre: where the left upper and lower link lines cross, by mathjs `intersect`
-    // (an independent line-crossing routine, references.md).
+    // (an independent line-crossing routine, docs/references.md).
     const ul = [point(doc, 'UL.fl'), point(doc, 'UL.al')];
     const ll = [point(doc, 'LL.fl'), point(doc, 'LL.al')];
     const ic = intersect([ul[0].x, ul[0].z], [ul[1].x, ul[1].z], [ll[0].x, ll[0].z], [ll[1].x, ll[1].z]) as number[];
