@@ -318,13 +318,19 @@ async function main() {
       .join(' / ');
     const lines = [
       `Machine: ${cpus().length} cores, load average ${load} (1 / 5 / 15 min; other work on the machine skews frame times)`,
-      `Board frame time while dragging ${DRAG_PIVOT} of the four-link starter (${DRAG_STEPS} pointer moves, ${frames.frames} frames sampled)${withoutSweep ? ' WITHOUT the sweep (diagnostic)' : ''}:`,
-      `  p95 ${ms2(frames.p95)} (target <= ${ms(FRAME_TARGET_MS)}, read to the clock's ${CLOCK_STEP_MS} ms step; an idle page: ${ms2(frames.idleP95)}) ${frameVerdict(frames)}`,
-      `  median ${ms2(frames.p50)}, worst ${ms(frames.max)}; dropped frames (over 25 ms): ${frames.over} of ${frames.frames} (${((100 * frames.over) / frames.frames).toFixed(1)} %)`,
+      `Board frame time while dragging ${DRAG_PIVOT} of the four-link starter ` +
+        `(${DRAG_STEPS} pointer moves, ${frames.frames} frames sampled)` +
+        `${withoutSweep ? ' WITHOUT the sweep (diagnostic)' : ''}:`,
+      `  p95 ${ms2(frames.p95)} (target <= ${ms(FRAME_TARGET_MS)}, read to the clock's ${CLOCK_STEP_MS} ms step; ` +
+        `an idle page: ${ms2(frames.idleP95)}) ${frameVerdict(frames)}`,
+      `  median ${ms2(frames.p50)}, worst ${ms(frames.max)}; dropped frames (over 25 ms): ` +
+        `${frames.over} of ${frames.frames} (${((100 * frames.over) / frames.frames).toFixed(1)} %)`,
       `  pivot moved: ${frames.moved ? 'yes' : 'NO'}; readout anti-squat changed: ${frames.readoutChanged ? 'yes' : 'NO'}`,
       `Board route JavaScript (every script fetched to open the board, plots and worker included), gzip -9 from dist/:`,
-      `  total ${kb(bundle.totalGzipKb)} gzip (${kb(bundle.totalRawKb)} raw) (target <= ${BUNDLE_TARGET_KB} KB) ${bundle.totalGzipKb <= BUNDLE_TARGET_KB ? 'MET' : 'NOT MET'}`,
-      `  of which the page itself (without the sweep worker's own bundle): ${kb(bundle.mainGzipKb)} gzip ${bundle.mainGzipKb <= BUNDLE_TARGET_KB ? 'MET' : 'NOT MET'}`,
+      `  total ${kb(bundle.totalGzipKb)} gzip (${kb(bundle.totalRawKb)} raw) (target <= ${BUNDLE_TARGET_KB} KB) ` +
+        (bundle.totalGzipKb <= BUNDLE_TARGET_KB ? 'MET' : 'NOT MET'),
+      `  of which the page itself (without the sweep worker's own bundle): ${kb(bundle.mainGzipKb)} gzip ` +
+        (bundle.mainGzipKb <= BUNDLE_TARGET_KB ? 'MET' : 'NOT MET'),
       ...bundle.files.map((f) => `    ${f.file}  ${kb(f.gzip / 1024)} gzip  (${kb(f.raw / 1024)} raw)`),
     ];
     console.log(lines.join('\n'));

@@ -197,7 +197,8 @@ async function main() {
       `requests: ${latencies.length} in ${elapsedS.toFixed(1)} s = ${(latencies.length / elapsedS).toFixed(0)} req/s`,
     );
     console.log(
-      `latency ms: p50 ${percentile(sorted, 50).toFixed(1)}, p95 ${percentile(sorted, 95).toFixed(1)}, p99 ${percentile(sorted, 99).toFixed(1)}, max ${sorted.at(-1)?.toFixed(1)}`,
+      `latency ms: p50 ${percentile(sorted, 50).toFixed(1)}, p95 ${percentile(sorted, 95).toFixed(1)}, ` +
+        `p99 ${percentile(sorted, 99).toFixed(1)}, max ${sorted.at(-1)?.toFixed(1)}`,
     );
     console.log(
       `acknowledged saves: ${acked}; missing from the database: ${missing}; failed requests: ${errors.length}`,

@@ -1,9 +1,11 @@
 import { test, expect } from './fixtures';
 import { $, boardReady, pivotAt } from './board';
 
-test('a member added from the table comes into view with its new pivots, and a pivot clicked on the canvas brings its row into view', async ({
-  page,
-}) => {
+const title =
+  'a member added from the table comes into view with its new pivots, ' +
+  'and a pivot clicked on the canvas brings its row into view';
+
+test(title, async ({ page }) => {
   await page.goto('/sketches/new?starter=four-link-lateral-rod');
   await expect(page).toHaveURL(/\/sketches\/\d+$/);
   await boardReady(page);

@@ -169,7 +169,10 @@ describe('anti-dive formula (Milliken & Milliken, RCVD ch. 17; from memory, unve
 });
 
 type Line = { o: YZ; d: YZ };
-/** The line from the tie rod's outer end through the front-view instant centre, by mathjs (level pivot axes along x: the front view is the same at every x). */
+/**
+ * The line from the tie rod's outer end through the front-view instant centre, by mathjs
+ * (level pivot axes along x: the front view is the same at every x).
+ */
 function icLine(r: WishboneRig): Line {
   const ic = intersect(r.upperInner, r.upperJoint, r.lowerInner, r.lowerJoint) as YZ;
   const o = r.tieRodOuter;
@@ -200,20 +203,29 @@ describe('bump steer and the tie-rod line (common practice, no published source)
     expect(Math.abs(toeSlope({ ...shortLong, tieRodInner: [p[0], p[1] + 15] }))).toBeGreaterThan(1.5e-2);
   });
 
-  it("the classic construction (outer end on the ball joints' line, inner end on the inner pivots' line, through the instant centre) keeps bump steer near zero over ±50 mm", () => {
-    const bj: Line = {
-      o: shortLong.lowerJoint,
-      d: [shortLong.upperJoint[0] - shortLong.lowerJoint[0], shortLong.upperJoint[1] - shortLong.lowerJoint[1]],
-    };
-    const t = (300 - bj.o[1]) / bj.d[1];
-    const outer = along(bj, t);
-    const rig0 = { ...shortLong, tieRodOuter: outer };
-    const ic = intersect(shortLong.upperInner, shortLong.upperJoint, shortLong.lowerInner, shortLong.lowerJoint) as YZ;
-    const inner = intersect(outer, ic, shortLong.upperInner, shortLong.lowerInner) as YZ;
-    // "Near zero": under a fifth of what the readout calls large (0.25°); the same rod 15 mm higher steers over ten times more.
-    expect(worstToe({ ...rig0, tieRodInner: inner })).toBeLessThan(0.05);
-    expect(worstToe({ ...rig0, tieRodInner: [inner[0], inner[1] + 15] })).toBeGreaterThan(0.5);
-  });
+  it(
+    "the classic construction (outer end on the ball joints' line, inner end on the inner pivots' line, " +
+      'through the instant centre) keeps bump steer near zero over ±50 mm',
+    () => {
+      const bj: Line = {
+        o: shortLong.lowerJoint,
+        d: [shortLong.upperJoint[0] - shortLong.lowerJoint[0], shortLong.upperJoint[1] - shortLong.lowerJoint[1]],
+      };
+      const t = (300 - bj.o[1]) / bj.d[1];
+      const outer = along(bj, t);
+      const rig0 = { ...shortLong, tieRodOuter: outer };
+      const ic = intersect(
+        shortLong.upperInner,
+        shortLong.upperJoint,
+        shortLong.lowerInner,
+        shortLong.lowerJoint,
+      ) as YZ;
+      const inner = intersect(outer, ic, shortLong.upperInner, shortLong.lowerInner) as YZ;
+      // "Near zero": under a fifth of what the readout calls large (0.25°); the same rod 15 mm higher steers over ten times more.
+      expect(worstToe({ ...rig0, tieRodInner: inner })).toBeLessThan(0.05);
+      expect(worstToe({ ...rig0, tieRodInner: [inner[0], inner[1] + 15] })).toBeGreaterThan(0.5);
+    },
+  );
 
   it('the readout note gives an inner end on the instant-centre line that takes the bump steer out', () => {
     const off = { ...shortLong, tieRodInner: [along(line, 300)[0], along(line, 300)[1] + 15] as YZ };

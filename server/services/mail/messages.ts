@@ -2,6 +2,10 @@ import type { ServerConfig } from '../../config';
 import type { PublicUser } from '../../models';
 import type { MailMessage } from './mailer';
 
+/** The link drawn as a button; mail clients ignore style sheets, so the style is inline. */
+const BUTTON_STYLE =
+  'display:inline-block;padding:10px 16px;background:#2f5d8a;color:#fff;text-decoration:none;border-radius:4px';
+
 const PRODUCT = 'Arcwright';
 
 /** Header text on one line: a name typed by a user must not start a new header. */
@@ -20,7 +24,7 @@ function layout(paragraphs: string[], link: { label: string; url: string }, foot
     '<!doctype html><html><body style="font-family:Roboto,Arial,sans-serif;color:#1d2733;max-width:560px">',
     `<h2 style="color:#2f5d8a;margin-bottom:8px">${PRODUCT}</h2>`,
     ...paragraphs.map((p) => `<p>${p}</p>`),
-    `<p><a href="${url}" style="display:inline-block;padding:10px 16px;background:#2f5d8a;color:#fff;text-decoration:none;border-radius:4px">${escapeHtml(link.label)}</a></p>`,
+    `<p><a href="${url}" style="${BUTTON_STYLE}">${escapeHtml(link.label)}</a></p>`,
     `<p style="font-size:13px;color:#5b6773">Or paste this address into your browser: ${url}</p>`,
     `<p style="font-size:12px;color:#5b6773">${footer}</p>`,
     '</body></html>',
@@ -52,7 +56,8 @@ export function passwordResetMail(
     html: layout(
       [
         `Hello ${escapeHtml(to.name)},`,
-        `Someone (we hope you) asked to reset the password of your ${PRODUCT} account. Open the link within ${validMinutes} minutes to choose a new one. It works once.`,
+        `Someone (we hope you) asked to reset the password of your ${PRODUCT} account. ` +
+          `Open the link within ${validMinutes} minutes to choose a new one. It works once.`,
       ],
       { label: 'Choose a new password', url },
       footer,
@@ -65,7 +70,9 @@ export function shareNoticeMail(
   config: ServerConfig,
   args: { to: string; from: PublicUser; sketchName: string; url: string },
 ): MailMessage {
-  const footer = `You get this mail because ${args.from.name} entered your address in ${PRODUCT}. The link opens the sketch read-only; sign in to copy it into your own library.`;
+  const footer =
+    `You get this mail because ${args.from.name} entered your address in ${PRODUCT}. ` +
+    'The link opens the sketch read-only; sign in to copy it into your own library.';
   return {
     to: args.to,
     subject: oneLine(`${args.from.name} shared the sketch "${args.sketchName}" with you`),
