@@ -1,18 +1,21 @@
 /**
  * `npm run sweep -- path/to/sketch.json [--csv]`
  * Prints the sweep result as JSON (or the heave rows as CSV) on stdout and exits 0.
+ * `npm run sweep -- --starter <layout>` prints that layout's starter sketch file instead, so a
+ * user can begin from a file; an unknown layout exits 2 naming the layouts there are.
  * Bad input (unreadable file, not JSON, schema problems) exits 2 with one line per problem
  * on stderr and nothing on stdout. Never a stack trace.
  */
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { isSketchValidationError } from '../schema/errors';
-import { heaveRowsCsv, runSweep } from '../kinematics';
+import { heaveRowsCsv, runSweep, starters } from '../kinematics';
 
 const EXIT_OK = 0;
 const EXIT_INTERNAL = 1;
 const EXIT_BAD_INPUT = 2;
-const USAGE = 'usage: npm run sweep -- path/to/sketch.json [--csv]';
+const USAGE = 'usage: npm run sweep -- path/to/sketch.json [--csv]   or   npm run sweep -- --starter <layout>';
+const STARTER_OPTION = '--starter';
 
 interface CliOutcome {
   code: number;
@@ -22,6 +25,7 @@ interface CliOutcome {
 
 /** The whole command as a function of its arguments and working directory (tested without a process). */
 export function sweepCommand(args: string[], cwd: string): CliOutcome {
+  if (args.includes(STARTER_OPTION)) return starterCommand(args);
   const csv = args.includes('--csv');
   const unknown = args.filter((a) => a.startsWith('--') && a !== '--csv');
   const files = args.filter((a) => !a.startsWith('--'));
@@ -64,6 +68,21 @@ export function sweepCommand(args: string[], cwd: string): CliOutcome {
       stderr: [`${file}: internal error in the sweep (${(e as Error)?.message ?? String(e)})`],
     };
   }
+}
+
+/** `--starter <layout>`: the starter's sketch file with its default parameters, as JSON. */
+function starterCommand(args: string[]): CliOutcome {
+  const known = Object.keys(starters).join(', ');
+  const at = args.indexOf(STARTER_OPTION);
+  const layout = args[at + 1];
+  if (args.length !== 2 || at !== 0)
+    return {
+      code: EXIT_BAD_INPUT,
+      stderr: [`give ${STARTER_OPTION} a layout and nothing else (one of ${known})`, USAGE],
+    };
+  const spec = Object.entries(starters).find(([name]) => name === layout)?.[1];
+  if (!spec) return { code: EXIT_BAD_INPUT, stderr: [`no starter for layout '${layout}': the layouts are ${known}`] };
+  return { code: EXIT_OK, stdout: `${JSON.stringify(spec.build(), null, 2)}\n` };
 }
 
 function main(): void {

@@ -5,6 +5,7 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { sweepCommand } from '../../../shared/cli/sweep';
 import { heaveRowsCsv, runSweep } from '../../../shared/kinematics';
+import { checkSketch, layouts } from '../../../shared/schema/sketch';
 import { exampleSketch } from './helpers';
 
 const dir = mkdtempSync(path.join(tmpdir(), 'arcwright-sweep-'));
@@ -85,4 +86,37 @@ describe('sweep command', () => {
     expect(ok.status).toBe(0);
     expect(ok.stdout).toBe(heaveRowsCsv(runSweep(exampleSketch())));
   }, 30000);
+});
+
+describe('sweep command: --starter', () => {
+  it('prints a valid sketch file of the asked layout for every layout with a starter, and exits 0', () => {
+    const withStarter = ['four-link-lateral-rod', 'leaf-spring', 'double-wishbone'];
+    for (const layout of withStarter) {
+      const out = sweepCommand(['--starter', layout], dir);
+      expect(out.code, layout).toBe(0);
+      expect(out.stderr).toBeUndefined();
+      const file = JSON.parse(out.stdout!);
+      expect(file.layout).toBe(layout);
+      // The printed file is a sketch the command itself accepts: written to disk and swept back.
+      const name = write(`${layout}.json`, out.stdout!);
+      expect(sweepCommand([name], dir).code).toBe(0);
+      expect(checkSketch(file).ok).toBe(true);
+    }
+  });
+
+  it('refuses an unknown layout with exit 2, naming the layouts there are', () => {
+    const out = sweepCommand(['--starter', 'pogo-stick'], dir);
+    expect(out.code).toBe(2);
+    expect(out.stdout).toBeUndefined();
+    expect(out.stderr!.join('\n')).toContain("'pogo-stick'");
+    for (const layout of ['four-link-lateral-rod', 'trailing-arm', 'leaf-spring']) {
+      expect(layouts).toContain(layout);
+      expect(out.stderr!.join('\n')).toContain(layout);
+    }
+  });
+
+  it('refuses --starter without a layout, or with a sketch file beside it', () => {
+    expect(sweepCommand(['--starter'], dir).code).toBe(2);
+    expect(sweepCommand(['--starter', 'leaf-spring', good], dir).code).toBe(2);
+  });
 });
