@@ -192,4 +192,45 @@ describe('board save and revisions stores', () => {
     board.undo();
     expect(board.document).toEqual(mine);
   });
+
+  it('another sketch on the board drops the waiting save, the conflict and the revision list', async () => {
+    putAnswer = () => {
+      throw new ApiError(409, 'stale', { version: 9 });
+    };
+    board.setPointCoordinate('LL.fl', 'x', 990);
+    await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
+    await revisions.load();
+    expect(saving.saveState).toBe('conflict');
+    expect(revisions.items).toHaveLength(2);
+    board.setPointCoordinate('LL.fl', 'x', 991);
+    board.setLoaded(detailOf({ ...fourLink(), name: 'Second runabout' }, { id: 8 }));
+    expect(saving.saveState).toBe('saved');
+    expect(saving.conflictVersion).toBeNull();
+    expect(revisions.items).toEqual([]);
+    const putsBefore = calls.filter((c) => c.method === 'PUT').length;
+    board.setPointCoordinate('LL.fl', 'x', 992);
+    board.setLoaded(detailOf(fourLink()));
+    await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS * 3);
+    expect(calls.filter((c) => c.method === 'PUT')).toHaveLength(putsBefore);
+  });
+
+  it('leaving the board stops the autosave timer; flush still saves what waits', async () => {
+    board.setPointCoordinate('LL.fl', 'x', 990);
+    saving.dispose();
+    await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS * 3);
+    expect(calls.filter((c) => c.method === 'PUT')).toHaveLength(0);
+    expect(saving.hasUnsavedChanges).toBe(true);
+    await saving.flush();
+    expect(calls.filter((c) => c.method === 'PUT')).toHaveLength(1);
+  });
+
+  it('a read-only link is never saved, and copying it goes through the link', async () => {
+    board.setLoaded(detailOf(fourLink(), { canEdit: true }), 'tok/123');
+    expect(board.setPointCoordinate('LL.fl', 'x', 990).ok).toBe(false);
+    await saving.save();
+    expect(calls.filter((c) => c.method === 'PUT')).toHaveLength(0);
+    expect(saving.hasUnsavedChanges).toBe(false);
+    await saving.copyToLibrary();
+    expect(calls.at(-1)).toMatchObject({ method: 'POST', url: '/api/shared/tok%2F123/copy' });
+  });
 });
