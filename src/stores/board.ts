@@ -38,7 +38,7 @@ export interface FieldEditOptions {
 }
 
 /** The sketch's record without its document. */
-export function stripDocument(detail: SketchDetail): SketchMeta {
+function stripDocument(detail: SketchDetail): SketchMeta {
   const { document: _doc, ...rest } = detail;
   return rest;
 }
@@ -339,9 +339,7 @@ export const useBoardStore = defineStore('board', () => {
   function endDrag() {
     if (!drag) return;
     const { start, ids } = drag;
-    drag = null;
-    dragging.value = false;
-    dragView.value = null;
+    stopDrag();
     const end = document.value;
     if (!end || end === start) return;
     const label = ids.length === 1 ? `Move ${ids[0]}` : `Move ${ids.length} pivots`;
@@ -351,13 +349,18 @@ export const useBoardStore = defineStore('board', () => {
     }
   }
 
+  /** Forgets the drag without recording anything. */
+  function stopDrag() {
+    drag = null;
+    dragging.value = false;
+    dragView.value = null;
+  }
+
   /** Abandons the drag (Escape): back to where it started, nothing recorded. */
   function cancelDrag() {
     if (!drag) return;
     document.value = drag.start;
-    drag = null;
-    dragging.value = false;
-    dragView.value = null;
+    stopDrag();
   }
 
   // ---- loading ----------------------------------------------------------------------
@@ -420,12 +423,6 @@ export const useBoardStore = defineStore('board', () => {
   function showRevision(revision: RevisionDetail | null) {
     viewing.value = revision;
     pruneSelection();
-  }
-
-  function stopDrag() {
-    drag = null;
-    dragging.value = false;
-    dragView.value = null;
   }
 
   /** Leaves the board: forgets a drag in progress (the save store stops its own timer). */
