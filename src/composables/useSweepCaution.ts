@@ -3,7 +3,8 @@
  * dismissible, and always reachable from the board's menu. Which users have dismissed it is
  * kept in localStorage, so it stays dismissed across visits on this browser.
  */
-import { ref } from 'vue';
+import { effectScope, ref, type Ref } from 'vue';
+import { useStorage } from '@vueuse/core';
 
 export const CAUTION_TITLE = 'Geometry only';
 
@@ -12,32 +13,42 @@ export const CAUTION_TEXT =
   'rod-end and bushing ratings, and the vehicle’s road legality are for a qualified person and local regulations; ' +
   'a modified suspension must be checked on the vehicle before it is driven.';
 
-const KEY_PREFIX = 'arcwright.caution-seen.';
+/** Storage key of one user's dismissal (the user's id, or 'guest'); stored as '1' once dismissed. */
+export const CAUTION_SEEN_KEY_PREFIX = 'arcwright.caution-seen.';
 
-function read(user: string): boolean {
-  try {
-    return localStorage.getItem(KEY_PREFIX + user) === '1';
-  } catch {
-    return false; // storage blocked: show it again rather than hide it
+/**
+ * One stored flag a user, shared by every caution on screen (so they all hide at once). They
+ * live for the page, not for the component that first asked. Blocked storage reads as not seen
+ * (show it again rather than hide it) and a dismissal then holds for this visit only.
+ */
+const seenByUser = new Map<string, Ref<boolean>>();
+const scope = effectScope(true);
+
+function seenFlag(user: string): Ref<boolean> {
+  let flag = seenByUser.get(user);
+  if (!flag) {
+    flag = scope.run(() =>
+      useStorage<boolean>(CAUTION_SEEN_KEY_PREFIX + user, false, undefined, {
+        serializer: { read: (raw) => raw === '1', write: (seen) => (seen ? '1' : '0') },
+        writeDefaults: false,
+        flush: 'sync',
+        listenToStorageChanges: false,
+        onError: () => undefined,
+      }),
+    )!;
+    seenByUser.set(user, flag);
   }
+  return flag;
 }
-
-/** Dismissals made in this page (so every caution on screen hides at once). */
-const dismissed = ref<Record<string, boolean>>({});
 
 /** True once this user has dismissed the caution. */
 export function cautionSeen(user: string): boolean {
-  return dismissed.value[user] ?? read(user);
+  return seenFlag(user).value;
 }
 
 /** Records the dismissal for this user. */
 export function markCautionSeen(user: string): void {
-  dismissed.value = { ...dismissed.value, [user]: true };
-  try {
-    localStorage.setItem(KEY_PREFIX + user, '1');
-  } catch {
-    // storage blocked: dismissed for this visit only
-  }
+  seenFlag(user).value = true;
 }
 
 /**

@@ -2,30 +2,22 @@ import { defineStore } from 'pinia';
 import { computed, ref, shallowRef } from 'vue';
 import { api, ApiError, errorMessage } from '../api/http';
 import type { Revision, SketchDetail } from '../api/types';
-import { checkSketch, type Layout, type MemberKind, type Sketch } from '../../shared/schema/sketch';
+import { checkSketch, type MemberKind, type Sketch } from '../../shared/schema/sketch';
 import { unitToMm, type Mm } from '../../shared/units';
-import { starters } from '../../shared/kinematics/starters';
-import { History, deepEqual } from './board/history';
+import { History } from './board/history';
 import { findPairs } from './board/pairs';
 import * as edits from './board/edits';
-import { compareSketches, type SketchComparison } from './board/compare';
 import { snapTo, type PlanePoint, type ViewKind } from '../canvas/transform';
 import { usePrefsStore } from './prefs';
+import type { EditResult } from './editResult';
 
-/** Quiet time after the last edit before the sketch is saved (ms): long enough to finish typing a number. */
-export const AUTOSAVE_DELAY_MS = 1200;
+export type { EditResult } from './editResult';
+
 /** Arrow-key nudges of one selection within this time (ms) undo as one step. */
 export const NUDGE_COALESCE_MS = 1500;
-/** Snap and nudge steps a new user starts with, in each display unit. */
-export const DEFAULT_SNAP_STEP = { mm: 5, in: 0.25 } as const;
 /** Nudge step with snap off, in each display unit (Shift multiplies by NUDGE_BIG_FACTOR). */
 export const FINE_NUDGE_STEP = { mm: 1, in: 0.05 } as const;
 export const NUDGE_BIG_FACTOR = 10;
-
-const SNAP_KEY = 'arcwright.board.snap';
-
-export type SaveState = 'saved' | 'saving' | 'unsaved' | 'error' | 'conflict';
-export type EditResult = { ok: true } | { ok: false; error: string };
 
 /** The sketch's record on the server, without its document. */
 export type SketchMeta = Omit<SketchDetail, 'document'>;
@@ -34,23 +26,21 @@ export interface RevisionDetail extends Revision {
   document: Sketch;
 }
 
-interface SnapSettings {
-  on: boolean;
-  step: { mm: number; in: number };
+/**
+ * How a whole-field edit joins the undo history: `live` (a photo being moved, a slider held)
+ * merges a run of quick changes to the same field into one step; `coalesce` names such a run
+ * explicitly; `label` is the undo menu's words.
+ */
+export interface FieldEditOptions {
+  live?: boolean;
+  coalesce?: string;
+  label?: string;
 }
 
-function readSnap(): SnapSettings {
-  try {
-    const raw = JSON.parse(localStorage.getItem(SNAP_KEY) ?? 'null') as Partial<SnapSettings> | null;
-    const mm = Number(raw?.step?.mm);
-    const inch = Number(raw?.step?.in);
-    return {
-      on: raw?.on ?? true,
-      step: { mm: mm > 0 ? mm : DEFAULT_SNAP_STEP.mm, in: inch > 0 ? inch : DEFAULT_SNAP_STEP.in },
-    };
-  } catch {
-    return { on: true, step: { ...DEFAULT_SNAP_STEP } };
-  }
+/** The sketch's record without its document. */
+function stripDocument(detail: SketchDetail): SketchMeta {
+  const { document: _doc, ...rest } = detail;
+  return rest;
 }
 
 interface DragState {
@@ -63,8 +53,10 @@ interface DragState {
 
 /**
  * The board: the sketch being edited (exchange-format shape, plain data), the selection, the
- * mirror and snap settings, the undo history and the saving of it all. The only place edits
- * are applied: components call these actions.
+ * mirror setting, the undo history and the typed edits. The only place edits are applied:
+ * components call these actions. Saving lives in useBoardSaveStore (which follows
+ * `changeCount` and `loadCount`; the board page starts it with the board) and revisions in
+ * useRevisionsStore; snap is a preference (usePrefsStore).
  *
  * Documents are immutable: every edit builds a new one sharing untouched parts, so history
  * stores inverse changes only and undo restores the exact earlier document.
@@ -106,30 +98,17 @@ export const useBoardStore = defineStore('board', () => {
     return res.ok ? [] : res.problems;
   });
 
+  // ---- signals for saving and revisions --------------------------------------------------
+  /** Counts the user's changes to the working document (an edit, undo, redo, a finished drag): autosave follows it. */
+  const changeCount = ref(0);
+  /** Counts sketches put on the board: what belonged to the previous one (save state, revision list) resets. */
+  const loadCount = ref(0);
+
   // ---- selection and settings -------------------------------------------------------
   const selectedPoints = ref<string[]>([]);
   const selectedMember = ref<string | null>(null);
   const mirrorLinked = ref(true);
-  const snapSettings = ref<SnapSettings>(readSnap());
-  const snapOn = computed(() => snapSettings.value.on);
-  /** Snap step in the user's unit. */
-  const snapStep = computed(() => snapSettings.value.step[prefs.units]);
-  const snapStepMm = computed<Mm>(() => unitToMm(snapStep.value, prefs.units));
 
-  function saveSnap() {
-    localStorage.setItem(SNAP_KEY, JSON.stringify(snapSettings.value));
-  }
-  function setSnap(on: boolean) {
-    snapSettings.value = { ...snapSettings.value, on };
-    saveSnap();
-  }
-  /** Sets the snap step in the user's unit; refuses a step that is not a positive number. */
-  function setSnapStep(step: number): EditResult {
-    if (!(Number.isFinite(step) && step > 0)) return { ok: false, error: 'The snap step must be a positive number.' };
-    snapSettings.value = { ...snapSettings.value, step: { ...snapSettings.value.step, [prefs.units]: step } };
-    saveSnap();
-    return { ok: true };
-  }
   function setMirrorLinked(on: boolean) {
     mirrorLinked.value = on;
   }
@@ -218,7 +197,7 @@ export const useBoardStore = defineStore('board', () => {
     historyTick.value++;
     document.value = after;
     pruneSelection();
-    changed();
+    changeCount.value++;
     return { ok: true };
   }
 
@@ -230,7 +209,7 @@ export const useBoardStore = defineStore('board', () => {
     historyTick.value++;
     document.value = prev;
     pruneSelection();
-    changed();
+    changeCount.value++;
     return true;
   }
 
@@ -242,7 +221,7 @@ export const useBoardStore = defineStore('board', () => {
     historyTick.value++;
     document.value = next;
     pruneSelection();
-    changed();
+    changeCount.value++;
     return true;
   }
 
@@ -288,24 +267,26 @@ export const useBoardStore = defineStore('board', () => {
   function setVehicleField(field: edits.VehicleField, value: Mm): EditResult {
     return commit(`Set ${field}`, (d) => edits.setVehicleField(d, field, value));
   }
+  /** Renames the sketch. */
   function rename(name: string): EditResult {
-    return commit('Rename sketch', (d) => edits.setDocumentField(d, 'name', name));
+    return commit('Rename sketch', (d) => edits.renameSketch(d, name));
   }
-  /**
-   * Sets a top-level field of the document (e.g. the sweep panel's `targets`, the tracing's
-   * `tracing`) as one undo step. `live` (a photo being moved, a slider held) merges the run of
-   * quick changes to the same field into one step; `coalesce` names such a run explicitly.
-   */
-  function setDocumentField(
-    key: string,
-    value: unknown,
-    opts: { live?: boolean; coalesce?: string; label?: string } = {},
-  ): EditResult {
+  /** One whole-field edit as one undo step; see FieldEditOptions for how runs of them merge. */
+  function commitField(key: string, edit: (doc: Sketch) => Sketch, opts: FieldEditOptions): EditResult {
     const coalesce = opts.coalesce ?? (opts.live ? `field:${key}` : undefined);
-    return commit(opts.label ?? `Change ${key}`, (d) => edits.setDocumentField(d, key, value), {
-      coalesce,
-      windowMs: NUDGE_COALESCE_MS,
-    });
+    return commit(opts.label ?? `Change ${key}`, edit, { coalesce, windowMs: NUDGE_COALESCE_MS });
+  }
+  /** Replaces the sweep settings (ranges, steps, flag limits, loads). */
+  function setSweepSettings(sweep: Sketch['sweep'], opts: FieldEditOptions = {}): EditResult {
+    return commitField('sweep', (d) => edits.setSweepSettings(d, sweep), opts);
+  }
+  /** Replaces the designer's target bands; `undefined` removes them. */
+  function setTargets(targets: Sketch['targets'], opts: FieldEditOptions = {}): EditResult {
+    return commitField('targets', (d) => edits.setTargets(d, targets), opts);
+  }
+  /** Replaces the photos behind the views; `undefined` removes them. */
+  function setTracing(tracing: Sketch['tracing'], opts: FieldEditOptions = {}): EditResult {
+    return commitField('tracing', (d) => edits.setTracing(d, tracing), opts);
   }
 
   /**
@@ -315,7 +296,7 @@ export const useBoardStore = defineStore('board', () => {
   function nudge(view: ViewKind, right: number, up: number, big = false): EditResult {
     const ids = selectedPoints.value;
     if (ids.length === 0) return { ok: false, error: 'Select a pivot to nudge.' };
-    const base = snapOn.value ? snapStep.value : FINE_NUDGE_STEP[prefs.units];
+    const base = prefs.snapOn ? prefs.snapStep : FINE_NUDGE_STEP[prefs.units];
     const stepMm = unitToMm(base, prefs.units) * (big ? NUDGE_BIG_FACTOR : 1);
     const dh = -right * stepMm;
     const dv = up * stepMm;
@@ -345,7 +326,7 @@ export const useBoardStore = defineStore('board', () => {
     if (!drag || !document.value) return;
     const start = drag.start.points.find((p) => p.id === drag!.grabbed);
     if (!start) return;
-    const step = snapOn.value ? snapStepMm.value : 0;
+    const step = prefs.snapOn ? prefs.snapStepMm : 0;
     const h = step ? snapTo(target.h, step) : target.h;
     const v = step ? snapTo(target.v, step) : target.v;
     const delta: edits.Delta =
@@ -358,176 +339,44 @@ export const useBoardStore = defineStore('board', () => {
   function endDrag() {
     if (!drag) return;
     const { start, ids } = drag;
-    drag = null;
-    dragging.value = false;
-    dragView.value = null;
+    stopDrag();
     const end = document.value;
     if (!end || end === start) return;
     const label = ids.length === 1 ? `Move ${ids[0]}` : `Move ${ids.length} pivots`;
     if (history.record(label, start, end)) {
       historyTick.value++;
-      changed();
+      changeCount.value++;
     }
+  }
+
+  /** Forgets the drag without recording anything. */
+  function stopDrag() {
+    drag = null;
+    dragging.value = false;
+    dragView.value = null;
   }
 
   /** Abandons the drag (Escape): back to where it started, nothing recorded. */
   function cancelDrag() {
     if (!drag) return;
     document.value = drag.start;
-    drag = null;
-    dragging.value = false;
-    dragView.value = null;
-  }
-
-  // ---- saving -----------------------------------------------------------------------
-  /** The document as the server last confirmed it. */
-  const savedDocument = shallowRef<Sketch | null>(null);
-  const saving = ref(false);
-  const saveError = ref<string | null>(null);
-  /** The server's version when a save was refused as stale (409). */
-  const conflictVersion = ref<number | null>(null);
-  const lastSavedAt = ref<Date | null>(null);
-  let timer: ReturnType<typeof setTimeout> | null = null;
-  let pending: Promise<void> | null = null;
-
-  const dirty = computed(() => !!document.value && !deepEqual(savedDocument.value, document.value));
-  const saveState = computed<SaveState>(() => {
-    if (conflictVersion.value !== null) return 'conflict';
-    if (saving.value) return 'saving';
-    if (saveError.value && dirty.value) return 'error';
-    return dirty.value ? 'unsaved' : 'saved';
-  });
-  /** True when leaving now would lose something. */
-  const hasUnsavedChanges = computed(() => canEdit.value && (dirty.value || saving.value));
-
-  function clearTimer() {
-    if (timer) clearTimeout(timer);
-    timer = null;
-  }
-
-  /** After every change: schedule the autosave (not while a drag is still going). */
-  function changed() {
-    if (!canEdit.value || drag) return;
-    clearTimer();
-    timer = setTimeout(() => void save(), AUTOSAVE_DELAY_MS);
-  }
-
-  /** Saves the working document now (PUT with the version); resolves when the server has answered. */
-  async function save(): Promise<void> {
-    clearTimer();
-    if (pending) {
-      await pending;
-      if (dirty.value && conflictVersion.value === null && !saveError.value) return save();
-      return;
-    }
-    const doc = document.value;
-    const m = meta.value;
-    if (!doc || !m || !canEdit.value || conflictVersion.value !== null || !dirty.value) return;
-    if (problems.value.length) {
-      saveError.value = `Not saved: ${problems.value.slice(0, 2).join('; ')}`;
-      return;
-    }
-    saving.value = true;
-    pending = (async () => {
-      try {
-        const detail = await api.put<SketchDetail>(`/api/sketches/${m.id}`, {
-          document: doc,
-          name: doc.name,
-          version: m.version,
-        });
-        meta.value = stripDocument(detail);
-        savedDocument.value = doc;
-        saveError.value = null;
-        lastSavedAt.value = new Date();
-      } catch (err) {
-        if (err instanceof ApiError && err.status === 409) {
-          const v = (err.details as { version?: unknown } | undefined)?.version;
-          conflictVersion.value = typeof v === 'number' ? v : (m.version ?? 0) + 1;
-        } else saveError.value = errorMessage(err);
-      } finally {
-        saving.value = false;
-        pending = null;
-      }
-    })();
-    await pending;
-    // Edits made while the request was out go in the next save.
-    if (dirty.value && conflictVersion.value === null && !saveError.value) changed();
-  }
-
-  /** Saves at once if anything is waiting (before leaving the page). */
-  async function flush(): Promise<void> {
-    if (drag) endDrag();
-    if (timer || dirty.value) await save();
-    else if (pending) await pending;
-  }
-
-  /**
-   * After a conflict: takes the server's version. The step from the user's document to it is
-   * recorded as an undo step, so their edit is one Ctrl+Z away and never lost.
-   */
-  async function takeServerVersion(): Promise<EditResult> {
-    const m = meta.value;
-    const mine = document.value;
-    if (!m || !mine) return { ok: false, error: 'No sketch is open.' };
-    try {
-      const detail = await api.get<SketchDetail>(`/api/sketches/${m.id}`);
-      meta.value = stripDocument(detail);
-      conflictVersion.value = null;
-      saveError.value = null;
-      if (history.record('Load the saved version', mine, detail.document)) historyTick.value++;
-      document.value = detail.document;
-      savedDocument.value = detail.document;
-      pruneSelection();
-      return { ok: true };
-    } catch (err) {
-      return { ok: false, error: errorMessage(err) };
-    }
-  }
-
-  /** Saves the working document as a new sketch of the user's (after a conflict); resolves to its id. */
-  async function saveAsCopy(): Promise<SketchDetail> {
-    const doc = document.value;
-    if (!doc) throw new Error('No sketch is open.');
-    const name = `${doc.name} (my copy)`.slice(0, 200);
-    const created = await api.post<SketchDetail>('/api/sketches', { name, document: { ...doc, name } });
-    // The copy holds the edit now: the conflicted sketch has nothing left to save.
-    savedDocument.value = doc;
-    conflictVersion.value = null;
-    return created;
-  }
-
-  /** Copies a sketch the user may only read into their library; resolves to the new sketch. */
-  async function copyToLibrary(): Promise<SketchDetail> {
-    if (sharedToken.value) return api.post<SketchDetail>(`/api/shared/${encodeURIComponent(sharedToken.value)}/copy`);
-    if (!meta.value) throw new Error('No sketch is open.');
-    return api.post<SketchDetail>(`/api/sketches/${meta.value.id}/copy`);
+    stopDrag();
   }
 
   // ---- loading ----------------------------------------------------------------------
-  function stripDocument(detail: SketchDetail): SketchMeta {
-    const { document: _doc, ...rest } = detail;
-    return rest;
-  }
-
   /** Puts a sketch from the server on the board, forgetting the previous one. */
   function setLoaded(detail: SketchDetail, token: string | null = null) {
-    clearTimer();
-    drag = null;
-    dragging.value = false;
-    dragView.value = null;
+    stopDrag();
     history.clear();
     historyTick.value++;
     meta.value = stripDocument(detail);
     sharedToken.value = token;
     document.value = detail.document;
-    savedDocument.value = detail.document;
     viewing.value = null;
-    revisions.value = [];
-    saveError.value = null;
-    conflictVersion.value = null;
     loadError.value = null;
     selectedPoints.value = [];
     selectedMember.value = null;
+    loadCount.value++;
   }
 
   async function load(url: string, token: string | null) {
@@ -550,81 +399,35 @@ export const useBoardStore = defineStore('board', () => {
   const loadSketch = (id: number) => load(`/api/sketches/${id}`, null);
   const loadShared = (token: string) => load(`/api/shared/${encodeURIComponent(token)}`, token);
 
-  // ---- revisions --------------------------------------------------------------------
-  const revisions = ref<Revision[]>([]);
-  const revisionsLoading = ref(false);
-
-  async function loadRevisions(): Promise<void> {
-    if (!meta.value || sharedToken.value) return;
-    revisionsLoading.value = true;
-    try {
-      const { items } = await api.get<{ items: Revision[] }>(`/api/sketches/${meta.value.id}/revisions`);
-      revisions.value = [...items].sort((a, b) => b.rev - a.rev);
-    } finally {
-      revisionsLoading.value = false;
-    }
-  }
-
-  async function fetchRevision(rev: number): Promise<RevisionDetail> {
-    if (!meta.value) throw new Error('No sketch is open.');
-    return api.get<RevisionDetail>(`/api/sketches/${meta.value.id}/revisions/${rev}`);
-  }
-
-  /** Shows a revision read-only in place of the working document (which stays as it is). */
-  async function openRevision(rev: number): Promise<void> {
-    if (drag) endDrag();
-    viewing.value = await fetchRevision(rev);
-    pruneSelection();
-  }
-
-  function closeRevision() {
-    viewing.value = null;
-    pruneSelection();
-  }
-
-  /** Compares two revisions, or a revision with the working document (`to` = 'current'). */
-  async function compareRevisions(from: number, to: number | 'current'): Promise<SketchComparison> {
-    const a = await fetchRevision(from);
-    const b = to === 'current' ? document.value : (await fetchRevision(to)).document;
-    if (!b) throw new Error('No sketch is open.');
-    return compareSketches(a.document, b);
+  // ---- what the server answers while the sketch is open -----------------------------------
+  /** Takes the server's record of the sketch (its version after a save) without touching the document. */
+  function setMeta(detail: SketchDetail) {
+    meta.value = stripDocument(detail);
   }
 
   /**
-   * Restores a revision: the server makes it the newest version. Unsaved edits are saved first;
-   * the step back is recorded for undo like any other.
+   * Puts the server's document in place of the working one (the saved version after a conflict,
+   * a restored revision). The step is recorded for undo, so the user's own document is one
+   * Ctrl+Z away and never lost. `closeRevision` leaves a revision that is open read-only.
    */
-  async function restoreRevision(rev: number): Promise<void> {
-    const m = meta.value;
-    if (!m || !canEdit.value) throw new Error('This sketch is read-only.');
-    await flush();
-    if (conflictVersion.value !== null) throw new Error('Resolve the conflict with the saved version first.');
-    const detail = await api.post<SketchDetail>(`/api/sketches/${m.id}/restore/${rev}`);
+  function adoptServerDocument(detail: SketchDetail, label: string, opts: { closeRevision?: boolean } = {}) {
     const mine = document.value;
     meta.value = stripDocument(detail);
-    if (mine && history.record(`Restore revision ${rev}`, mine, detail.document)) historyTick.value++;
+    if (mine && history.record(label, mine, detail.document)) historyTick.value++;
     document.value = detail.document;
-    savedDocument.value = detail.document;
-    viewing.value = null;
+    if (opts.closeRevision) viewing.value = null;
     pruneSelection();
-    await loadRevisions().catch(() => undefined);
   }
 
-  /** Leaves the board: stops the autosave timer (call flush() first to keep edits). */
+  /** Shows a revision read-only in place of the working document (which stays as it is); null goes back. */
+  function showRevision(revision: RevisionDetail | null) {
+    viewing.value = revision;
+    pruneSelection();
+  }
+
+  /** Leaves the board: forgets a drag in progress (the save store stops its own timer). */
   function dispose() {
-    clearTimer();
-    drag = null;
-    dragging.value = false;
-    dragView.value = null;
-  }
-
-  /** Creates a sketch from a starter layout with its default sizes; resolves to the new sketch. */
-  async function createFromStarter(layout: Layout, name?: string): Promise<SketchDetail> {
-    const spec = starters[layout];
-    if (!spec) throw new Error(`There is no starter '${layout}'.`);
-    const docName = (name ?? `New ${spec.label.toLowerCase()}`).slice(0, 200);
-    const doc = { ...spec.build(), name: docName };
-    return api.post<SketchDetail>('/api/sketches', { name: docName, document: doc });
+    stopDrag();
   }
 
   return {
@@ -644,27 +447,16 @@ export const useBoardStore = defineStore('board', () => {
     selectedPoints,
     selectedMember,
     mirrorLinked,
-    snapOn,
-    snapStep,
-    snapStepMm,
     dragging,
     dragView,
     canUndo,
     canRedo,
     undoLabel,
     redoLabel,
-    saveState,
-    saveError,
-    conflictVersion,
-    lastSavedAt,
-    dirty,
-    hasUnsavedChanges,
-    revisions,
-    revisionsLoading,
+    changeCount,
+    loadCount,
     // actions
     select,
-    setSnap,
-    setSnapStep,
     setMirrorLinked,
     commit,
     undo,
@@ -681,26 +473,20 @@ export const useBoardStore = defineStore('board', () => {
     deletePoint,
     setVehicleField,
     rename,
-    setDocumentField,
+    setSweepSettings,
+    setTargets,
+    setTracing,
     nudge,
     beginDrag,
     dragTo,
     endDrag,
     cancelDrag,
-    save,
-    flush,
-    takeServerVersion,
-    saveAsCopy,
-    copyToLibrary,
     setLoaded,
     loadSketch,
     loadShared,
-    loadRevisions,
-    openRevision,
-    closeRevision,
-    compareRevisions,
-    restoreRevision,
+    setMeta,
+    adoptServerDocument,
+    showRevision,
     dispose,
-    createFromStarter,
   };
 });

@@ -1,7 +1,9 @@
 import { defineStore } from 'pinia';
+import { ref } from 'vue';
 import { api } from '../api/http';
 import type { Page, SketchDetail, SketchSummary } from '../api/types';
-import type { Sketch } from '../../shared/schema/sketch';
+import type { Layout } from '../../shared/schema/sketch';
+import { starters } from '../../shared/kinematics';
 
 export interface LibraryQuery {
   q: string;
@@ -12,63 +14,84 @@ export interface LibraryQuery {
   pageSize: number;
 }
 
+/** Longest sketch name the server takes. */
+const MAX_SKETCH_NAME = 200;
+
 /** The Library: one page of the user's sketches and those shared with them, and the edits made from it. */
-export const useLibraryStore = defineStore('library', {
-  state: () => ({
-    query: { q: '', layout: null, sort: 'updatedAt', order: 'desc', page: 1, pageSize: 20 } as LibraryQuery,
-    items: [] as SketchSummary[],
-    total: 0,
-    loading: false,
-  }),
-  actions: {
-    async load(patch: Partial<LibraryQuery> = {}) {
-      Object.assign(this.query, patch);
-      const p = new URLSearchParams({
-        q: this.query.q,
-        sort: this.query.sort,
-        order: this.query.order,
-        page: String(this.query.page),
-        pageSize: String(this.query.pageSize),
-      });
-      if (this.query.layout) p.set('layout', this.query.layout);
-      this.loading = true;
-      try {
-        const page = await api.get<Page<SketchSummary>>(`/api/sketches?${p.toString()}`);
-        this.items = page.items;
-        this.total = page.total;
-      } finally {
-        this.loading = false;
-      }
-    },
-    async create(name: string, document: Sketch): Promise<SketchDetail> {
-      return api.post<SketchDetail>('/api/sketches', { name, document });
-    },
-    async importFile(document: unknown): Promise<SketchDetail> {
-      const created = await api.post<SketchDetail>('/api/sketches/import', document);
-      await this.load();
-      return created;
-    },
-    async rename(item: SketchSummary, name: string) {
-      const full = await api.get<SketchDetail>(`/api/sketches/${item.id}`);
-      await api.put<SketchDetail>(`/api/sketches/${item.id}`, {
-        document: { ...full.document, name },
-        name,
-        version: full.version,
-      });
-      await this.load();
-    },
-    async copy(item: SketchSummary): Promise<SketchDetail> {
-      const created = await api.post<SketchDetail>(`/api/sketches/${item.id}/copy`);
-      await this.load();
-      return created;
-    },
-    async remove(item: SketchSummary) {
-      await api.del(`/api/sketches/${item.id}`);
-      await this.load();
-    },
-    async restore(item: SketchSummary) {
-      await api.post(`/api/sketches/${item.id}/undelete`);
-      await this.load();
-    },
-  },
+export const useLibraryStore = defineStore('library', () => {
+  const query = ref<LibraryQuery>({ q: '', layout: null, sort: 'updatedAt', order: 'desc', page: 1, pageSize: 20 });
+  const items = ref<SketchSummary[]>([]);
+  const total = ref(0);
+  const loading = ref(false);
+
+  async function load(patch: Partial<LibraryQuery> = {}) {
+    Object.assign(query.value, patch);
+    const q = query.value;
+    const p = new URLSearchParams({
+      q: q.q,
+      sort: q.sort,
+      order: q.order,
+      page: String(q.page),
+      pageSize: String(q.pageSize),
+    });
+    if (q.layout) p.set('layout', q.layout);
+    loading.value = true;
+    try {
+      const page = await api.get<Page<SketchSummary>>(`/api/sketches?${p.toString()}`);
+      items.value = page.items;
+      total.value = page.total;
+    } finally {
+      loading.value = false;
+    }
+  }
+
+  /**
+   * Creates a sketch from a starter layout (the one way a new sketch begins): `params` are the
+   * starter's sizes in its own units (mm, degrees), missing ones at their defaults; without a
+   * name it is called after the starter. Resolves to the new sketch.
+   */
+  async function createFromStarter(
+    layout: Layout,
+    opts: { name?: string; params?: Partial<Record<string, number>> } = {},
+  ): Promise<SketchDetail> {
+    const spec = starters[layout];
+    if (!spec) throw new Error(`There is no starter '${layout}'.`);
+    const name = opts.name ?? `New ${spec.label.toLowerCase()}`.slice(0, MAX_SKETCH_NAME);
+    const document = { ...spec.build(opts.params), name };
+    return api.post<SketchDetail>('/api/sketches', { name, document });
+  }
+
+  async function importFile(document: unknown): Promise<SketchDetail> {
+    const created = await api.post<SketchDetail>('/api/sketches/import', document);
+    await load();
+    return created;
+  }
+
+  async function rename(item: SketchSummary, name: string) {
+    const full = await api.get<SketchDetail>(`/api/sketches/${item.id}`);
+    await api.put<SketchDetail>(`/api/sketches/${item.id}`, {
+      document: { ...full.document, name },
+      name,
+      version: full.version,
+    });
+    await load();
+  }
+
+  async function copy(item: SketchSummary): Promise<SketchDetail> {
+    const created = await api.post<SketchDetail>(`/api/sketches/${item.id}/copy`);
+    await load();
+    return created;
+  }
+
+  async function remove(item: SketchSummary) {
+    await api.del(`/api/sketches/${item.id}`);
+    await load();
+  }
+
+  async function restore(item: SketchSummary) {
+    await api.post(`/api/sketches/${item.id}/undelete`);
+    await load();
+  }
+
+  return { query, items, total, loading, load, createFromStarter, importFile, rename, copy, remove, restore };
 });

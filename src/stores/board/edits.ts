@@ -261,14 +261,36 @@ export function setVehicleField(doc: Sketch, field: VehicleField, value: Mm): Sk
   return { ...doc, vehicle: { ...doc.vehicle, [field]: value } };
 }
 
-/** Sets (or with `undefined`, removes) a top-level field of the document, e.g. `name`, `targets`, `tracing`. */
-export function setDocumentField(doc: Sketch, key: string, value: unknown): Sketch {
-  const current = (doc as Record<string, unknown>)[key];
-  if (current === value) return doc;
-  const next: Record<string, unknown> = { ...doc };
+/** Top-level fields the board replaces whole. */
+type WholeField = 'name' | 'sweep' | 'targets' | 'tracing';
+
+/** Sets (or with `undefined`, removes) a top-level field of the document. */
+function setField<K extends WholeField>(doc: Sketch, key: K, value: Sketch[K]): Sketch {
+  if (doc[key] === value) return doc;
+  const next: Sketch = { ...doc };
   if (value === undefined) delete next[key];
   else next[key] = value;
-  return next as Sketch;
+  return next;
+}
+
+/** Renames the sketch. */
+export function renameSketch(doc: Sketch, name: string): Sketch {
+  return setField(doc, 'name', name);
+}
+
+/** Replaces the sweep settings block. */
+export function setSweepSettings(doc: Sketch, sweep: Sketch['sweep']): Sketch {
+  return setField(doc, 'sweep', sweep);
+}
+
+/** Replaces the target bands; `undefined` removes the field. */
+export function setTargets(doc: Sketch, targets: Sketch['targets']): Sketch {
+  return setField(doc, 'targets', targets);
+}
+
+/** Replaces the tracing photos; `undefined` removes the field. */
+export function setTracing(doc: Sketch, tracing: Sketch['tracing']): Sketch {
+  return setField(doc, 'tracing', tracing);
 }
 
 /** A free id from a stem: "LL", "LL2", "LL3", … */

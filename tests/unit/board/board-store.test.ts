@@ -61,7 +61,7 @@ describe('board store: edits', () => {
 
   it('a whole drag is one undo step, and the partner follows mirrored', () => {
     const before = board.document;
-    board.setSnap(false);
+    usePrefsStore().setSnap(false);
     expect(board.beginDrag('rear', 'SH.fl')).toBe(true);
     board.dragTo({ h: 530, v: 790 });
     board.dragTo({ h: 545, v: 800 });
@@ -76,14 +76,14 @@ describe('board store: edits', () => {
   });
 
   it('a drag snaps the grabbed pivot to the grid step in the user unit', () => {
-    board.setSnap(true);
-    board.setSnapStep(5);
+    usePrefsStore().setSnap(true);
+    usePrefsStore().setSnapStep(5);
     board.beginDrag('side', 'UL.fl');
     board.dragTo({ h: 768.2, v: 611.9 });
     board.endDrag();
     expect(point(board, 'UL.fl')).toMatchObject({ x: 770, z: 610 });
     usePrefsStore().setUnits('in');
-    board.setSnapStep(0.5);
+    usePrefsStore().setSnapStep(0.5);
     board.beginDrag('side', 'UL.fl');
     board.dragTo({ h: 800, v: 600 });
     board.endDrag();
@@ -105,7 +105,7 @@ describe('board store: edits', () => {
   });
 
   it('arrow nudges move by the step (×10 with Shift) and a run of them undoes as one', () => {
-    board.setSnap(false);
+    usePrefsStore().setSnap(false);
     board.select('LL.al');
     board.nudge('side', 1, 0);
     board.nudge('side', 1, 0, true);
@@ -194,9 +194,9 @@ describe('board store: edits', () => {
   });
 
   it('document fields (targets, tracing) are set through the store and undo like any edit', () => {
-    board.setDocumentField('targets', { antiSquat: { min: 60, max: 90 } });
-    board.setDocumentField('tracing', { opacity: 0.5 }, { live: true });
-    board.setDocumentField('tracing', { opacity: 0.6 }, { live: true });
+    board.setTargets({ antiSquat: { min: 60, max: 90 } });
+    board.setTracing({ opacity: 0.5 }, { live: true });
+    board.setTracing({ opacity: 0.6 }, { live: true });
     expect((board.document as Record<string, unknown>).tracing).toEqual({ opacity: 0.6 });
     board.undo();
     expect('tracing' in board.document!).toBe(false);

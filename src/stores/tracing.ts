@@ -6,7 +6,7 @@
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
 import { api, errorMessage } from '../api/http';
-import { useBoardStore, type EditResult } from '../stores/board';
+import { useBoardStore, type EditResult } from './board';
 import type { PlanePoint, ViewKind } from '../canvas/transform';
 import {
   DEFAULT_TRACING_OPACITY,
@@ -18,6 +18,7 @@ import {
   type TracingImage,
 } from '../canvas/tracingGeometry';
 import type { Mm } from '../../shared/units';
+import type { Sketch } from '../../shared/schema/sketch';
 
 /** What the uploads route answers. */
 interface UploadAnswer {
@@ -57,7 +58,9 @@ export const useTracingStore = defineStore('tracing', () => {
   }
 
   function write(view: ViewKind, img: TracingImage | null, label: string, coalesce?: string): EditResult {
-    const r = board.setDocumentField('tracing', withTracing(board.sketch, view, img), { label, coalesce });
+    // The schema's objects are loose (unknown keys kept): their type has an index signature Tracing leaves out.
+    const tracing = withTracing(board.sketch, view, img) as Sketch['tracing'];
+    const r = board.setTracing(tracing, { label, coalesce });
     error.value = r.ok ? '' : r.error;
     return r;
   }

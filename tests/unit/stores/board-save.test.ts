@@ -2,8 +2,10 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { createPinia, setActivePinia } from 'pinia';
 import { ApiError } from '../../../src/api/http';
-import { AUTOSAVE_DELAY_MS, useBoardStore } from '../../../src/stores/board';
-import { detailOf, fourLink } from './fixture';
+import { useBoardStore } from '../../../src/stores/board';
+import { AUTOSAVE_DELAY_MS, useBoardSaveStore } from '../../../src/stores/boardSave';
+import { useRevisionsStore } from '../../../src/stores/revisions';
+import { detailOf, fourLink } from '../board/fixture';
 
 const calls: { method: string; url: string; body?: unknown }[] = [];
 let putAnswer: (body: { document: unknown; version: number }) => unknown = (b) =>
@@ -51,8 +53,10 @@ vi.mock('../../../src/api/http', async (importOriginal) => {
   };
 });
 
-describe('board store: saving', () => {
+describe('board save and revisions stores', () => {
   let board: ReturnType<typeof useBoardStore>;
+  let saving: ReturnType<typeof useBoardSaveStore>;
+  let revisions: ReturnType<typeof useRevisionsStore>;
   beforeEach(() => {
     vi.useFakeTimers();
     calls.length = 0;
@@ -60,30 +64,33 @@ describe('board store: saving', () => {
     localStorage.clear();
     setActivePinia(createPinia());
     board = useBoardStore();
+    // As the board page does: saving and revisions start with the board, before the sketch loads.
+    saving = useBoardSaveStore();
+    revisions = useRevisionsStore();
     board.setLoaded(detailOf(fourLink()));
   });
   afterEach(() => vi.useRealTimers());
 
   it('starts saved; an edit is unsaved, then saved once after a quiet spell, with the version', async () => {
-    expect(board.saveState).toBe('saved');
+    expect(saving.saveState).toBe('saved');
     board.setPointCoordinate('LL.fl', 'x', 990);
     board.setPointCoordinate('LL.fl', 'x', 995);
-    expect(board.saveState).toBe('unsaved');
-    expect(board.hasUnsavedChanges).toBe(true);
+    expect(saving.saveState).toBe('unsaved');
+    expect(saving.hasUnsavedChanges).toBe(true);
     await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
     const puts = calls.filter((c) => c.method === 'PUT');
     expect(puts).toHaveLength(1);
     expect(puts[0].url).toBe('/api/sketches/7');
     expect(puts[0].body).toMatchObject({ version: 3, name: 'Test runabout, rear' });
-    expect(board.saveState).toBe('saved');
+    expect(saving.saveState).toBe('saved');
     expect(board.meta!.version).toBe(4);
-    expect(board.hasUnsavedChanges).toBe(false);
+    expect(saving.hasUnsavedChanges).toBe(false);
   });
 
   it('undoing back to the saved document counts as saved', async () => {
     board.setPointCoordinate('LL.fl', 'x', 990);
     board.undo();
-    expect(board.saveState).toBe('saved');
+    expect(saving.saveState).toBe('saved');
   });
 
   it('does not save in the middle of a drag', async () => {
@@ -102,8 +109,8 @@ describe('board store: saving', () => {
     };
     board.setPointCoordinate('LL.fl', 'x', 990);
     await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
-    expect(board.saveState).toBe('conflict');
-    expect(board.conflictVersion).toBe(9);
+    expect(saving.saveState).toBe('conflict');
+    expect(saving.conflictVersion).toBe(9);
     expect(board.document!.points.find((p) => p.id === 'LL.fl')!.x).toBe(990);
     board.setPointCoordinate('LL.fl', 'x', 991);
     await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS * 3);
@@ -117,13 +124,13 @@ describe('board store: saving', () => {
     board.setPointCoordinate('LL.fl', 'x', 990);
     const mine = board.document;
     await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
-    expect((await board.takeServerVersion()).ok).toBe(true);
+    expect((await saving.takeServerVersion()).ok).toBe(true);
     expect(board.document!.name).toBe('Changed elsewhere');
     expect(board.meta!.version).toBe(9);
-    expect(board.saveState).toBe('saved');
+    expect(saving.saveState).toBe('saved');
     board.undo();
     expect(board.document).toEqual(mine);
-    expect(board.saveState).toBe('unsaved');
+    expect(saving.saveState).toBe('unsaved');
   });
 
   it('after a conflict, save as copy posts the user’s document as a new sketch', async () => {
@@ -132,7 +139,7 @@ describe('board store: saving', () => {
     };
     board.setPointCoordinate('LL.fl', 'x', 990);
     await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
-    const created = await board.saveAsCopy();
+    const created = await saving.saveAsCopy();
     expect(created.id).toBe(99);
     const post = calls.find((c) => c.method === 'POST' && c.url === '/api/sketches')!;
     const doc = (post.body as { document: { points: { id: string; x: number }[] } }).document;
@@ -147,42 +154,83 @@ describe('board store: saving', () => {
     };
     board.setPointCoordinate('LL.fl', 'x', 990);
     await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
-    expect(board.saveState).toBe('error');
-    expect(board.saveError).toMatch(/could not be reached/);
+    expect(saving.saveState).toBe('error');
+    expect(saving.saveError).toMatch(/could not be reached/);
     fail = false;
     board.setPointCoordinate('LL.fl', 'x', 991);
     await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
-    expect(board.saveState).toBe('saved');
+    expect(saving.saveState).toBe('saved');
   });
 
   it('flush saves at once', async () => {
     board.setPointCoordinate('LL.fl', 'x', 990);
-    await board.flush();
+    await saving.flush();
     expect(calls.filter((c) => c.method === 'PUT')).toHaveLength(1);
-    expect(board.saveState).toBe('saved');
+    expect(saving.saveState).toBe('saved');
   });
 
   it('revisions: list newest first, open read-only, compare lists the moved pivot and by how much', async () => {
-    await board.loadRevisions();
-    expect(board.revisions.map((r) => r.rev)).toEqual([2, 1]);
-    await board.openRevision(1);
+    await revisions.load();
+    expect(revisions.items.map((r) => r.rev)).toEqual([2, 1]);
+    await revisions.open(1);
     expect(board.readOnly).toBe(true);
     expect(board.sketch!.points.find((p) => p.id === 'UL.fl')!.x).toBe(720);
     expect(board.setPointCoordinate('UL.fl', 'x', 1).ok).toBe(false);
-    board.closeRevision();
+    revisions.close();
     expect(board.readOnly).toBe(false);
-    const cmp = await board.compareRevisions(1, 'current');
+    const cmp = await revisions.compare(1, 'current');
     expect(cmp.moved).toEqual([{ id: 'UL.fl', dx: 40, dy: 0, dz: -30, distance: 50 }]);
   });
 
   it('restore makes the revision current and can be undone', async () => {
     board.setPointCoordinate('LL.fl', 'x', 990);
     const mine = board.document;
-    await board.restoreRevision(1);
+    await revisions.restore(1);
     expect(calls.some((c) => c.method === 'POST' && c.url === '/api/sketches/7/restore/1')).toBe(true);
     expect(board.meta!.version).toBe(12);
-    expect(board.saveState).toBe('saved');
+    expect(saving.saveState).toBe('saved');
     board.undo();
     expect(board.document).toEqual(mine);
+  });
+
+  it('another sketch on the board drops the waiting save, the conflict and the revision list', async () => {
+    putAnswer = () => {
+      throw new ApiError(409, 'stale', { version: 9 });
+    };
+    board.setPointCoordinate('LL.fl', 'x', 990);
+    await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
+    await revisions.load();
+    expect(saving.saveState).toBe('conflict');
+    expect(revisions.items).toHaveLength(2);
+    board.setPointCoordinate('LL.fl', 'x', 991);
+    board.setLoaded(detailOf({ ...fourLink(), name: 'Second runabout' }, { id: 8 }));
+    expect(saving.saveState).toBe('saved');
+    expect(saving.conflictVersion).toBeNull();
+    expect(revisions.items).toEqual([]);
+    const putsBefore = calls.filter((c) => c.method === 'PUT').length;
+    board.setPointCoordinate('LL.fl', 'x', 992);
+    board.setLoaded(detailOf(fourLink()));
+    await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS * 3);
+    expect(calls.filter((c) => c.method === 'PUT')).toHaveLength(putsBefore);
+  });
+
+  it('leaving the board stops the autosave timer; flush still saves what waits', async () => {
+    board.setPointCoordinate('LL.fl', 'x', 990);
+    saving.dispose();
+    await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS * 3);
+    expect(calls.filter((c) => c.method === 'PUT')).toHaveLength(0);
+    expect(saving.hasUnsavedChanges).toBe(true);
+    await saving.flush();
+    expect(calls.filter((c) => c.method === 'PUT')).toHaveLength(1);
+  });
+
+  it('a read-only link is never saved, and copying it goes through the link', async () => {
+    board.setLoaded(detailOf(fourLink(), { canEdit: true }), 'tok/123');
+    expect(board.setPointCoordinate('LL.fl', 'x', 990).ok).toBe(false);
+    await saving.save();
+    expect(calls.filter((c) => c.method === 'PUT')).toHaveLength(0);
+    expect(saving.hasUnsavedChanges).toBe(false);
+    await saving.copyToLibrary();
+    expect(calls.at(-1)).toMatchObject({ method: 'POST', url: '/api/shared/tok%2F123/copy' });
   });
 });
