@@ -9,7 +9,7 @@ import { useBoardStore } from '../stores/board';
 import { useFrameBatch } from './useFrameBatch';
 
 /** Table refresh interval during a drag, ms: often enough to read, rare enough to cost nothing. */
-export const DRAG_TABLE_INTERVAL_MS = 150;
+const DRAG_TABLE_INTERVAL_MS = 150;
 
 export function useBoardThrottledSketch() {
   const board = useBoardStore();

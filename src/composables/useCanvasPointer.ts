@@ -14,7 +14,7 @@ import { WHEEL_ZOOM_STEP, type CanvasView } from './useCanvasView';
 import { useFrameBatch } from './useFrameBatch';
 
 /** A press that moves less than this (px) is a click. */
-export const CLICK_SLOP_PX = 4;
+const CLICK_SLOP_PX = 4;
 
 type Mode = 'none' | 'drag' | 'pan' | 'pinch' | 'konva';
 

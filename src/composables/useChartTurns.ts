@@ -11,7 +11,7 @@ import { useIntersectionObserver } from '@vueuse/core';
 import { useFrameBatch } from './useFrameBatch';
 
 /** Charts redrawn per animation frame: one keeps a frame's work to a single chart update. */
-export const CHARTS_PER_FRAME = 1;
+const CHARTS_PER_FRAME = 1;
 
 interface Job {
   dirty: boolean;
