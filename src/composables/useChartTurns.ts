@@ -6,7 +6,7 @@
  * view keeps its request and redraws when it comes back. Without requestAnimationFrame
  * (tests) a turn is given at once.
  */
-import { onBeforeUnmount, type Ref } from 'vue';
+import { effectScope, onBeforeUnmount, type Ref } from 'vue';
 import { useIntersectionObserver } from '@vueuse/core';
 import { useFrameBatch } from './useFrameBatch';
 
@@ -37,8 +37,8 @@ function giveTurns() {
   if (queue.some((j) => j.dirty && j.visible)) turnFrame.schedule();
 }
 
-/** One frame for all the charts of the page (the queue is shared), so it belongs to no component. */
-const turnFrame = useFrameBatch(giveTurns);
+/** One frame for all the charts of the page (the queue is shared), so it belongs to no component's scope. */
+const turnFrame = effectScope(true).run(() => useFrameBatch(giveTurns))!;
 
 /**
  * Registers a chart: `run` applies its latest data. Call `changed()` when the data changes.
