@@ -9,7 +9,7 @@ import type { Sketch } from '../../shared/schema/sketch';
 import type { Mm } from '../../shared/units';
 import type { ScreenPoint } from './transform';
 import { hingeAxis, shockMarks, springCoil } from './shapes';
-import type { CanvasPalette } from '../composables/useCanvasPalette';
+import type { CanvasPalette } from './palette';
 
 type Member = Sketch['members'][number];
 

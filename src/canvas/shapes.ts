@@ -5,7 +5,7 @@
 import type { Px, ScreenPoint } from './transform';
 
 /** Below this screen length (px) a member is drawn as a plain line: a coil or marks would be noise. */
-export const MIN_DETAIL_PX = 14;
+const MIN_DETAIL_PX = 14;
 
 function lerp(a: ScreenPoint, b: ScreenPoint, t: number): ScreenPoint {
   return { px: a.px + (b.px - a.px) * t, py: a.py + (b.py - a.py) * t };
@@ -108,8 +108,8 @@ export interface LabelBox {
 }
 
 /** Approximate width of a label in the board's 10 px font, px per character (Roboto averages about 0.56 em). */
-export const LABEL_CHAR_PX = 5.6;
-export const LABEL_HEIGHT_PX = 12;
+const LABEL_CHAR_PX = 5.6;
+const LABEL_HEIGHT_PX = 12;
 
 function overlaps(a: LabelBox, b: LabelBox): boolean {
   return a.x < b.x + b.width && b.x < a.x + a.width && a.y < b.y + b.height && b.y < a.y + a.height;

@@ -32,12 +32,12 @@ export interface TracingImage {
 export type Tracing = Partial<Record<ViewKind, TracingImage>>;
 
 /** Photos the uploads route takes (contracts: PNG or JPEG up to 10 MB). */
-export const TRACING_MIME_TYPES = ['image/png', 'image/jpeg'] as const;
+const TRACING_MIME_TYPES = ['image/png', 'image/jpeg'] as const;
 export const MAX_TRACING_BYTES = 10 * 1024 * 1024;
 /** Opacity a new photo starts with: visible but behind the linkage. */
 export const DEFAULT_TRACING_OPACITY = 0.5;
 /** Two scale points closer than this on the photo (image px) cannot give a trustworthy scale. */
-export const MIN_SCALE_PICK_PX = 4;
+const MIN_SCALE_PICK_PX = 4;
 
 /** The document's tracing for a view, or null when absent or malformed (a bad field never breaks the board). */
 export function readTracing(doc: unknown, view: ViewKind): TracingImage | null {
@@ -99,15 +99,6 @@ export function centreForRect(img: TracingImage, t: ViewTransform, x: number, y:
   const width = img.width * img.mmPerPx * t.scale;
   const height = img.height * img.mmPerPx * t.scale;
   return screenToPlane(t, { px: x + width / 2, py: y + height / 2 });
-}
-
-/** A plane point (mm) as a pixel of the image (px from its top-left corner, y down). */
-export function planeToImagePx(img: TracingImage, p: PlanePoint): { u: number; w: number } {
-  // h grows to the screen's left in both views (canvasTransform), and the image is drawn upright.
-  return {
-    u: img.width / 2 - (p.h - img.centre.h) / img.mmPerPx,
-    w: img.height / 2 - (p.v - img.centre.v) / img.mmPerPx,
-  };
 }
 
 export type ScaleOutcome = { ok: true; image: TracingImage } | { ok: false; error: string };

@@ -44,16 +44,11 @@ export interface ViewTransform {
 }
 
 /** Zoom limits: from a whole vehicle on a phone to a bracket's bolt holes (px per mm). */
-export const MIN_SCALE = 0.02;
+const MIN_SCALE = 0.02;
 export const MAX_SCALE = 20;
 
 export function planeOf(view: ViewKind, p: Vec3): PlanePoint {
   return { h: view === 'side' ? p.x : p.y, v: p.z };
-}
-
-/** The point `p` moved to plane position (h, v); the coordinate across the plane is kept. */
-export function withPlane(view: ViewKind, p: Vec3, q: PlanePoint): Vec3 {
-  return view === 'side' ? { x: q.h, y: p.y, z: q.v } : { x: p.x, y: q.h, z: q.v };
 }
 
 export function planeToScreen(t: ViewTransform, q: PlanePoint): ScreenPoint {

@@ -6,30 +6,29 @@
 import { onBeforeUnmount, shallowRef, watch } from 'vue';
 import type { Sketch } from '../../shared/schema/sketch';
 import { useBoardStore } from '../stores/board';
+import { useFrameBatch } from './useFrameBatch';
 
 /** Table refresh interval during a drag, ms: often enough to read, rare enough to cost nothing. */
-export const DRAG_TABLE_INTERVAL_MS = 150;
+const DRAG_TABLE_INTERVAL_MS = 150;
 
 export function useBoardThrottledSketch() {
   const board = useBoardStore();
   const shown = shallowRef<Sketch | null>(board.sketch);
-  let frame = 0;
   let lastAt = 0;
   let timer: ReturnType<typeof setTimeout> | null = null;
 
-  function apply() {
-    frame = 0;
+  const frame = useFrameBatch(() => {
     timer = null;
     lastAt = performance.now();
     shown.value = board.sketch;
-  }
+  });
 
   function schedule() {
-    if (frame || timer) return;
+    if (frame.pending() || timer) return;
     if (board.dragging) {
       const wait = Math.max(0, DRAG_TABLE_INTERVAL_MS - (performance.now() - lastAt));
-      timer = setTimeout(() => (frame = requestAnimationFrame(apply)), wait);
-    } else frame = requestAnimationFrame(apply);
+      timer = setTimeout(() => frame.schedule(), wait);
+    } else frame.schedule();
   }
 
   watch(() => board.sketch, schedule);
@@ -40,12 +39,12 @@ export function useBoardThrottledSketch() {
       if (d) return;
       if (timer) clearTimeout(timer);
       timer = null;
-      if (!frame) frame = requestAnimationFrame(apply);
+      frame.schedule();
     },
   );
 
+  // The frame itself is dropped by useFrameBatch when the panel unmounts.
   onBeforeUnmount(() => {
-    if (frame) cancelAnimationFrame(frame);
     if (timer) clearTimeout(timer);
   });
   return shown;

@@ -11,9 +11,10 @@ import type Konva from 'konva';
 import { useBoardStore } from '../stores/board';
 import { screenToPlane, toScreen, type ScreenPoint, type ViewKind } from '../canvas/transform';
 import { WHEEL_ZOOM_STEP, type CanvasView } from './useCanvasView';
+import { useFrameBatch } from './useFrameBatch';
 
 /** A press that moves less than this (px) is a click. */
-export const CLICK_SLOP_PX = 4;
+const CLICK_SLOP_PX = 4;
 
 type Mode = 'none' | 'drag' | 'pan' | 'pinch' | 'konva';
 
@@ -35,32 +36,12 @@ export function useCanvasPointer(
   let downAt: ScreenPoint = { px: 0, py: 0 };
   let moved = false;
   let pinch = { dist: 0, mid: { px: 0, py: 0 } };
-  let frame = 0;
-  let queued: (() => void) | null = null;
+  /** The latest move's work (a drag step or a hover test), done once per animation frame. */
+  const moveFrame = useFrameBatch<() => void>((work) => work());
 
   function local(e: PointerEvent | WheelEvent): ScreenPoint {
     const r = container.value!.getBoundingClientRect();
     return { px: e.clientX - r.left, py: e.clientY - r.top };
-  }
-
-  function onFrame(fn: () => void) {
-    queued = fn;
-    if (!frame) {
-      frame = requestAnimationFrame(() => {
-        frame = 0;
-        const f = queued;
-        queued = null;
-        f?.();
-      });
-    }
-  }
-
-  function flushFrame() {
-    if (frame) cancelAnimationFrame(frame);
-    frame = 0;
-    const f = queued;
-    queued = null;
-    f?.();
   }
 
   function hit(p: ScreenPoint): Konva.Shape | null {
@@ -127,7 +108,7 @@ export function useCanvasPointer(
     if (Math.hypot(p.px - downAt.px, p.py - downAt.py) > CLICK_SLOP_PX) moved = true;
     switch (mode.value) {
       case 'drag':
-        onFrame(() =>
+        moveFrame.schedule(() =>
           board.dragTo(screenToPlane(canvas.transform.value, { px: p.px - grabOffset.dx, py: p.py - grabOffset.dy })),
         );
         break;
@@ -148,7 +129,7 @@ export function useCanvasPointer(
       }
       case 'none':
         if (e.pointerType === 'mouse')
-          onFrame(() => (hovered.value = (hit(p)?.getAttr('pivotId') as string | undefined) ?? null));
+          moveFrame.schedule(() => (hovered.value = (hit(p)?.getAttr('pivotId') as string | undefined) ?? null));
         break;
     }
   }
@@ -157,7 +138,7 @@ export function useCanvasPointer(
     pointers.delete(e.pointerId);
     if (container.value?.hasPointerCapture(e.pointerId)) container.value.releasePointerCapture(e.pointerId);
     if (mode.value === 'drag') {
-      flushFrame();
+      moveFrame.flush();
       board.endDrag();
     } else if (mode.value === 'pan' && !moved) {
       board.select(null);
@@ -189,8 +170,8 @@ export function useCanvasPointer(
     canvas.zoom(WHEEL_ZOOM_STEP ** notches, p.px, p.py);
   }
 
+  // The move still queued is dropped by useFrameBatch when the view unmounts.
   onBeforeUnmount(() => {
-    if (frame) cancelAnimationFrame(frame);
     if (mode.value === 'drag') board.endDrag();
   });
 

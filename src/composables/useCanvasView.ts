@@ -19,7 +19,7 @@ export const WHEEL_ZOOM_STEP = 1.15;
 /** The buttons zoom by this factor. */
 export const BUTTON_ZOOM_STEP = 1.4;
 /** Room kept round the sketch when fitting, px. */
-export const FIT_MARGIN_PX = 36;
+const FIT_MARGIN_PX = 36;
 
 export function useCanvasView(contentOf: () => PlanePoint[]) {
   const width = ref(0);

@@ -4,7 +4,8 @@
  * Escape cancels a drag or clears the selection, F fits the active view.
  * Keys typed into a field belong to the field (its own undo included).
  */
-import { onBeforeUnmount, onMounted, type Ref } from 'vue';
+import type { Ref } from 'vue';
+import { useEventListener } from '@vueuse/core';
 import type { ViewKind } from '../canvas/transform';
 import { useBoardStore } from '../stores/board';
 
@@ -67,6 +68,5 @@ export function useKeyboardBoard(activeView: Ref<ViewKind>, handlers: BoardKeyHa
     if (key === 'f') handlers.fit(activeView.value);
   }
 
-  onMounted(() => window.addEventListener('keydown', onKey));
-  onBeforeUnmount(() => window.removeEventListener('keydown', onKey));
+  useEventListener(window, 'keydown', onKey);
 }

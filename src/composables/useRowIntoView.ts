@@ -5,18 +5,22 @@
  * after the selection: the scroll waits for that frame.
  */
 import { nextTick, watch, type Ref } from 'vue';
+import { useFrameBatch } from './useFrameBatch';
 
 export function useRowIntoView(
   scroller: Ref<HTMLElement | null>,
   selected: () => string | null,
   rowTestId: (id: string) => string,
 ): void {
-  watch(selected, async (id) => {
-    if (!id) return;
-    await nextTick();
-    if (typeof requestAnimationFrame === 'function') await new Promise((resolve) => requestAnimationFrame(resolve));
+  const scroll = useFrameBatch<string>(async (id) => {
     await nextTick();
     if (selected() !== id) return; // a newer selection has its own turn
     scroller.value?.querySelector(`[data-test="${CSS.escape(rowTestId(id))}"]`)?.scrollIntoView({ block: 'nearest' });
+  });
+
+  watch(selected, async (id) => {
+    if (!id) return;
+    await nextTick();
+    scroll.schedule(id);
   });
 }

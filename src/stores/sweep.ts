@@ -19,6 +19,7 @@ import { EMPTY_CONTEXT, type CursorRow, type SweepContext } from '../sweep/reado
 import { sweepRange } from '../sweep/range';
 import { useBoardStore, type EditResult } from './board';
 import { usePrefsStore } from './prefs';
+import { useFrameBatch } from '../composables/useFrameBatch';
 
 /** The parts of a document the sweep reads; targets, tracing and the name do not need a new sweep. */
 const SWEPT_FIELDS = ['layout', 'vehicle', 'points', 'members', 'wheels', 'driveline', 'sweep'] as const;
@@ -89,8 +90,7 @@ export const useSweepStore = defineStore('sweep', () => {
   let answered = 0;
   let runner: SweepRunner | null = null;
   /** An answer waiting for the next animation frame; a newer one replaces it. */
-  let queued: SweepAnswer | null = null;
-  let frame = 0;
+  const answerFrame = useFrameBatch(applyAnswer);
   let appliedWaiters: Array<() => void> = [];
 
   /**
@@ -98,17 +98,11 @@ export const useSweepStore = defineStore('sweep', () => {
    * worker can answer faster than the page paints, and a result nobody sees is work for nothing.
    */
   function onAnswer(a: SweepAnswer) {
-    if (runner?.mode !== 'worker' || typeof requestAnimationFrame !== 'function') {
+    if (runner?.mode !== 'worker') {
       applyAnswer(a);
       return;
     }
-    queued = a;
-    frame ||= requestAnimationFrame(() => {
-      frame = 0;
-      const q = queued;
-      queued = null;
-      if (q) applyAnswer(q);
-    });
+    answerFrame.schedule(a);
   }
 
   function applyAnswer(a: SweepAnswer) {
@@ -146,7 +140,7 @@ export const useSweepStore = defineStore('sweep', () => {
   /** Resolves when the sweep of the latest document is shown. */
   async function whenIdle(): Promise<void> {
     if (runner) await runner.whenIdle();
-    if (queued) await new Promise<void>((resolve) => appliedWaiters.push(resolve));
+    if (answerFrame.pending()) await new Promise<void>((resolve) => appliedWaiters.push(resolve));
   }
 
   const sketch = computed(() => (board.sketch ?? null) as Sketch | null);
@@ -245,9 +239,7 @@ export const useSweepStore = defineStore('sweep', () => {
     slowTimer = null;
     runner?.dispose();
     runner = null;
-    if (frame) cancelAnimationFrame(frame);
-    frame = 0;
-    queued = null;
+    answerFrame.cancel();
   }
 
   return {

@@ -6,7 +6,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { createPinia, setActivePinia } from 'pinia';
 import { DARK_KEY, SNAP_KEY, UNITS_KEY, usePrefsStore } from '../../../src/stores/prefs';
-import { CAUTION_SEEN_KEY_PREFIX, cautionSeen, markCautionSeen } from '../../../src/composables/useSweepCaution';
+import { CAUTION_SEEN_KEY_PREFIX, cautionSeen, markCautionSeen } from '../../../src/composables/useCaution';
 import { MM_PER_INCH } from '../../../shared/units';
 
 /** A fresh store, as on a new page load. */

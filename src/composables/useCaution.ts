@@ -1,17 +1,11 @@
 /**
- * The product's caution (the same words as README.md, "Cautions"): shown on the board once per user,
+ * The product's caution on the board (its words are in src/board/caution.ts): shown once per user,
  * dismissible, and always reachable from the board's menu. Which users have dismissed it is
- * kept in localStorage, so it stays dismissed across visits on this browser.
+ * kept in local storage, so it stays dismissed across visits on this browser.
  */
-import { effectScope, ref, type Ref } from 'vue';
+import { computed, effectScope, ref, type Ref } from 'vue';
 import { useStorage } from '@vueuse/core';
-
-export const CAUTION_TITLE = 'Geometry only';
-
-export const CAUTION_TEXT =
-  'Arcwright computes where parts move, not whether they are strong enough. Link, bracket and weld design, ' +
-  'rod-end and bushing ratings, and the vehicle’s road legality are for a qualified person and local regulations; ' +
-  'a modified suspension must be checked on the vehicle before it is driven.';
+import { useSessionStore } from '../stores/session';
 
 /** Storage key of one user's dismissal (the user's id, or 'guest'); stored as '1' once dismissed. */
 export const CAUTION_SEEN_KEY_PREFIX = 'arcwright.caution-seen.';
@@ -55,4 +49,18 @@ export function markCautionSeen(user: string): void {
  * Whether the full caution is open. Shared, because the board menu's item asks for it while the
  * dialog itself belongs to the board's own caution (a dialog inside a menu would close with it).
  */
-export const cautionDialogOpen = ref(false);
+const cautionDialogOpen = ref(false);
+
+/**
+ * The caution as the signed-in user (or a guest) sees it: whether they have dismissed it, the
+ * dismissal, and the full caution's dialog.
+ */
+export function useCaution() {
+  const session = useSessionStore();
+  const userKey = computed(() => (session.user ? String(session.user.id) : 'guest'));
+  return {
+    seen: computed(() => cautionSeen(userKey.value)),
+    dismiss: () => markCautionSeen(userKey.value),
+    dialogOpen: cautionDialogOpen,
+  };
+}

@@ -1,15 +1,17 @@
 /**
  * When the travel plots redraw. A Chart.js update lays out and paints a whole chart; doing
  * all of them on every sweep of a drag would take most of a frame. So each chart asks for a
- * turn when its data changes, and the scheduler gives at most CHARTS_PER_FRAME turns per
- * animation frame, oldest request first, only to charts on screen. A chart scrolled out of
+ * turn when its data changes, and the charts get at most CHARTS_PER_FRAME turns per
+ * animation frame, oldest request first, only charts on screen. A chart scrolled out of
  * view keeps its request and redraws when it comes back. Without requestAnimationFrame
  * (tests) a turn is given at once.
  */
-import { onBeforeUnmount, onMounted, type Ref } from 'vue';
+import { effectScope, onBeforeUnmount, type Ref } from 'vue';
+import { useIntersectionObserver } from '@vueuse/core';
+import { useFrameBatch } from './useFrameBatch';
 
 /** Charts redrawn per animation frame: one keeps a frame's work to a single chart update. */
-export const CHARTS_PER_FRAME = 1;
+const CHARTS_PER_FRAME = 1;
 
 interface Job {
   dirty: boolean;
@@ -19,10 +21,8 @@ interface Job {
 
 /** In request order: a job that ran goes to the back, so every chart gets its turn. */
 const queue: Job[] = [];
-let frame = 0;
 
-function pump() {
-  frame = 0;
+function giveTurns() {
   let given = 0;
   for (let i = 0; i < queue.length && given < CHARTS_PER_FRAME;) {
     const job = queue[i];
@@ -34,16 +34,11 @@ function pump() {
       given++;
     } else i++;
   }
-  if (queue.some((j) => j.dirty && j.visible)) request();
+  if (queue.some((j) => j.dirty && j.visible)) turnFrame.schedule();
 }
 
-function request() {
-  if (typeof requestAnimationFrame !== 'function') {
-    pump();
-    return;
-  }
-  frame ||= requestAnimationFrame(pump);
-}
+/** One frame for all the charts of the page (the queue is shared), so it belongs to no component's scope. */
+const turnFrame = effectScope(true).run(() => useFrameBatch(giveTurns))!;
 
 /**
  * Registers a chart: `run` applies its latest data. Call `changed()` when the data changes.
@@ -52,19 +47,13 @@ function request() {
 export function useChartTurns(el: Ref<HTMLElement | null>, run: () => void) {
   const job: Job = { dirty: false, visible: typeof IntersectionObserver === 'undefined', run };
   queue.push(job);
-  let observer: IntersectionObserver | null = null;
 
-  onMounted(() => {
-    if (typeof IntersectionObserver === 'undefined' || !el.value) return;
-    observer = new IntersectionObserver((entries) => {
-      job.visible = entries.some((e) => e.isIntersecting);
-      if (job.visible && job.dirty) request();
-    });
-    observer.observe(el.value);
+  useIntersectionObserver(el, (entries) => {
+    job.visible = entries.some((e) => e.isIntersecting);
+    if (job.visible && job.dirty) turnFrame.schedule();
   });
 
   onBeforeUnmount(() => {
-    observer?.disconnect();
     const i = queue.indexOf(job);
     if (i >= 0) queue.splice(i, 1);
   });
@@ -72,7 +61,7 @@ export function useChartTurns(el: Ref<HTMLElement | null>, run: () => void) {
   return {
     changed() {
       job.dirty = true;
-      if (job.visible) request();
+      if (job.visible) turnFrame.schedule();
     },
   };
 }
