@@ -8,7 +8,11 @@ import type { MovingBodyId, Sketch, SketchMember } from '../schema/sketch';
 import { rigidMemberKinds } from '../schema/sketchVocabulary';
 import { vec, vecCross, vecDot, vecLength, vecMid, vecScale, vecSub, type Vec3 } from './vec';
 import { POSE_SIZE } from './pose';
-import { leafSpringConstraints, type BendingConstraint, type PlanarConstraint } from './leafSpring';
+import {
+  leafSpringConstraints,
+  type BendingConstraint,
+  type PlanarConstraint,
+} from './layouts/leaf-spring/constraints';
 
 /** Frame points have no slot. */
 export const FRAME_SLOT = -1;
@@ -110,7 +114,7 @@ export interface LinkageModel {
   /** the solid axle, if the sketch has one */
   axle: BodyModel | null;
   /**
-   * 1 for a soft row (a leaf spring's bend, leafSpring.ts): it settles what the hard rows leave
+   * 1 for a soft row (a leaf spring's bend, layouts/leaf-spring/constraints.ts): it settles what the hard rows leave
    * free, is not a length mismatch, and so counts neither as bind nor towards lock-up
    */
   softRows: Uint8Array;
@@ -188,7 +192,7 @@ export function linkageModelBuild(sketch: Sketch): LinkageModel {
   for (const m of sketch.members) {
     const a = points.get(m.a)!;
     const b = points.get(m.b)!;
-    // A leaf half holds its length like a link (leafSpring.ts adds its bend and plane).
+    // A leaf half holds its length like a link (layouts/leaf-spring/constraints.ts adds its bend and plane).
     if (rigidMemberKinds.includes(m.kind) || m.kind === 'leaf-half') {
       constraints.push({ type: 'distance', member: m, a, b, length: vecLength(vecSub(a.ride, b.ride)) });
     } else if (m.kind === 'hinge') {

@@ -16,7 +16,7 @@
 import Flatten from '@flatten-js/core';
 import { describe, expect, it } from 'vitest';
 import { runSweep } from '../../shared/kinematics';
-import { leafSpring, LEAF_LINK_SHARE } from '../../shared/kinematics/starters/leafSpring';
+import { leafSpring, LEAF_LINK_SHARE } from '../../shared/kinematics/layouts/leaf-spring/starter';
 import { parseSketch, type Sketch } from '../../shared/schema/sketch';
 
 /** deg: the bending rows' pull on the lengths (< 1e-3 mm) turns the axle by far less than this. */

@@ -6,10 +6,10 @@
  * and long lower arm (camber gain in bump), a low roll centre, a little caster and anti-dive,
  * and the tie rod placed on the line the wishbones ask for (next to no bump steer).
  */
-import { degToRad } from '../../units';
-import { parseSketch, type SketchInput } from '../../schema/sketch';
-import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from './common';
-import type { StarterParam, StarterSpec } from './types';
+import { degToRad } from '../../../units';
+import { parseSketch, type SketchInput } from '../../../schema/sketch';
+import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from '../starterParts';
+import type { StarterParam, StarterSpec } from '../starterTypes';
 
 /** Fore-aft spacing of each wishbone's two inner pivots (mm). */
 const LOWER_PIVOT_SPACING_MM = 360;

@@ -7,10 +7,10 @@
  * ahead of the axle and the right one behind, to fight axle wind-up. Geometry is invented and
  * plausible for a mid-size truck rear.
  */
-import { degToRad } from '../../units';
-import { parseSketch, type SketchInput } from '../../schema/sketch';
-import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from './common';
-import type { StarterParam, StarterSpec } from './types';
+import { degToRad } from '../../../units';
+import { parseSketch, type SketchInput } from '../../../schema/sketch';
+import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from '../starterParts';
+import type { StarterParam, StarterSpec } from '../starterTypes';
 
 /** The equivalent link's share of the cantilever length (SAE three-link model, from memory, unverified). */
 export const LEAF_LINK_SHARE = 0.75;

@@ -4,10 +4,10 @@
  * coil-spring seat, a shock mount and the outer joint of a half-shaft. Geometry is invented and
  * plausible for a mid-size rear: a sweep angle of 0 gives a pure trailing arm (axis parallel to y).
  */
-import { degToRad } from '../../units';
-import { parseSketch, type SketchInput } from '../../schema/sketch';
-import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from './common';
-import type { StarterParam, StarterSpec } from './types';
+import { degToRad } from '../../../units';
+import { parseSketch, type SketchInput } from '../../../schema/sketch';
+import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from '../starterParts';
+import type { StarterParam, StarterSpec } from '../starterTypes';
 
 const params: StarterParam[] = [
   { key: 'track', label: 'Track', unit: 'mm', default: 1560, min: 1200, max: 2200 },
