@@ -82,8 +82,25 @@ export interface HingeConstraint {
 export type Constraint =
   DistanceConstraint | HingeConstraint | PlanarConstraint<PointModel> | BendingConstraint<PointModel>;
 
+/** The error for a constraint of a kind the model does not know (built by something other than linkageModelBuild). */
+export function unknownConstraintError(c: never): Error {
+  const kind = (c as { type?: unknown } | null)?.type;
+  return new Error(`The solver has no residual for a constraint of kind '${String(kind)}'.`);
+}
+
 /** Residual rows of a constraint. */
-export const constraintRows = (c: Constraint): number => (c.type === 'hinge' ? 5 : 1);
+export function constraintRows(c: Constraint): number {
+  switch (c.type) {
+    case 'hinge':
+      return 5;
+    case 'distance':
+    case 'planar':
+    case 'bending':
+      return 1;
+    default:
+      throw unknownConstraintError(c);
+  }
+}
 
 /** Slots of the moving bodies a constraint's rows depend on (frame points have none). */
 export function constraintSlots(c: Constraint): number[] {
@@ -96,6 +113,8 @@ export function constraintSlots(c: Constraint): number[] {
       return [...new Set(c.pairs.flatMap((p) => [p.a.slot, p.b.slot]))].filter((s) => s !== FRAME_SLOT);
     case 'bending':
       return [c.axleSlot, c.eye.slot].filter((s) => s !== FRAME_SLOT);
+    default:
+      throw unknownConstraintError(c);
   }
 }
 

@@ -9,7 +9,7 @@
  * for an axle pitch p at a travel, the front link fixes the axle's fore-aft position (a circle
  * about the front eye), the rear eye is where the rear link's circle meets the shackle's
  * (@flatten-js/core circle intersection), and the spring settles at the pitch of least bending
- * energy Σ k_i·ℓ_i²·sin²(bend_i) (the model's stated energy, leafSpring.ts), found by
+ * energy Σ k_i·ℓ_i²·sin²(bend_i) (the model's stated energy, layouts/leaf-spring/constraints.ts), found by
  * golden-section search. The sweep (3-D, both springs, least squares) must agree.
  * The wind-up rate K·L1·L2 is a derivation (cantilever model; references.md, not a published value).
  */

@@ -1,7 +1,7 @@
 /**
  * A live axle on two semi-elliptic leaf springs, each with its front eye on a frame hanger and
  * its rear eye on a shackle to a second hanger, built as the SAE three-link model
- * (leafSpring.ts): each half becomes a link from its eye to a pivot a quarter of the way from
+ * (constraints.ts): each half becomes a link from its eye to a pivot a quarter of the way from
  * the seat towards that eye (the link is about ¾ of the cantilever length — references.md,
  * from memory, unverified), the shackle is the third link. Shocks are staggered, the left one
  * ahead of the axle and the right one behind, to fight axle wind-up. Geometry is invented and
