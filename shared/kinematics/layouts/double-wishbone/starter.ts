@@ -156,7 +156,7 @@ function build(p: Params): SketchInput {
 /** Independent front: upper and lower wishbones, rack-and-pinion tie rods, coil-overs on the knuckles. */
 export const doubleWishbone: StarterSpec = {
   layout: 'double-wishbone',
-  label: 'Double wishbone front',
+  label: 'Double wishbone (front)',
   description:
     'An upper and a lower wishbone on each side hold the knuckle; a tie rod from the rack steers it and a coil-over from the frame carries it. ' +
     'Read camber gain, bump steer, roll centre, caster change and anti-dive through the travel. The coil-over is mounted on the knuckle.',

@@ -123,7 +123,7 @@ function side(p: Params, s: 'l' | 'r', y: number, shockX: number): { points: Poi
 
 export const leafSpring: StarterSpec = {
   layout: 'leaf-spring',
-  label: 'Leaf springs with shackles',
+  label: 'Leaf spring with shackle',
   description:
     'A live axle on two leaf springs: each front eye on a frame hanger, each rear eye on a swinging shackle. The leaves locate the axle fore-aft and sideways and take its torque by bending (axle wind-up); staggered shocks help against wind-up hop.',
   params,

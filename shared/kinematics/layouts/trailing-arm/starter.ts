@@ -171,7 +171,7 @@ function mirror(side: { points: PointIn[]; members: MemberIn[] }): { points: Poi
 
 export const trailingArm: StarterSpec = {
   layout: 'trailing-arm',
-  label: 'Trailing arms (independent)',
+  label: 'Independent trailing arms',
   description:
     'Each wheel rides on its own arm turning about a hinge axis through two frame pivots; the drive unit is on the frame and drives the wheels through half-shafts. A swept hinge axis (semi-trailing) adds camber and toe change.',
   params,
