@@ -5,6 +5,8 @@
  * inner joint takes the drive unit's output axis, the outer joint the wheel's spin axis).
  */
 import type { Sketch } from '../schema/sketch';
+import { cleanZero } from './clean';
+import type { LayoutReader, PlacePoint } from './layouts/types';
 import { drivelineReading } from './metrics/driveline';
 import type { PointModel } from './model';
 import type { HalfShaftReading, HalfShaftReadings } from './types';
@@ -61,3 +63,14 @@ export function halfShaftReadings(
   }
   return out;
 }
+
+/** The half-shaft readings (rows.ts): present when the sketch has half-shafts, whatever its layout. */
+export const halfShaftReader: LayoutReader = {
+  name: 'half-shafts',
+  plan(model) {
+    const plans = halfShaftPlanBuild(model.sketch, model.points);
+    if (plans.length === 0) return null;
+    const halfShafts = (at: PlacePoint) => ({ halfShafts: halfShaftReadings(plans, at, cleanZero) });
+    return { heave: halfShafts, roll: halfShafts };
+  },
+};

@@ -26,7 +26,7 @@ export type {
   SketchPoint,
   SketchMember,
 } from '../schema/sketch';
-export type { StarterParam, StarterSpec } from './starters/types';
+export type { StarterParam, StarterSpec } from './layouts/starterTypes';
 export { starters } from './starters';
 export { runSweep } from './run';
 export { sweepSketch } from './sweep';

@@ -8,7 +8,11 @@ import type { MovingBodyId, Sketch, SketchMember } from '../schema/sketch';
 import { rigidMemberKinds } from '../schema/sketchVocabulary';
 import { vec, vecCross, vecDot, vecLength, vecMid, vecScale, vecSub, type Vec3 } from './vec';
 import { POSE_SIZE } from './pose';
-import { leafSpringConstraints, type BendingConstraint, type PlanarConstraint } from './leafSpring';
+import {
+  leafSpringConstraints,
+  type BendingConstraint,
+  type PlanarConstraint,
+} from './layouts/leaf-spring/constraints';
 
 /** Frame points have no slot. */
 export const FRAME_SLOT = -1;
@@ -78,8 +82,25 @@ export interface HingeConstraint {
 export type Constraint =
   DistanceConstraint | HingeConstraint | PlanarConstraint<PointModel> | BendingConstraint<PointModel>;
 
+/** The error for a constraint of a kind the model does not know (built by something other than linkageModelBuild). */
+export function unknownConstraintError(c: never): Error {
+  const kind = (c as { type?: unknown } | null)?.type;
+  return new Error(`The solver has no residual for a constraint of kind '${String(kind)}'.`);
+}
+
 /** Residual rows of a constraint. */
-export const constraintRows = (c: Constraint): number => (c.type === 'hinge' ? 5 : 1);
+export function constraintRows(c: Constraint): number {
+  switch (c.type) {
+    case 'hinge':
+      return 5;
+    case 'distance':
+    case 'planar':
+    case 'bending':
+      return 1;
+    default:
+      throw unknownConstraintError(c);
+  }
+}
 
 /** Slots of the moving bodies a constraint's rows depend on (frame points have none). */
 export function constraintSlots(c: Constraint): number[] {
@@ -92,6 +113,8 @@ export function constraintSlots(c: Constraint): number[] {
       return [...new Set(c.pairs.flatMap((p) => [p.a.slot, p.b.slot]))].filter((s) => s !== FRAME_SLOT);
     case 'bending':
       return [c.axleSlot, c.eye.slot].filter((s) => s !== FRAME_SLOT);
+    default:
+      throw unknownConstraintError(c);
   }
 }
 
@@ -110,7 +133,7 @@ export interface LinkageModel {
   /** the solid axle, if the sketch has one */
   axle: BodyModel | null;
   /**
-   * 1 for a soft row (a leaf spring's bend, leafSpring.ts): it settles what the hard rows leave
+   * 1 for a soft row (a leaf spring's bend, layouts/leaf-spring/constraints.ts): it settles what the hard rows leave
    * free, is not a length mismatch, and so counts neither as bind nor towards lock-up
    */
   softRows: Uint8Array;
@@ -188,7 +211,7 @@ export function linkageModelBuild(sketch: Sketch): LinkageModel {
   for (const m of sketch.members) {
     const a = points.get(m.a)!;
     const b = points.get(m.b)!;
-    // A leaf half holds its length like a link (leafSpring.ts adds its bend and plane).
+    // A leaf half holds its length like a link (layouts/leaf-spring/constraints.ts adds its bend and plane).
     if (rigidMemberKinds.includes(m.kind) || m.kind === 'leaf-half') {
       constraints.push({ type: 'distance', member: m, a, b, length: vecLength(vecSub(a.ride, b.ride)) });
     } else if (m.kind === 'hinge') {

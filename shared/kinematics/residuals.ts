@@ -4,11 +4,19 @@
  * - distance (link, lateral rod, tie rod, shackle): r = |pA − pB| − L0,
  *   ∂r/∂q = u · (∂pA/∂q − ∂pB/∂q), u the unit vector from B to A;
  * - hinge: the arm's copies of the axis points stay on the frame axis;
- * - planar and bending (leaf springs, leafSpring.ts): a pivot's y offset, and a leaf half's bend.
+ * - planar and bending (leaf springs, layouts/leaf-spring/constraints.ts): a pivot's y offset, and a
+ *   leaf half's bend.
+ * One function per constraint kind; residualsEvaluate switches over the kind, and a kind it
+ * does not know is an error, never another kind's rows.
  * A point on a body is p = ref + t + R·local, so ∂p/∂t = I and ∂p/∂angle_k = (∂R/∂angle_k)·local.
  */
-import type { LinkageModel, PointModel } from './model';
-import { FRAME_SLOT as FRAME_SLOT_IMPORTED } from './model';
+import type { Constraint, DistanceConstraint, HingeConstraint, LinkageModel, PointModel } from './model';
+import type { BendingConstraint, PlanarConstraint } from './layouts/leaf-spring/constraints';
+import {
+  constraintRows as constraintRowsImported,
+  FRAME_SLOT as FRAME_SLOT_IMPORTED,
+  unknownConstraintError,
+} from './model';
 import * as pose from './pose';
 import type { RotationSet } from './pose';
 
@@ -18,6 +26,7 @@ import type { RotationSet } from './pose';
  * binding is a getter call on the module's exports, about a tenth of a sweep's profile.
  */
 const FRAME_SLOT = FRAME_SLOT_IMPORTED;
+const constraintRows = constraintRowsImported;
 const mat3Apply = pose.mat3Apply;
 const rotationSetFill = pose.rotationSetFill;
 const POSE_ROLL = pose.POSE_ROLL;
@@ -134,9 +143,156 @@ export function residualWorkCreate(model: LinkageModel): ResidualWork {
   return { rot: new BodyRotations(model.bodies.length), pts: new Float64Array(6), tmp: new Float64Array(3) };
 }
 
+/** Residual rows of a distance constraint (one), and their Jacobian row when J is given. */
+function distanceRows(
+  model: LinkageModel,
+  c: DistanceConstraint,
+  state: Float64Array,
+  work: ResidualWork,
+  r: Float64Array,
+  J: Float64Array | null,
+  row: number,
+): void {
+  const { rot, pts, tmp } = work;
+  const cols = model.stateSize;
+  pointPlace(model, c.a, state, rot, pts, 0);
+  pointPlace(model, c.b, state, rot, pts, 3);
+  const dx = pts[0] - pts[3],
+    dy = pts[1] - pts[4],
+    dz = pts[2] - pts[5];
+  const len = Math.sqrt(dx * dx + dy * dy + dz * dz);
+  r[row] = len - c.length;
+  if (!J) return;
+  const inv = 1 / Math.max(len, DIRECTION_EPSILON_MM);
+  const ux = dx * inv,
+    uy = dy * inv,
+    uz = dz * inv;
+  if (c.a.slot !== FRAME_SLOT) {
+    addPointRow(J, row, cols, c.a.slot, rot.sets[c.a.slot], c.a.local.x, c.a.local.y, c.a.local.z, ux, uy, uz, 1, tmp);
+  }
+  if (c.b.slot !== FRAME_SLOT) {
+    addPointRow(J, row, cols, c.b.slot, rot.sets[c.b.slot], c.b.local.x, c.b.local.y, c.b.local.z, ux, uy, uz, -1, tmp);
+  }
+}
+
+/** The planar row: the b points keep their ride y offsets from the a points on average (leaf-spring/constraints.ts). */
+function planarRows(
+  model: LinkageModel,
+  c: PlanarConstraint<PointModel>,
+  state: Float64Array,
+  work: ResidualWork,
+  r: Float64Array,
+  J: Float64Array | null,
+  row: number,
+): void {
+  const { rot, pts, tmp } = work;
+  const cols = model.stateSize;
+  const w = 1 / c.pairs.length;
+  let sum = 0;
+  for (const { a, b, offset } of c.pairs) {
+    pointPlace(model, a, state, rot, pts, 0);
+    pointPlace(model, b, state, rot, pts, 3);
+    sum += pts[4] - pts[1] - offset;
+    if (J) {
+      if (a.slot !== FRAME_SLOT)
+        addPointRow(J, row, cols, a.slot, rot.sets[a.slot], a.local.x, a.local.y, a.local.z, 0, w, 0, -1, tmp);
+      if (b.slot !== FRAME_SLOT)
+        addPointRow(J, row, cols, b.slot, rot.sets[b.slot], b.local.x, b.local.y, b.local.z, 0, w, 0, 1, tmp);
+    }
+  }
+  r[row] = w * sum;
+}
+
+/**
+ * The bending row of a leaf half: r = (w/ℓ)·[(R·e)·(p_eye − o) − e·pivot_local], o the axle's
+ * reference point placed (leaf-spring/constraints.ts); (R·e)·(p_pivot − o) = e·pivot_local since
+ * the pivot rides on the axle.
+ */
+function bendingRows(
+  model: LinkageModel,
+  c: BendingConstraint<PointModel>,
+  state: Float64Array,
+  work: ResidualWork,
+  r: Float64Array,
+  J: Float64Array | null,
+  row: number,
+): void {
+  const { rot, pts, tmp } = work;
+  const cols = model.stateSize;
+  const so = c.axleSlot * POSE_SIZE;
+  const axle = model.bodies[c.axleSlot];
+  const rs = rot.sets[c.axleSlot];
+  const e = c.across;
+  mat3Apply(rs, 0, e.x, e.y, e.z, pts, 0);
+  pointPlace(model, c.eye, state, rot, pts, 3);
+  const dx = pts[3] - (axle.reference.x + state[so]);
+  const dy = pts[4] - (axle.reference.y + state[so + 1]);
+  const dz = pts[5] - (axle.reference.z + state[so + 2]);
+  const k = c.weight / c.length;
+  r[row] = k * (pts[0] * dx + pts[1] * dy + pts[2] * dz - c.acrossDotPivot);
+  if (!J) return;
+  const base = row * cols + so;
+  J[base] -= k * pts[0];
+  J[base + 1] -= k * pts[1];
+  J[base + 2] -= k * pts[2];
+  for (let a = 0; a < 3; a++) {
+    mat3Apply(rs, 9 * (a + 1), e.x, e.y, e.z, tmp, 0);
+    J[base + 3 + a] += k * (tmp[0] * dx + tmp[1] * dy + tmp[2] * dz);
+  }
+  if (c.eye.slot !== FRAME_SLOT) {
+    const ex = k * pts[0],
+      ey = k * pts[1],
+      ez = k * pts[2];
+    const l = c.eye.local;
+    addPointRow(J, row, cols, c.eye.slot, rot.sets[c.eye.slot], l.x, l.y, l.z, ex, ey, ez, 1, tmp);
+  }
+}
+
+/** The five hinge rows: the arm's copy of axis point a stays on a, its copy of b on the axis line through b. */
+function hingeRows(
+  model: LinkageModel,
+  c: HingeConstraint,
+  state: Float64Array,
+  work: ResidualWork,
+  r: Float64Array,
+  J: Float64Array | null,
+  row: number,
+): void {
+  const { rot, pts, tmp } = work;
+  const cols = model.stateSize;
+  const body = model.bodies[c.slot];
+  const so = c.slot * POSE_SIZE;
+  const rs = rot.sets[c.slot];
+  // Arm's copy of axis point a, placed.
+  mat3Apply(rs, 0, c.localA.x, c.localA.y, c.localA.z, pts, 0);
+  const ax = body.reference.x + state[so] + pts[0] - c.axisA.x;
+  const ay = body.reference.y + state[so + 1] + pts[1] - c.axisA.y;
+  const az = body.reference.z + state[so + 2] + pts[2] - c.axisA.z;
+  mat3Apply(rs, 0, c.localB.x, c.localB.y, c.localB.z, pts, 3);
+  const bx = body.reference.x + state[so] + pts[3] - c.axisB.x;
+  const by = body.reference.y + state[so + 1] + pts[4] - c.axisB.y;
+  const bz = body.reference.z + state[so + 2] + pts[5] - c.axisB.z;
+  r[row] = ax;
+  r[row + 1] = ay;
+  r[row + 2] = az;
+  r[row + 3] = bx * c.across1.x + by * c.across1.y + bz * c.across1.z;
+  r[row + 4] = bx * c.across2.x + by * c.across2.y + bz * c.across2.z;
+  if (!J) return;
+  const la = c.localA,
+    lb = c.localB,
+    e1 = c.across1,
+    e2 = c.across2;
+  addPointRow(J, row, cols, c.slot, rs, la.x, la.y, la.z, 1, 0, 0, 1, tmp);
+  addPointRow(J, row + 1, cols, c.slot, rs, la.x, la.y, la.z, 0, 1, 0, 1, tmp);
+  addPointRow(J, row + 2, cols, c.slot, rs, la.x, la.y, la.z, 0, 0, 1, 1, tmp);
+  addPointRow(J, row + 3, cols, c.slot, rs, lb.x, lb.y, lb.z, e1.x, e1.y, e1.z, 1, tmp);
+  addPointRow(J, row + 4, cols, c.slot, rs, lb.x, lb.y, lb.z, e2.x, e2.y, e2.z, 1, tmp);
+}
+
 /**
  * Evaluates the residuals r (length model.residualCount, mm) and, when J is given, the
- * full Jacobian (residualCount × stateSize, row-major) at `state`.
+ * full Jacobian (residualCount × stateSize, row-major) at `state`. Throws for a constraint
+ * of a kind it does not know.
  */
 export function residualsEvaluate(
   model: LinkageModel,
@@ -145,153 +301,35 @@ export function residualsEvaluate(
   r: Float64Array,
   J: Float64Array | null,
 ): void {
-  const { rot, pts, tmp } = work;
-  rot.update(state);
-  const cols = model.stateSize;
+  work.rot.update(state);
   if (J) J.fill(0);
   let row = 0;
   for (const c of model.constraints) {
-    if (c.type === 'distance') {
-      pointPlace(model, c.a, state, rot, pts, 0);
-      pointPlace(model, c.b, state, rot, pts, 3);
-      const dx = pts[0] - pts[3],
-        dy = pts[1] - pts[4],
-        dz = pts[2] - pts[5];
-      const len = Math.sqrt(dx * dx + dy * dy + dz * dz);
-      r[row] = len - c.length;
-      if (J) {
-        const inv = 1 / Math.max(len, DIRECTION_EPSILON_MM);
-        const ux = dx * inv,
-          uy = dy * inv,
-          uz = dz * inv;
-        if (c.a.slot !== FRAME_SLOT) {
-          addPointRow(
-            J,
-            row,
-            cols,
-            c.a.slot,
-            rot.sets[c.a.slot],
-            c.a.local.x,
-            c.a.local.y,
-            c.a.local.z,
-            ux,
-            uy,
-            uz,
-            1,
-            tmp,
-          );
-        }
-        if (c.b.slot !== FRAME_SLOT) {
-          addPointRow(
-            J,
-            row,
-            cols,
-            c.b.slot,
-            rot.sets[c.b.slot],
-            c.b.local.x,
-            c.b.local.y,
-            c.b.local.z,
-            ux,
-            uy,
-            uz,
-            -1,
-            tmp,
-          );
-        }
-      }
-      row += 1;
-    } else if (c.type === 'planar') {
-      // The b points keep their ride y offsets from the a points on average (leafSpring.ts).
-      const w = 1 / c.pairs.length;
-      let sum = 0;
-      for (const { a, b, offset } of c.pairs) {
-        pointPlace(model, a, state, rot, pts, 0);
-        pointPlace(model, b, state, rot, pts, 3);
-        sum += pts[4] - pts[1] - offset;
-        if (J) {
-          if (a.slot !== FRAME_SLOT)
-            addPointRow(J, row, cols, a.slot, rot.sets[a.slot], a.local.x, a.local.y, a.local.z, 0, w, 0, -1, tmp);
-          if (b.slot !== FRAME_SLOT)
-            addPointRow(J, row, cols, b.slot, rot.sets[b.slot], b.local.x, b.local.y, b.local.z, 0, w, 0, 1, tmp);
-        }
-      }
-      r[row] = w * sum;
-      row += 1;
-    } else if (c.type === 'bending') {
-      // r = (w/ℓ)·[(R·e)·(p_eye − o) − e·pivot_local], o the axle's reference point placed
-      // (leafSpring.ts); (R·e)·(p_pivot − o) = e·pivot_local since the pivot rides on the axle.
-      const so = c.axleSlot * POSE_SIZE;
-      const axle = model.bodies[c.axleSlot];
-      const rs = rot.sets[c.axleSlot];
-      const e = c.across;
-      mat3Apply(rs, 0, e.x, e.y, e.z, pts, 0);
-      pointPlace(model, c.eye, state, rot, pts, 3);
-      const dx = pts[3] - (axle.reference.x + state[so]);
-      const dy = pts[4] - (axle.reference.y + state[so + 1]);
-      const dz = pts[5] - (axle.reference.z + state[so + 2]);
-      const k = c.weight / c.length;
-      r[row] = k * (pts[0] * dx + pts[1] * dy + pts[2] * dz - c.acrossDotPivot);
-      if (J) {
-        const base = row * cols + so;
-        J[base] -= k * pts[0];
-        J[base + 1] -= k * pts[1];
-        J[base + 2] -= k * pts[2];
-        for (let a = 0; a < 3; a++) {
-          mat3Apply(rs, 9 * (a + 1), e.x, e.y, e.z, tmp, 0);
-          J[base + 3 + a] += k * (tmp[0] * dx + tmp[1] * dy + tmp[2] * dz);
-        }
-        if (c.eye.slot !== FRAME_SLOT) {
-          const ex = k * pts[0],
-            ey = k * pts[1],
-            ez = k * pts[2];
-          addPointRow(
-            J,
-            row,
-            cols,
-            c.eye.slot,
-            rot.sets[c.eye.slot],
-            c.eye.local.x,
-            c.eye.local.y,
-            c.eye.local.z,
-            ex,
-            ey,
-            ez,
-            1,
-            tmp,
-          );
-        }
-      }
-      row += 1;
-    } else {
-      const body = model.bodies[c.slot];
-      const so = c.slot * POSE_SIZE;
-      const rs = rot.sets[c.slot];
-      // Arm's copy of axis point a, placed.
-      mat3Apply(rs, 0, c.localA.x, c.localA.y, c.localA.z, pts, 0);
-      const ax = body.reference.x + state[so] + pts[0] - c.axisA.x;
-      const ay = body.reference.y + state[so + 1] + pts[1] - c.axisA.y;
-      const az = body.reference.z + state[so + 2] + pts[2] - c.axisA.z;
-      mat3Apply(rs, 0, c.localB.x, c.localB.y, c.localB.z, pts, 3);
-      const bx = body.reference.x + state[so] + pts[3] - c.axisB.x;
-      const by = body.reference.y + state[so + 1] + pts[4] - c.axisB.y;
-      const bz = body.reference.z + state[so + 2] + pts[5] - c.axisB.z;
-      r[row] = ax;
-      r[row + 1] = ay;
-      r[row + 2] = az;
-      r[row + 3] = bx * c.across1.x + by * c.across1.y + bz * c.across1.z;
-      r[row + 4] = bx * c.across2.x + by * c.across2.y + bz * c.across2.z;
-      if (J) {
-        const la = c.localA,
-          lb = c.localB,
-          e1 = c.across1,
-          e2 = c.across2;
-        addPointRow(J, row, cols, c.slot, rs, la.x, la.y, la.z, 1, 0, 0, 1, tmp);
-        addPointRow(J, row + 1, cols, c.slot, rs, la.x, la.y, la.z, 0, 1, 0, 1, tmp);
-        addPointRow(J, row + 2, cols, c.slot, rs, la.x, la.y, la.z, 0, 0, 1, 1, tmp);
-        addPointRow(J, row + 3, cols, c.slot, rs, lb.x, lb.y, lb.z, e1.x, e1.y, e1.z, 1, tmp);
-        addPointRow(J, row + 4, cols, c.slot, rs, lb.x, lb.y, lb.z, e2.x, e2.y, e2.z, 1, tmp);
-      }
-      row += 5;
-    }
+    residualRows(model, c, state, work, r, J, row);
+    row += constraintRows(c);
+  }
+}
+
+/** The rows of one constraint, by its kind. */
+function residualRows(
+  model: LinkageModel,
+  c: Constraint,
+  state: Float64Array,
+  work: ResidualWork,
+  r: Float64Array,
+  J: Float64Array | null,
+  row: number,
+): void {
+  switch (c.type) {
+    case 'distance':
+      return distanceRows(model, c, state, work, r, J, row);
+    case 'planar':
+      return planarRows(model, c, state, work, r, J, row);
+    case 'bending':
+      return bendingRows(model, c, state, work, r, J, row);
+    case 'hinge':
+      return hingeRows(model, c, state, work, r, J, row);
+    default:
+      throw unknownConstraintError(c);
   }
 }

@@ -1,34 +1,23 @@
 /**
  * Turning solved poses into result rows: place the points, then read every metric of
- * docs/sketch-format.md off them. The plan (which links stand for which group, which rod gives
- * the roll centre) is made once per sweep.
+ * docs/sketch-format.md off them. The generic readings (poses, members, driveline) are here; each
+ * layout reader (layouts/readers.ts: which links stand for which group, which rod gives the
+ * roll centre, the arms, springs and wishbones) adds its own. The plan is made once per sweep.
  */
 import type { MovingBodyId, SketchMember } from '../schema/sketch';
-import { antiSquatPercent } from './metrics/antiSquat';
+import { cleanZero } from './clean';
+import { layoutReaders } from './layouts/readers';
+import type { LayoutRowPlan } from './layouts/types';
 import { drivelineReading } from './metrics/driveline';
-import { leftGroupLink, sideViewCrossing } from './metrics/instantCenter';
-import { rollCenterFromLinkPairs, rollCenterFromRod } from './metrics/rollCenter';
 import type { LinkageModel, PointModel } from './model';
-import { poseFromState, POSE_SIZE } from './pose';
+import { poseFromState } from './pose';
 import { BodyRotations, pointPlace, pointVelocity } from './residuals';
 import type { SolvedRow } from './march';
 import type { BodyPoses, DrivelineReading, HeaveRow, MemberReading, Pose, RollRow } from './types';
 import { vec, type Vec3 } from './vec';
-import { halfShaftPlanBuild, halfShaftReadings, type HalfShaftPlan } from './halfShaft';
-import { leafSpringHeaveFields, leafSpringPlanBuild, type LeafSpringPlan } from './leafSpringRows';
-import {
-  trailingArmHeaveFields,
-  trailingArmPlanBuild,
-  trailingArmRollFields,
-  type TrailingArmPlan,
-} from './trailingArm';
-import { wishbonePlanBuild, type WishbonePlan } from './wishbone';
-import { wishboneHeaveFields, wishboneRollFields } from './wishboneRows';
 
-/** Magnitudes below this are round-off of a zero (mm, deg or %) and are written as 0. */
-export const OUTPUT_ZERO_TOLERANCE = 1e-10;
-
-const clean = (v: number) => (Math.abs(v) < OUTPUT_ZERO_TOLERANCE ? 0 : v);
+/** Module-local copy of an imported binding used per row (see residuals.ts). */
+const clean = cleanZero;
 
 function cleanPose(p: Pose): Pose {
   return { x: clean(p.x), y: clean(p.y), z: clean(p.z), roll: clean(p.roll), pitch: clean(p.pitch), yaw: clean(p.yaw) };
@@ -44,11 +33,6 @@ interface MemberPlan {
 export interface RowPlan {
   model: LinkageModel;
   members: MemberPlan[];
-  upper: MemberPlan | null;
-  lower: MemberPlan | null;
-  rod: MemberPlan | null;
-  upperPair: [MemberPlan, MemberPlan] | null;
-  lowerPair: [MemberPlan, MemberPlan] | null;
   driveline: {
     output: PointModel;
     outputAxis: PointModel;
@@ -60,14 +44,8 @@ export interface RowPlan {
   primarySlot: number;
   rot: BodyRotations;
   scratch: { va: Float64Array; vb: Float64Array; tmp: Float64Array };
-  /** wheels on hinged arms (their rows get the trailingArm.ts fields); null otherwise */
-  trailingArm: TrailingArmPlan | null;
-  /** the sketch's half-shafts, if any */
-  halfShafts: HalfShaftPlan[];
-  /** leaf springs (their heave rows get the leafSpringRows.ts fields); null otherwise */
-  leafSpring: LeafSpringPlan | null;
-  /** knuckles on double wishbones (their rows get the wishboneRows.ts fields); null otherwise */
-  wishbone: WishbonePlan | null;
+  /** the plans of the layout readers that found their parts, in reading order (layouts/readers.ts) */
+  layouts: LayoutRowPlan[];
 }
 
 export function rowPlanBuild(model: LinkageModel): RowPlan {
@@ -79,21 +57,10 @@ export function rowPlanBuild(model: LinkageModel): RowPlan {
       const b = points.get(m.b)!;
       return { member: m, a, b, rideLength: Math.hypot(a.ride.x - b.ride.x, a.ride.y - b.ride.y, a.ride.z - b.ride.z) };
     });
-  const byId = new Map(members.map((p) => [p.member.id, p]));
-  const pick = (m: SketchMember | null) => (m ? (byId.get(m.id) ?? null) : null);
-  const pair = (group: 'upper' | 'lower'): [MemberPlan, MemberPlan] | null => {
-    const g = members.filter((p) => p.member.kind === 'link' && p.member.group === group);
-    return g.length === 2 ? [g[0], g[1]] : null;
-  };
   const d = sketch.driveline;
   return {
     model,
     members,
-    upper: pick(leftGroupLink(sketch, 'upper')),
-    lower: pick(leftGroupLink(sketch, 'lower')),
-    rod: members.find((p) => p.member.kind === 'lateral-rod') ?? null,
-    upperPair: pair('upper'),
-    lowerPair: pair('lower'),
     driveline: d
       ? {
           output: points.get(d.output)!,
@@ -110,10 +77,7 @@ export function rowPlanBuild(model: LinkageModel): RowPlan {
     primarySlot: model.axle ? model.axle.slot : model.wheelLeft.slot,
     rot: new BodyRotations(model.bodies.length),
     scratch: { va: new Float64Array(3), vb: new Float64Array(3), tmp: new Float64Array(3) },
-    trailingArm: trailingArmPlanBuild(model),
-    halfShafts: halfShaftPlanBuild(sketch, points),
-    leafSpring: leafSpringPlanBuild(model),
-    wishbone: wishbonePlanBuild(model),
+    layouts: layoutReaders.map((r) => r.plan(model)).filter((p): p is LayoutRowPlan => p !== null),
   };
 }
 
@@ -188,39 +152,10 @@ function drivelineAt(plan: RowPlan, at: RowPlacer): DrivelineReading | undefined
 /** A heave row from a solved row whose `rate` is d(state)/d(travel). */
 export function heaveRowBuild(plan: RowPlan, solved: SolvedRow): HeaveRow {
   const { model } = plan;
-  const { sketch } = model;
   const at = new RowPlacer(plan, solved.state);
   const pose = cleanPose(poseFromState(solved.state, plan.primarySlot));
   const axle = model.axle;
   const wl = at.at(model.wheelLeft);
-
-  let instantCenter = null;
-  let parallelSlope: number | null = null;
-  if (plan.upper && plan.lower) {
-    const u1 = at.at(plan.upper.a),
-      u2 = at.at(plan.upper.b);
-    const l1 = at.at(plan.lower.a),
-      l2 = at.at(plan.lower.b);
-    instantCenter = sideViewCrossing(u1, u2, l1, l2);
-    if (!instantCenter && Math.abs(l2.x - l1.x) > 0) parallelSlope = (l2.z - l1.z) / (l2.x - l1.x);
-  }
-  const cp = { x: wl.x, z: solved.travel };
-  const antiSquat =
-    plan.upper && plan.lower
-      ? antiSquatPercent(instantCenter, cp, sketch.vehicle.cgHeight, sketch.vehicle.wheelbase, parallelSlope)
-      : null;
-
-  let rollCenterHeight: number | null = null;
-  if (plan.rod) rollCenterHeight = rollCenterFromRod(at.at(plan.rod.a), at.at(plan.rod.b));
-  else if (plan.upperPair && plan.lowerPair && axle) {
-    const seg = (p: MemberPlan): [Vec3, Vec3] => [at.at(p.a), at.at(p.b)];
-    const refX = axle.reference.x + solved.state[axle.slot * POSE_SIZE];
-    rollCenterHeight = rollCenterFromLinkPairs(
-      [seg(plan.upperPair[0]), seg(plan.upperPair[1])],
-      [seg(plan.lowerPair[0]), seg(plan.lowerPair[1])],
-      refX,
-    );
-  }
 
   const row: HeaveRow = {
     travel: solved.travel,
@@ -229,31 +164,17 @@ export function heaveRowBuild(plan: RowPlan, solved: SolvedRow): HeaveRow {
     pinionAngleChange: axle ? clean(-pose.pitch) : null,
     lateralShift: axle ? pose.y : null,
     foreAftShift: axle ? pose.x : clean(wl.x - model.wheelLeft.ride.x),
-    instantCenter: instantCenter ? { x: clean(instantCenter.x), z: clean(instantCenter.z) } : null,
-    antiSquat: antiSquat === null ? null : clean(antiSquat),
-    rollCenterHeight: rollCenterHeight === null ? null : clean(rollCenterHeight),
+    // Filled in by the layout readers (the solid-axle links first); null where none applies.
+    instantCenter: null,
+    antiSquat: null,
+    rollCenterHeight: null,
     bind: clean(solved.bind),
     members: memberReadings(plan, at, solved.rate),
   };
   const dl = drivelineAt(plan, at);
   if (dl) row.driveline = dl;
-  if (plan.trailingArm)
-    Object.assign(
-      row,
-      trailingArmHeaveFields(plan.trailingArm, (p) => at.at(p), solved.state, solved.travel, clean),
-    );
-  const hs = halfShaftReadings(plan.halfShafts, (p) => at.at(p), clean);
-  if (hs) row.halfShafts = hs;
-  if (plan.leafSpring)
-    Object.assign(
-      row,
-      leafSpringHeaveFields(plan.leafSpring, (p) => at.at(p), clean),
-    );
-  if (plan.wishbone)
-    Object.assign(
-      row,
-      wishboneHeaveFields(plan.wishbone, (p) => at.at(p), solved.state, solved.travel),
-    );
+  const place = (p: PointModel) => at.at(p);
+  for (const layout of plan.layouts) if (layout.heave) Object.assign(row, layout.heave(place, solved));
   return row;
 }
 
@@ -276,17 +197,7 @@ export function rollRowBuild(plan: RowPlan, solved: SolvedRow): RollRow {
   };
   const dl = drivelineAt(plan, at);
   if (dl) row.driveline = dl;
-  if (plan.trailingArm)
-    Object.assign(
-      row,
-      trailingArmRollFields(plan.trailingArm, (p) => at.at(p), solved.state, solved.roll, clean),
-    );
-  const hs = halfShaftReadings(plan.halfShafts, (p) => at.at(p), clean);
-  if (hs) row.halfShafts = hs;
-  if (plan.wishbone)
-    Object.assign(
-      row,
-      wishboneRollFields(plan.wishbone, (p) => at.at(p), solved.state, solved.roll),
-    );
+  const place = (p: PointModel) => at.at(p);
+  for (const layout of plan.layouts) if (layout.roll) Object.assign(row, layout.roll(place, solved));
   return row;
 }

@@ -13,10 +13,8 @@ import { pointVelocity, BodyRotations } from './residuals';
 import { heaveRowBuild, rollRowBuild, rowPlanBuild } from './rows';
 import { PoseSolver } from './solve';
 import { sweepEvents } from './events';
-import { leafSpringNotes } from './leafSpringRows';
 import { linkLoads, linkLoadsApply } from './loads';
 import { windUpReading } from './windUp';
-import { wishboneNotes } from './wishboneNotes';
 import type { HeaveRow, RollRow, SweepEvent, SweepResult } from './types';
 
 /** A null-space motion that moves no point of its body faster than this (mm per unit) is idle (a shackle spinning on its own axis). */
@@ -102,10 +100,6 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
   // bias the direction the soft rows settle (a leaf spring's pitch) by far more than round-off.
   if (!solver.regularize) ride = rowRateFor(ctx, ride, 'travel');
   warnings.push(...unlocatedWarnings(model, nullSpace));
-  if (plan.leafSpring) warnings.push(...leafSpringNotes(plan.leafSpring));
-  else if (model.axle && !(plan.upper && plan.lower)) {
-    warnings.push('No upper and lower link groups on the left side: no instant centre or anti-squat.');
-  }
 
   const sw = sketch.sweep;
   const heavePlan = marchPlan(sw.droop, sw.bump, sw.step);
@@ -125,7 +119,7 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
   if (up.lockedAt !== null) events.push(lockUpEvent('heave', up.lockedAt, up.rows.at(-1)?.travel ?? 0));
   if (down.lockedAt !== null) events.push(lockUpEvent('heave', down.lockedAt, down.rows.at(-1)?.travel ?? 0));
   events.push(...sweepEvents(sketch, 'heave', heave));
-  warnings.push(...wishboneNotes(model, plan.wishbone, heave));
+  for (const layout of plan.layouts) if (layout.notes) warnings.push(...layout.notes(heave));
 
   let roll: RollRow[] = [];
   let rollMin = 0;

@@ -9,14 +9,14 @@
  * for an axle pitch p at a travel, the front link fixes the axle's fore-aft position (a circle
  * about the front eye), the rear eye is where the rear link's circle meets the shackle's
  * (@flatten-js/core circle intersection), and the spring settles at the pitch of least bending
- * energy Σ k_i·ℓ_i²·sin²(bend_i) (the model's stated energy, leafSpring.ts), found by
+ * energy Σ k_i·ℓ_i²·sin²(bend_i) (the model's stated energy, layouts/leaf-spring/constraints.ts), found by
  * golden-section search. The sweep (3-D, both springs, least squares) must agree.
  * The wind-up rate K·L1·L2 is a derivation (cantilever model; docs/references.md, not a published value).
  */
 import Flatten from '@flatten-js/core';
 import { describe, expect, it } from 'vitest';
 import { runSweep } from '../../shared/kinematics';
-import { leafSpring, LEAF_LINK_SHARE } from '../../shared/kinematics/starters/leafSpring';
+import { leafSpring, LEAF_LINK_SHARE } from '../../shared/kinematics/layouts/leaf-spring/starter';
 import { parseSketch, type Sketch } from '../../shared/schema/sketch';
 
 /** deg: the bending rows' pull on the lengths (< 1e-3 mm) turns the axle by far less than this. */

@@ -13,7 +13,7 @@
 import { multiply, rotationMatrix } from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { pointsAt, runSweep } from '../../shared/kinematics';
-import { trailingArm } from '../../shared/kinematics/starters/trailingArm';
+import { trailingArm } from '../../shared/kinematics/layouts/trailing-arm/starter';
 import { parseSketch } from '../../shared/schema/sketch';
 
 /** deg: the solver's convergence (1e-6 mm over a 500 mm arm is 1e-7°) with round-off. */

@@ -6,9 +6,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { runSweep } from '../../../shared/kinematics';
-import { leafSpring } from '../../../shared/kinematics/starters/leafSpring';
-import { trailingArm } from '../../../shared/kinematics/starters/trailingArm';
-import type { StarterSpec } from '../../../shared/kinematics/starters/types';
+import { leafSpring } from '../../../shared/kinematics/layouts/leaf-spring/starter';
+import { trailingArm } from '../../../shared/kinematics/layouts/trailing-arm/starter';
+import type { StarterSpec } from '../../../shared/kinematics/layouts/starterTypes';
 import type { MovingBodyId } from '../../../shared/schema/sketch';
 import { nonFinite } from './helpers';
 

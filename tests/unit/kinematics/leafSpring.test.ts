@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { pointsAt, runSweep } from '../../../shared/kinematics';
 import { linkageModelBuild } from '../../../shared/kinematics/model';
-import { leafSpring } from '../../../shared/kinematics/starters/leafSpring';
+import { leafSpring } from '../../../shared/kinematics/layouts/leaf-spring/starter';
 import { checkSketch, parseSketch, type SketchInput } from '../../../shared/schema/sketch';
 import { exampleSketch, nonFinite } from './helpers';
 

@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import { pointsAt, runSweep } from '../../../shared/kinematics';
 import { parseSketch } from '../../../shared/schema/sketch';
-import { trailingArm } from '../../../shared/kinematics/starters/trailingArm';
+import { trailingArm } from '../../../shared/kinematics/layouts/trailing-arm/starter';
 import { nonFinite } from './helpers';
 
 /** Lengths agree to this (mm): solver convergence plus round-off. */

@@ -16,8 +16,8 @@
  * δ/ℓ). Only the ratio between the halves matters to the pose; the wind-up uses the rates
  * themselves (windUp.ts).
  */
-import type { Sketch, SketchMember } from '../schema/sketch';
-import { vec, vecLength, vecSub, type Vec3 } from './vec';
+import type { Sketch, SketchMember } from '../../../schema/sketch';
+import { vec, vecLength, vecSub, type Vec3 } from '../../vec';
 
 /**
  * mm per radian of bend for the stiffest half. Small against the hard rows (a link's row

@@ -6,10 +6,10 @@
  * and long lower arm (camber gain in bump), a low roll centre, a little caster and anti-dive,
  * and the tie rod placed on the line the wishbones ask for (next to no bump steer).
  */
-import { degToRad } from '../../units';
-import { parseSketch, type SketchInput } from '../../schema/sketch';
-import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from './common';
-import type { StarterParam, StarterSpec } from './types';
+import { degToRad } from '../../../units';
+import { parseSketch, type SketchInput } from '../../../schema/sketch';
+import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from '../starterParts';
+import type { StarterParam, StarterSpec } from '../starterTypes';
 
 /** Fore-aft spacing of each wishbone's two inner pivots (mm). */
 const LOWER_PIVOT_SPACING_MM = 360;
@@ -156,7 +156,7 @@ function build(p: Params): SketchInput {
 /** Independent front: upper and lower wishbones, rack-and-pinion tie rods, coil-overs on the knuckles. */
 export const doubleWishbone: StarterSpec = {
   layout: 'double-wishbone',
-  label: 'Double wishbone front',
+  label: 'Double wishbone (front)',
   description:
     'An upper and a lower wishbone on each side hold the knuckle; a tie rod from the rack steers it and a coil-over from the frame carries it. ' +
     'Read camber gain, bump steer, roll centre, caster change and anti-dive through the travel. The coil-over is mounted on the knuckle.',

@@ -1,4 +1,4 @@
-import { parseSketch } from '../../schema/sketch';
+import { parseSketch } from '../../../schema/sketch';
 import {
   baseParams,
   lateralRod,
@@ -8,8 +8,8 @@ import {
   rodParams,
   sketchShell,
   solidAxleBase,
-} from './common';
-import type { StarterParam, StarterSpec } from './types';
+} from '../starterParts';
+import type { StarterParam, StarterSpec } from '../starterTypes';
 
 const params: StarterParam[] = [
   ...baseParams.map((p) => (p.key === 'upperLength' ? { ...p, default: 750 } : p)),

@@ -4,10 +4,10 @@
  * coil-spring seat, a shock mount and the outer joint of a half-shaft. Geometry is invented and
  * plausible for a mid-size rear: a sweep angle of 0 gives a pure trailing arm (axis parallel to y).
  */
-import { degToRad } from '../../units';
-import { parseSketch, type SketchInput } from '../../schema/sketch';
-import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from './common';
-import type { StarterParam, StarterSpec } from './types';
+import { degToRad } from '../../../units';
+import { parseSketch, type SketchInput } from '../../../schema/sketch';
+import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from '../starterParts';
+import type { StarterParam, StarterSpec } from '../starterTypes';
 
 const params: StarterParam[] = [
   { key: 'track', label: 'Track', unit: 'mm', default: 1560, min: 1200, max: 2200 },
@@ -171,7 +171,7 @@ function mirror(side: { points: PointIn[]; members: MemberIn[] }): { points: Poi
 
 export const trailingArm: StarterSpec = {
   layout: 'trailing-arm',
-  label: 'Trailing arms (independent)',
+  label: 'Independent trailing arms',
   description:
     'Each wheel rides on its own arm turning about a hinge axis through two frame pivots; the drive unit is on the frame and drives the wheels through half-shafts. A swept hinge axis (semi-trailing) adds camber and toe change.',
   params,

@@ -8,12 +8,12 @@
  *   the inner end the note gives is the centre of the steering arm's path with the wheel held
  *   straight, through ride and the two ends of the ±50 mm window (plain geometry).
  */
-import type { LinkageModel } from './model';
-import { outwardAxis, toeOfAxis, wheelAttitude } from './metrics/wheel';
-import { poseApply } from './pose';
-import type { HeaveRow, Pose } from './types';
-import { vec, vecAdd, vecCross, vecDistance, vecDot, vecLength, vecScale, vecSub, type Vec3 } from './vec';
-import { knuckleCarrying, type WishbonePlan, type WishboneSide } from './wishbone';
+import type { LinkageModel } from '../../model';
+import { outwardAxis, toeOfAxis, wheelAttitude } from '../../metrics/wheel';
+import { poseApply } from '../../pose';
+import type { HeaveRow, Pose } from '../../types';
+import { vec, vecAdd, vecCross, vecDistance, vecDot, vecLength, vecScale, vecSub, type Vec3 } from '../../vec';
+import { knuckleCarrying, type WishbonePlan, type WishboneSide } from './plan';
 
 /** Bump steer is read over this much travel either side of ride (mm). */
 export const BUMP_STEER_WINDOW_MM = 50;

@@ -13,6 +13,7 @@ export interface StarterParam {
 /** A ready layout to begin from: a few parameters in, a complete valid sketch out. */
 export interface StarterSpec {
   layout: Layout;
+  /** the layout's name as the UI shows it (its one source: the client's layout descriptors take it from here) */
   label: string;
   description: string;
   params: StarterParam[];

@@ -1,16 +1,16 @@
 /**
  * A live axle on two semi-elliptic leaf springs, each with its front eye on a frame hanger and
  * its rear eye on a shackle to a second hanger, built as the SAE three-link model
- * (leafSpring.ts): each half becomes a link from its eye to a pivot a quarter of the way from
+ * (constraints.ts): each half becomes a link from its eye to a pivot a quarter of the way from
  * the seat towards that eye (the link is about ¾ of the cantilever length — docs/references.md,
  * from memory, unverified), the shackle is the third link. Shocks are staggered, the left one
  * ahead of the axle and the right one behind, to fight axle wind-up. Geometry is invented and
  * plausible for a mid-size truck rear.
  */
-import { degToRad } from '../../units';
-import { parseSketch, type SketchInput } from '../../schema/sketch';
-import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from './common';
-import type { StarterParam, StarterSpec } from './types';
+import { degToRad } from '../../../units';
+import { parseSketch, type SketchInput } from '../../../schema/sketch';
+import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from '../starterParts';
+import type { StarterParam, StarterSpec } from '../starterTypes';
 
 /** The equivalent link's share of the cantilever length (SAE three-link model, from memory, unverified). */
 export const LEAF_LINK_SHARE = 0.75;
@@ -123,7 +123,7 @@ function side(p: Params, s: 'l' | 'r', y: number, shockX: number): { points: Poi
 
 export const leafSpring: StarterSpec = {
   layout: 'leaf-spring',
-  label: 'Leaf springs with shackles',
+  label: 'Leaf spring with shackle',
   description:
     'A live axle on two leaf springs: each front eye on a frame hanger, each rear eye on a swinging shackle. The leaves locate the axle fore-aft and sideways and take its torque by bending (axle wind-up); staggered shocks help against wind-up hop.',
   params,

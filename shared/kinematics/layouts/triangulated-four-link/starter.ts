@@ -1,6 +1,6 @@
-import { parseSketch } from '../../schema/sketch';
-import { baseParams, linkFrameEnd, paramsResolve, r1, sketchShell, solidAxleBase } from './common';
-import type { StarterParam, StarterSpec } from './types';
+import { parseSketch } from '../../../schema/sketch';
+import { baseParams, linkFrameEnd, paramsResolve, r1, sketchShell, solidAxleBase } from '../starterParts';
+import type { StarterParam, StarterSpec } from '../starterTypes';
 
 const params: StarterParam[] = [
   ...baseParams.map((p) => (p.key === 'upperLength' ? { ...p, default: 650 } : p)),

@@ -1,5 +1,5 @@
 /**
- * Leaf-spring readings of one heave row and the sentences the readout shows for the layout:
+ * Leaf-spring readings of one heave row (the sentences for the layout are in notes.ts):
  * - `shackleAngle`: the left shackle's side-view angle from the vertical through its hanger,
  *   positive when the spring eye lies rearward of the hanger;
  * - `rollCenterHeight`: the height of the left spring's seat on the axle — the leaves locate
@@ -7,9 +7,10 @@
  * The side-view instant centre and anti-squat of the link layouts do not apply: the spring's
  * bending, not a link pair, takes the axle torque (windUp.ts gives what it does).
  */
-import type { LinkageModel, PointModel } from './model';
-import type { HeaveRow } from './types';
-import type { Vec3 } from './vec';
+import type { Sketch } from '../../../schema/sketch';
+import type { LinkageModel, PointModel } from '../../model';
+import type { HeaveRow } from '../../types';
+import type { Vec3 } from '../../vec';
 
 export interface LeafSpringPlan {
   /** the left spring's shackle: frame hanger and swinging eye; null without a shackle */
@@ -20,11 +21,16 @@ export interface LeafSpringPlan {
   lateralRod: boolean;
 }
 
+/** Whether the sketch has leaf-spring halves (its axle is then located by the leaves, not by link groups). */
+export function hasLeafSprings(sketch: Sketch): boolean {
+  return sketch.members.some((m) => m.kind === 'leaf-half');
+}
+
 /** The plan when the sketch has leaf-spring halves; null otherwise. */
 export function leafSpringPlanBuild(model: LinkageModel): LeafSpringPlan | null {
   const { sketch, points } = model;
+  if (!hasLeafSprings(sketch)) return null;
   const halves = sketch.members.filter((m) => m.kind === 'leaf-half');
-  if (halves.length === 0) return null;
   const seats = [...new Set(halves.map((m) => (m.kind === 'leaf-half' ? m.seat : '')))].map((id) => points.get(id)!);
   // The left spring: the seat farthest to the left (largest y).
   const seat = seats.reduce<PointModel | null>((best, p) => (!best || p.ride.y > best.ride.y ? p : best), null);
@@ -55,17 +61,4 @@ export function leafSpringHeaveFields(
   if (plan.shackle) out.shackleAngle = clean(shackleAngle(at(plan.shackle.hanger), at(plan.shackle.eye)));
   if (plan.seat && !plan.lateralRod) out.rollCenterHeight = clean(at(plan.seat).z);
   return out;
-}
-
-/**
- * The readout's sentences for a leaf-spring sketch: the lateral assumption (always), and why
- * there is no instant centre or anti-squat.
- */
-export function leafSpringNotes(plan: LeafSpringPlan): string[] {
-  return [
-    plan.lateralRod
-      ? 'Leaf springs with a lateral rod: the leaves and the rod both locate the axle sideways; where they disagree it shows as bind.'
-      : 'Leaf springs: the spring leaves locate the axle sideways (there is no lateral rod); each spring swings in its own fore-aft plane, and the roll centre is taken at the spring seat.',
-    "Leaf springs: the axle's pitch follows the springs' bending (SAE three-link model), and the bending takes the axle torque, so no side-view instant centre or anti-squat is given; see the wind-up.",
-  ];
 }

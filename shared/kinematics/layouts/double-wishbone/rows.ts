@@ -7,10 +7,10 @@
  * - roll (body roll; the left wheel up for positive roll): each wheel's camber relative to
  *   the tilted ground, and the roll centre where the two patch lines cross.
  */
-import { degToRad } from '../units';
-import { antiDivePercent } from './metrics/antiDive';
-import { kingpinReading } from './metrics/kingpin';
-import { wheelAttitude } from './metrics/wheel';
+import { degToRad } from '../../../units';
+import { antiDivePercent } from '../../metrics/antiDive';
+import { kingpinReading } from '../../metrics/kingpin';
+import { wheelAttitude } from '../../metrics/wheel';
 import {
   linesCrossing,
   lineAtCentre,
@@ -20,16 +20,13 @@ import {
   viewLinesCrossing,
   type ViewLine,
   type ViewPoint,
-} from './metrics/wishbonePlanes';
-import type { PointModel } from './model';
-import { poseFromState } from './pose';
-import { OUTPUT_ZERO_TOLERANCE } from './rows';
-import type { FrontPoint, HeaveRow, RollRow, SidePoint } from './types';
-import type { Vec3 } from './vec';
-import type { WishbonePlan, WishboneSide } from './wishbone';
-
-/** Where a point is in the row being read (mm). */
-export type PlacePoint = (p: PointModel) => Vec3;
+} from '../../metrics/wishbonePlanes';
+import { poseFromState } from '../../pose';
+import { OUTPUT_ZERO_TOLERANCE } from '../../clean';
+import type { FrontPoint, HeaveRow, RollRow, SidePoint } from '../../types';
+import type { Vec3 } from '../../vec';
+import type { PlacePoint } from '../types';
+import type { WishbonePlan, WishboneSide } from './plan';
 
 const clean = (v: number) => (Math.abs(v) < OUTPUT_ZERO_TOLERANCE ? 0 : v);
 

@@ -6,7 +6,7 @@
  */
 import { degToRad } from '../../units';
 import type { SketchInput } from '../../schema/sketch';
-import type { StarterParam } from './types';
+import type { StarterParam } from './starterTypes';
 
 export type Params = Record<string, number>;
 export type PointIn = SketchInput['points'][number];

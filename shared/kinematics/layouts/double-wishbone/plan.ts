@@ -6,12 +6,12 @@
  * `layout`. The solver needs none of this (the five links are plain distance constraints on
  * the knuckle, a wheel carrier); it is the plan for the double-wishbone metrics.
  */
-import type { Sketch } from '../schema/sketch';
-import { DEFAULT_FRONT_BRAKE_SHARE_PERCENT } from '../schema/sketchVocabulary';
-import { kingpinReading } from './metrics/kingpin';
-import type { KingpinReading } from './types';
-import type { BodyModel, LinkageModel, PointModel } from './model';
-import { FRAME_SLOT } from './model';
+import type { Sketch } from '../../../schema/sketch';
+import { DEFAULT_FRONT_BRAKE_SHARE_PERCENT } from '../../../schema/sketchVocabulary';
+import { kingpinReading } from '../../metrics/kingpin';
+import type { KingpinReading } from '../../types';
+import type { BodyModel, LinkageModel, PointModel } from '../../model';
+import { FRAME_SLOT } from '../../model';
 
 export type WishboneGroup = 'upper' | 'lower';
 

@@ -1,6 +1,6 @@
 /**
  * Trailing-arm (and semi-trailing-arm) readings of one row (docs/sketch-format.md, "Trailing-arm
- * layouts"), added to the generic rows by rows.ts when wheels ride on arms with hinges:
+ * layouts"), added to the generic rows (rows.ts, through reader.ts) when wheels ride on arms with hinges:
  * - heave, for the left arm: camber, toe, track change (metrics/wheel.ts); the side-view
  *   instant centre where the hinge axis meets the fore-aft plane through the wheel centre,
  *   anti-squat with the line from the wheel centre (frame-mounted drive); the rear-view
@@ -9,18 +9,15 @@
  *   relative to the tilted ground and the roll centre where the two patch lines cross.
  * The foreAftShift of the contract is already the left wheel centre's x change (rows.ts).
  */
-import type { MovingBodyId } from '../schema/sketch';
-import { degToRad } from '../units';
-import { antiSquatPercent } from './metrics/antiSquat';
-import { axisInView, lineAtCentreline, lineToward, viewLinesCross } from './metrics/hingeAxis';
-import { wheelAttitude, type WheelSide } from './metrics/wheel';
-import type { BodyModel, LinkageModel, PointModel } from './model';
-import { poseFromState } from './pose';
-import type { HeaveRow, RollRow } from './types';
-import type { Vec3 } from './vec';
-
-/** Where a point is in the row being read (mm). */
-export type PlacePoint = (p: PointModel) => Vec3;
+import { degToRad } from '../../../units';
+import { antiSquatPercent } from '../../metrics/antiSquat';
+import { axisInView, lineAtCentreline, lineToward, viewLinesCross } from '../../metrics/hingeAxis';
+import { wheelAttitude, type WheelSide } from '../../metrics/wheel';
+import type { BodyModel, LinkageModel, PointModel } from '../../model';
+import { poseFromState } from '../../pose';
+import type { HeaveRow, RollRow } from '../../types';
+import type { Vec3 } from '../../vec';
+import type { PlacePoint } from '../types';
 
 export interface TrailingArmSide {
   side: WheelSide;
@@ -52,11 +49,6 @@ export function trailingArmPlanBuild(model: LinkageModel): TrailingArmPlan | nul
   if (!left) return null;
   const right = model.wheelRight.slot < 0 ? null : sideOf(model.wheelRight, 'right');
   return { left, right, cgHeight: model.sketch.vehicle.cgHeight, wheelbase: model.sketch.vehicle.wheelbase };
-}
-
-/** Ids of the arm bodies of a plan (for the board's drawing of the hinge axes). */
-export function trailingArmBodies(plan: TrailingArmPlan): MovingBodyId[] {
-  return [plan.left.body.id, ...(plan.right ? [plan.right.body.id] : [])];
 }
 
 /** Rear-view line from a contact patch (y, z) through the arm's rear-view instant centre. */

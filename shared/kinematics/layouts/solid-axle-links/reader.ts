@@ -1,0 +1,16 @@
+/** The solid-axle link readings (rows.ts), shared by the four-link, triangulated four-link and three-link layouts. */
+import { cleanZero } from '../../clean';
+import type { LayoutReader } from '../types';
+import { solidAxleLinksNotes } from './notes';
+import { solidAxleLinksHeaveFields, solidAxleLinksPlanBuild } from './rows';
+
+export const solidAxleLinksReader: LayoutReader = {
+  name: 'solid-axle links',
+  plan(model) {
+    const plan = solidAxleLinksPlanBuild(model.sketch, model.points, model.axle, model.wheelLeft);
+    return {
+      heave: (at, solved) => solidAxleLinksHeaveFields(plan, at, solved, cleanZero),
+      notes: () => solidAxleLinksNotes(model.sketch, plan),
+    };
+  },
+};

@@ -1,0 +1,60 @@
+/**
+ * The client's descriptor of every layout type, keyed by layout so that a layout without one
+ * is a type error. The name comes from the layout's starter (shared/kinematics/layouts), its
+ * one source.
+ */
+import { starters } from '../../shared/kinematics/starters';
+import type { Layout } from '../../shared/schema/sketch';
+import type { SuspensionDescriptor } from './types';
+
+const axle = { legend: 'axle', pivotsTitle: 'Axle pivots' };
+
+function solidAxle(layout: Layout, moving = axle): SuspensionDescriptor {
+  return {
+    layout,
+    label: starters[layout].label,
+    overlay: null,
+    crossView: 'rear',
+    moving,
+    antiSquatFrom: 'contact-patch',
+  };
+}
+
+export const suspensions: Record<Layout, SuspensionDescriptor> = {
+  'four-link-lateral-rod': solidAxle('four-link-lateral-rod'),
+  'triangulated-four-link': solidAxle('triangulated-four-link'),
+  'three-link-lateral-rod': solidAxle('three-link-lateral-rod'),
+  'leaf-spring': { ...solidAxle('leaf-spring'), overlay: 'leaf-arm' },
+  'trailing-arm': {
+    layout: 'trailing-arm',
+    label: starters['trailing-arm'].label,
+    overlay: 'leaf-arm',
+    crossView: 'rear',
+    moving: { legend: 'arm', pivotsTitle: 'Arm pivots' },
+    antiSquatFrom: 'wheel-centre',
+  },
+  'double-wishbone': {
+    layout: 'double-wishbone',
+    label: starters['double-wishbone'].label,
+    overlay: 'wishbone',
+    crossView: 'front',
+    moving: { legend: 'arm / knuckle', pivotsTitle: 'Knuckle pivots' },
+    antiSquatFrom: 'contact-patch',
+  },
+};
+
+/** The descriptor of a layout, or null for a name that is not one (a document from elsewhere). */
+export function suspensionOf(layout: string | null | undefined): SuspensionDescriptor | null {
+  return layout && Object.hasOwn(suspensions, layout) ? suspensions[layout as Layout] : null;
+}
+
+/** The layout's name as the UI shows it; an unknown name is shown as it is. */
+export function layoutLabel(layout: string): string {
+  return suspensionOf(layout)?.label ?? layout;
+}
+
+/** Every layout for a select, in the schema's order. */
+export const layoutOptions: { value: Layout; label: string }[] = Object.values(suspensions).map((s) => ({
+  value: s.layout,
+  label: s.label,
+}));
