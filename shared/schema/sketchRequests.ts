@@ -43,3 +43,8 @@ export const listQuery = z.object({
   deleted: flag,
 });
 export type ListQuery = z.infer<typeof listQuery>;
+/**
+ * The library list's query as the client keeps it between pages: the fields of `listQuery`, with "any layout"
+ * held as null (a select's empty value) and without the bin flag, which the library list never sends.
+ */
+export type LibraryQuery = Omit<ListQuery, 'layout' | 'deleted'> & { layout: NonNullable<ListQuery['layout']> | null };

@@ -2,34 +2,20 @@
  * A tracing: a reference photo behind a view, placed in the view's plane (mm) and scaled from
  * two clicked points whose real distance the user types. Kept in the sketch document as the
  * optional `tracing` field, one image per view, so it saves with the sketch:
- *   tracing: { side?: TracingImage, rear?: TracingImage }
+ *   tracing: { side?: TracingImage, rear?: TracingImage }   (shapes: tracingSchema in shared/schema)
  * The image is drawn upright and unmirrored on screen; only its centre (mm) and its scale
  * (mm per image pixel) are stored. Pure functions only; the canvas converts with
  * canvasTransform, the one place mm become stage pixels.
  */
-import { MAX_MM_PER_PX, MIN_MM_PER_PX, tracingImageSchema } from '../../shared/schema/boardFields';
+import {
+  MAX_MM_PER_PX,
+  MIN_MM_PER_PX,
+  tracingImageSchema,
+  type Tracing,
+  type TracingImage,
+} from '../../shared/schema/boardFields';
 import type { Mm } from '../../shared/units';
 import { planeToScreen, screenToPlane, type PlanePoint, type ViewKind, type ViewTransform } from './transform';
-
-export interface TracingImage {
-  /** upload id as POST /api/sketches/:id/uploads answers it (a UUID string on this server) */
-  upload: string | number;
-  /** where the bytes are served, '/api/uploads/:id' */
-  url: string;
-  /** image size in its own pixels */
-  width: number;
-  height: number;
-  /** the image's centre in the view's plane, mm (h = x in the side view, y in the rear view; v = z) */
-  centre: PlanePoint;
-  /** mm per image pixel */
-  mmPerPx: number;
-  /** 0 (invisible) to 1 (opaque) */
-  opacity: number;
-  /** a locked photo cannot be moved by dragging */
-  locked: boolean;
-}
-
-export type Tracing = Partial<Record<ViewKind, TracingImage>>;
 
 /** Photos the uploads route takes (contracts: PNG or JPEG up to 10 MB). */
 export const TRACING_MIME_TYPES = ['image/png', 'image/jpeg'] as const;

@@ -22,11 +22,11 @@ export interface Vec3 {
   z: Mm;
 }
 
-/** A position in a view's plane: `h` is x (side view) or y (rear view), `v` is z. */
-export interface PlanePoint {
-  h: Mm;
-  v: Mm;
-}
+/**
+ * A position in a view's plane: `h` is x (side view) or y (rear view), `v` is z. A type rather than an
+ * interface, so that it fits the loose `centre` object of a tracing in the sketch document.
+ */
+export type PlanePoint = { h: Mm; v: Mm };
 
 export interface ScreenPoint {
   px: Px;

@@ -15,8 +15,8 @@ import {
   readTracing,
   rescaleFromPicks,
   withTracing,
-  type TracingImage,
 } from '../canvas/tracingGeometry';
+import type { TracingImage } from '../../shared/schema/boardFields';
 import type { Mm } from '../../shared/units';
 
 /** What the uploads route answers. */

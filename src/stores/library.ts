@@ -2,15 +2,7 @@ import { defineStore } from 'pinia';
 import { api } from '../api/http';
 import type { Page, SketchDetail, SketchSummary } from '../api/types';
 import type { Sketch } from '../../shared/schema/sketch';
-
-export interface LibraryQuery {
-  q: string;
-  layout: string | null;
-  sort: 'name' | 'layout' | 'updatedAt';
-  order: 'asc' | 'desc';
-  page: number;
-  pageSize: number;
-}
+import type { LibraryQuery } from '../../shared/schema/sketchRequests';
 
 /** The Library: one page of the user's sketches and those shared with them, and the edits made from it. */
 export const useLibraryStore = defineStore('library', {

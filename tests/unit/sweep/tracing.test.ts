@@ -9,8 +9,8 @@ import {
   rescaleFromPicks,
   withTracing,
   MAX_TRACING_BYTES,
-  type TracingImage,
 } from '../../../src/canvas/tracingGeometry';
+import type { TracingImage } from '../../../shared/schema/boardFields';
 import { screenToPlane, type ViewTransform } from '../../../src/canvas/transform';
 
 /** Positions round-trip through float arithmetic; anything above this would be a real error (mm, px). */
