@@ -28,7 +28,7 @@ const jpegBytes = Buffer.concat([
 ]);
 
 let server: TestServer;
-let alice: Caller;
+let alice: Awaited<ReturnType<typeof newMember>>;
 let sketchId: number;
 beforeAll(async () => {
   server = await startTestServer();
