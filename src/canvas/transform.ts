@@ -10,17 +10,12 @@
  * screen pixels grow right and down.
  */
 import { mmToUnit, unitToMm, type LengthUnit, type Mm } from '../../shared/units';
+import type { Vec3 } from '../../shared/vec3';
 
 export type ViewKind = 'side' | 'rear';
 
 /** Stage pixels (from the top-left corner of the canvas). */
 export type Px = number;
-
-export interface Vec3 {
-  x: Mm;
-  y: Mm;
-  z: Mm;
-}
 
 /**
  * A position in a view's plane: `h` is x (side view) or y (rear view), `v` is z. A type rather than an
