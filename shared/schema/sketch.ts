@@ -7,7 +7,7 @@
  */
 import { z } from 'zod';
 import { gridCount } from './sweepGrid';
-import { SketchValidationError } from './errors';
+import { SketchValidationError, formatPath } from './errors';
 import { vecDistance } from '../vec3';
 import { targetsSchema, tracingSchema } from './boardFields';
 import {
@@ -289,16 +289,6 @@ export type SweepSettings = Sketch['sweep'];
 export type Vehicle = Sketch['vehicle'];
 export type Driveline = NonNullable<Sketch['driveline']>;
 export type HalfShaft = NonNullable<NonNullable<Sketch['halfShafts']>['left']>;
-
-/** "points[3].x" from ['points', 3, 'x']; the document itself is "(document)". */
-export function formatPath(path: readonly PropertyKey[]): string {
-  let out = '';
-  for (const seg of path) {
-    if (typeof seg === 'number') out += `[${seg}]`;
-    else out += out === '' ? String(seg) : `.${String(seg)}`;
-  }
-  return out === '' ? '(document)' : out;
-}
 
 const article = (noun: string) => (/^[aeiou]/.test(noun) ? `an ${noun}` : `a ${noun}`);
 const typeName = (t: string) => (t === 'array' ? 'list' : t);
