@@ -8,9 +8,6 @@ import { HttpError, badRequest, notFound } from '../middleware/http-error';
 import { RESTORE_WINDOW_MS, maySeeSketch } from './sketches';
 import type { UploadInfo } from '../../shared/schema/apiResponses';
 
-/** Largest accepted upload (bytes). */
-export const UPLOAD_MAX_BYTES = 10 * 1024 * 1024;
-
 /** What may be uploaded, decided from the file's first bytes (never from its name or the browser's claim). */
 const ALLOWED: Record<string, string> = { 'image/png': 'png', 'image/jpeg': 'jpg' };
 

@@ -14,12 +14,12 @@ import {
   type Tracing,
   type TracingImage,
 } from '../../shared/schema/boardFields';
+import { UPLOAD_MAX_BYTES, byteSizeText } from '../../shared/schema/requestLimits';
 import type { Mm } from '../../shared/units';
 import { planeToScreen, screenToPlane, type PlanePoint, type ViewKind, type ViewTransform } from './transform';
 
-/** Photos the uploads route takes (contracts: PNG or JPEG up to 10 MB). */
+/** Photos the uploads route takes (contracts: PNG or JPEG up to UPLOAD_MAX_BYTES, 10 MB). */
 export const TRACING_MIME_TYPES = ['image/png', 'image/jpeg'] as const;
-export const MAX_TRACING_BYTES = 10 * 1024 * 1024;
 /** Opacity a new photo starts with: visible but behind the linkage. */
 export const DEFAULT_TRACING_OPACITY = 0.5;
 /** Two scale points closer than this on the photo (image px) cannot give a trustworthy scale. */
@@ -46,8 +46,8 @@ export function withTracing(doc: unknown, view: ViewKind, img: TracingImage | nu
 export function photoProblem(file: { type: string; size: number; name: string }): string | null {
   if (!(TRACING_MIME_TYPES as readonly string[]).includes(file.type))
     return `“${file.name}” is not a PNG or JPEG photo.`;
-  if (file.size > MAX_TRACING_BYTES)
-    return `“${file.name}” is ${(file.size / 1024 / 1024).toFixed(1)} MB; a tracing may be up to 10 MB.`;
+  if (file.size > UPLOAD_MAX_BYTES)
+    return `“${file.name}” is ${(file.size / 1024 / 1024).toFixed(1)} MB; a tracing may be up to ${byteSizeText(UPLOAD_MAX_BYTES)}.`;
   if (file.size === 0) return `“${file.name}” is empty.`;
   return null;
 }
