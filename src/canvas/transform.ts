@@ -63,11 +63,6 @@ export function toScreen(view: ViewKind, t: ViewTransform, p: Vec3): ScreenPoint
   return planeToScreen(t, planeOf(view, p));
 }
 
-/** A stage-pixel displacement as a plane displacement (mm). */
-export function screenDeltaToPlane(t: ViewTransform, dpx: Px, dpy: Px): PlanePoint {
-  return { h: -dpx / t.scale, v: -dpy / t.scale };
-}
-
 /** Zooms by `factor` about the stage point (px, py), which stays over the same plane point. */
 export function zoomAt(t: ViewTransform, factor: number, px: Px, py: Px): ViewTransform {
   const scale = Math.min(MAX_SCALE, Math.max(MIN_SCALE, t.scale * factor));
