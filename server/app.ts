@@ -15,9 +15,7 @@ import { sharedRoutes } from './routes/shared';
 import { uploadRoutes } from './routes/uploads';
 import { adminRoutes } from './routes/admin';
 import { sweepRoutes } from './routes/sweep';
-
-/** Largest JSON body accepted; a sketch file is a few tens of KB. */
-export const JSON_BODY_LIMIT = '256kb';
+import { JSON_BODY_MAX_BYTES } from '../shared/schema/requestLimits';
 
 /** What the app needs from outside: the open (migrated) database, the settings and the mailer. */
 export interface AppContext {
@@ -38,7 +36,7 @@ export function createApp(ctx: AppContext): Express {
   app.use(compression());
 
   const api = express.Router();
-  api.use(express.json({ limit: JSON_BODY_LIMIT }));
+  api.use(express.json({ limit: JSON_BODY_MAX_BYTES }));
   api.use(healthRoutes(ctx.sequelize));
   configurePassport();
   api.use(sessionMiddleware(ctx.sequelize, config));

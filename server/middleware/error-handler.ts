@@ -2,8 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { HttpError } from './http-error';
 import { zodProblems } from './validate';
-
-const JSON_LIMIT_TEXT = '256 KB';
+import { JSON_BODY_MAX_BYTES, UPLOAD_MAX_BYTES, byteSizeText } from '../../shared/schema/requestLimits';
 
 interface FrameworkError {
   status?: number;
@@ -20,7 +19,8 @@ function describe(err: unknown): { status: number; error: string; details?: unkn
   if (err instanceof ZodError) return { status: 400, error: 'invalid request', details: zodProblems(err) };
   const e = (err ?? {}) as FrameworkError;
   // body-parser
-  if (e.type === 'entity.too.large') return { status: 413, error: `request body is larger than ${JSON_LIMIT_TEXT}` };
+  if (e.type === 'entity.too.large')
+    return { status: 413, error: `request body is larger than ${byteSizeText(JSON_BODY_MAX_BYTES)}` };
   if (e.type === 'entity.parse.failed') return { status: 400, error: 'request body is not valid JSON' };
   if (e.type === 'encoding.unsupported' || e.type === 'charset.unsupported') {
     return { status: 415, error: 'unsupported request encoding' };
@@ -29,7 +29,8 @@ function describe(err: unknown): { status: number; error: string; details?: unkn
   if (e.code === 'EBADCSRFTOKEN') return { status: 403, error: 'missing or invalid CSRF token' };
   // multer
   if (e.name === 'MulterError') {
-    if (e.code === 'LIMIT_FILE_SIZE') return { status: 413, error: 'file is larger than 10 MB' };
+    if (e.code === 'LIMIT_FILE_SIZE')
+      return { status: 413, error: `file is larger than ${byteSizeText(UPLOAD_MAX_BYTES)}` };
     return { status: 400, error: `upload refused: ${e.message ?? 'bad form'}` };
   }
   if (e.name === 'SequelizeUniqueConstraintError') return { status: 409, error: 'that record already exists' };

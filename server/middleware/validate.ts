@@ -1,13 +1,11 @@
 import type { RequestHandler } from 'express';
 import type { ZodError, ZodType } from 'zod';
 import { badRequest } from './http-error';
+import { formatPath } from '../../shared/schema/errors';
 
-/** One line per problem, naming the path: "email: Invalid email address". */
+/** One line per problem, naming the path: "email: Invalid email address", "items[2].id: ...". */
 export function zodProblems(err: ZodError): string[] {
-  return err.issues.map((issue) => {
-    const where = issue.path.length ? issue.path.map(String).join('.') : '(body)';
-    return `${where}: ${issue.message}`;
-  });
+  return err.issues.map((issue) => `${formatPath(issue.path, '(body)')}: ${issue.message}`);
 }
 
 /** Parses `value` with `schema`, or throws 400 with the problems. */

@@ -8,6 +8,7 @@ import {
 } from 'sequelize';
 
 import { roles, type Role } from '../../shared/schema/accounts';
+import type { PublicUser } from '../../shared/schema/apiResponses';
 
 export { roles, type Role };
 
@@ -41,13 +42,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   }
 }
 
-/** The account as the API shows it (never the hash). */
-export interface PublicUser {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-}
+/** The account as the API shows it (never the hash); its shape is the API's (shared/schema/apiResponses). */
+export type { PublicUser };
 
 export function toPublicUser(user: User): PublicUser {
   return { id: user.id, email: user.email, name: user.name, role: user.role };

@@ -3,9 +3,10 @@ import multer from 'multer';
 import type { ServerConfig } from '../config';
 import { currentUser, requireUser } from '../middleware/require-user';
 import { idParam } from '../middleware/params';
-import { UPLOAD_MAX_BYTES, findUpload, saveUpload } from '../services/uploads';
+import { findUpload, saveUpload } from '../services/uploads';
+import { UPLOAD_MAX_BYTES } from '../../shared/schema/requestLimits';
 
-/** Multipart limits: one file of at most 10 MB, and hardly any other fields. */
+/** Multipart limits: one file of at most UPLOAD_MAX_BYTES (10 MB), and hardly any other fields. */
 const receive = multer({
   storage: multer.memoryStorage(),
   limits: {

@@ -1,11 +1,12 @@
 import { OutboxMessage, User, type Role } from '../models';
 import { badRequest, notFound } from '../middleware/http-error';
 import { endSessionsOf } from './accounts';
+import type { AdminUser, OutboxMessage as OutboxEntry } from '../../shared/schema/apiResponses';
 
 /** Newest messages shown in the mail log. */
 const OUTBOX_LIMIT = 200;
 
-function adminView(u: User) {
+function adminView(u: User): AdminUser {
   return {
     id: u.id,
     email: u.email,
@@ -16,7 +17,7 @@ function adminView(u: User) {
   };
 }
 
-export async function listUsers() {
+export async function listUsers(): Promise<{ items: AdminUser[] }> {
   const users = await User.findAll({
     order: [
       ['createdAt', 'ASC'],
@@ -30,7 +31,11 @@ export async function listUsers() {
  * Changes a role or disables an account. Disabling ends every session of the account at once.
  * An admin cannot disable or demote themselves, so the site always keeps one admin who can act.
  */
-export async function updateUser(actorId: number, id: number, patch: { role?: Role; disabled?: boolean }) {
+export async function updateUser(
+  actorId: number,
+  id: number,
+  patch: { role?: Role; disabled?: boolean },
+): Promise<AdminUser> {
   const user = await User.findByPk(id);
   if (!user) throw notFound('no such user');
   if (id === actorId && (patch.disabled === true || (patch.role && patch.role !== 'admin'))) {
@@ -41,7 +46,7 @@ export async function updateUser(actorId: number, id: number, patch: { role?: Ro
   return adminView(user);
 }
 
-export async function listOutbox() {
+export async function listOutbox(): Promise<{ items: OutboxEntry[] }> {
   const rows = await OutboxMessage.findAll({
     order: [
       ['sentAt', 'DESC'],

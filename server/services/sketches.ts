@@ -4,29 +4,11 @@ import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/
 import { Sketch, SketchRevision, User, type PublicUser, type ShareMode } from '../models';
 import { badRequest, conflict, notFound } from '../middleware/http-error';
 import type { ListQuery } from '../../shared/schema/sketchRequests';
+import type { Page, RevisionDetail, RevisionList, SketchDetail, SketchSummary } from '../../shared/schema/apiResponses';
 
 /** A soft-deleted sketch can be restored for this long (ms); then it is purged. */
 export const RESTORE_WINDOW_MS = 30 * 24 * 3600_000;
 const SHARE_TOKEN_BYTES = 24;
-
-export interface SketchSummary {
-  id: number;
-  name: string;
-  layout: string;
-  version: number;
-  updatedAt: string;
-  createdAt: string;
-  owner: { id: number; name: string };
-  mine: boolean;
-  share: ShareMode;
-  deletedAt: string | null;
-}
-
-export interface SketchDetail extends SketchSummary {
-  document: SketchDocument;
-  canEdit: boolean;
-  shareToken: string | null;
-}
 
 const withOwner = { model: User, as: 'owner', attributes: ['id', 'name'] };
 
@@ -128,7 +110,7 @@ async function changeOwn(
 }
 
 /** The caller's sketches (and, with classes, those shared with them), filtered, sorted and paged. */
-export async function listSketches(user: PublicUser, query: ListQuery) {
+export async function listSketches(user: PublicUser, query: ListQuery): Promise<Page<SketchSummary>> {
   const conditions: WhereOptions[] = [{ ownerId: user.id }];
   if (query.deleted) conditions.push({ deletedAt: { [Op.gt]: new Date(Date.now() - RESTORE_WINDOW_MS) } });
   else conditions.push({ deletedAt: null });
@@ -197,7 +179,7 @@ export function undeleteSketch(user: PublicUser, id: number): Promise<SketchDeta
   );
 }
 
-export async function listRevisions(user: PublicUser, id: number) {
+export async function listRevisions(user: PublicUser, id: number): Promise<RevisionList> {
   await ownSketch(user, id);
   const rows = await SketchRevision.findAll({
     where: { sketchId: id },
@@ -215,7 +197,7 @@ async function revisionOf(sketchId: number, rev: number, t?: Transaction): Promi
   return row;
 }
 
-export async function getRevision(user: PublicUser, id: number, rev: number) {
+export async function getRevision(user: PublicUser, id: number, rev: number): Promise<RevisionDetail> {
   await ownSketch(user, id);
   const r = await revisionOf(id, rev);
   return {

@@ -6,20 +6,10 @@ import { Op } from 'sequelize';
 import { Sketch, Upload, type PublicUser } from '../models';
 import { HttpError, badRequest, notFound } from '../middleware/http-error';
 import { RESTORE_WINDOW_MS, maySeeSketch } from './sketches';
-
-/** Largest accepted upload (bytes). */
-export const UPLOAD_MAX_BYTES = 10 * 1024 * 1024;
+import type { UploadInfo } from '../../shared/schema/apiResponses';
 
 /** What may be uploaded, decided from the file's first bytes (never from its name or the browser's claim). */
 const ALLOWED: Record<string, string> = { 'image/png': 'png', 'image/jpeg': 'jpg' };
-
-export interface UploadInfo {
-  id: string;
-  url: string;
-  mime: string;
-  /** Bytes. */
-  size: number;
-}
 
 /** Stores an image for one of the caller's own sketches under a name the server makes. */
 export async function saveUpload(

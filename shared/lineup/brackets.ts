@@ -5,6 +5,7 @@
  * Pure geometry on the sketches as given (mm), no sweep involved.
  */
 import type { Sketch } from '../schema/sketch';
+import { vecDistance, type Vec3 } from '../vec3';
 
 /** mm: two variants whose frame pivot lies within this of each other can share one bracket hole. */
 export const COMMON_BRACKET_TOLERANCE_MM = 1;
@@ -21,7 +22,7 @@ export interface BracketRow {
   /** the pivot's id, as in the sketches */
   id: string;
   /** per variant, in the order given: the pivot's position (mm), or null where that variant has none */
-  at: Array<{ x: number; y: number; z: number } | null>;
+  at: Array<Vec3 | null>;
   /** mm, the largest distance between two variants' positions (0 when fewer than two have it) */
   spread: number;
   status: BracketStatus;
@@ -53,7 +54,7 @@ export function bracketList(
       for (let j = i + 1; j < present.length; j++) {
         const a = present[i];
         const b = present[j];
-        spread = Math.max(spread, Math.hypot(a.x - b.x, a.y - b.y, a.z - b.z));
+        spread = Math.max(spread, vecDistance(a, b));
       }
     }
     const status: BracketStatus =

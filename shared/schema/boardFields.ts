@@ -46,19 +46,32 @@ export const MIN_MM_PER_PX = 0.001;
 export const MAX_MM_PER_PX = 1000;
 
 const coordinate = z.number().finite().min(-MAX_COORDINATE_MM).max(MAX_COORDINATE_MM);
-/** One photo behind a view: which upload, its size in its own pixels, where its centre sits (mm) and its scale. */
+/**
+ * One photo behind a view: which upload, its size in its own pixels, where its centre sits (mm) and its scale.
+ * The image is drawn upright and unmirrored on screen; only its centre and its scale are stored.
+ */
 export const tracingImageSchema = z.looseObject({
+  /** upload id as POST /api/sketches/:id/uploads answers it (a UUID string on this server) */
   upload: z.union([z.string().min(1).max(100), z.number().int().positive()]),
+  /** where the bytes are served, '/api/uploads/:id' */
   url: z.string().min(1).max(500),
+  /** image size in its own pixels */
   width: z.number().positive(),
   height: z.number().positive(),
+  /** the image's centre in the view's plane, mm (h = x in the side view, y in the rear view; v = z) */
   centre: z.looseObject({ h: coordinate, v: coordinate }),
+  /** mm per image pixel */
   mmPerPx: z.number().min(MIN_MM_PER_PX).max(MAX_MM_PER_PX),
+  /** 0 (invisible) to 1 (opaque) */
   opacity: z.number().min(0).max(1),
+  /** a locked photo cannot be moved by dragging */
   locked: z.boolean(),
 });
+export type TracingImage = z.infer<typeof tracingImageSchema>;
 
+/** The sketch's optional `tracing` field: at most one photo per view. */
 export const tracingSchema = z.looseObject({
   side: tracingImageSchema.optional(),
   rear: tracingImageSchema.optional(),
 });
+export type Tracing = z.infer<typeof tracingSchema>;

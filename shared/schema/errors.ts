@@ -25,3 +25,17 @@ export function isSketchValidationError(e: unknown): e is SketchValidationError 
       Array.isArray((e as { problems?: unknown }).problems))
   );
 }
+
+/**
+ * The one way a validation path is printed, for every problem the server, the command line and the board show:
+ * "points[3].x" from ['points', 3, 'x'] (list positions in brackets, field names after dots). An empty path is
+ * the whole value checked, named by `root`: "(document)" for a sketch file, "(body)" for a request body.
+ */
+export function formatPath(path: readonly PropertyKey[], root = '(document)'): string {
+  let out = '';
+  for (const seg of path) {
+    if (typeof seg === 'number') out += `[${seg}]`;
+    else out += out === '' ? String(seg) : `.${String(seg)}`;
+  }
+  return out === '' ? root : out;
+}

@@ -7,7 +7,8 @@
  */
 import { z } from 'zod';
 import { gridCount } from './sweepGrid';
-import { SketchValidationError } from './errors';
+import { SketchValidationError, formatPath } from './errors';
+import { vecDistance } from '../vec3';
 import { targetsSchema, tracingSchema } from './boardFields';
 import {
   bodyIds,
@@ -135,10 +136,6 @@ type BaseSketch = z.infer<typeof baseSketchSchema>;
 type Path = (string | number)[];
 type Report = (path: Path, message: string) => void;
 
-function distance(p: { x: number; y: number; z: number }, q: { x: number; y: number; z: number }): number {
-  return Math.hypot(p.x - q.x, p.y - q.y, p.z - q.z);
-}
-
 /** The rules that join fields together; each problem names the field it is about. */
 function checkCrossFields(s: BaseSketch, report: Report): void {
   const points = new Map<string, BaseSketch['points'][number]>();
@@ -177,10 +174,10 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
       if (!seat) report(['members', i, 'seat'], `no point '${m.seat}'`);
       else if (seat.body !== 'axle')
         report(['members', i, 'seat'], `a leaf spring's seat must be on the axle ('${seat.id}' is on '${seat.body}')`);
-      else if (distance(a, seat) < MIN_MEMBER_LENGTH_MM)
+      else if (vecDistance(a, seat) < MIN_MEMBER_LENGTH_MM)
         report(['members', i, 'seat'], `must be apart from the eye '${m.a}' (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
     }
-    const len = distance(a, b);
+    const len = vecDistance(a, b);
     if (len < MIN_MEMBER_LENGTH_MM) {
       report(
         ['members', i],
@@ -220,13 +217,13 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
     const oa = at('outputAxis', true);
     const pn = at('pinion', false);
     const pa = at('pinionAxis', false);
-    if (o && oa && distance(o, oa) < MIN_MEMBER_LENGTH_MM)
+    if (o && oa && vecDistance(o, oa) < MIN_MEMBER_LENGTH_MM)
       report(['driveline', 'outputAxis'], `must be apart from the output point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
-    if (pn && pa && distance(pn, pa) < MIN_MEMBER_LENGTH_MM)
+    if (pn && pa && vecDistance(pn, pa) < MIN_MEMBER_LENGTH_MM)
       report(['driveline', 'pinionAxis'], `must be apart from the pinion point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
     if (pn && pa && pn.body !== pa.body && pa.body !== 'frame')
       report(['driveline', 'pinionAxis'], `must be on the same body as the pinion ('${pn.body}')`);
-    if (o && pn && distance(o, pn) < MIN_MEMBER_LENGTH_MM)
+    if (o && pn && vecDistance(o, pn) < MIN_MEMBER_LENGTH_MM)
       report(['driveline', 'pinion'], `must be apart from the output point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
   }
 
@@ -253,17 +250,17 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
       report(['halfShafts', side, 'outer'], `'${outer.id}' must be on a moving body (it is on the frame)`);
     if (outer && outerAxis && outerAxis.body !== outer.body)
       report(['halfShafts', side, 'outerAxis'], `must be on the same body as the outer joint ('${outer.body}')`);
-    if (inner && innerAxis && distance(inner, innerAxis) < MIN_MEMBER_LENGTH_MM)
+    if (inner && innerAxis && vecDistance(inner, innerAxis) < MIN_MEMBER_LENGTH_MM)
       report(
         ['halfShafts', side, 'innerAxis'],
         `must be apart from the inner joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`,
       );
-    if (outer && outerAxis && distance(outer, outerAxis) < MIN_MEMBER_LENGTH_MM)
+    if (outer && outerAxis && vecDistance(outer, outerAxis) < MIN_MEMBER_LENGTH_MM)
       report(
         ['halfShafts', side, 'outerAxis'],
         `must be apart from the outer joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`,
       );
-    if (inner && outer && distance(inner, outer) < MIN_MEMBER_LENGTH_MM)
+    if (inner && outer && vecDistance(inner, outer) < MIN_MEMBER_LENGTH_MM)
       report(['halfShafts', side, 'outer'], `must be apart from the inner joint (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
   }
 
@@ -292,16 +289,6 @@ export type SweepSettings = Sketch['sweep'];
 export type Vehicle = Sketch['vehicle'];
 export type Driveline = NonNullable<Sketch['driveline']>;
 export type HalfShaft = NonNullable<NonNullable<Sketch['halfShafts']>['left']>;
-
-/** "points[3].x" from ['points', 3, 'x']; the document itself is "(document)". */
-export function formatPath(path: readonly PropertyKey[]): string {
-  let out = '';
-  for (const seg of path) {
-    if (typeof seg === 'number') out += `[${seg}]`;
-    else out += out === '' ? String(seg) : `.${String(seg)}`;
-  }
-  return out === '' ? '(document)' : out;
-}
 
 const article = (noun: string) => (/^[aeiou]/.test(noun) ? `an ${noun}` : `a ${noun}`);
 const typeName = (t: string) => (t === 'array' ? 'list' : t);

@@ -1,16 +1,16 @@
 import { z } from 'zod';
 import { layouts } from './sketch';
 import { emailField } from './accounts';
+import { MAX_NAME_LENGTH } from './sketchVocabulary';
 
 /** Who may open a sketch besides its owner: nobody, or anyone with the link ('class' comes with classes). */
 export const shareModes = ['private', 'link'] as const;
 export type ShareMode = (typeof shareModes)[number];
 
-/** Longest sketch name (characters); the same bound as the sketch file's `name`. */
-export const SKETCH_NAME_MAX = 200;
 export const PAGE_SIZE_MAX = 100;
 
-const nameField = z.string().trim().min(1, 'must not be empty').max(SKETCH_NAME_MAX);
+/** A sketch's name in a request: the same bound as the sketch file's `name`. */
+const nameField = z.string().trim().min(1, 'must not be empty').max(MAX_NAME_LENGTH);
 
 export const createSketchBody = z.strictObject({
   name: nameField.optional(),
@@ -34,7 +34,7 @@ const flag = z
   .transform((v) => v === '1');
 
 export const listQuery = z.object({
-  q: z.string().trim().max(SKETCH_NAME_MAX).default(''),
+  q: z.string().trim().max(MAX_NAME_LENGTH).default(''),
   layout: z.enum(layouts).optional(),
   sort: z.enum(['name', 'layout', 'updatedAt']).default('updatedAt'),
   order: z.enum(['asc', 'desc']).default('desc'),
@@ -43,3 +43,8 @@ export const listQuery = z.object({
   deleted: flag,
 });
 export type ListQuery = z.infer<typeof listQuery>;
+/**
+ * The library list's query as the client keeps it between pages: the fields of `listQuery`, with "any layout"
+ * held as null (a select's empty value) and without the bin flag, which the library list never sends.
+ */
+export type LibraryQuery = Omit<ListQuery, 'layout' | 'deleted'> & { layout: NonNullable<ListQuery['layout']> | null };

@@ -6,9 +6,8 @@
 import type { Sketch } from '../../shared/schema/sketch';
 import type { Mm } from '../../shared/units';
 
-/** Drawn rail section: a typical ladder-frame rail (common practice, no published source). */
+/** Drawn rail height: a typical ladder-frame rail (common practice, no published source). */
 export const RAIL_HEIGHT_MM: Mm = 160;
-export const RAIL_WIDTH_MM: Mm = 70;
 /** How far the rail outline runs past the foremost and rearmost frame pivots. */
 export const RAIL_OVERRUN_MM: Mm = 300;
 /** Pivots this close to the centre plane are centre mounts (lateral rod, driveline), not rail mounts. */

@@ -2,38 +2,24 @@
  * A tracing: a reference photo behind a view, placed in the view's plane (mm) and scaled from
  * two clicked points whose real distance the user types. Kept in the sketch document as the
  * optional `tracing` field, one image per view, so it saves with the sketch:
- *   tracing: { side?: TracingImage, rear?: TracingImage }
+ *   tracing: { side?: TracingImage, rear?: TracingImage }   (shapes: tracingSchema in shared/schema)
  * The image is drawn upright and unmirrored on screen; only its centre (mm) and its scale
  * (mm per image pixel) are stored. Pure functions only; the canvas converts with
  * canvasTransform, the one place mm become stage pixels.
  */
-import { MAX_MM_PER_PX, MIN_MM_PER_PX, tracingImageSchema } from '../../shared/schema/boardFields';
+import {
+  MAX_MM_PER_PX,
+  MIN_MM_PER_PX,
+  tracingImageSchema,
+  type Tracing,
+  type TracingImage,
+} from '../../shared/schema/boardFields';
+import { UPLOAD_MAX_BYTES, byteSizeText } from '../../shared/schema/requestLimits';
 import type { Mm } from '../../shared/units';
 import { planeToScreen, screenToPlane, type PlanePoint, type ViewKind, type ViewTransform } from './transform';
 
-export interface TracingImage {
-  /** upload id as POST /api/sketches/:id/uploads answers it (a UUID string on this server) */
-  upload: string | number;
-  /** where the bytes are served, '/api/uploads/:id' */
-  url: string;
-  /** image size in its own pixels */
-  width: number;
-  height: number;
-  /** the image's centre in the view's plane, mm (h = x in the side view, y in the rear view; v = z) */
-  centre: PlanePoint;
-  /** mm per image pixel */
-  mmPerPx: number;
-  /** 0 (invisible) to 1 (opaque) */
-  opacity: number;
-  /** a locked photo cannot be moved by dragging */
-  locked: boolean;
-}
-
-export type Tracing = Partial<Record<ViewKind, TracingImage>>;
-
-/** Photos the uploads route takes (contracts: PNG or JPEG up to 10 MB). */
+/** Photos the uploads route takes (contracts: PNG or JPEG up to UPLOAD_MAX_BYTES, 10 MB). */
 const TRACING_MIME_TYPES = ['image/png', 'image/jpeg'] as const;
-export const MAX_TRACING_BYTES = 10 * 1024 * 1024;
 /** Opacity a new photo starts with: visible but behind the linkage. */
 export const DEFAULT_TRACING_OPACITY = 0.5;
 /** Two scale points closer than this on the photo (image px) cannot give a trustworthy scale. */
@@ -60,8 +46,8 @@ export function withTracing(doc: unknown, view: ViewKind, img: TracingImage | nu
 export function photoProblem(file: { type: string; size: number; name: string }): string | null {
   if (!(TRACING_MIME_TYPES as readonly string[]).includes(file.type))
     return `“${file.name}” is not a PNG or JPEG photo.`;
-  if (file.size > MAX_TRACING_BYTES)
-    return `“${file.name}” is ${(file.size / 1024 / 1024).toFixed(1)} MB; a tracing may be up to 10 MB.`;
+  if (file.size > UPLOAD_MAX_BYTES)
+    return `“${file.name}” is ${(file.size / 1024 / 1024).toFixed(1)} MB; a tracing may be up to ${byteSizeText(UPLOAD_MAX_BYTES)}.`;
   if (file.size === 0) return `“${file.name}” is empty.`;
   return null;
 }

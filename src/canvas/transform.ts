@@ -10,23 +10,18 @@
  * screen pixels grow right and down.
  */
 import { mmToUnit, unitToMm, type LengthUnit, type Mm } from '../../shared/units';
+import type { Vec3 } from '../../shared/vec3';
 
 export type ViewKind = 'side' | 'rear';
 
 /** Stage pixels (from the top-left corner of the canvas). */
 export type Px = number;
 
-export interface Vec3 {
-  x: Mm;
-  y: Mm;
-  z: Mm;
-}
-
-/** A position in a view's plane: `h` is x (side view) or y (rear view), `v` is z. */
-export interface PlanePoint {
-  h: Mm;
-  v: Mm;
-}
+/**
+ * A position in a view's plane: `h` is x (side view) or y (rear view), `v` is z. A type rather than an
+ * interface, so that it fits the loose `centre` object of a tracing in the sketch document.
+ */
+export type PlanePoint = { h: Mm; v: Mm };
 
 export interface ScreenPoint {
   px: Px;
@@ -61,11 +56,6 @@ export function screenToPlane(t: ViewTransform, s: ScreenPoint): PlanePoint {
 
 export function toScreen(view: ViewKind, t: ViewTransform, p: Vec3): ScreenPoint {
   return planeToScreen(t, planeOf(view, p));
-}
-
-/** A stage-pixel displacement as a plane displacement (mm). */
-export function screenDeltaToPlane(t: ViewTransform, dpx: Px, dpy: Px): PlanePoint {
-  return { h: -dpx / t.scale, v: -dpy / t.scale };
 }
 
 /** Zooms by `factor` about the stage point (px, py), which stays over the same plane point. */

@@ -7,7 +7,7 @@ import { computed } from 'vue';
 import { pointsAt } from '../../shared/kinematics/points';
 import { useBoardStore } from '../stores/board';
 import { useSweepStore } from '../stores/sweep';
-import type { Vec3 } from '../canvas/transform';
+import type { Vec3 } from '../../shared/vec3';
 
 export function useBoardGhost() {
   const board = useBoardStore();

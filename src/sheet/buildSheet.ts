@@ -7,6 +7,7 @@
 import type { SweepResult } from '../../shared/kinematics/types';
 import type { Sketch } from '../../shared/schema/sketch';
 import { formatLength, mmToUnit, type LengthUnit } from '../../shared/units';
+import { vecDistance } from '../../shared/vec3';
 import { fixed, showAngle, showLength, showPercent, showRate, showRatio } from '../sweep/format';
 import { kindLabel } from '../board/memberKinds';
 
@@ -101,7 +102,7 @@ export function buildSheet(
   const members: SheetMember[] = sketch.members.map((m) => {
     const a = byId.get(m.a);
     const b = byId.get(m.b);
-    const length = a && b ? formatLength(Math.hypot(a.x - b.x, a.y - b.y, a.z - b.z), u) : '—';
+    const length = a && b ? formatLength(vecDistance(a, b), u) : '—';
     return { id: m.id, kind: kindLabel(m.kind), ends: `${m.a} – ${m.b}`, length, note: memberNote(m, result, u) };
   });
 

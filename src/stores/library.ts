@@ -3,16 +3,8 @@ import { ref } from 'vue';
 import { api } from '../api/http';
 import type { Page, SketchDetail, SketchSummary } from '../api/types';
 import type { Layout } from '../../shared/schema/sketch';
+import type { LibraryQuery } from '../../shared/schema/sketchRequests';
 import { starters } from '../../shared/kinematics';
-
-export interface LibraryQuery {
-  q: string;
-  layout: string | null;
-  sort: 'name' | 'layout' | 'updatedAt';
-  order: 'asc' | 'desc';
-  page: number;
-  pageSize: number;
-}
 
 /** Longest sketch name the server takes. */
 const MAX_SKETCH_NAME = 200;

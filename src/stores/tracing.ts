@@ -15,18 +15,11 @@ import {
   readTracing,
   rescaleFromPicks,
   withTracing,
-  type TracingImage,
 } from '../canvas/tracingGeometry';
+import type { TracingImage } from '../../shared/schema/boardFields';
+import type { UploadInfo } from '../../shared/schema/apiResponses';
 import type { Mm } from '../../shared/units';
 import type { Sketch } from '../../shared/schema/sketch';
-
-/** What the uploads route answers. */
-interface UploadAnswer {
-  id: string | number;
-  url: string;
-  mime: string;
-  size: number;
-}
 
 /** Reads an image's own size in the browser (the photo must decode before it can be placed). */
 async function imageSize(url: string): Promise<{ width: number; height: number }> {
@@ -82,7 +75,7 @@ export const useTracingStore = defineStore('tracing', () => {
     try {
       const form = new FormData();
       form.append('file', file);
-      const up = await api.post<UploadAnswer>(`/api/sketches/${id}/uploads`, form);
+      const up = await api.post<UploadInfo>(`/api/sketches/${id}/uploads`, form);
       const { width, height } = await imageSize(up.url);
       if (!(width > 0 && height > 0)) throw new Error('The photo could not be read.');
       const old = current(view);

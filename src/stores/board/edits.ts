@@ -8,11 +8,11 @@
 import type { MemberKind, Sketch } from '../../../shared/schema/sketch';
 import { MAX_ID_LENGTH } from '../../../shared/schema/sketch';
 import type { Mm } from '../../../shared/units';
+import { vecDistance, type Vec3 } from '../../../shared/vec3';
 
 export type Point = Sketch['points'][number];
 export type Member = Sketch['members'][number];
 export type Axis = 'x' | 'y' | 'z';
-export type Vec3 = { x: Mm; y: Mm; z: Mm };
 export type Delta = Partial<Vec3>;
 
 /** A request the board refuses, with the reason in words for the user. */
@@ -46,15 +46,11 @@ function checkNewId(taken: Iterable<string>, id: string, what: 'pivot' | 'member
   for (const t of taken) if (t === id) throw new BoardEditError(`There is already a ${what} called '${id}'.`);
 }
 
-export function distance(a: Vec3, b: Vec3): Mm {
-  return Math.hypot(a.x - b.x, a.y - b.y, a.z - b.z);
-}
-
 /** The length of a member between its two pivots at ride, or null when an end is missing. */
 export function memberLength(doc: Sketch, m: Member): Mm | null {
   const a = doc.points.find((p) => p.id === m.a);
   const b = doc.points.find((p) => p.id === m.b);
-  return a && b ? distance(a, b) : null;
+  return a && b ? vecDistance(a, b) : null;
 }
 
 /**

@@ -7,9 +7,9 @@ import {
   readTracing,
   rescaleFromPicks,
   withTracing,
-  MAX_TRACING_BYTES,
-  type TracingImage,
 } from '../../../src/canvas/tracingGeometry';
+import type { TracingImage } from '../../../shared/schema/boardFields';
+import { UPLOAD_MAX_BYTES } from '../../../shared/schema/requestLimits';
 import { screenToPlane, type ViewTransform } from '../../../src/canvas/transform';
 
 /** Positions round-trip through float arithmetic; anything above this would be a real error (mm, px). */
@@ -92,11 +92,11 @@ describe('a tracing photo on the side view', () => {
 describe('what may be a tracing', () => {
   it('takes PNG and JPEG up to 10 MB and names the problem otherwise', () => {
     expect(photoProblem({ type: 'image/png', size: 1000, name: 'frame.png' })).toBeNull();
-    expect(photoProblem({ type: 'image/jpeg', size: MAX_TRACING_BYTES, name: 'frame.jpg' })).toBeNull();
+    expect(photoProblem({ type: 'image/jpeg', size: UPLOAD_MAX_BYTES, name: 'frame.jpg' })).toBeNull();
     expect(photoProblem({ type: 'image/gif', size: 1000, name: 'frame.gif' })).toBe(
       '“frame.gif” is not a PNG or JPEG photo.',
     );
-    expect(photoProblem({ type: 'image/png', size: MAX_TRACING_BYTES + 1, name: 'big.png' })).toBe(
+    expect(photoProblem({ type: 'image/png', size: UPLOAD_MAX_BYTES + 1, name: 'big.png' })).toBe(
       '“big.png” is 10.0 MB; a tracing may be up to 10 MB.',
     );
   });

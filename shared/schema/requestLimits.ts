@@ -1,0 +1,27 @@
+/**
+ * The size limits of the HTTP API, one definition for the server that applies them and the client that
+ * checks a file before sending it, and the one way their sizes are written in messages.
+ * Sizes are in bytes; a KB is 1024 bytes and an MB 1024 KB, as the server's body parsers count them.
+ */
+
+/** Largest JSON request body (bytes); a sketch file is a few tens of KB. */
+export const JSON_BODY_MAX_BYTES = 256 * 1024;
+
+/** Largest uploaded file (bytes): a tracing photo. */
+export const UPLOAD_MAX_BYTES = 10 * 1024 * 1024;
+
+const KB = 1024;
+const MB = 1024 * KB;
+
+/** A size for people: "256 KB", "10 MB", "1.5 MB" (at most one decimal, none when whole), "512 bytes". */
+export function byteSizeText(bytes: number): string {
+  if (!Number.isFinite(bytes) || bytes < 0) throw new RangeError(`not a size in bytes: ${bytes}`);
+  if (bytes >= MB) return `${oneDecimal(bytes / MB)} MB`;
+  if (bytes >= KB) return `${oneDecimal(bytes / KB)} KB`;
+  return `${bytes} byte${bytes === 1 ? '' : 's'}`;
+}
+
+/** 10 → "10", 1.25 → "1.3": one decimal at most, no trailing ".0". */
+function oneDecimal(n: number): string {
+  return String(Math.round(n * 10) / 10);
+}
