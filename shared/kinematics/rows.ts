@@ -14,7 +14,7 @@ import { poseFromState } from './pose';
 import { BodyRotations, pointPlace, pointVelocity } from './residuals';
 import type { SolvedRow } from './march';
 import type { BodyPoses, DrivelineReading, HeaveRow, MemberReading, Pose, RollRow } from './types';
-import { vec, type Vec3 } from './vec';
+import { vec, vecDistance, type Vec3 } from './vec';
 
 /** Module-local copy of an imported binding used per row (see residuals.ts). */
 const clean = cleanZero;
@@ -55,7 +55,7 @@ export function rowPlanBuild(model: LinkageModel): RowPlan {
     .map((m) => {
       const a = points.get(m.a)!;
       const b = points.get(m.b)!;
-      return { member: m, a, b, rideLength: Math.hypot(a.ride.x - b.ride.x, a.ride.y - b.ride.y, a.ride.z - b.ride.z) };
+      return { member: m, a, b, rideLength: vecDistance(a.ride, b.ride) };
     });
   const d = sketch.driveline;
   return {
@@ -67,11 +67,7 @@ export function rowPlanBuild(model: LinkageModel): RowPlan {
           outputAxis: points.get(d.outputAxis)!,
           pinion: points.get(d.pinion)!,
           pinionAxis: points.get(d.pinionAxis)!,
-          rideLength: Math.hypot(
-            points.get(d.output)!.ride.x - points.get(d.pinion)!.ride.x,
-            points.get(d.output)!.ride.y - points.get(d.pinion)!.ride.y,
-            points.get(d.output)!.ride.z - points.get(d.pinion)!.ride.z,
-          ),
+          rideLength: vecDistance(points.get(d.output)!.ride, points.get(d.pinion)!.ride),
         }
       : null,
     primarySlot: model.axle ? model.axle.slot : model.wheelLeft.slot,

@@ -5,6 +5,7 @@
  * plausible for a mid-size rear: a sweep angle of 0 gives a pure trailing arm (axis parallel to y).
  */
 import { degToRad } from '../../../units';
+import { vecDistance } from '../../../vec3';
 import { parseSketch, type SketchInput } from '../../../schema/sketch';
 import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from '../starterParts';
 import type { StarterParam, StarterSpec } from '../starterTypes';
@@ -116,7 +117,7 @@ function leftSide(p: Params): { points: PointIn[]; members: MemberIn[] } {
   const along = (d: number) => ({ x: ic.x - d * tanSweep, y: ic.y - d, z: ic.z + d * tanTilt });
   const outer = along(p.hingeInset),
     inner = along(p.hingeInset + p.hingeSpan);
-  const len = Math.hypot(inner.x - outer.x, inner.y - outer.y, inner.z - outer.z);
+  const len = vecDistance(inner, outer);
   const u = { x: (inner.x - outer.x) / len, y: (inner.y - outer.y) / len, z: (inner.z - outer.z) / len };
 
   const spring = { x: r1((p.springPosition / 100) * p.armLength), y: r1(half - 170), z: r1(p.tireRadius - 40) };
@@ -126,7 +127,7 @@ function leftSide(p: Params): { points: PointIn[]; members: MemberIn[] } {
   const shockTop = { x: -110, y: shock.y, z: r1(Math.max(p.rideHeight + 250, shock.z + 380)) };
   const lengthAt = (t: number) => {
     const q = rotateAbout(shock, outer, u, angleFor(wc, outer, u, t));
-    return Math.hypot(q.x - shockTop.x, q.y - shockTop.y, q.z - shockTop.z);
+    return vecDistance(q, shockTop);
   };
   // With the ride length too: an arm too short to reach the whole range must not leave the shock short at ride.
   const ends = [lengthAt(-TRAVEL_MM), lengthAt(0), lengthAt(TRAVEL_MM)];
