@@ -58,9 +58,10 @@ export function radToDeg(v: Rad): Deg {
 /**
  * What kind of number a sweep quantity is, so that it is converted and labelled for display:
  * lengths in mm (the user may see inches), angles in degrees, percentages and plain ratios as
- * they are, rates in N/mm, forces in N and torques in N·m in both unit systems.
+ * they are, rates in N/mm, forces in N, torques in N·m and angular rates in N·m per degree in both
+ * unit systems.
  */
-export type QuantityKind = 'length' | 'angle' | 'percent' | 'ratio' | 'rate' | 'force' | 'torque';
+export type QuantityKind = 'length' | 'angle' | 'percent' | 'ratio' | 'rate' | 'force' | 'torque' | 'angularRate';
 
 /** A value in the file's unit (mm, deg, %, N/mm, N, N·m) in the display unit, as a number. */
 export function quantityToUnit(v: number, q: QuantityKind, u: LengthUnit): number {
@@ -79,6 +80,7 @@ const QUANTITY_UNITS: Record<Exclude<QuantityKind, 'length'>, string> = {
   rate: 'N/mm',
   force: 'N',
   torque: 'N·m',
+  angularRate: 'N·m/°',
 };
 
 /** The display unit of a quantity kind. */

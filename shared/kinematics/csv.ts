@@ -4,7 +4,7 @@
  * the result (mm, deg, %, N/mm). A null (not defined) is an empty cell.
  */
 import type { HeaveRow, SweepResult } from './types';
-import { csvView, metricEntry } from './metrics/registry';
+import { csvView, linkLoadEntry, memberEntries, metricEntry } from './metrics/registry';
 
 type Column = { name: string; get: (r: HeaveRow) => number | null | undefined };
 
@@ -17,15 +17,14 @@ function cell(v: number | null | undefined): string {
   return v === null || v === undefined || !Number.isFinite(v) ? '' : String(v);
 }
 
-/** Each member's readings: length and its change always, motion ratio and wheel rate where the ride row has them. */
+/** Each member's readings in the registry's order; the optional ones where the ride row's reading has them. */
 function memberColumns(first: HeaveRow): Column[] {
   const cols: Column[] = [];
   for (const [id, m] of Object.entries(first.members)) {
-    cols.push({ name: `members.${id}.length`, get: (r) => r.members[id]?.length });
-    cols.push({ name: `members.${id}.lengthChange`, get: (r) => r.members[id]?.lengthChange });
-    if (m.motionRatio !== undefined)
-      cols.push({ name: `members.${id}.motionRatio`, get: (r) => r.members[id]?.motionRatio });
-    if (m.wheelRate !== undefined) cols.push({ name: `members.${id}.wheelRate`, get: (r) => r.members[id]?.wheelRate });
+    for (const e of memberEntries) {
+      if (e.given && !e.given(m)) continue;
+      cols.push({ name: e.csv(id), get: (r) => (r.members[id] ? e.read(r.members[id]) : undefined) });
+    }
   }
   return cols;
 }
@@ -41,7 +40,7 @@ function columns(result: SweepResult): Column[] {
     if (item === '*members') cols.push(...memberColumns(first));
     else if (item === '*linkLoads') {
       for (const id of Object.keys(first.linkLoads ?? {}))
-        cols.push({ name: `linkLoads.${id}`, get: (r) => r.linkLoads?.[id] });
+        cols.push({ name: linkLoadEntry.csv(id), get: (r) => linkLoadEntry.read(r.linkLoads, id) });
     } else {
       const e = metricEntry({ sweep: 'heave', key: item.key });
       if (e.csv === undefined || (e.given && !e.given(first))) continue;

@@ -8,7 +8,13 @@ import type { SweepResult } from '../../shared/kinematics/types';
 import type { Sketch } from '../../shared/schema/sketch';
 import { formatLength, mmToUnit, type LengthUnit } from '../../shared/units';
 import { fixed, MISSING, showMetric, showRate, showRatio } from '../sweep/format';
-import { metricEntry, sheetView, type MetricEntry, type SheetItem } from '../../shared/kinematics/metrics/registry';
+import {
+  memberEntry,
+  metricEntry,
+  sheetView,
+  type MetricEntry,
+  type SheetItem,
+} from '../../shared/kinematics/metrics/registry';
 import { kindLabel } from '../board/memberKinds';
 
 export interface SheetPivot {
@@ -79,7 +85,7 @@ function memberNote(m: Sketch['members'][number], result: SweepResult | null, u:
   if (m.kind === 'spring') {
     const mr = result?.ride.members[m.id]?.motionRatio;
     const rate = m.rate === undefined ? 'no rate given' : showRate(m.rate).text;
-    return `${rate}; motion ratio ${showRatio(mr).text} at ride`;
+    return `${rate}; ${memberEntry('motionRatio').label} ${showRatio(mr).text} at ride`;
   }
   if (m.kind === 'link' && m.group) return `${m.group} link`;
   return '';

@@ -5,13 +5,16 @@
 import type { HeaveRow, RollRow } from '../../shared/kinematics';
 import type { LinkLoadSummary, WindUpReading } from '../../shared/kinematics/types';
 import type { SketchMember } from '../../shared/schema/sketch';
-import type { LengthUnit } from '../../shared/units';
+import { quantityUnitOf, type LengthUnit } from '../../shared/units';
 import {
   isMetricRef,
   metricEntry,
   readoutHeaveView,
   readoutLeafMetric,
   readoutRollView,
+  linkLoadEntry,
+  memberEntry,
+  windUpEntry,
   type MetricEntry,
   type MetricRef,
 } from '../../shared/kinematics/metrics/registry';
@@ -78,6 +81,15 @@ function reasons(ctx: SweepContext) {
   };
 }
 
+const LENGTH = memberEntry('length');
+const LENGTH_CHANGE = memberEntry('lengthChange');
+const MOTION_RATIO = memberEntry('motionRatio');
+const WHEEL_RATE = memberEntry('wheelRate');
+
+function capitalized(words: string): string {
+  return words.charAt(0).toUpperCase() + words.slice(1);
+}
+
 function memberLines(
   ctx: SweepContext,
   members: Record<string, { length: number; lengthChange: number; motionRatio?: number; wheelRate?: number }>,
@@ -93,7 +105,7 @@ function memberLines(
     const name = m.kind === 'shock' ? 'Shock' : 'Spring';
     const line: ReadoutLine = {
       key: `member-${m.id}`,
-      label: `${name} ${m.id} length`,
+      label: `${name} ${m.id} ${LENGTH.label}`,
       group: 'members',
       member: m.id,
       ...showLength(r.length, u),
@@ -112,7 +124,7 @@ function memberLines(
       sweep === 'roll' ? 'motion ratio is taken in heave (wheel travel), not in roll' : 'not defined here';
     lines.push({
       key: `mr-${m.id}`,
-      label: `${name} ${m.id} motion ratio`,
+      label: `${name} ${m.id} ${MOTION_RATIO.label}`,
       group: 'members',
       member: m.id,
       ...showRatio(r.motionRatio, mrReason),
@@ -120,7 +132,8 @@ function memberLines(
     if (m.kind === 'spring' && m.rate !== undefined) {
       lines.push({
         key: `wr-${m.id}`,
-        label: `Wheel rate (${m.id})`,
+        // A wheel rate belongs to the wheel: named first, its spring after it.
+        label: `${capitalized(WHEEL_RATE.label)} (${m.id})`,
         group: 'members',
         member: m.id,
         ...showRate(r.wheelRate, mrReason),
@@ -130,7 +143,7 @@ function memberLines(
       // A leaf-sprung axle: the stroke each shock uses in travel and what the wind-up alone takes of it.
       lines.push({
         key: `dl-${m.id}`,
-        label: `${name} ${m.id} length change (${sweep})`,
+        label: `${name} ${m.id} ${LENGTH_CHANGE.label} (${sweep})`,
         group: 'members',
         member: m.id,
         ...showLength(r.lengthChange, u, undefined, true),
@@ -138,7 +151,7 @@ function memberLines(
       const w = windUp.members[m.id];
       lines.push({
         key: `wu-${m.id}`,
-        label: `${name} ${m.id} length change (wind-up)`,
+        label: `${name} ${m.id} ${LENGTH_CHANGE.label} (wind-up)`,
         group: 'members',
         member: m.id,
         ...showLength(w?.lengthChange, u, 'not solved under the wind-up', true),
@@ -179,22 +192,23 @@ function leafLines(
   }
   if (!windUp) return lines;
   const torque = showTorque(windUp.torque).text;
+  const [angle, rate, bind] = (['angle', 'rate', 'bind'] as const).map(windUpEntry);
   lines.push(
     {
-      key: 'windup',
-      label: `Wind-up at ride (${torque})`,
+      key: angle.id,
+      label: `${angle.label} (${torque})`,
       group: 'leaf',
-      ...showAngle(windUp.angle, 'the springs do not resist wind-up', true),
+      ...showAngle(angle.read(windUp), angle.missing, true),
     },
     {
-      key: 'windup-rate',
-      label: 'Wind-up rate',
+      key: rate.id,
+      label: rate.label,
       group: 'leaf',
-      ...(Number.isFinite(windUp.rate)
-        ? { text: `${fixed(windUp.rate, 0)} N·m/°` }
-        : { text: MISSING, reason: 'the springs have no rate' }),
+      ...(Number.isFinite(rate.read(windUp))
+        ? { text: `${fixed(rate.read(windUp), 0)} ${quantityUnitOf(rate.quantity, u)}` }
+        : { text: MISSING, reason: rate.missing }),
     },
-    { key: 'windup-bind', label: 'Bind under wind-up', group: 'leaf', ...showLength(windUp.bind, u) },
+    { key: bind.id, label: bind.label, group: 'leaf', ...showLength(bind.read(windUp), u) },
   );
   return lines;
 }
@@ -226,7 +240,7 @@ function loadLines(
     if (reading.overLimit) marks.push('over limit');
     const line: ReadoutLine = {
       key: `load-${m.id}`,
-      label: `${name} ${m.id} load${sweep === 'roll' ? ' at ride' : ''}`,
+      label: `${name} ${m.id} ${linkLoadEntry.label}${sweep === 'roll' ? ' at ride' : ''}`,
       group: 'loads',
       member: m.id,
       ...shown,

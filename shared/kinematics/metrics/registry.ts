@@ -11,6 +11,8 @@ import type { MetricRef } from './registry/views';
 
 export type * from './registry/types';
 export * from './registry/views';
+export * from './registry/members';
+export * from './registry/windUp';
 export { heaveEntries, limitsEntries, rollEntries };
 
 /** Every entry, heave then roll then the whole-sweep readings. */

@@ -9,6 +9,8 @@ import type { SweepResult } from '../../../shared/kinematics';
 import {
   csvView,
   isMetricRef,
+  linkLoadEntry,
+  memberEntries,
   metricEntries,
   metricEntry,
   plotsAxleView,
@@ -19,6 +21,7 @@ import {
   sheetView,
   targetEntries,
   targetsView,
+  windUpEntries,
   type AnyEntry,
   type MetricRef,
 } from '../../../shared/kinematics/metrics/registry';
@@ -185,11 +188,56 @@ describe('the metric registry', () => {
     }
   });
 
+  it("writes each member's readings and each link's load in the CSV under the registry's columns", () => {
+    let loads = 0;
+    for (const { layout, result } of swept) {
+      const lines = heaveRowsCsv(result).split('\r\n').filter(Boolean);
+      const header = lines[0].split(',');
+      for (const [id, ride] of Object.entries(result.ride.members)) {
+        for (const e of memberEntries) {
+          const col = header.indexOf(e.csv(id));
+          if (e.given && !e.given(ride)) {
+            expect(col, `${layout} ${e.csv(id)}`).toBe(-1);
+            continue;
+          }
+          expect(col, `${layout} ${e.csv(id)}`).toBeGreaterThanOrEqual(0);
+          result.heave.forEach((row, i) => {
+            // The reader gives the reading's own field (MemberReading in types.ts), checked by name here.
+            expect(e.read(row.members[id])).toBe(row.members[id][e.key]);
+            expect(Number(lines[i + 1].split(',')[col])).toBe(row.members[id][e.key]);
+          });
+        }
+      }
+      for (const id of Object.keys(result.ride.linkLoads ?? {})) {
+        loads++;
+        const col = header.indexOf(linkLoadEntry.csv(id));
+        expect(col, `${layout} ${id}`).toBeGreaterThanOrEqual(0);
+        result.heave.forEach((row, i) => {
+          const cell = lines[i + 1].split(',')[col];
+          expect(cell === '' ? undefined : Number(cell)).toBe(row.linkLoads?.[id]);
+        });
+      }
+    }
+    // At least one starter is a solid axle on links, so the loads above were checked at all.
+    expect(loads).toBeGreaterThan(0);
+  });
+
+  it("reads the leaf-spring starter's wind-up as finite numbers, labels unique", () => {
+    const leaf = swept.find((s) => s.layout === 'leaf-spring')!.result;
+    expect(leaf.windUp).toBeDefined();
+    for (const e of windUpEntries) {
+      expect(e.read(leaf.windUp!)).toBe(leaf.windUp![e.key]);
+      expect(Number.isFinite(e.read(leaf.windUp!)), e.key).toBe(true);
+    }
+    expect(new Set(windUpEntries.map((e) => e.label)).size).toBe(windUpEntries.length);
+    expect(new Set(memberEntries.map((e) => e.label)).size).toBe(memberEntries.length);
+  });
+
   it('converts each quantity kind for display: lengths by the international inch (1959: 25.4 mm), the rest as they are', () => {
     expect(quantityToUnit(254, 'length', 'in')).toBeCloseTo(10, 12);
     expect(unitToQuantity(10, 'length', 'in')).toBeCloseTo(254, 12);
     expect(quantityToUnit(254, 'length', 'mm')).toBe(254);
-    for (const q of ['angle', 'percent', 'ratio', 'rate', 'force', 'torque'] as const) {
+    for (const q of ['angle', 'percent', 'ratio', 'rate', 'force', 'torque', 'angularRate'] as const) {
       expect(quantityToUnit(12.5, q, 'in')).toBe(12.5);
       expect(unitToQuantity(12.5, q, 'in')).toBe(12.5);
     }
@@ -197,5 +245,6 @@ describe('the metric registry', () => {
     expect(quantityUnitOf('angle', 'mm')).toBe('°');
     expect(quantityUnitOf('percent', 'mm')).toBe('%');
     expect(quantityUnitOf('rate', 'in')).toBe('N/mm');
+    expect(quantityUnitOf('angularRate', 'in')).toBe('N·m/°');
   });
 });
