@@ -9,7 +9,7 @@ import type { HeaveRow, RollRow, SweepEvent, SweepResult } from '../../shared/ki
 import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
 import type { TargetCheck } from './targets';
-import { targetEntries } from '../../shared/kinematics/metrics/registry';
+import { driveJointNames, targetEntries } from '../../shared/kinematics/metrics/registry';
 import { showAngle, showLength, showPosition, showQuantity, quantityUnit, toDisplay, fixed } from './format';
 
 export type FlagKind = SweepEvent['kind'] | 'target';
@@ -35,12 +35,7 @@ export const BIND_MEMBER_MIN_MM = 0.01;
 
 const RIGID_KINDS = new Set(['link', 'lateral-rod', 'tie-rod', 'shackle']);
 
-const JOINT_NAMES: Record<string, string> = {
-  output: 'Output joint',
-  pinion: 'Pinion joint',
-  'half-shaft-inner': 'Inner half-shaft joint',
-  'half-shaft-outer': 'Outer half-shaft joint',
-};
+const JOINT_NAMES: Record<string, string> = driveJointNames;
 
 function nearestRow<T>(rows: T[], pos: (r: T) => number, at: number): T | undefined {
   let best: T | undefined;

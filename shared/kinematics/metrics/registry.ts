@@ -14,6 +14,7 @@ export * from './registry/views';
 export * from './registry/members';
 export * from './registry/windUp';
 export { heaveEntries, limitsEntries, rollEntries };
+export { driveJointNames } from './registry/heave';
 
 /** Every entry, heave then roll then the whole-sweep readings. */
 export const metricEntries: readonly AnyEntry[] = [...heaveEntries, ...rollEntries, ...limitsEntries];

@@ -3,7 +3,7 @@
  * Signs and units as shared/kinematics/types.ts documents each row field.
  */
 import type { HeaveEntry, RollEntry } from './types';
-import type { HalfShaftReading, HeaveRow } from '../../types';
+import type { HalfShaftReading, HeaveRow, SweepEvent } from '../../types';
 import type { Layout } from '../../../schema/sketchVocabulary';
 import { ALL_LAYOUTS, INDEPENDENT, SOLID_AXLE, WISHBONE } from './layouts';
 
@@ -63,6 +63,14 @@ export function drivelineEntries<S extends 'heave' | 'roll'>(sweep: S, csv: bool
     ...(csv ? { csv: `driveline.${field}` } : {}),
   })) as Array<HeaveEntry | RollEntry>;
 }
+
+/** The driveline joints a sweep event can name (`SweepEvent.joint`), as the flags word them. */
+export const driveJointNames: Record<NonNullable<SweepEvent['joint']>, string> = {
+  output: 'Output joint',
+  pinion: 'Pinion joint',
+  'half-shaft-inner': 'Inner half-shaft joint',
+  'half-shaft-outer': 'Outer half-shaft joint',
+};
 
 const HALF_SHAFT: ReadonlyArray<readonly [keyof HalfShaftReading, string, 'length' | 'angle', boolean, string]> = [
   ['length', 'length', 'length', false, 'inner joint to outer joint'],
