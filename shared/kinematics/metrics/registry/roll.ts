@@ -53,7 +53,7 @@ export const rollEntries: RollEntry[] = [
     sweep: 'roll',
     read: (r) => r.rollSteer,
     signed: true,
-    sign: '100 · yaw / roll: positive when the axle steers the way it rolls (nose left as the left side lifts)',
+    sign: '100 · yaw / roll: positive when the axle turns its nose left as its left side lifts',
     layouts: SOLID_AXLE,
     group: 'geometry',
     missing: 'no roll: roll steer is a ratio to the roll angle',
@@ -97,7 +97,7 @@ export const rollEntries: RollEntry[] = [
   ...(
     [
       ['y', 'Roll centre y', 'positive to the left, from the centreline'],
-      ['z', 'Roll centre height in roll', 'height above the ground, in the frame axes'],
+      ['z', 'Roll centre height in roll', "height in the frame's axes, from the ground at ride"],
     ] as const
   ).map(([axis, label, sign]): RollEntry => ({
     key: `rollCenter.${axis}`,
