@@ -54,3 +54,36 @@ export function degToRad(v: Deg): Rad {
 export function radToDeg(v: Rad): Deg {
   return (v * 180) / Math.PI;
 }
+
+/**
+ * What kind of number a sweep quantity is, so that it is converted and labelled for display:
+ * lengths in mm (the user may see inches), angles in degrees, percentages and plain ratios as
+ * they are, rates in N/mm, forces in N, torques in N·m and angular rates in N·m per degree in both
+ * unit systems.
+ */
+export type QuantityKind = 'length' | 'angle' | 'percent' | 'ratio' | 'rate' | 'force' | 'torque' | 'angularRate';
+
+/** A value in the file's unit (mm, deg, %, N/mm, N, N·m) in the display unit, as a number. */
+export function quantityToUnit(v: number, q: QuantityKind, u: LengthUnit): number {
+  return q === 'length' ? mmToUnit(v, u) : v;
+}
+
+/** A display value back to the file's unit. */
+export function unitToQuantity(v: number, q: QuantityKind, u: LengthUnit): number {
+  return q === 'length' ? unitToMm(v, u) : v;
+}
+
+const QUANTITY_UNITS: Record<Exclude<QuantityKind, 'length'>, string> = {
+  angle: '°',
+  percent: '%',
+  ratio: '',
+  rate: 'N/mm',
+  force: 'N',
+  torque: 'N·m',
+  angularRate: 'N·m/°',
+};
+
+/** The display unit of a quantity kind. */
+export function quantityUnitOf(q: QuantityKind, u: LengthUnit): string {
+  return q === 'length' ? u : QUANTITY_UNITS[q];
+}

@@ -12,7 +12,11 @@ import { MAX_COORDINATE_MM } from './sketchVocabulary';
 /** The fields of this file: the sweep reads neither, so a problem in them never stops a sweep. */
 export const boardOnlyFields = ['targets', 'tracing'] as const;
 
-/** The sweep quantities a target band can be set on. */
+/**
+ * The sweep quantities a target band can be set on, in the targets table's order. The metric
+ * registry (shared/kinematics/metrics/registry) marks the same keys as target-capable: the
+ * schema cannot import the kinematics, so the list lives here and a test holds both equal.
+ */
 export const targetMetrics = [
   'antiSquat',
   'pinionAngleChange',
@@ -26,20 +30,28 @@ export const targetMetrics = [
 export type TargetMetric = (typeof targetMetrics)[number];
 
 const finite = z.number().finite();
-/** A band on one metric; either end may be open. `from`/`to` limit the check to part of the sweep. */
+/**
+ * A band on one metric; either end may be open. `from`/`to` limit the check to part of the
+ * sweep: mm of travel for heave metrics, degrees of roll for roll metrics.
+ */
 export const targetBandSchema = z
   .looseObject({ min: finite.optional(), max: finite.optional(), from: finite.optional(), to: finite.optional() })
   .refine((b) => b.min === undefined || b.max === undefined || b.min <= b.max, { message: 'min must not be above max' })
   .refine((b) => b.from === undefined || b.to === undefined || b.from <= b.to, {
     message: 'from must not be after to',
   });
+export type TargetBand = z.output<typeof targetBandSchema>;
 
-export const targetsSchema = z.looseObject(
-  Object.fromEntries(targetMetrics.map((m) => [m, targetBandSchema.optional()])) as Record<
-    TargetMetric,
-    z.ZodOptional<typeof targetBandSchema>
-  >,
-);
+const targetsShape = Object.fromEntries(targetMetrics.map((m) => [m, targetBandSchema.optional()])) as Record<
+  TargetMetric,
+  z.ZodOptional<typeof targetBandSchema>
+>;
+/** The designer's bands by metric: the object the board edits (a key this build does not know is kept by the file). */
+const targetsObject = z.object(targetsShape);
+export type Targets = z.output<typeof targetsObject>;
+
+/** The `targets` field as a file holds it: the bands, and any key this build does not know, kept. */
+export const targetsSchema = targetsObject.loose();
 
 /** Scales outside this range (mm per image px) come from a slip, not from a photo of a vehicle. */
 export const MIN_MM_PER_PX = 0.001;

@@ -8,7 +8,14 @@ import type { SweepResult } from '../../shared/kinematics/types';
 import type { Sketch } from '../../shared/schema/sketch';
 import { formatLength, mmToUnit, type LengthUnit } from '../../shared/units';
 import { vecDistance } from '../../shared/vec3';
-import { fixed, showAngle, showLength, showPercent, showRate, showRatio } from '../sweep/format';
+import { fixed, MISSING, showMetric, showRate, showRatio } from '../sweep/format';
+import {
+  memberEntry,
+  metricEntry,
+  sheetView,
+  type MetricEntry,
+  type SheetItem,
+} from '../../shared/kinematics/metrics/registry';
 import { kindLabel } from '../board/memberKinds';
 
 export interface SheetPivot {
@@ -79,10 +86,55 @@ function memberNote(m: Sketch['members'][number], result: SweepResult | null, u:
   if (m.kind === 'spring') {
     const mr = result?.ride.members[m.id]?.motionRatio;
     const rate = m.rate === undefined ? 'no rate given' : showRate(m.rate).text;
-    return `${rate}; motion ratio ${showRatio(mr).text} at ride`;
+    return `${rate}; ${memberEntry('motionRatio').label} ${showRatio(mr).text} at ride`;
   }
   if (m.kind === 'link' && m.group) return `${m.group} link`;
   return '';
+}
+
+/** Why a number of the build sheet is missing. */
+const SHEET_MISSING = { reached: 'no roll sweep', ride: 'not defined' } as const;
+
+/** One geometry line of the build sheet: a metric's limit, its value at ride, or its span over the travel. */
+function sheetLine(item: SheetItem, result: SweepResult, u: LengthUnit): SheetLine {
+  const heave = result.heave;
+  if (item.at === 'ride-point') {
+    const [ex, ez] = item.metrics.map((m) => metricEntry(m) as MetricEntry<'heave'>);
+    const [x, z] = [ex.read(result.ride), ez.read(result.ride)];
+    const axes = item.metrics.map((m) => m.key.split('.').pop()).join(', ');
+    return {
+      label: `${ex.point} at ride (${axes})`,
+      value:
+        x !== null && x !== undefined && z !== null && z !== undefined
+          ? `${formatLength(x, u)}, ${formatLength(z, u)}`
+          : MISSING,
+    };
+  }
+  const entry = metricEntry(item.metric);
+  if (item.at === 'reached') {
+    if (entry.sweep === 'limits') {
+      const v = (entry as MetricEntry<'limits'>).read(result.limits);
+      return { label: `${entry.label} reached`, value: showMetric(entry, v, u, SHEET_MISSING.reached).text };
+    }
+    // Travel: how far the sweep reached each way.
+    return {
+      label: `${entry.label} reached`,
+      value: `${formatLength(-result.limits.droop, u)} droop, ${formatLength(result.limits.bump, u)} bump`,
+    };
+  }
+  const read = (entry as MetricEntry<'heave'>).read;
+  if (item.at === 'ride') {
+    return {
+      label: `${entry.label} at ride`,
+      value: showMetric(entry, read(result.ride), u, SHEET_MISSING.ride).text,
+    };
+  }
+  const vals = heave.map(read).filter((x): x is number => x !== null && x !== undefined && Number.isFinite(x));
+  const show = (v: number) => showMetric(entry, v, u, '').text;
+  return {
+    label: `${entry.label} over the travel`,
+    value: vals.length ? `${show(Math.min(...vals))} to ${show(Math.max(...vals))}` : MISSING,
+  };
 }
 
 export function buildSheet(
@@ -106,42 +158,7 @@ export function buildSheet(
     return { id: m.id, kind: kindLabel(m.kind), ends: `${m.a} – ${m.b}`, length, note: memberNote(m, result, u) };
   });
 
-  const geometry: SheetLine[] = [];
-  if (result) {
-    const ride = result.ride;
-    const heave = result.heave;
-    const range = (read: (r: (typeof heave)[number]) => number | null) => {
-      const vals = heave.map(read).filter((x): x is number => x !== null && Number.isFinite(x));
-      return vals.length ? { min: Math.min(...vals), max: Math.max(...vals) } : null;
-    };
-    const pinion = range((r) => r.pinionAngleChange);
-    const lateral = range((r) => r.lateralShift);
-    geometry.push(
-      {
-        label: 'Travel reached',
-        value: `${formatLength(-result.limits.droop, u)} droop, ${formatLength(result.limits.bump, u)} bump`,
-      },
-      { label: 'Articulation reached', value: showAngle(result.limits.articulation, 'no roll sweep', false, 1).text },
-      { label: 'Anti-squat at ride', value: showPercent(ride.antiSquat, 'not defined').text },
-      {
-        label: 'Instant centre at ride (x, z)',
-        value: ride.instantCenter
-          ? `${formatLength(ride.instantCenter.x, u)}, ${formatLength(ride.instantCenter.z, u)}`
-          : '—',
-      },
-      { label: 'Roll centre height at ride', value: showLength(ride.rollCenterHeight, u).text },
-      {
-        label: 'Pinion angle change over the travel',
-        value: pinion ? `${showAngle(pinion.min, '', true).text} to ${showAngle(pinion.max, '', true).text}` : '—',
-      },
-      {
-        label: 'Lateral shift over the travel',
-        value: lateral
-          ? `${showLength(lateral.min, u, '', true).text} to ${showLength(lateral.max, u, '', true).text}`
-          : '—',
-      },
-    );
-  }
+  const geometry: SheetLine[] = result ? sheetView.map((item) => sheetLine(item, result, u)) : [];
   return {
     vehicle,
     frame: sketch.points.filter((p) => p.body === 'frame').map((p) => pivot(p, u)),

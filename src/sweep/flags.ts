@@ -8,7 +8,8 @@
 import type { HeaveRow, RollRow, SweepEvent, SweepResult } from '../../shared/kinematics';
 import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
-import { metricSpecs, type TargetCheck } from './targets';
+import type { TargetCheck } from './targets';
+import { driveJointNames, targetEntries } from '../../shared/kinematics/metrics/registry';
 import { showAngle, showLength, showPosition, showQuantity, quantityUnit, toDisplay, fixed } from './format';
 
 export type FlagKind = SweepEvent['kind'] | 'target';
@@ -34,12 +35,7 @@ export const BIND_MEMBER_MIN_MM = 0.01;
 
 const RIGID_KINDS = new Set(['link', 'lateral-rod', 'tie-rod', 'shackle']);
 
-const JOINT_NAMES: Record<string, string> = {
-  output: 'Output joint',
-  pinion: 'Pinion joint',
-  'half-shaft-inner': 'Inner half-shaft joint',
-  'half-shaft-outer': 'Outer half-shaft joint',
-};
+const JOINT_NAMES: Record<string, string> = driveJointNames;
 
 function nearestRow<T>(rows: T[], pos: (r: T) => number, at: number): T | undefined {
   let best: T | undefined;
@@ -151,12 +147,12 @@ function eventFlag(
 }
 
 function bandText(check: TargetCheck, u: LengthUnit): string {
-  const q = metricSpecs[check.metric].quantity;
+  const q = targetEntries[check.metric].quantity;
   const unit = quantityUnit(q, u);
   const d = (v: number) => fixed(toDisplay(v, q, u), q === 'length' && u === 'in' ? 2 : 1);
   const { min, max } = check.band;
   if (min !== undefined && max !== undefined) {
-    if (metricSpecs[check.metric].symmetric && Math.abs(min + max) < 1e-9) return `within ±${d(max)} ${unit}`;
+    if (targetEntries[check.metric].signed && Math.abs(min + max) < 1e-9) return `within ±${d(max)} ${unit}`;
     return `${d(min)}–${d(max)} ${unit}`;
   }
   if (min !== undefined) return `at least ${d(min)} ${unit}`;
@@ -165,7 +161,7 @@ function bandText(check: TargetCheck, u: LengthUnit): string {
 
 function targetFlag(check: TargetCheck, u: LengthUnit): Flag | null {
   if (check.status === 'met') return null;
-  const spec = metricSpecs[check.metric];
+  const spec = targetEntries[check.metric];
   const wanted = bandText(check, u);
   const key = `target-${check.metric}`;
   if (check.status === 'unknown') {
@@ -177,7 +173,7 @@ function targetFlag(check: TargetCheck, u: LengthUnit): Flag | null {
       detail: `${spec.label} is not defined anywhere in the sweep, so ${wanted} cannot be checked.`,
     };
   }
-  const value = showQuantity(check.value, spec.quantity, u, spec.symmetric).text;
+  const value = showQuantity(check.value, spec.quantity, u, spec.signed).text;
   if (check.sweep === 'limits') {
     return {
       key,
@@ -190,7 +186,7 @@ function targetFlag(check: TargetCheck, u: LengthUnit): Flag | null {
   const where = showPosition(check.sweep as 'heave' | 'roll', check.at!, u);
   const worst =
     check.worst !== undefined && check.worst !== check.value
-      ? ` (worst ${showQuantity(check.worst, spec.quantity, u, spec.symmetric).text})`
+      ? ` (worst ${showQuantity(check.worst, spec.quantity, u, spec.signed).text})`
       : '';
   return {
     key,

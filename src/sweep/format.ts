@@ -3,8 +3,17 @@
  * anti-squat and roll steer in %. A number that does not exist is "—" with the reason
  * beside it, never "NaN".
  */
-import { formatLength, mmToUnit, unitToMm, type LengthUnit, type Mm } from '../../shared/units';
-import type { MetricQuantity } from './targets';
+import {
+  formatLength,
+  mmToUnit,
+  quantityToUnit,
+  quantityUnitOf,
+  unitToQuantity,
+  type LengthUnit,
+  type Mm,
+  type QuantityKind,
+} from '../../shared/units';
+import type { MetricEntry } from '../../shared/kinematics/metrics/registry';
 
 /** Shown for a number that does not exist; the reason goes to the tooltip. */
 export const MISSING = '—';
@@ -70,26 +79,46 @@ export function showRate(v: number | null | undefined, reason = 'not defined her
   return { text: `${fixed(v, 1)} N/mm` };
 }
 
-/** A value of a target metric (file unit) in the user's unit. */
-export function showQuantity(v: number | null | undefined, q: MetricQuantity, u: LengthUnit, signed = false): Shown {
+/** A value of a target metric (file unit) in the user's unit, angles to one digit. */
+export function showQuantity(v: number | null | undefined, q: QuantityKind, u: LengthUnit, signed = false): Shown {
   if (q === 'length') return showLength(v, u, undefined, signed);
   if (q === 'angle') return showAngle(v, undefined, signed, 1);
+  if (q === 'ratio') return showRatio(v);
+  if (q === 'rate') return showRate(v);
   return showPercent(v, undefined, signed);
 }
 
+/**
+ * A metric's value as the readout and the build sheet write it: with its sign when it is a
+ * change from ride, angles to the registry's digits (two when it names none).
+ */
+export function showMetric(
+  entry: Pick<MetricEntry, 'quantity' | 'signed' | 'digits'>,
+  v: number | null | undefined,
+  u: LengthUnit,
+  reason?: string,
+): Shown {
+  const q = entry.quantity;
+  if (q === 'length') return showLength(v, u, reason, entry.signed);
+  if (q === 'angle') return showAngle(v, reason, entry.signed, entry.digits ?? 2);
+  if (q === 'ratio') return showRatio(v, reason);
+  if (q === 'rate') return showRate(v, reason);
+  return showPercent(v, reason, entry.signed);
+}
+
 /** The display unit of a metric's quantity. */
-export function quantityUnit(q: MetricQuantity, u: LengthUnit): string {
-  return q === 'length' ? u : q === 'angle' ? '°' : '%';
+export function quantityUnit(q: QuantityKind, u: LengthUnit): string {
+  return quantityUnitOf(q, u);
 }
 
 /** A file value (mm, deg, %) in the display unit, as a number (for plots and inputs). */
-export function toDisplay(v: number, q: MetricQuantity, u: LengthUnit): number {
-  return q === 'length' ? mmToUnit(v, u) : v;
+export function toDisplay(v: number, q: QuantityKind, u: LengthUnit): number {
+  return quantityToUnit(v, q, u);
 }
 
 /** A display value back to the file unit. */
-export function fromDisplay(v: number, q: MetricQuantity, u: LengthUnit): number {
-  return q === 'length' ? unitToMm(v, u) : v;
+export function fromDisplay(v: number, q: QuantityKind, u: LengthUnit): number {
+  return unitToQuantity(v, q, u);
 }
 
 /** Where on the sweep: "+45.0 mm bump", "−120.0 mm droop", "ride height", "+6.0° roll". */

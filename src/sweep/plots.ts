@@ -7,8 +7,15 @@ import type { HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
 import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
 import { mmToUnit } from '../../shared/units';
-import { metricSpecs, bandIsSet, type TargetCheck, type Targets } from './targets';
-import type { TargetMetric } from '../../shared/schema/boardFields';
+import { bandIsSet, type TargetCheck, type Targets } from './targets';
+import {
+  isMetricRef,
+  metricEntry,
+  plotsAxleView,
+  plotsIndependentView,
+  targetEntries,
+  type MetricEntry,
+} from '../../shared/kinematics/metrics/registry';
 import { quantityUnit, toDisplay } from './format';
 import type { SweepContext } from './readout';
 
@@ -66,148 +73,8 @@ export const PLOT_COLORS_DARK: Record<string, string> = {
 
 type AnyRow = HeaveRow & RollRow;
 
-/** Heave-row fields of independent layouts (arms and knuckles), absent for a solid axle. */
-interface Independent {
-  camberChange?: number | null;
-  toeChange?: number | null;
-  trackChange?: number | null;
-  antiDive?: number | null;
-}
-
-interface CurveDef {
-  key: string;
-  title: string;
-  sweep: 'heave' | 'roll';
-  metric?: TargetMetric;
-  quantity: 'length' | 'angle' | 'percent';
-  read: (r: AnyRow) => number | null;
-  emptyReason: string;
-  signed: boolean;
-  /** plotted only when the sweep gives the quantity at all (independent layouts add these) */
-  optional?: boolean;
-}
-
-const CURVES: CurveDef[] = [
-  {
-    key: 'pinion',
-    title: 'Pinion angle change',
-    sweep: 'heave',
-    metric: 'pinionAngleChange',
-    quantity: 'angle',
-    read: (r) => r.pinionAngleChange,
-    emptyReason: 'No axle: this layout has no pinion angle to change.',
-    signed: true,
-  },
-  {
-    key: 'lateral',
-    title: 'Lateral shift',
-    sweep: 'heave',
-    metric: 'lateralShift',
-    quantity: 'length',
-    read: (r) => r.lateralShift,
-    emptyReason: 'No axle: this layout has no lateral shift.',
-    signed: true,
-  },
-  {
-    key: 'antisquat',
-    title: 'Anti-squat',
-    sweep: 'heave',
-    metric: 'antiSquat',
-    quantity: 'percent',
-    read: (r) => r.antiSquat,
-    emptyReason: 'Anti-squat is not defined anywhere in the travel (no upper and lower link pair).',
-    signed: false,
-  },
-  {
-    key: 'foreaft',
-    title: 'Fore-aft shift',
-    sweep: 'heave',
-    metric: 'foreAftShift',
-    quantity: 'length',
-    read: (r) => r.foreAftShift,
-    emptyReason: 'Not defined for this layout.',
-    signed: true,
-  },
-  {
-    key: 'camber',
-    title: 'Camber change',
-    sweep: 'heave',
-    quantity: 'angle',
-    read: (r) => (r as AnyRow & Independent).camberChange ?? null,
-    emptyReason: '',
-    signed: true,
-    optional: true,
-  },
-  {
-    key: 'toe',
-    title: 'Toe change (bump steer)',
-    sweep: 'heave',
-    quantity: 'angle',
-    read: (r) => (r as AnyRow & Independent).toeChange ?? null,
-    emptyReason: '',
-    signed: true,
-    optional: true,
-  },
-  {
-    key: 'antidive',
-    title: 'Anti-dive',
-    sweep: 'heave',
-    quantity: 'percent',
-    read: (r) => (r as AnyRow & Independent).antiDive ?? null,
-    emptyReason: '',
-    signed: false,
-    optional: true,
-  },
-  {
-    key: 'track',
-    title: 'Track change',
-    sweep: 'heave',
-    quantity: 'length',
-    read: (r) => (r as AnyRow & Independent).trackChange ?? null,
-    emptyReason: '',
-    signed: true,
-    optional: true,
-  },
-  {
-    key: 'bind',
-    title: 'Bind in roll',
-    sweep: 'roll',
-    metric: 'bind',
-    quantity: 'length',
-    read: (r) => r.bind,
-    emptyReason: 'No roll sweep (articulation set to 0).',
-    signed: false,
-  },
-  {
-    key: 'rollsteer',
-    title: 'Roll steer',
-    sweep: 'roll',
-    metric: 'rollSteer',
-    quantity: 'percent',
-    read: (r) => r.rollSteer,
-    emptyReason: 'No roll sweep (articulation set to 0).',
-    signed: true,
-  },
-];
-
-/** The plot order on the board: travel quantities, the shocks, then the roll quantities. */
-const ORDER = [
-  'pinion',
-  'lateral',
-  'antisquat',
-  'foreaft',
-  'camber',
-  'toe',
-  'track',
-  'antidive',
-  'shocks',
-  'bind',
-  'rollsteer',
-];
-/** Independent layouts: the wheel's own attitude first. */
-const ORDER_INDEPENDENT = ['camber', 'toe', 'track', 'antisquat', 'antidive', 'foreaft', 'shocks', 'bind', 'rollsteer'];
-/** Quantities of a solid axle: not shown at all for a layout without one. */
-const AXLE_ONLY = new Set(['pinion', 'lateral']);
+/** A quantity plotted against travel (heave) or roll: an entry of the metric registry. */
+type CurveDef = MetricEntry<'heave'> | MetricEntry<'roll'>;
 
 function axisTitle(sweep: 'heave' | 'roll', u: LengthUnit): string {
   return sweep === 'heave' ? `travel (${u})` : 'roll (°)';
@@ -217,18 +84,14 @@ function xOf(sweep: 'heave' | 'roll', r: AnyRow, u: LengthUnit): number {
   return sweep === 'heave' ? mmToUnit(r.travel, u) : r.roll;
 }
 
-function bandsFor(
-  metric: TargetMetric | undefined,
-  targets: Targets,
-  checks: TargetCheck[],
-  u: LengthUnit,
-): PlotBand[] {
-  if (!metric) return [];
+function bandsFor(def: CurveDef, targets: Targets, checks: TargetCheck[], u: LengthUnit): PlotBand[] {
+  if (def.target !== true) return [];
+  const metric = def.key;
   const band = targets[metric];
   if (!bandIsSet(band)) return [];
-  const q = metricSpecs[metric].quantity;
+  const q = targetEntries[metric].quantity;
   const window = (v: number | undefined) =>
-    v === undefined ? undefined : metricSpecs[metric].sweep === 'heave' ? mmToUnit(v, u) : v;
+    v === undefined ? undefined : targetEntries[metric].sweep === 'heave' ? mmToUnit(v, u) : v;
   const check = checks.find((c) => c.metric === metric);
   return [
     {
@@ -249,20 +112,24 @@ function curvePlot(
   u: LengthUnit,
 ): PlotSpec {
   const rows = (def.sweep === 'heave' ? result.heave : result.roll) as AnyRow[];
+  const read = def.read as (r: AnyRow) => number | null | undefined;
   const points = rows.map((r) => {
-    const v = def.read(r);
-    return { x: xOf(def.sweep, r, u), y: v === null || !Number.isFinite(v) ? null : toDisplay(v, def.quantity, u) };
+    const v = read(r);
+    return {
+      x: xOf(def.sweep, r, u),
+      y: v === null || v === undefined || !Number.isFinite(v) ? null : toDisplay(v, def.quantity, u),
+    };
   });
   const empty = points.every((p) => p.y === null);
   return {
-    key: def.key,
-    title: def.title,
+    key: def.id,
+    title: def.label,
     sweep: def.sweep,
     xTitle: axisTitle(def.sweep, u),
     yTitle: quantityUnit(def.quantity, u),
-    series: empty ? [] : [{ label: def.title, points, color: PLOT_COLORS[0] }],
-    bands: bandsFor(def.metric, targets, checks, u),
-    emptyReason: empty ? (rows.length === 0 ? 'No rows in this sweep.' : def.emptyReason) : undefined,
+    series: empty ? [] : [{ label: def.label, points, color: PLOT_COLORS[0] }],
+    bands: bandsFor(def, targets, checks, u),
+    emptyReason: empty ? (rows.length === 0 ? 'No rows in this sweep.' : (def.plotEmpty ?? '')) : undefined,
     signed: def.signed,
   };
 }
@@ -320,15 +187,21 @@ export function buildPlots(
   u: LengthUnit,
 ): PlotSpec[] {
   if (!result) return [];
-  const plots = new Map<string, PlotSpec>();
-  for (const def of CURVES) {
-    if (!ctx.hasAxle && AXLE_ONLY.has(def.key)) continue;
+  const out: PlotSpec[] = [];
+  for (const item of ctx.hasAxle ? plotsAxleView : plotsIndependentView) {
+    if (!isMetricRef(item)) {
+      out.push(shockPlot(result, ctx.members, u));
+      continue;
+    }
+    const def = metricEntry(item) as CurveDef;
+    // Quantities of a solid axle are not shown at all for a layout without one.
+    if (!ctx.hasAxle && def.axle === 'only') continue;
     const spec = curvePlot(def, result, targets, checks, u);
-    // A quantity the sweep never gives is left out where it is an extra, or where the layout has no axle
-    // (anti-squat of a front suspension); for an axle it stays, with the reason, because it should exist.
-    if (spec.series.length === 0 && (def.optional || !ctx.hasAxle)) continue;
-    plots.set(def.key, spec);
+    // A quantity the sweep never gives is left out where it is an extra (given only by some layouts), or where
+    // the layout has no axle (anti-squat of a front suspension); for an axle it stays, with the reason, because
+    // it should exist.
+    if (spec.series.length === 0 && (def.given !== undefined || !ctx.hasAxle)) continue;
+    out.push(spec);
   }
-  plots.set('shocks', shockPlot(result, ctx.members, u));
-  return (ctx.hasAxle ? ORDER : ORDER_INDEPENDENT).map((k) => plots.get(k)).filter((p): p is PlotSpec => !!p);
+  return out;
 }

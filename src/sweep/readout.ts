@@ -5,13 +5,25 @@
 import type { HeaveRow, RollRow } from '../../shared/kinematics';
 import type { LinkLoadSummary, WindUpReading } from '../../shared/kinematics/types';
 import type { SketchMember } from '../../shared/schema/sketch';
-import type { LengthUnit } from '../../shared/units';
+import { quantityUnitOf, type LengthUnit } from '../../shared/units';
+import {
+  isMetricRef,
+  metricEntry,
+  readoutHeaveView,
+  readoutLeafMetric,
+  readoutRollView,
+  linkLoadEntry,
+  memberEntry,
+  windUpEntry,
+  type MetricEntry,
+  type MetricRef,
+} from '../../shared/kinematics/metrics/registry';
 import {
   fixed,
   MISSING,
   showAngle,
   showLength,
-  showPercent,
+  showMetric,
   showPosition,
   showRate,
   showRatio,
@@ -69,14 +81,13 @@ function reasons(ctx: SweepContext) {
   };
 }
 
-/** Optional fields that independent layouts add to heave rows (docs/sketch-format.md). */
-interface IndependentFields {
-  camberChange?: number | null;
-  toeChange?: number | null;
-  trackChange?: number | null;
-  casterChange?: number | null;
-  antiDive?: number | null;
-  kingpin?: { inclination: number; caster: number; scrubRadius: number; trail: number } | null;
+const LENGTH = memberEntry('length');
+const LENGTH_CHANGE = memberEntry('lengthChange');
+const MOTION_RATIO = memberEntry('motionRatio');
+const WHEEL_RATE = memberEntry('wheelRate');
+
+function capitalized(words: string): string {
+  return words.charAt(0).toUpperCase() + words.slice(1);
 }
 
 function memberLines(
@@ -94,7 +105,7 @@ function memberLines(
     const name = m.kind === 'shock' ? 'Shock' : 'Spring';
     const line: ReadoutLine = {
       key: `member-${m.id}`,
-      label: `${name} ${m.id} length`,
+      label: `${name} ${m.id} ${LENGTH.label}`,
       group: 'members',
       member: m.id,
       ...showLength(r.length, u),
@@ -113,7 +124,7 @@ function memberLines(
       sweep === 'roll' ? 'motion ratio is taken in heave (wheel travel), not in roll' : 'not defined here';
     lines.push({
       key: `mr-${m.id}`,
-      label: `${name} ${m.id} motion ratio`,
+      label: `${name} ${m.id} ${MOTION_RATIO.label}`,
       group: 'members',
       member: m.id,
       ...showRatio(r.motionRatio, mrReason),
@@ -121,7 +132,8 @@ function memberLines(
     if (m.kind === 'spring' && m.rate !== undefined) {
       lines.push({
         key: `wr-${m.id}`,
-        label: `Wheel rate (${m.id})`,
+        // A wheel rate belongs to the wheel: named first, its spring after it.
+        label: `${capitalized(WHEEL_RATE.label)} (${m.id})`,
         group: 'members',
         member: m.id,
         ...showRate(r.wheelRate, mrReason),
@@ -131,7 +143,7 @@ function memberLines(
       // A leaf-sprung axle: the stroke each shock uses in travel and what the wind-up alone takes of it.
       lines.push({
         key: `dl-${m.id}`,
-        label: `${name} ${m.id} length change (${sweep})`,
+        label: `${name} ${m.id} ${LENGTH_CHANGE.label} (${sweep})`,
         group: 'members',
         member: m.id,
         ...showLength(r.lengthChange, u, undefined, true),
@@ -139,7 +151,7 @@ function memberLines(
       const w = windUp.members[m.id];
       lines.push({
         key: `wu-${m.id}`,
-        label: `${name} ${m.id} length change (wind-up)`,
+        label: `${name} ${m.id} ${LENGTH_CHANGE.label} (wind-up)`,
         group: 'members',
         member: m.id,
         ...showLength(w?.lengthChange, u, 'not solved under the wind-up', true),
@@ -147,16 +159,6 @@ function memberLines(
     }
   }
   return lines;
-}
-
-function drivelineLines(d: HeaveRow['driveline'], u: LengthUnit): ReadoutLine[] {
-  if (!d) return [];
-  return [
-    { key: 'ds-out', label: 'Output joint angle', group: 'driveline', ...showAngle(d.outputAngle) },
-    { key: 'ds-pin', label: 'Pinion joint angle', group: 'driveline', ...showAngle(d.pinionAngle) },
-    { key: 'ds-plunge', label: 'Driveshaft plunge', group: 'driveline', ...showLength(d.plunge, u, undefined, true) },
-    { key: 'ds-len', label: 'Driveshaft length', group: 'driveline', ...showLength(d.length, u) },
-  ];
 }
 
 /** A force in N, shown in N in both unit systems as the sweep gives it; tension positive. */
@@ -179,31 +181,34 @@ function leafLines(
   u: LengthUnit,
 ): ReadoutLine[] {
   const lines: ReadoutLine[] = [];
-  if (hasShackle)
+  if (hasShackle) {
+    const shackle = metricEntry(readoutLeafMetric);
     lines.push({
-      key: 'shackle',
-      label: 'Shackle angle',
+      key: shackle.id,
+      label: shackle.label,
       group: 'leaf',
-      ...showAngle(shackleAngle, 'shackle angle is taken in heave, not in roll', true, 1),
+      ...showMetric(shackle, shackleAngle, u, shackle.missing),
     });
+  }
   if (!windUp) return lines;
   const torque = showTorque(windUp.torque).text;
+  const [angle, rate, bind] = (['angle', 'rate', 'bind'] as const).map(windUpEntry);
   lines.push(
     {
-      key: 'windup',
-      label: `Wind-up at ride (${torque})`,
+      key: angle.id,
+      label: `${angle.label} (${torque})`,
       group: 'leaf',
-      ...showAngle(windUp.angle, 'the springs do not resist wind-up', true),
+      ...showAngle(angle.read(windUp), angle.missing, true),
     },
     {
-      key: 'windup-rate',
-      label: 'Wind-up rate',
+      key: rate.id,
+      label: rate.label,
       group: 'leaf',
-      ...(Number.isFinite(windUp.rate)
-        ? { text: `${fixed(windUp.rate, 0)} N·m/°` }
-        : { text: MISSING, reason: 'the springs have no rate' }),
+      ...(Number.isFinite(rate.read(windUp))
+        ? { text: `${fixed(rate.read(windUp), 0)} ${quantityUnitOf(rate.quantity, u)}` }
+        : { text: MISSING, reason: rate.missing }),
     },
-    { key: 'windup-bind', label: 'Bind under wind-up', group: 'leaf', ...showLength(windUp.bind, u) },
+    { key: bind.id, label: bind.label, group: 'leaf', ...showLength(bind.read(windUp), u) },
   );
   return lines;
 }
@@ -235,7 +240,7 @@ function loadLines(
     if (reading.overLimit) marks.push('over limit');
     const line: ReadoutLine = {
       key: `load-${m.id}`,
-      label: `${name} ${m.id} load${sweep === 'roll' ? ' at ride' : ''}`,
+      label: `${name} ${m.id} ${linkLoadEntry.label}${sweep === 'roll' ? ' at ride' : ''}`,
       group: 'loads',
       member: m.id,
       ...shown,
@@ -260,7 +265,34 @@ function loadLines(
   return lines;
 }
 
-/** The readout lines for the row at the cursor. */
+type Reasons = ReturnType<typeof reasons>;
+
+/**
+ * The line of one registry metric at a row, or none where the readout leaves it out: a solid
+ * axle's quantity without an axle, or an addition the sweep does not give for this sketch.
+ */
+function metricLine(
+  ref: MetricRef,
+  row: HeaveRow | RollRow,
+  ctx: SweepContext,
+  why: Reasons,
+  u: LengthUnit,
+): ReadoutLine | null {
+  const entry = metricEntry(ref) as MetricEntry<'heave'> | MetricEntry<'roll'>;
+  const read = entry.read as (r: HeaveRow | RollRow) => number | null | undefined;
+  const given = entry.given as ((r: HeaveRow | RollRow) => boolean) | undefined;
+  if (entry.axle === 'only' && !ctx.hasAxle) return null;
+  if (entry.axle === 'or-defined' && !ctx.hasAxle && read(row) === null) return null;
+  if (given && !given(row)) return null;
+  return {
+    key: entry.id,
+    label: entry.shortLabel ?? entry.label,
+    group: entry.group ?? 'geometry',
+    ...showMetric(entry, read(row), u, entry.why ? why[entry.why] : entry.missing),
+  };
+}
+
+/** The readout lines for the row at the cursor, in the order of the registry's readout views. */
 export function readoutLines(
   cursor: CursorRow | null,
   ctx: SweepContext,
@@ -270,100 +302,20 @@ export function readoutLines(
   if (!cursor) return [];
   const why = reasons(ctx);
   const hasShackle = ctx.members.some((m) => m.kind === 'leaf-half');
-  if (cursor.sweep === 'heave') {
-    const r = cursor.row;
-    const ind = r as HeaveRow & IndependentFields;
-    const lines: ReadoutLine[] = [
-      { key: 'position', label: 'Position', group: 'position', text: showPosition('heave', r.travel, u) },
-      // Pinion angle and lateral shift belong to a solid axle: an independent layout does not list them.
-      ...(ctx.hasAxle
-        ? [
-            {
-              key: 'pinion',
-              label: 'Pinion angle change',
-              group: 'axle' as const,
-              ...showAngle(r.pinionAngleChange, why.axle, true),
-            },
-            {
-              key: 'lateral',
-              label: 'Lateral shift',
-              group: 'axle' as const,
-              ...showLength(r.lateralShift, u, why.axle, true),
-            },
-          ]
-        : []),
-      { key: 'foreaft', label: 'Fore-aft shift', group: 'axle', ...showLength(r.foreAftShift, u, undefined, true) },
-      ...(ctx.hasAxle || r.antiSquat !== null
-        ? [{ key: 'antisquat', label: 'Anti-squat', group: 'geometry' as const, ...showPercent(r.antiSquat, why.ic) }]
-        : []),
-      { key: 'ic-x', label: 'Instant centre x', group: 'geometry', ...showLength(r.instantCenter?.x, u, why.ic) },
-      { key: 'ic-z', label: 'Instant centre height', group: 'geometry', ...showLength(r.instantCenter?.z, u, why.ic) },
-      { key: 'rc', label: 'Roll centre height', group: 'geometry', ...showLength(r.rollCenterHeight, u, why.rc) },
-      { key: 'bind', label: 'Bind', group: 'geometry', ...showLength(r.bind, u) },
-    ];
-    if (ind.camberChange !== undefined)
-      lines.push({
-        key: 'camber',
-        label: 'Camber change',
-        group: 'axle',
-        ...showAngle(ind.camberChange, undefined, true),
-      });
-    if (ind.toeChange !== undefined)
-      lines.push({
-        key: 'toe',
-        label: 'Toe change (bump steer)',
-        group: 'axle',
-        ...showAngle(ind.toeChange, undefined, true, 3),
-      });
-    if (ind.trackChange !== undefined)
-      lines.push({
-        key: 'track',
-        label: 'Track change',
-        group: 'axle',
-        ...showLength(ind.trackChange, u, undefined, true),
-      });
-    if (ind.casterChange !== undefined)
-      lines.push({
-        key: 'caster',
-        label: 'Caster change',
-        group: 'axle',
-        ...showAngle(ind.casterChange, undefined, true),
-      });
-    if (ind.antiDive !== undefined)
-      lines.push({ key: 'antidive', label: 'Anti-dive', group: 'geometry', ...showPercent(ind.antiDive, why.ic) });
-    if (ind.kingpin !== undefined) {
-      const k = ind.kingpin;
-      const level = 'ball joints level: no kingpin axis';
-      lines.push(
-        { key: 'kpi', label: 'Kingpin inclination', group: 'geometry', ...showAngle(k?.inclination, level) },
-        { key: 'kp-caster', label: 'Caster', group: 'geometry', ...showAngle(k?.caster, level) },
-        { key: 'scrub', label: 'Scrub radius', group: 'geometry', ...showLength(k?.scrubRadius, u, level) },
-        { key: 'trail', label: 'Mechanical trail', group: 'geometry', ...showLength(k?.trail, u, level) },
-      );
-    }
-    return [
-      ...lines,
-      ...leafLines(r.shackleAngle, hasShackle, extras.windUp, u),
-      ...(extras.loads ? loadLines(ctx, extras.loads, r.linkLoads, 'heave') : []),
-      ...memberLines(ctx, r.members, 'heave', u, extras.windUp),
-      ...drivelineLines(r.driveline, u),
-    ];
-  }
   const r = cursor.row;
-  return [
-    { key: 'position', label: 'Position', group: 'position', text: showPosition('roll', r.roll, u) },
-    { key: 'left', label: 'Left wheel travel', group: 'axle', ...showLength(r.leftTravel, u, undefined, true) },
-    { key: 'right', label: 'Right wheel travel', group: 'axle', ...showLength(r.rightTravel, u, undefined, true) },
-    {
-      key: 'rollsteer',
-      label: 'Roll steer',
-      group: 'geometry',
-      ...showPercent(r.rollSteer, 'no roll: roll steer is a ratio to the roll angle', true),
-    },
-    { key: 'bind', label: 'Bind', group: 'geometry', ...showLength(r.bind, u) },
-    ...leafLines(undefined, hasShackle, extras.windUp, u),
-    ...(extras.loads ? loadLines(ctx, extras.loads, undefined, 'roll') : []),
-    ...memberLines(ctx, r.members, 'roll', u, extras.windUp),
-    ...drivelineLines(r.driveline, u),
-  ];
+  const heave = cursor.sweep === 'heave' ? cursor.row : undefined;
+  const lines: ReadoutLine[] = [];
+  for (const item of cursor.sweep === 'heave' ? readoutHeaveView : readoutRollView) {
+    if (isMetricRef(item)) {
+      const line = metricLine(item, r, ctx, why, u);
+      if (line) lines.push(line);
+    } else if (item === '*position') {
+      const at = heave ? heave.travel : (r as RollRow).roll;
+      lines.push({ key: 'position', label: 'Position', group: 'position', text: showPosition(cursor.sweep, at, u) });
+    } else if (item === '*leaf') lines.push(...leafLines(heave?.shackleAngle, hasShackle, extras.windUp, u));
+    else if (item === '*loads') {
+      if (extras.loads) lines.push(...loadLines(ctx, extras.loads, heave?.linkLoads, cursor.sweep));
+    } else lines.push(...memberLines(ctx, r.members, cursor.sweep, u, extras.windUp));
+  }
+  return lines;
 }

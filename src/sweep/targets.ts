@@ -5,69 +5,14 @@
  * file's units: % for anti-squat and roll steer, degrees for angles, mm for lengths. The
  * field's schema is the shared one (shared/schema/boardFields.ts), so the server checks it too.
  */
-import { targetMetrics, targetsSchema, type TargetMetric } from '../../shared/schema/boardFields';
+import { targetMetrics, targetsSchema, type TargetBand, type Targets } from '../../shared/schema/boardFields';
+import type { TargetMetric } from '../../shared/schema/boardFields';
 import type { HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
+import { targetEntries, type MetricSweep } from '../../shared/kinematics/metrics/registry';
 import type { Deg, Mm } from '../../shared/units';
 
-/** A band on one metric; either end may be open. `from`/`to` limit the check to part of the sweep. */
-export interface TargetBand {
-  min?: number;
-  max?: number;
-  /** start of the window checked: mm of travel (heave metrics) or deg of roll (roll metrics) */
-  from?: number;
-  /** end of the window checked, same unit as `from` */
-  to?: number;
-}
-
-export type Targets = Partial<Record<TargetMetric, TargetBand>>;
-
-/** What kind of number a metric is, so the UI can convert and label it. */
-export type MetricQuantity = 'length' | 'angle' | 'percent';
-
-export interface MetricSpec {
-  label: string;
-  quantity: MetricQuantity;
-  /** the sweep whose rows the metric is read from; articulation is one number of the whole sweep */
-  sweep: 'heave' | 'roll' | 'limits';
-  /** true where a band is naturally symmetric about zero ("within ±3°") */
-  symmetric: boolean;
-  read?: (row: HeaveRow & RollRow) => number | null;
-}
-
-export const metricSpecs: Record<TargetMetric, MetricSpec> = {
-  antiSquat: { label: 'Anti-squat', quantity: 'percent', sweep: 'heave', symmetric: false, read: (r) => r.antiSquat },
-  pinionAngleChange: {
-    label: 'Pinion angle change',
-    quantity: 'angle',
-    sweep: 'heave',
-    symmetric: true,
-    read: (r) => r.pinionAngleChange,
-  },
-  lateralShift: {
-    label: 'Lateral shift',
-    quantity: 'length',
-    sweep: 'heave',
-    symmetric: true,
-    read: (r) => r.lateralShift,
-  },
-  foreAftShift: {
-    label: 'Fore-aft shift',
-    quantity: 'length',
-    sweep: 'heave',
-    symmetric: true,
-    read: (r) => r.foreAftShift,
-  },
-  rollCenterHeight: {
-    label: 'Roll centre height',
-    quantity: 'length',
-    sweep: 'heave',
-    symmetric: false,
-    read: (r) => r.rollCenterHeight,
-  },
-  bind: { label: 'Bind in roll', quantity: 'length', sweep: 'roll', symmetric: false, read: (r) => r.bind },
-  rollSteer: { label: 'Roll steer', quantity: 'percent', sweep: 'roll', symmetric: true, read: (r) => r.rollSteer },
-  articulation: { label: 'Articulation', quantity: 'angle', sweep: 'limits', symmetric: false },
-};
+// The board's stores and components take the band types from here, beside the checks.
+export type { TargetBand, Targets };
 
 /**
  * Bands to start from when a designer has none. Common practice, no published source:
@@ -85,7 +30,7 @@ export function readTargets(doc: unknown): Targets {
   const raw = (doc as { targets?: unknown } | null | undefined)?.targets;
   if (raw === undefined) return {};
   const res = targetsSchema.safeParse(raw);
-  return res.success ? (res.data as Targets) : {};
+  return res.success ? res.data : {};
 }
 
 /** True when a band says something (at least one end). */
@@ -107,7 +52,7 @@ export interface TargetCheck {
   value?: number;
   /** the worst value in the window, file unit */
   worst?: number;
-  sweep: MetricSpec['sweep'];
+  sweep: MetricSweep;
 }
 
 function inBand(v: number, b: TargetBand): boolean {
@@ -134,11 +79,12 @@ function outwardFromRide<T>(rows: T[], pos: (r: T) => number): T[] {
 
 /** Checks one band against a sweep result. */
 export function checkTarget(result: SweepResult, metric: TargetMetric, band: TargetBand): TargetCheck {
-  const spec = metricSpecs[metric];
+  const spec = targetEntries[metric];
   if (spec.sweep === 'limits') {
-    const value = result.limits.articulation;
+    const value = spec.read(result.limits) as number;
     return { metric, band, sweep: spec.sweep, status: inBand(value, band) ? 'met' : 'missed', value, worst: value };
   }
+  const read = spec.read as (r: HeaveRow | RollRow) => number | null | undefined;
   const rows = (spec.sweep === 'heave' ? result.heave : result.roll) as Array<HeaveRow & RollRow>;
   const pos = (r: HeaveRow & RollRow) => (spec.sweep === 'heave' ? r.travel : r.roll);
   const inWindow = rows.filter(
@@ -149,8 +95,8 @@ export function checkTarget(result: SweepResult, metric: TargetMetric, band: Tar
   let worstExcess = -1;
   let seen = 0;
   for (const r of outwardFromRide(inWindow, pos)) {
-    const v = spec.read!(r);
-    if (v === null || !Number.isFinite(v)) continue;
+    const v = read(r);
+    if (v === null || v === undefined || !Number.isFinite(v)) continue;
     seen++;
     const e = excess(v, band);
     if (e > worstExcess) {

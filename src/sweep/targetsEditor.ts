@@ -5,20 +5,22 @@
  */
 import type { LengthUnit } from '../../shared/units';
 import { fixed, fromDisplay, quantityUnit, toDisplay } from './format';
-import { metricSpecs, type TargetBand, type Targets } from './targets';
+import type { TargetBand, Targets } from './targets';
 import type { TargetMetric } from '../../shared/schema/boardFields';
+import { targetEntries } from '../../shared/kinematics/metrics/registry';
 
-export type BandField = keyof TargetBand;
+/** The fields of a band the editor sets (the band's type also keeps unknown keys of a file). */
+export type BandField = 'min' | 'max' | 'from' | 'to';
 
 /** The unit a band field is typed in: the metric's own, except a heave window (travel, a length) or roll window (deg). */
 export function fieldUnit(metric: TargetMetric, field: BandField, u: LengthUnit): string {
-  const spec = metricSpecs[metric];
+  const spec = targetEntries[metric];
   if (field === 'from' || field === 'to') return spec.sweep === 'roll' ? '°' : u;
   return quantityUnit(spec.quantity, u);
 }
 
 function fieldQuantity(metric: TargetMetric, field: BandField) {
-  const spec = metricSpecs[metric];
+  const spec = targetEntries[metric];
   if (field === 'from' || field === 'to') return spec.sweep === 'roll' ? ('angle' as const) : ('length' as const);
   return spec.quantity;
 }

@@ -1,0 +1,134 @@
+/**
+ * The quantities of the roll (articulation) sweep at ride height, and the one-number readings
+ * of the whole sweep. Signs and units as shared/kinematics/types.ts documents each field.
+ */
+import type { LimitsEntry, RollEntry } from './types';
+import { drivelineEntries, halfShaftEntries } from './heave';
+import { ALL_LAYOUTS, INDEPENDENT, SOLID_AXLE } from './layouts';
+
+const wishboneOnly = (r: { camberToGround?: unknown; rollCenter?: unknown }) =>
+  r.camberToGround !== undefined || r.rollCenter !== undefined;
+
+export const rollEntries: RollEntry[] = [
+  {
+    key: 'roll',
+    id: 'roll',
+    label: 'Roll',
+    quantity: 'angle',
+    sweep: 'roll',
+    read: (r) => r.roll,
+    signed: true,
+    sign: 'positive lifts the left wheel',
+    layouts: ALL_LAYOUTS,
+  },
+  {
+    key: 'leftTravel',
+    id: 'left',
+    label: 'Left wheel travel',
+    quantity: 'length',
+    sweep: 'roll',
+    read: (r) => r.leftTravel,
+    signed: true,
+    sign: 'positive up',
+    layouts: ALL_LAYOUTS,
+    group: 'axle',
+  },
+  {
+    key: 'rightTravel',
+    id: 'right',
+    label: 'Right wheel travel',
+    quantity: 'length',
+    sweep: 'roll',
+    read: (r) => r.rightTravel,
+    signed: true,
+    sign: 'positive up',
+    layouts: ALL_LAYOUTS,
+    group: 'axle',
+  },
+  {
+    key: 'rollSteer',
+    id: 'rollsteer',
+    label: 'Roll steer',
+    quantity: 'percent',
+    sweep: 'roll',
+    read: (r) => r.rollSteer,
+    signed: true,
+    sign: '100 · yaw / roll: positive when the axle turns its nose left as its left side lifts',
+    layouts: SOLID_AXLE,
+    group: 'geometry',
+    missing: 'no roll: roll steer is a ratio to the roll angle',
+    plotEmpty: 'No roll sweep (articulation set to 0).',
+    target: true,
+    bandEnds: ['min', 'max'],
+  },
+  {
+    key: 'bind',
+    id: 'bind',
+    label: 'Bind in roll',
+    shortLabel: 'Bind',
+    quantity: 'length',
+    sweep: 'roll',
+    read: (r) => r.bind,
+    signed: false,
+    sign: 'largest constraint residual, never negative',
+    layouts: ALL_LAYOUTS,
+    group: 'geometry',
+    plotEmpty: 'No roll sweep (articulation set to 0).',
+    target: true,
+    bandEnds: ['min', 'max'],
+  },
+  ...(
+    [
+      ['left', 'Left camber to ground'],
+      ['right', 'Right camber to ground'],
+    ] as const
+  ).map(([side, label]): RollEntry => ({
+    key: `camberToGround.${side}`,
+    id: `camber-ground-${side}`,
+    label,
+    quantity: 'angle',
+    sweep: 'roll',
+    read: (r) => r.camberToGround?.[side],
+    given: wishboneOnly,
+    signed: true,
+    sign: 'change from ride, positive when the top leans out',
+    layouts: INDEPENDENT,
+  })),
+  ...(
+    [
+      ['y', 'Roll centre y', 'positive to the left, from the centreline'],
+      ['z', 'Roll centre height in roll', "height in the frame's axes, from the ground at ride"],
+    ] as const
+  ).map(([axis, label, sign]): RollEntry => ({
+    key: `rollCenter.${axis}`,
+    id: `rc-${axis}`,
+    label,
+    point: 'Roll centre',
+    quantity: 'length',
+    sweep: 'roll',
+    read: (r) => r.rollCenter?.[axis] ?? null,
+    given: wishboneOnly,
+    signed: false,
+    sign,
+    layouts: INDEPENDENT,
+  })),
+  ...(drivelineEntries('roll', false) as RollEntry[]),
+  ...(halfShaftEntries('roll', false) as RollEntry[]),
+];
+
+export const limitsEntries: LimitsEntry[] = [
+  {
+    key: 'articulation',
+    id: 'articulation',
+    label: 'Articulation',
+    quantity: 'angle',
+    sweep: 'limits',
+    read: (l) => l.articulation,
+    signed: false,
+    digits: 1,
+    sign: 'the roll reached both ways (the smaller side), never negative',
+    layouts: ALL_LAYOUTS,
+    target: true,
+    bandEnds: ['min'],
+  },
+];

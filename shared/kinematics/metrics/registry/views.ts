@@ -1,0 +1,170 @@
+/**
+ * Where each screen shows which metrics, in order. A screen walks its view and takes labels,
+ * units and readers from the registry; it holds no list of its own. Items starting with `*`
+ * stand for the readings a screen builds itself around the metrics (the cursor position,
+ * per-member readings, the leaf-spring and load sections, the shock plot).
+ */
+import type { MetricSweep } from './types';
+
+/** A metric of one sweep, by key (the sweep's own key names are unique, not across sweeps). */
+export interface MetricRef {
+  sweep: MetricSweep;
+  key: string;
+}
+
+const heave = (key: string): MetricRef => ({ sweep: 'heave', key });
+const roll = (key: string): MetricRef => ({ sweep: 'roll', key });
+const limits = (key: string): MetricRef => ({ sweep: 'limits', key });
+
+export type ViewItem<M extends string> = MetricRef | M;
+
+const DRIVELINE = ['driveline.outputAngle', 'driveline.pinionAngle', 'driveline.plunge', 'driveline.length'];
+
+/** The readout of a heave row: the metrics first, then the sections built around them. */
+export const readoutHeaveView: ViewItem<'*position' | '*leaf' | '*loads' | '*members'>[] = [
+  '*position',
+  ...[
+    'pinionAngleChange',
+    'lateralShift',
+    'foreAftShift',
+    'antiSquat',
+    'instantCenter.x',
+    'instantCenter.z',
+    'rollCenterHeight',
+    'bind',
+    'camberChange',
+    'toeChange',
+    'trackChange',
+    'casterChange',
+    'antiDive',
+    'kingpin.inclination',
+    'kingpin.caster',
+    'kingpin.scrubRadius',
+    'kingpin.trail',
+  ].map(heave),
+  '*leaf',
+  '*loads',
+  '*members',
+  ...DRIVELINE.map(heave),
+];
+
+/** The readout of a roll row. */
+export const readoutRollView: ViewItem<'*position' | '*leaf' | '*loads' | '*members'>[] = [
+  '*position',
+  ...['leftTravel', 'rightTravel', 'rollSteer', 'bind'].map(roll),
+  '*leaf',
+  '*loads',
+  '*members',
+  ...DRIVELINE.map(roll),
+];
+
+/** The readout's leaf-spring section starts with this metric (the wind-up lines follow). */
+export const readoutLeafMetric = heave('shackleAngle');
+
+/** Travel plots for a layout with a solid axle, in board order: travel quantities, the shocks, then roll. */
+export const plotsAxleView: ViewItem<'*shocks'>[] = [
+  ...[
+    'pinionAngleChange',
+    'lateralShift',
+    'antiSquat',
+    'foreAftShift',
+    'camberChange',
+    'toeChange',
+    'trackChange',
+    'antiDive',
+  ].map(heave),
+  '*shocks',
+  ...['bind', 'rollSteer'].map(roll),
+];
+
+/** Travel plots for independent layouts: the wheel's own attitude first. */
+export const plotsIndependentView: ViewItem<'*shocks'>[] = [
+  ...['camberChange', 'toeChange', 'trackChange', 'antiSquat', 'antiDive', 'foreAftShift'].map(heave),
+  '*shocks',
+  ...['bind', 'rollSteer'].map(roll),
+];
+
+/** The targets table, in order (the schema's target metrics, which a test holds equal). */
+export const targetsView: MetricRef[] = [
+  heave('antiSquat'),
+  heave('pinionAngleChange'),
+  heave('lateralShift'),
+  heave('foreAftShift'),
+  heave('rollCenterHeight'),
+  roll('bind'),
+  roll('rollSteer'),
+  limits('articulation'),
+];
+
+/**
+ * The heave rows' CSV columns, in order. `*members` is each member's readings, `*linkLoads`
+ * each link's load; a metric the sweep does not give for the sketch (judged on the ride row)
+ * has no column.
+ */
+export const csvView: ViewItem<'*members' | '*linkLoads'>[] = [
+  ...[
+    'travel',
+    'pose.x',
+    'pose.y',
+    'pose.z',
+    'pose.roll',
+    'pose.pitch',
+    'pose.yaw',
+    'pinionAngleChange',
+    'lateralShift',
+    'foreAftShift',
+    'instantCenter.x',
+    'instantCenter.z',
+    'antiSquat',
+    'rollCenterHeight',
+    'bind',
+  ].map(heave),
+  '*members',
+  ...[
+    'camberChange',
+    'toeChange',
+    'trackChange',
+    'casterChange',
+    'frontViewInstantCenter.y',
+    'frontViewInstantCenter.z',
+    'antiDive',
+    'kingpin.inclination',
+    'kingpin.caster',
+    'kingpin.scrubRadius',
+    'kingpin.trail',
+    'driveline.length',
+    'driveline.plunge',
+    'driveline.outputAngle',
+    'driveline.pinionAngle',
+    'shackleAngle',
+    'halfShafts.left.length',
+    'halfShafts.left.plunge',
+    'halfShafts.left.innerAngle',
+    'halfShafts.left.outerAngle',
+    'halfShafts.right.length',
+    'halfShafts.right.plunge',
+    'halfShafts.right.innerAngle',
+    'halfShafts.right.outerAngle',
+  ].map(heave),
+  '*linkLoads',
+];
+
+/**
+ * The build sheet's geometry lines: `reached` is the sweep's limit, `ride` the ride row's value,
+ * `range` the smallest and largest over the travel; `point` pairs a point's coordinates.
+ */
+export type SheetItem =
+  | { at: 'reached'; metric: MetricRef }
+  | { at: 'ride'; metric: MetricRef }
+  | { at: 'range'; metric: MetricRef }
+  | { at: 'ride-point'; metrics: [MetricRef, MetricRef] };
+
+export const sheetView: SheetItem[] = [
+  { at: 'reached', metric: heave('travel') },
+  { at: 'reached', metric: limits('articulation') },
+  { at: 'ride', metric: heave('antiSquat') },
+  { at: 'ride-point', metrics: [heave('instantCenter.x'), heave('instantCenter.z')] },
+  { at: 'ride', metric: heave('rollCenterHeight') },
+  { at: 'range', metric: heave('pinionAngleChange') },
+  { at: 'range', metric: heave('lateralShift') },
+];
