@@ -229,9 +229,7 @@ export const useSweepStore = defineStore('sweep', () => {
     for (const [k, band] of Object.entries(next)) {
       if (band && Object.values(band).some((v) => v !== undefined)) clean[k as keyof Targets] = { ...band };
     }
-    // The schema's bands are loose objects (unknown keys kept): their type has an index signature Targets leaves out.
-    const targets = (Object.keys(clean).length ? clean : undefined) as Sketch['targets'];
-    return board.setTargets(targets, { label: 'Change targets' });
+    return board.setTargets(Object.keys(clean).length ? clean : undefined, { label: 'Change targets' });
   }
 
   function dispose() {

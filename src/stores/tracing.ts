@@ -19,7 +19,6 @@ import {
 import type { TracingImage } from '../../shared/schema/boardFields';
 import type { UploadInfo } from '../../shared/schema/apiResponses';
 import type { Mm } from '../../shared/units';
-import type { Sketch } from '../../shared/schema/sketch';
 
 /** Reads an image's own size in the browser (the photo must decode before it can be placed). */
 async function imageSize(url: string): Promise<{ width: number; height: number }> {
@@ -51,9 +50,7 @@ export const useTracingStore = defineStore('tracing', () => {
   }
 
   function write(view: ViewKind, img: TracingImage | null, label: string, coalesce?: string): EditResult {
-    // The schema's objects are loose (unknown keys kept): their type has an index signature Tracing leaves out.
-    const tracing = withTracing(board.sketch, view, img) as Sketch['tracing'];
-    const r = board.setTracing(tracing, { label, coalesce });
+    const r = board.setTracing(withTracing(board.sketch, view, img), { label, coalesce });
     error.value = r.ok ? '' : r.error;
     return r;
   }
