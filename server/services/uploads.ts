@@ -7,9 +7,10 @@ import { Sketch, Upload, type PublicUser } from '../models';
 import { HttpError, badRequest, notFound } from '../middleware/http-error';
 import { RESTORE_WINDOW_MS, maySeeSketch } from './sketches';
 import type { UploadInfo } from '../../shared/schema/apiResponses';
+import { UPLOAD_IMAGE_TYPES } from '../../shared/schema/requestLimits';
 
 /** What may be uploaded, decided from the file's first bytes (never from its name or the browser's claim). */
-const ALLOWED: Record<string, string> = { 'image/png': 'png', 'image/jpeg': 'jpg' };
+const ALLOWED: Readonly<Record<string, string>> = UPLOAD_IMAGE_TYPES;
 
 /** Stores an image for one of the caller's own sketches under a name the server makes. */
 export async function saveUpload(

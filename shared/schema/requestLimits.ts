@@ -10,6 +10,15 @@ export const JSON_BODY_MAX_BYTES = 256 * 1024;
 /** Largest uploaded file (bytes): a tracing photo. */
 export const UPLOAD_MAX_BYTES = 10 * 1024 * 1024;
 
+/**
+ * The image types an upload may be (decided by the server from the file's first bytes) and the file
+ * extension each is stored under. The board's file picker offers the same list.
+ */
+export const UPLOAD_IMAGE_TYPES = { 'image/png': 'png', 'image/jpeg': 'jpg' } as const;
+
+/** The accepted media types, as a file input's `accept` list. */
+export const UPLOAD_ACCEPT = Object.keys(UPLOAD_IMAGE_TYPES).join(',');
+
 const KB = 1024;
 const MB = 1024 * KB;
 

@@ -14,12 +14,10 @@ import {
   type Tracing,
   type TracingImage,
 } from '../../shared/schema/boardFields';
-import { UPLOAD_MAX_BYTES, byteSizeText } from '../../shared/schema/requestLimits';
+import { UPLOAD_IMAGE_TYPES, UPLOAD_MAX_BYTES, byteSizeText } from '../../shared/schema/requestLimits';
 import type { Mm } from '../../shared/units';
 import { planeToScreen, screenToPlane, type PlanePoint, type ViewKind, type ViewTransform } from './transform';
 
-/** Photos the uploads route takes (contracts: PNG or JPEG up to UPLOAD_MAX_BYTES, 10 MB). */
-const TRACING_MIME_TYPES = ['image/png', 'image/jpeg'] as const;
 /** Opacity a new photo starts with: visible but behind the linkage. */
 export const DEFAULT_TRACING_OPACITY = 0.5;
 /** Two scale points closer than this on the photo (image px) cannot give a trustworthy scale. */
@@ -44,8 +42,7 @@ export function withTracing(doc: unknown, view: ViewKind, img: TracingImage | nu
 
 /** Why a file cannot be a tracing, or null when it can. */
 export function photoProblem(file: { type: string; size: number; name: string }): string | null {
-  if (!(TRACING_MIME_TYPES as readonly string[]).includes(file.type))
-    return `“${file.name}” is not a PNG or JPEG photo.`;
+  if (!Object.hasOwn(UPLOAD_IMAGE_TYPES, file.type)) return `“${file.name}” is not a PNG or JPEG photo.`;
   if (file.size > UPLOAD_MAX_BYTES)
     return `“${file.name}” is ${(file.size / 1024 / 1024).toFixed(1)} MB; a tracing may be up to ${byteSizeText(UPLOAD_MAX_BYTES)}.`;
   if (file.size === 0) return `“${file.name}” is empty.`;

@@ -18,7 +18,7 @@ declare global {
   }
 }
 
-export function registerCanvasHook(view: ViewKind, hook: CanvasHook) {
+export function useCanvasTestHook(view: ViewKind, hook: CanvasHook) {
   window.arcwrightBoard ??= {};
   window.arcwrightBoard[view] = hook;
   onBeforeUnmount(() => {
