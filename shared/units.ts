@@ -56,34 +56,65 @@ export function radToDeg(v: Rad): Deg {
 }
 
 /**
+ * Exact by definition: the international avoirdupois pound is 0.45359237 kg (international yard and
+ * pound agreement, 1959) and standard gravity 9.80665 m/s² (3rd CGPM, 1901), so 1 lbf = 4.4482216152605 N.
+ */
+export const N_PER_LBF = 4.4482216152605;
+
+/**
+ * N·m in one lbf·ft: a pound-force acting at a foot (0.3048 m), 4.4482216152605 × 0.3048 = 1.35581794833140040
+ * exactly (written out: 12 × 25.4 / 1000 in floating point is not quite 0.3048).
+ */
+export const NM_PER_LBF_FT = 1.3558179483314004;
+
+/**
  * What kind of number a sweep quantity is, so that it is converted and labelled for display:
- * lengths in mm (the user may see inches), angles in degrees, percentages and plain ratios as
- * they are, rates in N/mm, forces in N, torques in N·m and angular rates in N·m per degree in both
- * unit systems.
+ * lengths in mm, rates in N/mm, forces in N, torques in N·m and angular rates in N·m per degree
+ * (inches, lbf/in, lbf, lbf·ft and lbf·ft per degree when the user picks inches); angles in
+ * degrees, percentages and plain ratios as they are in both unit systems.
  */
 export type QuantityKind = 'length' | 'angle' | 'percent' | 'ratio' | 'rate' | 'force' | 'torque' | 'angularRate';
 
+interface QuantityUnits {
+  /** the unit the file, the API and the CSV use (shown when the user picks mm) */
+  file: string;
+  /** the unit shown when the user picks inches */
+  inch: string;
+  /** how many file units one inch-system unit is */
+  filePerInch: number;
+}
+
+/** One conversion per quantity kind: the only place a display unit of a sweep quantity is defined. */
+const QUANTITY_UNITS: Record<QuantityKind, QuantityUnits> = {
+  length: { file: 'mm', inch: 'in', filePerInch: MM_PER_INCH },
+  angle: { file: '°', inch: '°', filePerInch: 1 },
+  percent: { file: '%', inch: '%', filePerInch: 1 },
+  ratio: { file: '', inch: '', filePerInch: 1 },
+  // N/mm per lbf/in: a pound-force over an inch.
+  rate: { file: 'N/mm', inch: 'lbf/in', filePerInch: N_PER_LBF / MM_PER_INCH },
+  force: { file: 'N', inch: 'lbf', filePerInch: N_PER_LBF },
+  torque: { file: 'N·m', inch: 'lbf·ft', filePerInch: NM_PER_LBF_FT },
+  angularRate: { file: 'N·m/°', inch: 'lbf·ft/°', filePerInch: NM_PER_LBF_FT },
+};
+
 /** A value in the file's unit (mm, deg, %, N/mm, N, N·m) in the display unit, as a number. */
 export function quantityToUnit(v: number, q: QuantityKind, u: LengthUnit): number {
-  return q === 'length' ? mmToUnit(v, u) : v;
+  if (u === 'mm') return v;
+  const f = QUANTITY_UNITS[q].filePerInch;
+  return f === 1 ? v : v / f;
 }
 
 /** A display value back to the file's unit. */
 export function unitToQuantity(v: number, q: QuantityKind, u: LengthUnit): number {
-  return q === 'length' ? unitToMm(v, u) : v;
+  return u === 'mm' ? v : v * QUANTITY_UNITS[q].filePerInch;
 }
-
-const QUANTITY_UNITS: Record<Exclude<QuantityKind, 'length'>, string> = {
-  angle: '°',
-  percent: '%',
-  ratio: '',
-  rate: 'N/mm',
-  force: 'N',
-  torque: 'N·m',
-  angularRate: 'N·m/°',
-};
 
 /** The display unit of a quantity kind. */
 export function quantityUnitOf(q: QuantityKind, u: LengthUnit): string {
-  return q === 'length' ? u : QUANTITY_UNITS[q];
+  return u === 'in' ? QUANTITY_UNITS[q].inch : QUANTITY_UNITS[q].file;
+}
+
+/** The unit a quantity kind has in files, the API and the CSV export, whatever the user shows. */
+export function quantityFileUnit(q: QuantityKind): string {
+  return QUANTITY_UNITS[q].file;
 }

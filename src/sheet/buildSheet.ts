@@ -85,7 +85,7 @@ function memberNote(m: Sketch['members'][number], result: SweepResult | null, u:
   }
   if (m.kind === 'spring') {
     const mr = result?.ride.members[m.id]?.motionRatio;
-    const rate = m.rate === undefined ? 'no rate given' : showRate(m.rate).text;
+    const rate = m.rate === undefined ? 'no rate given' : showRate(m.rate, u).text;
     return `${rate}; ${memberEntry('motionRatio').label} ${showRatio(mr).text} at ride`;
   }
   if (m.kind === 'link' && m.group) return `${m.group} link`;

@@ -1,5 +1,5 @@
 /**
- * Flags: the warnings a sweep raised (lock-up, bind, shock limits, joint angles) and the
+ * Flags: the warnings a sweep raised (lock-up, bind, shock limits, joint angles, link loads) and the
  * targets it misses, each with where it starts and, where there is one, the member
  * concerned so a click can select it. Built from the result's structured events; the
  * words are written here in the user's units. The sweep's plain-sentence notes (its
@@ -10,7 +10,17 @@ import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
 import type { TargetCheck } from './targets';
 import { driveJointNames, targetEntries } from '../../shared/kinematics/metrics/registry';
-import { showAngle, showLength, showPosition, showQuantity, quantityUnit, toDisplay, fixed } from './format';
+import {
+  fixed,
+  quantityUnit,
+  showAngle,
+  showForce,
+  showLength,
+  showPosition,
+  showQuantity,
+  showTorque,
+  toDisplay,
+} from './format';
 
 export type FlagKind = SweepEvent['kind'] | 'target';
 
@@ -36,6 +46,9 @@ export const BIND_MEMBER_MIN_MM = 0.01;
 const RIGID_KINDS = new Set(['link', 'lateral-rod', 'tie-rod', 'shackle']);
 
 const JOINT_NAMES: Record<string, string> = driveJointNames;
+
+/** A link load smaller than this share of the tractive force is round-off of a zero, as the sweep judges it. */
+const LOAD_SIGN_RELATIVE = 1e-9;
 
 function nearestRow<T>(rows: T[], pos: (r: T) => number, at: number): T | undefined {
   let best: T | undefined;
@@ -75,6 +88,38 @@ function eventRow(result: SweepResult, e: SweepEvent): HeaveRow | RollRow | unde
   return e.sweep === 'roll'
     ? nearestRow(result.roll, (r) => r.roll, e.at)
     : nearestRow(result.heave, (r) => r.travel, e.at);
+}
+
+/**
+ * The sign of a link's load just above a reversal: the first heave row past the crossing with a
+ * load clearly off zero (rows run droop to bump, so the load reverses going up).
+ */
+function loadSignAbove(result: SweepResult, id: string, at: number): number {
+  const zero = LOAD_SIGN_RELATIVE * Math.abs(result.loads?.tractiveForce ?? 0);
+  for (const r of result.heave) {
+    const v = r.linkLoads?.[id];
+    if (r.travel > at && v !== undefined && Math.abs(v) > zero) return Math.sign(v);
+  }
+  return 0;
+}
+
+/** A link-load event in words and the user's units: where it happens, under which axle torque. */
+function loadSentence(result: SweepResult, e: SweepEvent, u: LengthUnit): string {
+  const loads = result.loads;
+  if (!loads || e.member === undefined) return e.message;
+  const link = `Link ${e.member}'s load`;
+  const under = `under ${showTorque(loads.torque, u).text}`;
+  const travel = `${showLength(e.at, u, undefined, true).text} travel`;
+  if (e.kind === 'load-reversal') {
+    const sign = loadSignAbove(result, e.member, e.at);
+    const how = sign > 0 ? ' (compression to tension going up)' : sign < 0 ? ' (tension to compression going up)' : '';
+    return `${link} reverses${how} at ${travel} ${under}.`;
+  }
+  const limit = showForce(e.value, u).text;
+  const ride = loads.members[e.member]?.ride;
+  if (e.at === 0 && ride !== undefined && e.value !== undefined && Math.abs(ride) > e.value)
+    return `${link} (${showForce(ride, u, undefined, true).text}) is beyond the ${limit} limit at ride height ${under}.`;
+  return `${link} passes the ${limit} limit at ${travel} ${under}.`;
 }
 
 function eventFlag(
@@ -133,12 +178,12 @@ function eventFlag(
     }
     case 'load-reversal':
     case 'load-limit':
-      // Loads come from statics of the axle torque; the words are the core's own sentence.
+      // Loads come from statics of the axle torque; the sentence is written here in the user's units.
       return {
         ...base,
         severity: 'warning',
         title: e.kind === 'load-reversal' ? 'Link load reverses' : 'Link load over its limit',
-        detail: `${e.message} (from ${where})`,
+        detail: `${loadSentence(result, e, u)} (from ${where})`,
         member: e.member,
       };
     default:

@@ -1,6 +1,7 @@
 /**
- * How the board writes sweep numbers: lengths in the user's unit, angles in degrees,
- * anti-squat and roll steer in %. A number that does not exist is "—" with the reason
+ * How the board writes sweep numbers: lengths, rates, forces and torques in the user's unit
+ * system (mm, N/mm, N, N·m or in, lbf/in, lbf, lbf·ft), angles in degrees, anti-squat and
+ * roll steer in %. A number that does not exist is "—" with the reason
  * beside it, never "NaN".
  */
 import {
@@ -73,10 +74,33 @@ export function showRatio(v: number | null | undefined, reason = 'not defined he
   return { text: fixed(v, 3) };
 }
 
-/** A rate in N/mm (wheel rate); shown in N/mm in both unit systems, as the file stores it. */
-export function showRate(v: number | null | undefined, reason = 'not defined here'): Shown {
+/** A rate given in N/mm (wheel rate) in the user's unit system: N/mm or lbf/in. */
+export function showRate(v: number | null | undefined, u: LengthUnit, reason = 'not defined here'): Shown {
   if (v === null || v === undefined || !Number.isFinite(v)) return missing(reason);
-  return { text: `${fixed(v, 1)} N/mm` };
+  return { text: `${fixed(quantityToUnit(v, 'rate', u), 1)} ${quantityUnitOf('rate', u)}` };
+}
+
+/** A force given in N in the user's unit system (N or lbf), whole units; tension positive where signed. */
+export function showForce(
+  v: number | null | undefined,
+  u: LengthUnit,
+  reason = 'not defined here',
+  signed = false,
+): Shown {
+  if (v === null || v === undefined || !Number.isFinite(v)) return missing(reason);
+  return { text: `${fixed(quantityToUnit(v, 'force', u), 0, signed)} ${quantityUnitOf('force', u)}` };
+}
+
+/** A torque given in N·m in the user's unit system (N·m or lbf·ft), whole units. */
+export function showTorque(v: number | null | undefined, u: LengthUnit, reason = 'not defined here'): Shown {
+  if (v === null || v === undefined || !Number.isFinite(v)) return missing(reason);
+  return { text: `${fixed(quantityToUnit(v, 'torque', u), 0)} ${quantityUnitOf('torque', u)}` };
+}
+
+/** An angular rate given in N·m per degree (wind-up rate) in N·m/° or lbf·ft/°, whole units. */
+export function showAngularRate(v: number | null | undefined, u: LengthUnit, reason = 'not defined here'): Shown {
+  if (v === null || v === undefined || !Number.isFinite(v)) return missing(reason);
+  return { text: `${fixed(quantityToUnit(v, 'angularRate', u), 0)} ${quantityUnitOf('angularRate', u)}` };
 }
 
 /** A value of a target metric (file unit) in the user's unit, angles to one digit. */
@@ -84,7 +108,10 @@ export function showQuantity(v: number | null | undefined, q: QuantityKind, u: L
   if (q === 'length') return showLength(v, u, undefined, signed);
   if (q === 'angle') return showAngle(v, undefined, signed, 1);
   if (q === 'ratio') return showRatio(v);
-  if (q === 'rate') return showRate(v);
+  if (q === 'rate') return showRate(v, u);
+  if (q === 'force') return showForce(v, u, undefined, signed);
+  if (q === 'torque') return showTorque(v, u);
+  if (q === 'angularRate') return showAngularRate(v, u);
   return showPercent(v, undefined, signed);
 }
 
@@ -102,7 +129,10 @@ export function showMetric(
   if (q === 'length') return showLength(v, u, reason, entry.signed);
   if (q === 'angle') return showAngle(v, reason, entry.signed, entry.digits ?? 2);
   if (q === 'ratio') return showRatio(v, reason);
-  if (q === 'rate') return showRate(v, reason);
+  if (q === 'rate') return showRate(v, u, reason);
+  if (q === 'force') return showForce(v, u, reason, entry.signed);
+  if (q === 'torque') return showTorque(v, u, reason);
+  if (q === 'angularRate') return showAngularRate(v, u, reason);
   return showPercent(v, reason, entry.signed);
 }
 
@@ -111,7 +141,7 @@ export function quantityUnit(q: QuantityKind, u: LengthUnit): string {
   return quantityUnitOf(q, u);
 }
 
-/** A file value (mm, deg, %) in the display unit, as a number (for plots and inputs). */
+/** A file value (mm, deg, %, N/mm, N, N·m) in the display unit, as a number (for plots and inputs). */
 export function toDisplay(v: number, q: QuantityKind, u: LengthUnit): number {
   return quantityToUnit(v, q, u);
 }

@@ -11,6 +11,8 @@ export interface SweepNumberRule {
   exclusiveMin?: boolean;
   /** empty text clears the field */
   allowEmpty: boolean;
+  /** how the bounds are written in a refusal (as they are, by default) */
+  bound?: (v: number) => string;
 }
 
 export type SweepNumberParse = { ok: true; value: number | undefined } | { ok: false; error: string };
@@ -29,8 +31,9 @@ export function parseSweepNumber(text: string, rule: SweepNumberRule): SweepNumb
     return { ok: false, error: `${rule.name}: "${text.trim()}" is not a number (${rule.unit}).` };
   const low = rule.exclusiveMin ? v <= rule.min : v < rule.min;
   if (low || v > rule.max) {
-    const lo = rule.exclusiveMin ? `above ${rule.min}` : `at least ${rule.min}`;
-    return { ok: false, error: `${rule.name} must be ${lo} and at most ${rule.max} ${rule.unit}.` };
+    const b = rule.bound ?? String;
+    const lo = rule.exclusiveMin ? `above ${b(rule.min)}` : `at least ${b(rule.min)}`;
+    return { ok: false, error: `${rule.name} must be ${lo} and at most ${b(rule.max)} ${rule.unit}.` };
   }
   return { ok: true, value: v };
 }

@@ -5,7 +5,7 @@
 import type { HeaveRow, RollRow } from '../../shared/kinematics';
 import type { LinkLoadSummary, WindUpReading } from '../../shared/kinematics/types';
 import type { SketchMember } from '../../shared/schema/sketch';
-import { quantityUnitOf, type LengthUnit } from '../../shared/units';
+import type { LengthUnit } from '../../shared/units';
 import {
   isMetricRef,
   metricEntry,
@@ -19,14 +19,15 @@ import {
   type MetricRef,
 } from '../../shared/kinematics/metrics/registry';
 import {
-  fixed,
-  MISSING,
   showAngle,
+  showAngularRate,
+  showForce,
   showLength,
   showMetric,
   showPosition,
   showRate,
   showRatio,
+  showTorque,
   type Shown,
 } from './format';
 
@@ -136,7 +137,7 @@ function memberLines(
         label: `${capitalized(WHEEL_RATE.label)} (${m.id})`,
         group: 'members',
         member: m.id,
-        ...showRate(r.wheelRate, mrReason),
+        ...showRate(r.wheelRate, u, mrReason),
       });
     }
     if (windUp) {
@@ -161,18 +162,6 @@ function memberLines(
   return lines;
 }
 
-/** A force in N, shown in N in both unit systems as the sweep gives it; tension positive. */
-export function showForce(v: number | null | undefined, reason = 'not defined here'): Shown {
-  if (v === null || v === undefined || !Number.isFinite(v)) return { text: MISSING, reason };
-  return { text: `${fixed(v, 0, true)} N` };
-}
-
-/** A torque in N·m. */
-export function showTorque(v: number | null | undefined, reason = 'not defined here'): Shown {
-  if (v === null || v === undefined || !Number.isFinite(v)) return { text: MISSING, reason };
-  return { text: `${fixed(v, 0)} N·m` };
-}
-
 /** The leaf-spring lines: shackle angle at the cursor, the axle's wind-up at ride under the axle torque. */
 function leafLines(
   shackleAngle: number | null | undefined,
@@ -191,7 +180,7 @@ function leafLines(
     });
   }
   if (!windUp) return lines;
-  const torque = showTorque(windUp.torque).text;
+  const torque = showTorque(windUp.torque, u).text;
   const [angle, rate, bind] = (['angle', 'rate', 'bind'] as const).map(windUpEntry);
   lines.push(
     {
@@ -204,9 +193,7 @@ function leafLines(
       key: rate.id,
       label: rate.label,
       group: 'leaf',
-      ...(Number.isFinite(rate.read(windUp))
-        ? { text: `${fixed(rate.read(windUp), 0)} ${quantityUnitOf(rate.quantity, u)}` }
-        : { text: MISSING, reason: rate.missing }),
+      ...showMetric(rate, rate.read(windUp), u, rate.missing),
     },
     { key: bind.id, label: bind.label, group: 'leaf', ...showLength(bind.read(windUp), u) },
   );
@@ -223,6 +210,7 @@ function loadLines(
   loads: LinkLoadSummary,
   rowLoads: Record<string, number> | undefined,
   sweep: 'heave' | 'roll',
+  u: LengthUnit,
 ): ReadoutLine[] {
   const lines: ReadoutLine[] = [];
   const split = loads.indeterminate
@@ -234,7 +222,7 @@ function loadLines(
     if (!reading) continue;
     const name = m.kind === 'lateral-rod' ? 'Lateral rod' : 'Link';
     const at = sweep === 'heave' ? rowLoads?.[m.id] : reading.ride;
-    const shown = showForce(at, 'the links do not locate the axle at this position');
+    const shown = showForce(at, u, 'the links do not locate the axle at this position', linkLoadEntry.signed);
     const marks: string[] = [];
     if (reading.reverses) marks.push('reverses');
     if (reading.overLimit) marks.push('over limit');
@@ -253,7 +241,7 @@ function loadLines(
           split,
           reading.reverses ? 'changes sign within the travel' : '',
           reading.overLimit && loads.limit !== null
-            ? `passes the limit of ${fixed(loads.limit, 0)} N within the travel`
+            ? `passes the limit of ${showForce(loads.limit, u).text} within the travel`
             : '',
         ]
           .filter(Boolean)
@@ -314,7 +302,7 @@ export function readoutLines(
       lines.push({ key: 'position', label: 'Position', group: 'position', text: showPosition(cursor.sweep, at, u) });
     } else if (item === '*leaf') lines.push(...leafLines(heave?.shackleAngle, hasShackle, extras.windUp, u));
     else if (item === '*loads') {
-      if (extras.loads) lines.push(...loadLines(ctx, extras.loads, heave?.linkLoads, cursor.sweep));
+      if (extras.loads) lines.push(...loadLines(ctx, extras.loads, heave?.linkLoads, cursor.sweep, u));
     } else lines.push(...memberLines(ctx, r.members, cursor.sweep, u, extras.windUp));
   }
   return lines;

@@ -3,7 +3,7 @@
  * for an open end. A box that does not hold a number, or a band whose lower end is above
  * its upper end, is refused with a message and changes nothing.
  */
-import type { LengthUnit } from '../../shared/units';
+import type { LengthUnit, QuantityKind } from '../../shared/units';
 import { fixed, fromDisplay, quantityUnit, toDisplay } from './format';
 import type { TargetBand, Targets } from './targets';
 import type { TargetMetric } from '../../shared/schema/boardFields';
@@ -19,19 +19,31 @@ export function fieldUnit(metric: TargetMetric, field: BandField, u: LengthUnit)
   return quantityUnit(spec.quantity, u);
 }
 
-function fieldQuantity(metric: TargetMetric, field: BandField) {
+function fieldQuantity(metric: TargetMetric, field: BandField): QuantityKind {
   const spec = targetEntries[metric];
   if (field === 'from' || field === 'to') return spec.sweep === 'roll' ? ('angle' as const) : ('length' as const);
   return spec.quantity;
+}
+
+/**
+ * A band end given in the file's unit (mm, deg, %, N/mm, N, N·m) as its box shows it in the user's unit:
+ * three digits for inches (a thousandth of an inch is 0.0254 mm), two for the rest.
+ */
+export function bandValueText(v: number, q: QuantityKind, u: LengthUnit): string {
+  const shown = toDisplay(v, q, u);
+  return String(+fixed(shown, q === 'length' && u === 'in' ? 3 : 2).replace('\u2212', '-'));
+}
+
+/** A band end typed in the user's unit, in the file's unit (what the sketch stores). */
+export function bandValueFromTyped(n: number, q: QuantityKind, u: LengthUnit): number {
+  return fromDisplay(n, q, u);
 }
 
 /** A band field's value as the input box shows it ('' for an open end). */
 export function fieldText(targets: Targets, metric: TargetMetric, field: BandField, u: LengthUnit): string {
   const v = targets[metric]?.[field];
   if (v === undefined) return '';
-  const q = fieldQuantity(metric, field);
-  const shown = toDisplay(v, q, u);
-  return String(+fixed(shown, q === 'length' && u === 'in' ? 3 : 2).replace('\u2212', '-'));
+  return bandValueText(v, fieldQuantity(metric, field), u);
 }
 
 export type EditOutcome = { ok: true; targets: Targets } | { ok: false; error: string };
@@ -50,7 +62,7 @@ export function editTarget(
   else {
     const n = Number(t);
     if (!Number.isFinite(n)) return { ok: false, error: `“${text.trim()}” is not a number.` };
-    band[field] = fromDisplay(n, fieldQuantity(metric, field), u);
+    band[field] = bandValueFromTyped(n, fieldQuantity(metric, field), u);
   }
   if (band.min !== undefined && band.max !== undefined && band.min > band.max)
     return { ok: false, error: 'The lower end is above the upper end.' };
