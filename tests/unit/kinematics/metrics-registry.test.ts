@@ -233,18 +233,32 @@ describe('the metric registry', () => {
     expect(new Set(memberEntries.map((e) => e.label)).size).toBe(memberEntries.length);
   });
 
-  it('converts each quantity kind for display: lengths by the international inch (1959: 25.4 mm), the rest as they are', () => {
+  it('converts each quantity kind for display: lengths by the international inch (1959: 25.4 mm), forces by the pound-force', () => {
     expect(quantityToUnit(254, 'length', 'in')).toBeCloseTo(10, 12);
     expect(unitToQuantity(10, 'length', 'in')).toBeCloseTo(254, 12);
     expect(quantityToUnit(254, 'length', 'mm')).toBe(254);
-    for (const q of ['angle', 'percent', 'ratio', 'rate', 'force', 'torque', 'angularRate'] as const) {
+    // Angles, percentages and ratios are the same numbers in both unit systems.
+    for (const q of ['angle', 'percent', 'ratio'] as const) {
       expect(quantityToUnit(12.5, q, 'in')).toBe(12.5);
       expect(unitToQuantity(12.5, q, 'in')).toBe(12.5);
     }
+    // With mm chosen every kind shows in the file's unit, untouched.
+    for (const q of ['rate', 'force', 'torque', 'angularRate'] as const) {
+      expect(quantityToUnit(12.5, q, 'mm')).toBe(12.5);
+      expect(unitToQuantity(12.5, q, 'mm')).toBe(12.5);
+    }
+    // 1 lbf = 0.45359237 kg × 9.80665 m/s² = 4.4482216152605 N (NIST SP 811, appendix B); 1 ft = 0.3048 m.
+    expect(quantityToUnit(4.4482216152605, 'force', 'in')).toBeCloseTo(1, 12);
+    expect(quantityToUnit(4.4482216152605 / 25.4, 'rate', 'in')).toBeCloseTo(1, 12);
+    expect(quantityToUnit(4.4482216152605 * 0.3048, 'torque', 'in')).toBeCloseTo(1, 12);
     expect(quantityUnitOf('length', 'in')).toBe('in');
     expect(quantityUnitOf('angle', 'mm')).toBe('°');
     expect(quantityUnitOf('percent', 'mm')).toBe('%');
-    expect(quantityUnitOf('rate', 'in')).toBe('N/mm');
-    expect(quantityUnitOf('angularRate', 'in')).toBe('N·m/°');
+    expect(quantityUnitOf('rate', 'mm')).toBe('N/mm');
+    expect(quantityUnitOf('rate', 'in')).toBe('lbf/in');
+    expect(quantityUnitOf('force', 'in')).toBe('lbf');
+    expect(quantityUnitOf('torque', 'in')).toBe('lbf·ft');
+    expect(quantityUnitOf('angularRate', 'mm')).toBe('N·m/°');
+    expect(quantityUnitOf('angularRate', 'in')).toBe('lbf·ft/°');
   });
 });
