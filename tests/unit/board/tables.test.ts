@@ -149,6 +149,26 @@ describe('member table', () => {
     expect(m.kind === 'spring' && m.rate).toBe(52.5);
   });
 
+  it('a spring rate is shown and typed in lbf/in with inches, and stored in N/mm', async () => {
+    const { wrapper, board } = await mountOnBoard(BoardMemberTable);
+    mounted = wrapper;
+    usePrefsStore().setUnits('in');
+    await nextFrame();
+    // 1 lbf/in = 0.45359237 kg × 9.80665 m/s² / 25.4 mm (international pound and inch, 1959; standard gravity).
+    const nPerMmPerLbfIn = (0.45359237 * 9.80665) / 25.4;
+    expect(board.setMemberField('SHr', 'rate', 40).ok).toBe(true);
+    await nextFrame();
+    const box = () => wrapper.get('[data-test="member-SHr-rate"]').element as HTMLInputElement;
+    expect(box().value).toBe(String(+(40 / nPerMmPerLbfIn).toFixed(2)));
+    expect(wrapper.get('[data-test="member-row-SHr"]').text()).toContain('lbf/in');
+    await type(wrapper.get('[data-test="member-SHr-rate"]'), '300 lbf/in');
+    const m = board.document!.members.find((x) => x.id === 'SHr')!;
+    expect(m.kind === 'spring' && m.rate).toBeCloseTo(300 * nPerMmPerLbfIn, 9);
+    expect(box().value).toBe('300');
+    await type(wrapper.get('[data-test="member-SHr-rate"]'), '-3');
+    expect(wrapper.get('[data-test="member-SHr-rate-error"]').text()).toMatch(/above 0 .* lbf\/in/);
+  });
+
   it('changing an end reconnects the member; delete removes it', async () => {
     const { wrapper, board } = await mountOnBoard(BoardMemberTable);
     mounted = wrapper;
