@@ -1,6 +1,7 @@
 /**
  * `npm run sweep -- path/to/sketch.json [--csv]`
- * Prints the sweep result as JSON (or the heave rows as CSV) on stdout and exits 0.
+ * Prints the sweep result as JSON (or the heave rows as CSV) on stdout and exits 0, always in the
+ * file's units (mm, degrees, %, N/mm, N, N·m) whatever unit system the board shows.
  * `npm run sweep -- --starter <layout>` prints that layout's starter sketch file instead, so a
  * user can begin from a file; an unknown layout exits 2 naming the layouts there are.
  * Bad input (unreadable file, not JSON, schema problems) exits 2 with one line per problem

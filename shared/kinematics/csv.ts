@@ -1,7 +1,8 @@
 /**
  * The heave rows of a sweep as CSV (RFC 4180: comma separated, CRLF line ends, quoted
  * where needed). One column per number, named by its path in the JSON result; units as in
- * the result (mm, deg, %, N/mm). A null (not defined) is an empty cell.
+ * the result (mm, deg, %, N/mm, N), never the inch-pound units the board may show. A null (not
+ * defined) is an empty cell.
  */
 import type { HeaveRow, SweepResult } from './types';
 import { csvView, linkLoadEntry, memberEntries, metricEntry } from './metrics/registry';
