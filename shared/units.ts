@@ -61,11 +61,14 @@ export function radToDeg(v: Rad): Deg {
  */
 export const N_PER_LBF = 4.4482216152605;
 
+/** A foot in metres, exact by the same 1959 agreement (12 × 25.4 mm). */
+export const M_PER_FOOT = 0.3048;
+
 /**
- * N·m in one lbf·ft: a pound-force acting at a foot (0.3048 m), 4.4482216152605 × 0.3048 = 1.35581794833140040
- * exactly (written out: 12 × 25.4 / 1000 in floating point is not quite 0.3048).
+ * N·m in one lbf·ft: a pound-force acting at a foot, 4.4482216152605 × 0.3048 = 1.3558179483314004 exactly
+ * (the floating-point product is the nearest double to it).
  */
-export const NM_PER_LBF_FT = 1.3558179483314004;
+export const NM_PER_LBF_FT = N_PER_LBF * M_PER_FOOT;
 
 /**
  * What kind of number a sweep quantity is, so that it is converted and labelled for display:

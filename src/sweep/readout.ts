@@ -20,7 +20,6 @@ import {
 } from '../../shared/kinematics/metrics/registry';
 import {
   showAngle,
-  showAngularRate,
   showForce,
   showLength,
   showMetric,

@@ -51,7 +51,8 @@ describe('the inch-pound units of force, rate and torque', () => {
 
   it('take the lbf·ft as a pound-force at a foot (0.3048 m)', () => {
     expect(NM_PER_LBF_FT).toBeCloseTo(KG_PER_LB * STANDARD_GRAVITY * M_PER_FT, 14);
-    expect(NM_PER_LBF_FT).toBe(1.3558179483314004);
+    // The exact product 1.3558179483314004, to 13 decimals.
+    expect(NM_PER_LBF_FT).toBeCloseTo(1.3558179483314, 13);
     // NIST SP 811 appendix B.8: 1 lbf·ft = 1.355 818 N·m.
     expect(NM_PER_LBF_FT).toBeCloseTo(1.355818, 6);
   });
