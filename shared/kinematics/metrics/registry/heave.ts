@@ -201,7 +201,7 @@ export const heaveEntries: HeaveEntry[] = [
   },
   {
     key: 'instantCenterAboveGround',
-    id: 'ic-ground',
+    id: 'ic-height',
     label: 'Instant centre height',
     quantity: 'length',
     sweep: 'heave',
@@ -235,7 +235,7 @@ export const heaveEntries: HeaveEntry[] = [
   },
   {
     key: 'rollCenterHeight',
-    id: 'rc',
+    id: 'rc-body',
     label: 'Roll centre z (body-fixed)',
     quantity: 'length',
     sweep: 'heave',
@@ -251,7 +251,7 @@ export const heaveEntries: HeaveEntry[] = [
   },
   {
     key: 'rollCenterAboveGround',
-    id: 'rc-ground',
+    id: 'rc',
     label: 'Roll centre height',
     quantity: 'length',
     sweep: 'heave',

@@ -153,7 +153,7 @@ export const rollEntries: RollEntry[] = [
   ),
   {
     key: 'rollCenterAboveGround',
-    id: 'rc-ground',
+    id: 'rc',
     label: 'Roll centre height',
     quantity: 'length',
     sweep: 'roll',
@@ -168,7 +168,7 @@ export const rollEntries: RollEntry[] = [
   },
   {
     key: 'instantCenterAboveGround',
-    id: 'ic-ground',
+    id: 'ic-height',
     label: 'Instant centre height',
     quantity: 'length',
     sweep: 'roll',

@@ -194,7 +194,7 @@ export const sheetView: SheetItem[] = [
   { at: 'reached', metric: limits('articulation') },
   { at: 'ride', metric: heave('antiSquat') },
   { at: 'ride-point', metrics: [heave('instantCenter.x'), heave('instantCenter.z')] },
-  { at: 'ride', metric: heave('rollCenterHeight') },
+  { at: 'ride', metric: heave('rollCenterAboveGround') },
   { at: 'range', metric: heave('pinionAngleChange') },
   { at: 'range', metric: heave('lateralShift') },
 ];
