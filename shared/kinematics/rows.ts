@@ -6,8 +6,9 @@
  */
 import type { MovingBodyId, SketchMember } from '../schema/sketch';
 import { cleanZero } from './clean';
+import { groundPlanBuild, heaveGroundFields, rollGroundFields, type GroundPlan } from './groundReadings';
 import { layoutReaders } from './layouts/readers';
-import type { LayoutRowPlan } from './layouts/types';
+import type { LayoutRowPlan, RollCentres } from './layouts/types';
 import { drivelineReading } from './metrics/driveline';
 import type { LinkageModel, PointModel } from './model';
 import { poseFromState } from './pose';
@@ -46,6 +47,8 @@ export interface RowPlan {
   scratch: { va: Float64Array; vb: Float64Array; tmp: Float64Array };
   /** the plans of the layout readers that found their parts, in reading order (layouts/readers.ts) */
   layouts: LayoutRowPlan[];
+  /** the ground under the wheels (groundReadings.ts): read after the layouts */
+  ground: GroundPlan;
 }
 
 export function rowPlanBuild(model: LinkageModel): RowPlan {
@@ -74,6 +77,7 @@ export function rowPlanBuild(model: LinkageModel): RowPlan {
     rot: new BodyRotations(model.bodies.length),
     scratch: { va: new Float64Array(3), vb: new Float64Array(3), tmp: new Float64Array(3) },
     layouts: layoutReaders.map((r) => r.plan(model)).filter((p): p is LayoutRowPlan => p !== null),
+    ground: groundPlanBuild(model),
   };
 }
 
@@ -171,6 +175,7 @@ export function heaveRowBuild(plan: RowPlan, solved: SolvedRow): HeaveRow {
   if (dl) row.driveline = dl;
   const place = (p: PointModel) => at.at(p);
   for (const layout of plan.layouts) if (layout.heave) Object.assign(row, layout.heave(place, solved));
+  Object.assign(row, heaveGroundFields(plan.ground, row, wl, at.at(model.wheelRight), solved.state));
   return row;
 }
 
@@ -195,5 +200,8 @@ export function rollRowBuild(plan: RowPlan, solved: SolvedRow): RollRow {
   if (dl) row.driveline = dl;
   const place = (p: PointModel) => at.at(p);
   for (const layout of plan.layouts) if (layout.roll) Object.assign(row, layout.roll(place, solved));
+  const centres: Required<RollCentres> = { rollCenter: null, instantCenter: null };
+  for (const layout of plan.layouts) if (layout.rollCentres) Object.assign(centres, layout.rollCentres(place, solved));
+  Object.assign(row, rollGroundFields(plan.ground, centres, wl, wr, solved.state, solved.roll));
   return row;
 }

@@ -99,6 +99,18 @@ export interface HeaveRow {
   antiSquat: number | null;
   /** mm, z where the lateral rod's rear-view line crosses y = 0 (without a rod: see DEVELOPERS.md); null when not defined */
   rollCenterHeight: Mm | null;
+  /**
+   * mm, the roll centre (`rollCenterHeight`, on the centreline) above the ground under the wheels at
+   * this row, measured square to that ground (metrics/ground.ts); null where the roll centre or the
+   * ground is not defined (addition)
+   */
+  rollCenterAboveGround?: Mm | null;
+  /**
+   * mm, the side-view instant centre (`instantCenter`, in the fore-aft plane through the left wheel
+   * centre) above the ground under the wheels at this row, measured square to it; null where either
+   * is not defined (addition)
+   */
+  instantCenterAboveGround?: Mm | null;
   /** mm, largest absolute constraint residual */
   bind: Mm;
   members: Record<string, MemberReading>;
@@ -108,6 +120,13 @@ export interface HeaveRow {
   camberChange?: Deg;
   /** deg, left wheel, top view, positive toe-in; on a knuckle this is the bump steer (addition: arms and knuckles) */
   toeChange?: Deg;
+  /**
+   * mm, change from ride of the left tyre's contact point's distance from the centreline, measured
+   * along the ground (metrics/ground.ts: the lowest point of the tyre circle of `vehicle.tireRadius`
+   * in the wheel plane); positive when the patch moves outward, the scrub a designer keeps small.
+   * null when no ground is found (a wheel lying flat) (addition: arms and knuckles)
+   */
+  contactTrackChange?: Mm | null;
   /** mm, change of the left wheel centre's distance from y = 0 (addition: arms and knuckles) */
   trackChange?: Mm;
   /** deg, change of the left kingpin axis' side-view angle, positive when its top moves rearward (addition: double wishbone) */
@@ -159,6 +178,31 @@ export interface RollRow {
   camberToGround?: { left: Deg; right: Deg };
   /** roll centre in the frame's axes: where the two contact-patch lines through the front-view instant centres cross; null when they do not (addition: double wishbone) */
   rollCenter?: FrontPoint | null;
+  /**
+   * mm per side, change from ride of each tyre's contact point's distance from the centreline,
+   * along the ground under the wheels (as `HeaveRow.contactTrackChange`); null when no ground is
+   * found (addition: arms and knuckles)
+   */
+  contactTrackChange?: { left: Mm; right: Mm } | null;
+  /** mm per side, change of each wheel centre's distance from y = 0 in the frame's axes (addition: arms and knuckles) */
+  trackChange?: { left: Mm; right: Mm };
+  /**
+   * deg per side, camber of the wheel plane from the normal of the ground under the wheels (not a
+   * change: a sketch's wheels stand square at ride), positive when the top leans out; null when no
+   * ground is found (addition: arms and knuckles; metrics/ground.ts)
+   */
+  groundCamber?: { left: Deg; right: Deg } | null;
+  /**
+   * mm, the roll centre above the ground under the wheels at this row, measured square to that
+   * ground: the roll centre of the row's own construction (`rollCenter`; for a solid axle on links
+   * the rod's or the link pairs' crossing of y = 0); null where it or the ground is not defined (addition)
+   */
+  rollCenterAboveGround?: Mm | null;
+  /**
+   * mm, the left side's side-view instant centre at this row above the ground under the wheels,
+   * taken in the fore-aft plane through the left wheel centre; null where not defined (addition)
+   */
+  instantCenterAboveGround?: Mm | null;
   /** half-shaft readings per side (addition: independent wheels with a frame-mounted drive unit) */
   halfShafts?: HalfShaftReadings;
 }

@@ -8,12 +8,22 @@
 import type { Layout } from '../../schema/sketch';
 import type { SolvedRow } from '../march';
 import type { LinkageModel, PointModel } from '../model';
-import type { HeaveRow, RollRow } from '../types';
+import type { FrontPoint, HeaveRow, RollRow, SidePoint } from '../types';
 import type { Vec3 } from '../vec';
 import type { StarterSpec } from './starterTypes';
 
 /** Where a point is in the row being read (mm). */
 export type PlacePoint = (p: PointModel) => Vec3;
+
+/**
+ * The body-fixed roll centre (rear view) and left side-view instant centre of a roll row, in the
+ * frame's axes: rows.ts measures them from the ground under the wheels. A later reader's replace
+ * an earlier one's; absent or null: not defined.
+ */
+export interface RollCentres {
+  rollCenter?: FrontPoint | null;
+  instantCenter?: SidePoint | null;
+}
 
 /** A reader's plan for one model, made once per sweep; each part is optional. */
 export interface LayoutRowPlan {
@@ -21,6 +31,8 @@ export interface LayoutRowPlan {
   heave?(at: PlacePoint, solved: SolvedRow): Partial<HeaveRow>;
   /** fields added to a roll row */
   roll?(at: PlacePoint, solved: SolvedRow): Partial<RollRow>;
+  /** the roll centre and instant centre of a roll row (for their heights above the ground) */
+  rollCentres?(at: PlacePoint, solved: SolvedRow): RollCentres;
   /** plain sentences for the result's warnings, from the heave rows */
   notes?(heave: HeaveRow[]): string[];
 }

@@ -26,6 +26,8 @@ describe('travel plots of a solid axle', () => {
       'lateral',
       'antisquat',
       'foreaft',
+      'rc',
+      'ic-height',
       'shocks',
       'bind',
       'rollsteer',
@@ -71,10 +73,10 @@ describe('travel plots of a solid axle', () => {
 });
 
 describe('travel plots of independent layouts', () => {
-  it('show the wheel’s camber, toe and track first and leave out the axle’s quantities', () => {
+  it('show the wheel’s camber, toe and track (contact patch first) and leave out the axle’s quantities', () => {
     const { result, ctx } = sweepOf('double-wishbone');
     const keys = buildPlots(result, ctx, {}, [], 'mm').map((p) => p.key);
-    expect(keys.slice(0, 3)).toEqual(['camber', 'toe', 'track']);
+    expect(keys.slice(0, 4)).toEqual(['camber', 'toe', 'contact-track', 'track']);
     expect(keys).not.toContain('pinion');
     expect(keys).not.toContain('lateral');
     expect(keys).toContain('antidive');

@@ -32,7 +32,7 @@ describe('the readout', () => {
     expect(wrapper.get('[data-test="readout-position"]').text()).toBe('at ride height');
     const ride = sweep.result!.ride;
     expect(valueOf(wrapper, 'antisquat').text()).toBe(`${ride.antiSquat!.toFixed(1)} %`);
-    expect(valueOf(wrapper, 'rc').text()).toBe(`${ride.rollCenterHeight!.toFixed(1)} mm`);
+    expect(valueOf(wrapper, 'rc').text()).toBe(`${ride.rollCenterAboveGround!.toFixed(1)} mm`);
     expect(wrapper.text()).not.toMatch(/NaN|undefined|Infinity/);
   });
 
@@ -44,7 +44,7 @@ describe('the readout', () => {
     expect(wrapper.get('[data-test="readout-position"]').text()).toBe('at +1.97 in bump');
     const row = sweep.result!.heave.find((r) => r.travel === 50)!;
     // 1 in = 25.4 mm exactly (international inch, 1959).
-    expect(valueOf(wrapper, 'rc').text()).toBe(`${(row.rollCenterHeight! / 25.4).toFixed(2)} in`);
+    expect(valueOf(wrapper, 'rc').text()).toBe(`${(row.rollCenterAboveGround! / 25.4).toFixed(2)} in`);
   });
 
   it('shows a dash with the reason for the instant centre of parallel links, and anti-squat from their slope', async () => {
@@ -59,7 +59,7 @@ describe('the readout', () => {
       f.z = a.z + slope * (f.x - a.x);
     }
     const { wrapper } = await mountOnBoard(BoardReadout, doc);
-    for (const key of ['ic-x', 'ic-z']) {
+    for (const key of ['ic-x', 'ic-height']) {
       const cell = valueOf(wrapper, key);
       expect(cell.text()).toBe('—');
       expect(cell.attributes('data-reason')).toBe('upper and lower links parallel in side view: no instant centre');

@@ -5,7 +5,7 @@
 import type { LayoutReader } from '../types';
 import { wishboneNotes } from './notes';
 import { wishbonePlanBuild } from './plan';
-import { wishboneHeaveFields, wishboneRollFields } from './rows';
+import { wishboneHeaveFields, wishboneRollCentres, wishboneRollFields } from './rows';
 
 export const doubleWishboneReader: LayoutReader = {
   name: 'double wishbones',
@@ -16,6 +16,7 @@ export const doubleWishboneReader: LayoutReader = {
         ? {
             heave: (at, solved) => wishboneHeaveFields(plan, at, solved.state, solved.travel),
             roll: (at, solved) => wishboneRollFields(plan, at, solved.state, solved.roll),
+            rollCentres: (at, solved) => wishboneRollCentres(plan, at, solved.state, solved.roll),
           }
         : {}),
       notes: (heave) => wishboneNotes(model, plan, heave),

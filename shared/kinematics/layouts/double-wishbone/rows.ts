@@ -25,7 +25,7 @@ import { poseFromState } from '../../pose';
 import { OUTPUT_ZERO_TOLERANCE } from '../../clean';
 import type { FrontPoint, HeaveRow, RollRow, SidePoint } from '../../types';
 import type { Vec3 } from '../../vec';
-import type { PlacePoint } from '../types';
+import type { PlacePoint, RollCentres } from '../types';
 import type { WishbonePlan, WishboneSide } from './plan';
 
 const clean = (v: number) => (Math.abs(v) < OUTPUT_ZERO_TOLERANCE ? 0 : v);
@@ -132,4 +132,17 @@ export function wishboneRollFields(
   // roll on the left, in by it on the right, relative to the ground.
   out.camberToGround = { left: clean(camber(w.left) + rollDeg), right: clean(camber(w.right) - rollDeg) };
   return out;
+}
+
+/** The roll centre of a roll row (its `rollCenter`) and the left side-view instant centre at that row. */
+export function wishboneRollCentres(
+  w: WishbonePlan,
+  at: PlacePoint,
+  state: Float64Array,
+  rollDeg: number,
+): RollCentres {
+  return {
+    rollCenter: wishboneRollFields(w, at, state, rollDeg).rollCenter ?? null,
+    instantCenter: side(wishboneView(w.left, at, 'y').ic),
+  };
 }

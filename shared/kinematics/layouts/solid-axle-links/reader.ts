@@ -10,6 +10,14 @@ export const solidAxleLinksReader: LayoutReader = {
     const plan = solidAxleLinksPlanBuild(model.sketch, model.points, model.axle, model.wheelLeft);
     return {
       heave: (at, solved) => solidAxleLinksHeaveFields(plan, at, solved, cleanZero),
+      // The same constructions hold at a rolled row: the rod's (or link pairs') crossing of y = 0, the left links' crossing.
+      rollCentres: (at, solved) => {
+        const f = solidAxleLinksHeaveFields(plan, at, solved, cleanZero);
+        return {
+          rollCenter: f.rollCenterHeight === null ? null : { y: 0, z: f.rollCenterHeight },
+          instantCenter: f.instantCenter,
+        };
+      },
       notes: () => solidAxleLinksNotes(model.sketch, plan),
     };
   },

@@ -16,6 +16,7 @@ import { wheelAttitude, type WheelSide } from '../../metrics/wheel';
 import type { BodyModel, LinkageModel, PointModel } from '../../model';
 import { poseFromState } from '../../pose';
 import type { HeaveRow, RollRow } from '../../types';
+import type { RollCentres } from '../types';
 import type { Vec3 } from '../../vec';
 import type { PlacePoint } from '../types';
 
@@ -122,5 +123,21 @@ export function trailingArmRollFields(
   return {
     rollCenter: c ? { y: clean(c.u), z: clean(c.v) } : null,
     camberToGround: { left: clean(camber(plan.left) + rollDeg), right: clean(camber(plan.right) - rollDeg) },
+  };
+}
+
+/** The roll centre of a roll row (its `rollCenter`) and the left side-view instant centre (hinge axis in the wheel's fore-aft plane). */
+export function trailingArmRollCentres(
+  plan: TrailingArmPlan,
+  at: PlacePoint,
+  state: Float64Array,
+  rollDeg: number,
+  clean: (v: number) => number,
+): RollCentres {
+  const wc = at(plan.left.wheel);
+  const side = axisInView(plan.left.axisA, plan.left.axisB, 'y', wc.y);
+  return {
+    rollCenter: trailingArmRollFields(plan, at, state, rollDeg, clean).rollCenter ?? null,
+    instantCenter: side && 'point' in side ? { x: clean(side.point.u), z: clean(side.point.v) } : null,
   };
 }

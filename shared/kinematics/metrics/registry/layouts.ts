@@ -9,6 +9,17 @@ export const SOLID_AXLE: readonly Layout[] = [
   'three-link-lateral-rod',
   'leaf-spring',
 ];
-/** Layouts whose wheels move on their own arms or knuckles. */
+/** Solid axles located by links (the leaf spring's axle is located by its springs). */
+export const LINKED_AXLE: readonly Layout[] = [
+  'four-link-lateral-rod',
+  'triangulated-four-link',
+  'three-link-lateral-rod',
+];
+/**
+ * Layouts whose wheels move on their own arms or knuckles. The contact patch's track change and the
+ * camber to the ground are theirs alone: a solid axle carries both tyres on one rigid body, so the
+ * track between its contact patches never changes (its sideways movement is the lateral shift) and
+ * it stands square to the ground through its own contact points.
+ */
 export const INDEPENDENT: readonly Layout[] = ['trailing-arm', 'double-wishbone'];
 export const WISHBONE: readonly Layout[] = ['double-wishbone'];

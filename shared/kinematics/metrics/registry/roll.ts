@@ -4,7 +4,7 @@
  */
 import type { LimitsEntry, RollEntry } from './types';
 import { drivelineEntries, halfShaftEntries } from './heave';
-import { ALL_LAYOUTS, INDEPENDENT, SOLID_AXLE } from './layouts';
+import { ALL_LAYOUTS, INDEPENDENT, LINKED_AXLE, SOLID_AXLE } from './layouts';
 
 const wishboneOnly = (r: { camberToGround?: unknown; rollCenter?: unknown }) =>
   r.camberToGround !== undefined || r.rollCenter !== undefined;
@@ -112,6 +112,75 @@ export const rollEntries: RollEntry[] = [
     sign,
     layouts: INDEPENDENT,
   })),
+  ...(
+    [
+      [
+        'contactTrackChange',
+        'contact-track',
+        'contact patch track change',
+        'length',
+        "change from ride of the contact point's distance from the centreline along the ground, positive outward",
+      ],
+      [
+        'trackChange',
+        'track',
+        'wheel centre track change',
+        'length',
+        "change from ride of the wheel centre's distance from y = 0 in the frame's axes, positive outward",
+      ],
+      [
+        'groundCamber',
+        'ground-camber',
+        'camber to the ground',
+        'angle',
+        "the wheel plane's angle from the normal of the ground through both contact points, positive when the top leans out",
+      ],
+    ] as const
+  ).flatMap(([field, id, words, quantity, sign]) =>
+    (['left', 'right'] as const).map((side): RollEntry => ({
+      key: `${field}.${side}`,
+      id: `${id}-${side}`,
+      label: `${side === 'left' ? 'Left' : 'Right'} ${words}`,
+      quantity,
+      sweep: 'roll',
+      read: (r) => r[field]?.[side] ?? null,
+      given: (r) => r[field] !== undefined,
+      signed: true,
+      sign,
+      layouts: INDEPENDENT,
+      group: 'axle',
+    })),
+  ),
+  {
+    key: 'rollCenterAboveGround',
+    id: 'rc',
+    label: 'Roll centre height',
+    quantity: 'length',
+    sweep: 'roll',
+    read: (r) => r.rollCenterAboveGround,
+    signed: false,
+    sign:
+      'above the ground the tyres stand on at this row (the plane through both contact points, tilted by the ' +
+      'roll), square to it; a solid axle on links: where the rod or the link pairs cross the centreline',
+    layouts: [...LINKED_AXLE, ...INDEPENDENT],
+    group: 'geometry',
+    why: 'rc',
+  },
+  {
+    key: 'instantCenterAboveGround',
+    id: 'ic-height',
+    label: 'Instant centre height',
+    quantity: 'length',
+    sweep: 'roll',
+    read: (r) => r.instantCenterAboveGround,
+    signed: false,
+    sign:
+      "the left side's side-view instant centre above the ground the tyres stand on at this row, square to it, " +
+      'in the fore-aft plane through the left wheel centre',
+    layouts: [...LINKED_AXLE, ...INDEPENDENT],
+    group: 'geometry',
+    why: 'ic',
+  },
   ...(drivelineEntries('roll', false) as RollEntry[]),
   ...(halfShaftEntries('roll', false) as RollEntry[]),
 ];
