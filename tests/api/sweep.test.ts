@@ -33,8 +33,8 @@ describe('POST /api/sweep', () => {
   });
 
   it('answers 400 naming the field for slip-yoke limits in the wrong order', async () => {
-    const doc = sketchFile() as Record<string, unknown> & { driveline: Record<string, unknown> };
-    doc.driveline = { ...doc.driveline, slipYoke: { collapsed: 1500, extended: 1300 } };
+    const doc = sketchFile();
+    doc.driveline = { ...(doc.driveline as object), slipYoke: { collapsed: 1500, extended: 1300 } };
     const res = await guest.post('/api/sweep').send(doc);
     expect(res.status).toBe(400);
     expect(res.body.details).toContain('driveline.slipYoke.extended: must be longer than collapsed (1500 mm)');
