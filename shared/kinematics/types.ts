@@ -215,7 +215,13 @@ export type SweepEventKind =
   | 'joint-angle'
   // addition: a link's axial load changes sign within the heave sweep / passes sweep.linkLoadLimit
   | 'load-reversal'
-  | 'load-limit';
+  | 'load-limit'
+  // addition: a driveshaft joint under driveline.minJointAngle, two single Cardan joints' angles apart by more
+  // than driveline.maxJointAngleMismatch (a double-Cardan shaft: its pinion joint over it), the shaft's length
+  // outside driveline.slipYoke
+  | 'joint-angle-low'
+  | 'joint-angle-mismatch'
+  | 'slip-yoke';
 
 export interface SweepEvent {
   kind: SweepEventKind;
@@ -229,7 +235,14 @@ export interface SweepEvent {
   joint?: 'output' | 'pinion' | 'half-shaft-inner' | 'half-shaft-outer';
   /** the side of a half-shaft joint event (addition) */
   side?: 'left' | 'right';
-  /** the value that crossed: bind in mm, joint angle in deg, shock length in mm (addition) */
+  /** the driveshaft type, for joint-angle-mismatch events (addition) */
+  shaft?: 'single-cardan' | 'double-cardan';
+  /** which end of the slip yoke's travel, for slip-yoke events (addition) */
+  end?: 'collapsed' | 'extended';
+  /**
+   * the value that crossed: bind in mm, joint angle in deg, shock length in mm (addition); for the driveshaft's
+   * rules the setting crossed: minJointAngle or maxJointAngleMismatch in deg, the slip yoke's length in mm
+   */
   value?: number;
   /** one plain sentence for the flags list (addition) */
   message: string;

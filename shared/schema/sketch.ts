@@ -15,6 +15,8 @@ import {
   layouts,
   DEFAULT_BIND_THRESHOLD_MM,
   DEFAULT_JOINT_ANGLE_LIMIT_DEG,
+  driveshaftTypes,
+  drivelinePointKeys,
   MAX_AXLE_TORQUE_NM,
   MAX_COORDINATE_MM,
   MAX_ID_LENGTH,
@@ -112,7 +114,26 @@ const baseSketchSchema = z.looseObject({
   points: z.array(pointSchema).max(MAX_POINTS),
   members: z.array(memberSchema).max(MAX_MEMBERS),
   wheels: z.looseObject({ left: id, right: id }),
-  driveline: z.looseObject({ output: id, outputAxis: id, pinion: id, pinionAxis: id }).optional(),
+  /**
+   * The driveshaft from the gearbox output to the axle's pinion: four points, and the settings of its
+   * checks (additions, each optional; the core reads the DEFAULT_* of sketchVocabulary.ts when absent).
+   */
+  driveline: z
+    .looseObject({
+      output: id,
+      outputAxis: id,
+      pinion: id,
+      pinionAxis: id,
+      /** two single Cardan joints, or a double-Cardan (CV) joint at the output */
+      shaft: z.enum(driveshaftTypes).optional(),
+      /** degrees: a joint running straighter than this is flagged (0 turns the check off) */
+      minJointAngle: z.number().min(0).max(90).optional(),
+      /** degrees: single Cardan joints whose angles differ by more, or a double-Cardan shaft's pinion angle above it, is flagged */
+      maxJointAngleMismatch: z.number().min(0).max(90).optional(),
+      /** mm, output to pinion joint centres: the shortest and longest the slip yoke allows */
+      slipYoke: z.looseObject({ collapsed: positiveLength, extended: positiveLength }).optional(),
+    })
+    .optional(),
   /**
    * Half-shafts from a frame-mounted drive unit to independent wheels (addition, trailing
    * arms): `inner` and `innerAxis` are frame points (the inner joint, and a point on the drive
@@ -203,8 +224,8 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
 
   if (s.driveline) {
     const d = s.driveline;
-    const at = (key: keyof typeof d & string, onFrame: boolean) => {
-      const ref = d[key] as string;
+    const at = (key: (typeof drivelinePointKeys)[number], onFrame: boolean) => {
+      const ref = d[key];
       const p = points.get(ref);
       if (!p) report(['driveline', key], `no point '${ref}'`);
       else if (onFrame && p.body !== 'frame')
@@ -225,6 +246,8 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
       report(['driveline', 'pinionAxis'], `must be on the same body as the pinion ('${pn.body}')`);
     if (o && pn && vecDistance(o, pn) < MIN_MEMBER_LENGTH_MM)
       report(['driveline', 'pinion'], `must be apart from the output point (at least ${MIN_MEMBER_LENGTH_MM} mm)`);
+    if (d.slipYoke && !(d.slipYoke.collapsed < d.slipYoke.extended))
+      report(['driveline', 'slipYoke', 'extended'], `must be longer than collapsed (${d.slipYoke.collapsed} mm)`);
   }
 
   for (const side of ['left', 'right'] as const) {

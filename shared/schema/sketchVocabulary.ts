@@ -74,5 +74,25 @@ export const MAX_AXLE_TORQUE_NM = 200_000;
 /** Common practice for smooth running at road speed (docs/references.md, driveline guides); no published source. */
 export const DEFAULT_JOINT_ANGLE_LIMIT_DEG = 3;
 
+/** The driveline's four point fields (the rest of the block are settings). */
+export const drivelinePointKeys = ['output', 'outputAxis', 'pinion', 'pinionAxis'] as const;
+/**
+ * Driveshaft types: two single (Cardan) joints whose angles should match, or a double-Cardan (CV)
+ * joint at the output with the pinion pointing at it.
+ */
+export const driveshaftTypes = ['single-cardan', 'double-cardan'] as const;
+export type DriveshaftType = (typeof driveshaftTypes)[number];
+export const DEFAULT_DRIVESHAFT_TYPE: DriveshaftType = 'single-cardan';
+/**
+ * Degrees: a Cardan joint running straighter than this keeps its needle bearings in one place, so
+ * they wear there. Common practice, no published source.
+ */
+export const DEFAULT_MIN_JOINT_ANGLE_DEG = 0.5;
+/**
+ * Degrees: two single Cardan joints whose operating angles differ by more than this no longer cancel
+ * each other's speed fluctuation. Common practice, no published source.
+ */
+export const DEFAULT_MAX_JOINT_ANGLE_MISMATCH_DEG = 1;
+
 /** Share of the braking force on the front axle when a file gives none (%; common practice for road vehicles, no published source). */
 export const DEFAULT_FRONT_BRAKE_SHARE_PERCENT = 65;

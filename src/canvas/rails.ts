@@ -4,6 +4,7 @@
  * the board labels them "indicative". Lengths in mm.
  */
 import type { Sketch } from '../../shared/schema/sketch';
+import { drivelinePointKeys } from '../../shared/schema/sketchVocabulary';
 import type { Mm } from '../../shared/units';
 
 /** Drawn rail height: a typical ladder-frame rail (common practice, no published source). */
@@ -30,7 +31,8 @@ function median(values: number[]): number {
 
 /** The rails' outline: over the highest side-mounted frame pivot, spaced at their median width. */
 export function railsOf(sketch: Sketch): Rails | null {
-  const drive = new Set(Object.values(sketch.driveline ?? {}));
+  const d = sketch.driveline;
+  const drive = new Set(d ? drivelinePointKeys.map((k) => d[k]) : []);
   const side = sketch.points.filter((p) => p.body === 'frame' && !drive.has(p.id) && Math.abs(p.y) > CENTRE_BAND_MM);
   if (side.length === 0) return null;
   const top = Math.max(...side.map((p) => p.z));

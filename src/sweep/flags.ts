@@ -1,7 +1,7 @@
 /**
- * Flags: the warnings a sweep raised (lock-up, bind, shock limits, joint angles, link loads) and the
- * targets it misses, each with where it starts and, where there is one, the member
- * concerned so a click can select it. Built from the result's structured events; the
+ * Flags: the warnings a sweep raised (lock-up, bind, shock limits, joint angles, the driveshaft's
+ * joint-angle rules and slip yoke, link loads) and the targets it misses, each with where it starts
+ * and, where there is one, the member concerned so a click can select it. Built from the result's structured events; the
  * words are written here in the user's units. The sweep's plain-sentence notes (its
  * assumptions) are not flags: the readout shows them beside the numbers they qualify.
  */
@@ -174,6 +174,42 @@ function eventFlag(
         severity: 'warning',
         title: 'Joint angle',
         detail: `${joint} operating angle is over ${limit} beyond ${where}.`,
+      };
+    }
+    case 'joint-angle-low': {
+      const joint = JOINT_NAMES[e.joint ?? ''] ?? 'A driveline joint';
+      const limit = e.value !== undefined ? showAngle(e.value, undefined, false, 1).text : 'its minimum';
+      return {
+        ...base,
+        severity: 'warning',
+        title: 'Joint angle too small',
+        detail: `${joint} operating angle is under ${limit} from ${where}; its needle bearings barely turn and wear in one place.`,
+      };
+    }
+    case 'joint-angle-mismatch': {
+      const limit = e.value !== undefined ? showAngle(e.value, undefined, false, 1).text : 'the allowed difference';
+      if (e.shaft === 'double-cardan')
+        return {
+          ...base,
+          severity: 'warning',
+          title: 'Pinion off the shaft line',
+          detail: `Pinion joint operating angle is over ${limit} beyond ${where}; with a double-Cardan shaft the pinion should point at the output joint, which takes the whole angle.`,
+        };
+      return {
+        ...base,
+        severity: 'warning',
+        title: 'Joint angles differ',
+        detail: `Output and pinion joint operating angles differ by more than ${limit} beyond ${where}; the shaft's speed fluctuation no longer cancels.`,
+      };
+    }
+    case 'slip-yoke': {
+      const out = e.end === 'extended';
+      const len = e.value !== undefined ? ` (${showLength(e.value, u).text})` : '';
+      return {
+        ...base,
+        severity: 'negative',
+        title: out ? 'Slip yoke pulls out' : 'Slip yoke bottoms out',
+        detail: `The driveshaft is ${out ? 'longer than the slip yoke’s extended' : 'shorter than the slip yoke’s collapsed'} length${len} beyond ${where}.`,
       };
     }
     case 'load-reversal':

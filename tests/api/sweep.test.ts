@@ -32,6 +32,14 @@ describe('POST /api/sweep', () => {
     expect(res.body.details).toContain('points[0].z: expected a number');
   });
 
+  it('answers 400 naming the field for slip-yoke limits in the wrong order', async () => {
+    const doc = sketchFile();
+    doc.driveline = { ...(doc.driveline as object), slipYoke: { collapsed: 1500, extended: 1300 } };
+    const res = await guest.post('/api/sweep').send(doc);
+    expect(res.status).toBe(400);
+    expect(res.body.details).toContain('driveline.slipYoke.extended: must be longer than collapsed (1500 mm)');
+  });
+
   it('answers 413 above 256 KB', async () => {
     const doc = { ...sketchFile(), padding: 'x'.repeat(260 * 1024) };
     const res = await guest.post('/api/sweep').send(doc);

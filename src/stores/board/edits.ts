@@ -6,7 +6,7 @@
  * Lengths in mm.
  */
 import type { MemberKind, Sketch } from '../../../shared/schema/sketch';
-import { MAX_ID_LENGTH } from '../../../shared/schema/sketch';
+import { MAX_ID_LENGTH, drivelinePointKeys } from '../../../shared/schema/sketch';
 import type { Mm } from '../../../shared/units';
 import { vecDistance, type Vec3 } from '../../../shared/vec3';
 
@@ -110,10 +110,11 @@ export function renamePoint(doc: Sketch, from: string, to: string): Sketch {
       ? { ...doc.wheels, left: ref(doc.wheels.left), right: ref(doc.wheels.right) }
       : doc.wheels;
   let driveline = doc.driveline;
-  if (driveline && Object.values(driveline).includes(from)) {
-    driveline = Object.fromEntries(
-      Object.entries(driveline).map(([k, v]) => [k, typeof v === 'string' ? ref(v) : v]),
-    ) as typeof driveline;
+  if (driveline && drivelinePointKeys.some((k) => doc.driveline?.[k] === from)) {
+    // Only the four point fields name pivots; the settings beside them (shaft type…) stay as they are.
+    const moved = { ...driveline };
+    for (const k of drivelinePointKeys) moved[k] = ref(moved[k]);
+    driveline = moved;
   }
   return { ...doc, points, members, wheels, ...(driveline ? { driveline } : {}) };
 }
@@ -137,7 +138,7 @@ export function pointReferences(doc: Sketch, id: string): string[] {
   const refs = doc.members.filter((m) => m.a === id || m.b === id).map((m) => `member ${m.id}`);
   if (doc.wheels.left === id) refs.push('the left wheel centre');
   if (doc.wheels.right === id) refs.push('the right wheel centre');
-  for (const [k, v] of Object.entries(doc.driveline ?? {})) if (v === id) refs.push(`the driveline (${k})`);
+  for (const k of drivelinePointKeys) if (doc.driveline?.[k] === id) refs.push(`the driveline (${k})`);
   return refs;
 }
 
@@ -287,6 +288,22 @@ export function setTargets(doc: Sketch, targets: Sketch['targets']): Sketch {
 /** Replaces the tracing photos; `undefined` removes the field. */
 export function setTracing(doc: Sketch, tracing: Sketch['tracing']): Sketch {
   return setField(doc, 'tracing', tracing);
+}
+
+/** The driveline's settings beside its four points (shaft type, joint-angle rules, slip yoke). */
+export type DrivelineSettings = Partial<
+  Pick<NonNullable<Sketch['driveline']>, 'shaft' | 'minJointAngle' | 'maxJointAngleMismatch' | 'slipYoke'>
+>;
+
+/** Sets the given driveline settings; a key given as `undefined` is removed (its default applies). */
+export function setDrivelineSettings(doc: Sketch, settings: DrivelineSettings): Sketch {
+  if (!doc.driveline) throw new BoardEditError('This sketch has no driveline.');
+  const next = { ...doc.driveline };
+  for (const [k, v] of Object.entries(settings) as [keyof DrivelineSettings, unknown][]) {
+    if (v === undefined) delete next[k];
+    else Object.assign(next, { [k]: v });
+  }
+  return { ...doc, driveline: next };
 }
 
 /** A free id from a stem: "LL", "LL2", "LL3", … */

@@ -112,9 +112,11 @@ describe('the flags', () => {
     const count = Number(wrapper.get('[data-test="flags-count"]').text());
     expect(count).toBe(sweep.flags.filter((f) => f.severity !== 'info').length);
     expect(count).toBeGreaterThan(0);
-    // A generous joint-angle limit and a short sweep leave nothing to flag.
+    // A generous joint-angle limit, no minimum joint angle (the starter's shaft runs straight at ride)
+    // and a short sweep leave nothing to flag.
     board.commit('Quiet sweep', (d) => ({
       ...d,
+      driveline: { ...d.driveline!, minJointAngle: 0 },
       sweep: { ...d.sweep, droop: -20, bump: 20, roll: 1, jointAngleLimit: 20 },
     }));
     await settled(sweep);
