@@ -4,6 +4,7 @@
  * the flags and the limits reached.
  */
 import type { Sketch } from '../schema/sketch';
+import { cleanZero } from './clean';
 import { driveBuild } from './drive';
 import { marchPlan } from './grid';
 import { march, rowRateFor, solveStart, type MarchContext, type SolvedRow } from './march';
@@ -15,6 +16,7 @@ import { PoseSolver } from './solve';
 import { sweepEvents } from './events';
 import { linkLoads, linkLoadsApply } from './loads';
 import { windUpReading } from './windUp';
+import { rollSteerInTravel } from './rollSteerInTravel';
 import type { HeaveRow, RollRow, SweepEvent, SweepResult } from './types';
 
 /** A null-space motion that moves no point of its body faster than this (mm per unit) is idle (a shackle spinning on its own axis). */
@@ -125,6 +127,10 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
   let rollMin = 0;
   let rollMax = 0;
   if (!options.heaveOnly) {
+    if (model.axle) {
+      const steer = rollSteerInTravel(ctx, heaveSolved, model.axle.slot);
+      steer.forEach((v, i) => (heave[i].rollSteerInTravel = v === null ? null : cleanZero(v)));
+    }
     const rollStart = rowRateFor(ctx, ride, 'roll');
     const rollPlan = marchPlan(-sw.roll, sw.roll, sw.rollStep);
     const left = march(ctx, rollStart, 'roll', rollPlan.up);

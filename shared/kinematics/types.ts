@@ -149,6 +149,12 @@ export interface HeaveRow {
   /** half-shaft readings per side (addition: independent wheels with a frame-mounted drive unit) */
   halfShafts?: HalfShaftReadings;
   /**
+   * %, roll steer at this row's travel: 100 · yaw / roll of a small roll about this row's pose (the roll
+   * sweep's `rollSteer` where roll → 0), positive when the axle turns its nose left as its left side lifts
+   * (addition: solid axles, full sweeps; rollSteerInTravel.ts); null where the roll cannot be solved
+   */
+  rollSteerInTravel?: number | null;
+  /**
    * N, axial load of every link and lateral rod (tension positive) by statics at this row from
    * the axle torque (addition: solid axles on links; loads.ts)
    */

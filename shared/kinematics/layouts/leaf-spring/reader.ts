@@ -10,7 +10,7 @@ export const leafSpringReader: LayoutReader = {
     const plan = leafSpringPlanBuild(model);
     if (!plan) return null;
     return {
-      heave: (at) => leafSpringHeaveFields(plan, at, cleanZero),
+      heave: (at, solved) => leafSpringHeaveFields(plan, at, solved, cleanZero),
       notes: () => leafSpringNotes(plan),
     };
   },

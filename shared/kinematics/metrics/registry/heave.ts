@@ -7,13 +7,14 @@ import type { HalfShaftReading, HeaveRow, SweepEvent } from '../../types';
 import type { Layout } from '../../../schema/sketchVocabulary';
 import { ALL_LAYOUTS, INDEPENDENT, SOLID_AXLE, WISHBONE } from './layouts';
 
-/** Layouts whose side view has an instant centre (the leaf spring's axle is located by the springs alone). */
+/** Layouts whose side view has an instant centre (the leaf spring's from its three-link equivalent). */
 const SIDE_VIEW_IC: readonly Layout[] = [
   'four-link-lateral-rod',
   'triangulated-four-link',
   'three-link-lateral-rod',
   'trailing-arm',
   'double-wishbone',
+  'leaf-spring',
 ];
 
 const POSE_AXES = [
@@ -225,7 +226,13 @@ export const heaveEntries: HeaveEntry[] = [
     axle: 'or-defined',
     signed: false,
     sign: '100 % when the instant centre line meets the centre of gravity height at the front axle',
-    layouts: ['four-link-lateral-rod', 'triangulated-four-link', 'three-link-lateral-rod', 'trailing-arm'],
+    layouts: [
+      'four-link-lateral-rod',
+      'triangulated-four-link',
+      'three-link-lateral-rod',
+      'trailing-arm',
+      'leaf-spring',
+    ],
     csv: 'antiSquat',
     group: 'geometry',
     why: 'ic',
@@ -445,4 +452,20 @@ export const heaveEntries: HeaveEntry[] = [
     missing: 'shackle angle is taken in heave, not in roll',
   },
   ...(halfShaftEntries('heave', true) as HeaveEntry[]),
+  {
+    key: 'rollSteerInTravel',
+    id: 'rollsteer-travel',
+    label: 'Roll steer through the travel',
+    shortLabel: 'Roll steer',
+    quantity: 'percent',
+    sweep: 'heave',
+    read: (r) => r.rollSteerInTravel,
+    given: given('rollSteerInTravel'),
+    signed: true,
+    sign: '100 · yaw / roll of a small roll at this travel: positive when the axle turns its nose left as its left side lifts',
+    layouts: SOLID_AXLE,
+    group: 'geometry',
+    missing: 'no roll at this travel: roll steer is a ratio to the roll angle',
+    plotEmpty: 'No roll sweep (articulation set to 0).',
+  },
 ];

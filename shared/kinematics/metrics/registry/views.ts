@@ -92,6 +92,7 @@ export const plotsAxleView: ViewItem<'*shocks'>[] = [
   ].map(heave),
   '*shocks',
   ...['bind', 'rollSteer'].map(roll),
+  heave('rollSteerInTravel'),
 ];
 
 /** Travel plots for independent layouts: the wheel's own attitude first. */
