@@ -19,7 +19,7 @@ function sweepOf(layout: keyof typeof starters): { result: SweepResult; ctx: Swe
 describe('travel plots of a solid axle', () => {
   const { result, ctx } = sweepOf('four-link-lateral-rod');
 
-  it('plots the travel quantities, the shocks, then bind and roll steer in roll', () => {
+  it('plots the travel quantities, the shocks, then bind and roll steer in roll, then roll steer through the travel', () => {
     const plots = buildPlots(result, ctx, {}, [], 'mm');
     expect(plots.map((p) => p.key)).toEqual([
       'pinion',
@@ -31,8 +31,13 @@ describe('travel plots of a solid axle', () => {
       'shocks',
       'bind',
       'rollsteer',
+      'rollsteer-travel',
     ]);
     expect(plots.filter((p) => p.sweep === 'roll').map((p) => p.key)).toEqual(['bind', 'rollsteer']);
+    const travel = plots.find((p) => p.key === 'rollsteer-travel')!;
+    expect(travel.title).toBe('Roll steer through the travel');
+    expect(travel.series[0].points).toHaveLength(result.heave.length);
+    expect(travel.series[0].points.every((p) => p.y !== null)).toBe(true);
   });
 
   it('draws every heave row, x in the user’s unit and y as the sweep gives it', () => {
