@@ -3,6 +3,7 @@
  * period, short enough for a tooltip; the help the screens show is built from it and the sign
  * convention; roll steer says what positive means at the sketch's end of the vehicle.
  */
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import {
   axleEndOf,
@@ -78,5 +79,12 @@ describe('the definitions of the registry', () => {
     expect(axleEndOf({ wheelbase: 2800 })).toBe('rear');
     expect(axleEndOf({ axle: 42 })).toBe('rear');
     expect(axleEndOf(undefined)).toBe('rear');
+  });
+
+  it('are written in the file format document word for word, so the document and the screens say the same', () => {
+    // The document inside this repository (docs/sketch-format.md, "What each reading means").
+    const doc = readFileSync(new URL('../../../docs/sketch-format.md', import.meta.url), 'utf8').replace(/\s+/g, ' ');
+    for (const e of named)
+      expect(doc, e.name).toContain(`${e.definition as string} Sign: ${e.sign}`.replace(/\s+/g, ' '));
   });
 });
