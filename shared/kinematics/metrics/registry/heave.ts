@@ -254,7 +254,7 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: "positive forward, in the frame's axes (ISO 8855)",
     definition:
-      "Fore-aft position of the left side's side-view instant centre, where its upper and lower link or arm lines cross, in the body's axes.",
+      "Fore-aft position of the left side's side-view instant centre (where its upper and lower link lines cross, or a trailing arm's pivot axis), in the body's axes.",
     layouts: SIDE_VIEW_IC,
     csv: 'instantCenter.x',
     group: 'geometry',
@@ -306,7 +306,7 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: '100 % when the instant centre line meets the centre of gravity height at the front axle',
     definition:
-      '100 \u00d7 the slope of the line from the left contact patch through the side-view instant centre, divided by centre of gravity height over wheelbase.',
+      '100 × the slope of the line from the left contact patch (on trailing arms, whose drive is frame-mounted: the wheel centre) through the side-view instant centre, over CG height / wheelbase.',
     layouts: ['four-link-lateral-rod', 'triangulated-four-link', 'three-link-lateral-rod', 'trailing-arm'],
     csv: 'antiSquat',
     group: 'geometry',
@@ -325,7 +325,7 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: "z in the frame's axes (fixed to the body), from the ground at ride; not the height above the ground at this row",
     definition:
-      'Roll centre height on the centreline in the body-fixed axes (zero: the ground at ride), from the lateral rod, link pairs, spring seats or wishbone construction.',
+      "Roll centre height on the centreline in the body-fixed axes (zero: the ground at ride), from the lateral rod, link pairs, spring seats or the arms' contact-patch lines.",
     layouts: ALL_LAYOUTS,
     csv: 'rollCenterHeight',
     group: 'geometry',
@@ -463,7 +463,7 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: 'positive to the left, from the centreline',
     definition:
-      "Sideways position of the left knuckle's front-view instant centre, where its upper and lower wishbone lines cross, in the body's axes.",
+      "Sideways position of the left wheel carrier's front-view instant centre (its wishbone lines' crossing, or a trailing arm's pivot axis), in the body's axes.",
     layouts: INDEPENDENT,
     csv: 'frontViewInstantCenter.y',
   },
@@ -479,7 +479,7 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: "height in the frame's axes, from the ground at ride",
     definition:
-      "Height of the left knuckle's front-view instant centre in the body-fixed axes, whose zero is the ground at ride.",
+      "Height of the left wheel carrier's front-view instant centre in the body-fixed axes, whose zero is the ground at ride.",
     layouts: INDEPENDENT,
     csv: 'frontViewInstantCenter.z',
   },
@@ -494,7 +494,7 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: "100 % when the instant centre line carries all of the wheel's braking load transfer",
     definition:
-      '100 \u00d7 front brake share \u00d7 the slope of the line from the left contact patch through the side-view instant centre \u00d7 wheelbase / centre of gravity height.',
+      '100 × front brake share × the slope of the line from the left contact patch through the side-view instant centre × wheelbase / centre of gravity height.',
     layouts: WISHBONE,
     csv: 'antiDive',
     group: 'geometry',

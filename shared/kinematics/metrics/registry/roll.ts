@@ -58,7 +58,7 @@ export const rollEntries: RollEntry[] = [
     signed: true,
     sign: '100 · yaw / roll: positive when the axle turns its nose left as its left side lifts',
     definition:
-      "The axle's yaw against the body per unit of roll in the roll sweep at ride height, as a percentage: 100 \u00d7 yaw / roll.",
+      "The axle's yaw against the body per unit of roll in the roll sweep at ride height, as a percentage: 100 × yaw / roll.",
     axleSense: {
       rear: 'On a rear axle positive is roll oversteer: the body rolls out of a turn, and the axle then steers toward the outside of the turn.',
       front:
@@ -194,7 +194,7 @@ export const rollEntries: RollEntry[] = [
       'above the ground the tyres stand on at this row (the plane through both contact points, tilted by the ' +
       'roll), square to it; a solid axle on links: where the rod or the link pairs cross the centreline',
     definition:
-      "Roll centre height above the ground the tyres stand on at this row: the rod's or link pairs' centreline crossing on a solid axle, else the wishbone construction.",
+      "Roll centre height above the ground the tyres stand on at this row: the rod's or link pairs' centreline crossing on a solid axle, else the arms' contact-patch lines.",
     layouts: [...LINKED_AXLE, ...INDEPENDENT],
     group: 'geometry',
     why: 'rc',
