@@ -254,7 +254,8 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: "positive forward, in the frame's axes (ISO 8855)",
     definition:
-      "Fore-aft position of the left side's side-view instant centre (where its upper and lower link lines cross, or a trailing arm's pivot axis), in the body's axes.",
+      "Fore-aft position of the left side's side-view instant centre (where its upper and lower link " +
+      "lines cross, or a trailing arm's pivot axis), in the body's axes.",
     layouts: SIDE_VIEW_IC,
     csv: 'instantCenter.x',
     group: 'geometry',
@@ -306,7 +307,8 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: '100 % when the instant centre line meets the centre of gravity height at the front axle',
     definition:
-      '100 × the slope of the line from the left contact patch (on trailing arms, whose drive is frame-mounted: the wheel centre) through the side-view instant centre, over CG height / wheelbase.',
+      '100 × the slope of the line from the left contact patch (on trailing arms, whose drive is ' +
+      'frame-mounted: the wheel centre) through the side-view instant centre, over CG height / wheelbase.',
     layouts: ['four-link-lateral-rod', 'triangulated-four-link', 'three-link-lateral-rod', 'trailing-arm'],
     csv: 'antiSquat',
     group: 'geometry',
@@ -325,7 +327,8 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: "z in the frame's axes (fixed to the body), from the ground at ride; not the height above the ground at this row",
     definition:
-      "Roll centre height on the centreline in the body-fixed axes (zero: the ground at ride), from the lateral rod, link pairs, spring seats or the arms' contact-patch lines.",
+      'Roll centre height on the centreline in the body-fixed axes (zero: the ground at ride), from ' +
+      "the lateral rod, link pairs, spring seats or the arms' contact-patch lines.",
     layouts: ALL_LAYOUTS,
     csv: 'rollCenterHeight',
     group: 'geometry',
@@ -345,7 +348,8 @@ export const heaveEntries: HeaveEntry[] = [
       'on the centreline, above the ground the tyres stand on at this row (the plane through both contact ' +
       'points), square to it; the body is held still and the ground moves by the travel',
     definition:
-      'Roll centre height on the centreline above the ground the tyres stand on at this row, from the same construction as the body-fixed roll centre.',
+      'Roll centre height on the centreline above the ground the tyres stand on at this row, from the ' +
+      'same construction as the body-fixed roll centre.',
     layouts: ALL_LAYOUTS,
     csv: 'rollCenterAboveGround',
     group: 'geometry',
@@ -361,7 +365,8 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: 'largest constraint residual, never negative',
     definition:
-      "The largest mismatch between a member's set length and the distance between its ends after the solve: zero when the linkage moves freely.",
+      "The largest mismatch between a member's set length and the distance between its ends after the " +
+      'solve: zero when the linkage moves freely.',
     layouts: ALL_LAYOUTS,
     csv: 'bind',
     group: 'geometry',
@@ -413,7 +418,8 @@ export const heaveEntries: HeaveEntry[] = [
       "left tyre, positive when its contact point moves away from the vehicle's centreline along the ground " +
       "(the lowest point of the tyre circle of the vehicle's tyre radius in the wheel plane); the scrub to keep small",
     definition:
-      "Change from ride of the left contact patch's distance from the centreline, measured along the ground under the wheels (not at the wheel centre).",
+      "Change from ride of the left contact patch's distance from the centreline, measured along the " +
+      'ground under the wheels (not at the wheel centre).',
     layouts: INDEPENDENT,
     csv: 'contactTrackChange',
     group: 'axle',
@@ -463,7 +469,8 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: 'positive to the left, from the centreline',
     definition:
-      "Sideways position of the left wheel carrier's front-view instant centre (its wishbone lines' crossing, or a trailing arm's pivot axis), in the body's axes.",
+      "Sideways position of the left wheel carrier's front-view instant centre (its wishbone lines' " +
+      "crossing, or a trailing arm's pivot axis), in the body's axes.",
     layouts: INDEPENDENT,
     csv: 'frontViewInstantCenter.y',
   },
@@ -494,7 +501,8 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign: "100 % when the instant centre line carries all of the wheel's braking load transfer",
     definition:
-      '100 × front brake share × the slope of the line from the left contact patch through the side-view instant centre × wheelbase / centre of gravity height.',
+      '100 × front brake share × the slope of the line from the left contact patch through the ' +
+      'side-view instant centre × wheelbase / centre of gravity height.',
     layouts: WISHBONE,
     csv: 'antiDive',
     group: 'geometry',

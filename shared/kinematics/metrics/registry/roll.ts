@@ -60,9 +60,12 @@ export const rollEntries: RollEntry[] = [
     definition:
       "The axle's yaw against the body per unit of roll in the roll sweep at ride height, as a percentage: 100 × yaw / roll.",
     axleSense: {
-      rear: 'On a rear axle positive is roll oversteer: the body rolls out of a turn, and the axle then steers toward the outside of the turn.',
+      rear:
+        'On a rear axle positive is roll oversteer: the body rolls out of a turn, ' +
+        'and the axle then steers toward the outside of the turn.',
       front:
-        'On a front axle positive is roll understeer: the body rolls out of a turn, and the axle then steers toward the outside of the turn.',
+        'On a front axle positive is roll understeer: the body rolls out of a turn, and the axle then ' +
+        'steers toward the outside of the turn.',
     },
     layouts: SOLID_AXLE,
     group: 'geometry',
@@ -82,7 +85,8 @@ export const rollEntries: RollEntry[] = [
     signed: false,
     sign: 'largest constraint residual, never negative',
     definition:
-      "The largest mismatch between a member's set length and the distance between its ends in the roll sweep: zero when the linkage rolls freely.",
+      "The largest mismatch between a member's set length and the distance between its ends in the " +
+      'roll sweep: zero when the linkage rolls freely.',
     layouts: ALL_LAYOUTS,
     group: 'geometry',
     plotEmpty: 'No roll sweep (articulation set to 0).',
@@ -113,7 +117,8 @@ export const rollEntries: RollEntry[] = [
         'y',
         'Roll centre y',
         'positive to the left, from the centreline',
-        "Sideways position of the roll centre in roll, where the lines from each contact patch through its front-view instant centre cross, in the body's axes.",
+        'Sideways position of the roll centre in roll, where the lines from each contact patch through ' +
+          "its front-view instant centre cross, in the body's axes.",
       ],
       [
         'z',
@@ -194,7 +199,8 @@ export const rollEntries: RollEntry[] = [
       'above the ground the tyres stand on at this row (the plane through both contact points, tilted by the ' +
       'roll), square to it; a solid axle on links: where the rod or the link pairs cross the centreline',
     definition:
-      "Roll centre height above the ground the tyres stand on at this row: the rod's or link pairs' centreline crossing on a solid axle, else the arms' contact-patch lines.",
+      "Roll centre height above the ground the tyres stand on at this row: the rod's or link pairs' " +
+      "centreline crossing on a solid axle, else the arms' contact-patch lines.",
     layouts: [...LINKED_AXLE, ...INDEPENDENT],
     group: 'geometry',
     why: 'rc',
@@ -211,7 +217,8 @@ export const rollEntries: RollEntry[] = [
       "the left side's side-view instant centre above the ground the tyres stand on at this row, square to it, " +
       'in the fore-aft plane through the left wheel centre',
     definition:
-      "Height of the left side's side-view instant centre above the ground the tyres stand on at this row of the roll sweep, measured square to that ground.",
+      "Height of the left side's side-view instant centre above the ground the tyres stand on at this " +
+      'row of the roll sweep, measured square to that ground.',
     layouts: [...LINKED_AXLE, ...INDEPENDENT],
     group: 'geometry',
     why: 'ic',

@@ -53,7 +53,8 @@ export const windUpEntries: WindUpEntry[] = [
     signed: false,
     sign: 'largest residual of the wound-up solve, never negative',
     definition:
-      "The largest mismatch between a member's set length and the distance between its ends in the wound-up solve: zero when the axle winds up freely.",
+      "The largest mismatch between a member's set length and the distance between its ends in the " +
+      'wound-up solve: zero when the axle winds up freely.',
   },
 ];
 
