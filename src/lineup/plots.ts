@@ -7,6 +7,7 @@
 import type { SweepResult } from '../../shared/kinematics/types';
 import type { Sketch } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
+import { axleEndOf } from '../../shared/kinematics/metrics/registry';
 import { buildPlots, PLOT_COLORS, type PlotSpec } from '../sweep/plots';
 
 /** One colour per variant, from our plot palette (blue, orange, green, violet). */
@@ -23,7 +24,11 @@ export function lineupPlots(variants: readonly PlottedVariant[], u: LengthUnit):
     v.result
       ? buildPlots(
           v.result,
-          { members: v.document.members, hasAxle: v.document.points.some((p) => p.body === 'axle') },
+          {
+            members: v.document.members,
+            hasAxle: v.document.points.some((p) => p.body === 'axle'),
+            axleEnd: axleEndOf(v.document.vehicle),
+          },
           {},
           [],
           u,

@@ -10,9 +10,12 @@ import { formatLength, mmToUnit, type LengthUnit } from '../../shared/units';
 import { vecDistance } from '../../shared/vec3';
 import { fixed, MISSING, showMetric, showRate, showRatio } from '../sweep/format';
 import {
+  axleEndOf,
   memberEntry,
   metricEntry,
+  metricHelp,
   sheetView,
+  type AxleEnd,
   type MetricEntry,
   type SheetItem,
 } from '../../shared/kinematics/metrics/registry';
@@ -40,6 +43,8 @@ export interface SheetMember {
 export interface SheetLine {
   label: string;
   value: string;
+  /** what the quantity is and its sign convention, from the registry (the label's tooltip) */
+  help?: string;
 }
 
 export interface BuildSheet {
@@ -96,7 +101,7 @@ function memberNote(m: Sketch['members'][number], result: SweepResult | null, u:
 const SHEET_MISSING = { reached: 'no roll sweep', ride: 'not defined' } as const;
 
 /** One geometry line of the build sheet: a metric's limit, its value at ride, or its span over the travel. */
-function sheetLine(item: SheetItem, result: SweepResult, u: LengthUnit): SheetLine {
+function sheetLine(item: SheetItem, result: SweepResult, u: LengthUnit, end: AxleEnd): SheetLine {
   const heave = result.heave;
   if (item.at === 'ride-point') {
     const [ex, ez] = item.metrics.map((m) => metricEntry(m) as MetricEntry<'heave'>);
@@ -104,6 +109,7 @@ function sheetLine(item: SheetItem, result: SweepResult, u: LengthUnit): SheetLi
     const axes = item.metrics.map((m) => m.key.split('.').pop()).join(', ');
     return {
       label: `${ex.point} at ride (${axes})`,
+      help: `${metricHelp(ex, end)} ${metricHelp(ez, end)}`,
       value:
         x !== null && x !== undefined && z !== null && z !== undefined
           ? `${formatLength(x, u)}, ${formatLength(z, u)}`
@@ -111,14 +117,16 @@ function sheetLine(item: SheetItem, result: SweepResult, u: LengthUnit): SheetLi
     };
   }
   const entry = metricEntry(item.metric);
+  const help = metricHelp(entry, end);
   if (item.at === 'reached') {
     if (entry.sweep === 'limits') {
       const v = (entry as MetricEntry<'limits'>).read(result.limits);
-      return { label: `${entry.label} reached`, value: showMetric(entry, v, u, SHEET_MISSING.reached).text };
+      return { label: `${entry.label} reached`, help, value: showMetric(entry, v, u, SHEET_MISSING.reached).text };
     }
     // Travel: how far the sweep reached each way.
     return {
       label: `${entry.label} reached`,
+      help,
       value: `${formatLength(-result.limits.droop, u)} droop, ${formatLength(result.limits.bump, u)} bump`,
     };
   }
@@ -126,6 +134,7 @@ function sheetLine(item: SheetItem, result: SweepResult, u: LengthUnit): SheetLi
   if (item.at === 'ride') {
     return {
       label: `${entry.label} at ride`,
+      help,
       value: showMetric(entry, read(result.ride), u, SHEET_MISSING.ride).text,
     };
   }
@@ -133,6 +142,7 @@ function sheetLine(item: SheetItem, result: SweepResult, u: LengthUnit): SheetLi
   const show = (v: number) => showMetric(entry, v, u, '').text;
   return {
     label: `${entry.label} over the travel`,
+    help,
     value: vals.length ? `${show(Math.min(...vals))} to ${show(Math.max(...vals))}` : MISSING,
   };
 }
@@ -158,7 +168,7 @@ export function buildSheet(
     return { id: m.id, kind: kindLabel(m.kind), ends: `${m.a} – ${m.b}`, length, note: memberNote(m, result, u) };
   });
 
-  const geometry: SheetLine[] = result ? sheetView.map((item) => sheetLine(item, result, u)) : [];
+  const geometry: SheetLine[] = result ? sheetView.map((item) => sheetLine(item, result, u, axleEndOf(v))) : [];
   return {
     vehicle,
     frame: sketch.points.filter((p) => p.body === 'frame').map((p) => pivot(p, u)),

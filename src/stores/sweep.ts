@@ -11,6 +11,7 @@ import { computed, ref, shallowRef, watch } from 'vue';
 import type { BodyPoses, HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
 import type { Sketch } from '../../shared/schema/sketch';
 import type { Deg, Mm } from '../../shared/units';
+import { axleEndOf } from '../../shared/kinematics/metrics/registry/help';
 import { createSweepRunner, type SweepRunner, type RunnerOptions } from '../sweep/runner';
 import type { SweepAnswer } from '../workers/sweep.protocol';
 import { checkTargets, readTargets, type Targets } from '../sweep/targets';
@@ -150,7 +151,12 @@ export const useSweepStore = defineStore('sweep', () => {
   const members = computed(() => sketch.value?.members ?? EMPTY_CONTEXT.members);
   const hasAxle = computed(() => (sketch.value?.points ?? []).some((p) => p.body === 'axle'));
   /** Members and layout facts the readout, flags and plots read besides the sweep. */
-  const context = computed<SweepContext>(() => ({ members: members.value, hasAxle: hasAxle.value }));
+  const axleEnd = computed(() => axleEndOf(sketch.value?.vehicle));
+  const context = computed<SweepContext>(() => ({
+    members: members.value,
+    hasAxle: hasAxle.value,
+    axleEnd: axleEnd.value,
+  }));
   const sweepBlock = computed(() => sketch.value?.sweep);
   /** The sweep range of the sketch (defaults filled in), for the sliders. */
   const range = computed(() => sweepRange({ sweep: sweepBlock.value }));

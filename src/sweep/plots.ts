@@ -10,10 +10,13 @@ import { mmToUnit } from '../../shared/units';
 import { bandIsSet, type TargetCheck, type Targets } from './targets';
 import {
   isMetricRef,
+  memberEntry,
   metricEntry,
+  metricHelp,
   plotsAxleView,
   plotsIndependentView,
   targetEntries,
+  type AxleEnd,
   type MetricEntry,
 } from '../../shared/kinematics/metrics/registry';
 import { quantityUnit, toDisplay } from './format';
@@ -45,6 +48,8 @@ export interface PlotBand {
 export interface PlotSpec {
   key: string;
   title: string;
+  /** what the plotted quantity is and its sign convention, from the registry (the title's tooltip) */
+  help: string;
   sweep: 'heave' | 'roll';
   /** axis titles with units */
   xTitle: string;
@@ -110,6 +115,7 @@ function curvePlot(
   targets: Targets,
   checks: TargetCheck[],
   u: LengthUnit,
+  end: AxleEnd | undefined,
 ): PlotSpec {
   const rows = (def.sweep === 'heave' ? result.heave : result.roll) as AnyRow[];
   const read = def.read as (r: AnyRow) => number | null | undefined;
@@ -124,6 +130,7 @@ function curvePlot(
   return {
     key: def.id,
     title: def.label,
+    help: metricHelp(def, end),
     sweep: def.sweep,
     xTitle: axisTitle(def.sweep, u),
     yTitle: quantityUnit(def.quantity, u),
@@ -163,6 +170,9 @@ function shockPlot(result: SweepResult, members: readonly SketchMember[], u: Len
   return {
     key: 'shocks',
     title: 'Shock lengths and stroke limits',
+    help:
+      `${metricHelp(memberEntry('length'))} ` +
+      "The dashed lines are each shock's shortest and longest length, in its own colour.",
     sweep: 'heave',
     xTitle: axisTitle('heave', u),
     yTitle: u,
@@ -196,7 +206,7 @@ export function buildPlots(
     const def = metricEntry(item) as CurveDef;
     // Quantities of a solid axle are not shown at all for a layout without one.
     if (!ctx.hasAxle && def.axle === 'only') continue;
-    const spec = curvePlot(def, result, targets, checks, u);
+    const spec = curvePlot(def, result, targets, checks, u, ctx.axleEnd);
     // A quantity the sweep never gives is left out where it is an extra (given only by some layouts), or where
     // the layout has no axle (anti-squat of a front suspension); for an axle it stays, with the reason, because
     // it should exist.

@@ -14,10 +14,13 @@ import {
   readoutRollView,
   linkLoadEntry,
   memberEntry,
+  metricHelp,
   windUpEntry,
+  type AxleEnd,
   type MetricEntry,
   type MetricRef,
 } from '../../shared/kinematics/metrics/registry';
+import { DEFAULT_AXLE_TORQUE_NM } from '../../shared/schema/sketchVocabulary';
 import {
   showAngle,
   showForce,
@@ -40,12 +43,32 @@ export interface ReadoutLine extends Shown {
   tone?: 'negative';
   /** a remark on a number that is shown (tooltip), e.g. an assumed load split */
   hint?: string;
+  /** what the number is and its sign convention, from the registry (the label's tooltip) */
+  help?: string;
 }
 
 /** What the readout shows of the sweep besides the row at the cursor (leaf-spring wind-up, link loads). */
 export interface ReadoutExtras {
   windUp?: WindUpReading;
   loads?: LinkLoadSummary;
+  /** true when the sketch gives no axle torque, so wind-up and link loads use DEFAULT_AXLE_TORQUE_NM */
+  torqueIsDefault?: boolean;
+}
+
+/**
+ * The axle torque the loads assume, in words: the sketch's own, or the default when it gives none.
+ * Shown with the link loads and the wind-up, so that a number is never read without its load.
+ */
+export function torqueAssumed(torqueNm: number, isDefault: boolean, u: LengthUnit): string {
+  const shown = showTorque(torqueNm, u).text;
+  return isDefault
+    ? `Under an axle torque of ${shown}, the default (the sketch gives none; set it in the axle torque box).`
+    : `Under the sketch's axle torque of ${shown}.`;
+}
+
+/** The default axle torque in the user's units, for the empty torque box's hint. */
+export function defaultTorqueText(u: LengthUnit): string {
+  return showTorque(DEFAULT_AXLE_TORQUE_NM, u).text;
 }
 
 export type CursorRow = { sweep: 'heave'; row: HeaveRow } | { sweep: 'roll'; row: RollRow };
@@ -58,6 +81,8 @@ export type CursorRow = { sweep: 'heave'; row: HeaveRow } | { sweep: 'roll'; row
 export interface SweepContext {
   members: readonly SketchMember[];
   hasAxle: boolean;
+  /** the end of the vehicle the suspension sits at (`vehicle.axle`), for the sign words of roll steer; rear when absent */
+  axleEnd?: AxleEnd;
 }
 
 export const EMPTY_CONTEXT: SweepContext = { members: [], hasAxle: false };
@@ -108,6 +133,7 @@ function memberLines(
       label: `${name} ${m.id} ${LENGTH.label}`,
       group: 'members',
       member: m.id,
+      help: metricHelp(LENGTH),
       ...showLength(r.length, u),
     };
     if (m.kind === 'shock') {
@@ -127,6 +153,7 @@ function memberLines(
       label: `${name} ${m.id} ${MOTION_RATIO.label}`,
       group: 'members',
       member: m.id,
+      help: metricHelp(MOTION_RATIO),
       ...showRatio(r.motionRatio, mrReason),
     });
     if (m.kind === 'spring' && m.rate !== undefined) {
@@ -136,6 +163,7 @@ function memberLines(
         label: `${capitalized(WHEEL_RATE.label)} (${m.id})`,
         group: 'members',
         member: m.id,
+        help: metricHelp(WHEEL_RATE),
         ...showRate(r.wheelRate, u, mrReason),
       });
     }
@@ -146,6 +174,7 @@ function memberLines(
         label: `${name} ${m.id} ${LENGTH_CHANGE.label} (${sweep})`,
         group: 'members',
         member: m.id,
+        help: metricHelp(LENGTH_CHANGE),
         ...showLength(r.lengthChange, u, undefined, true),
       });
       const w = windUp.members[m.id];
@@ -154,6 +183,7 @@ function memberLines(
         label: `${name} ${m.id} ${LENGTH_CHANGE.label} (wind-up)`,
         group: 'members',
         member: m.id,
+        help: metricHelp(LENGTH_CHANGE),
         ...showLength(w?.lengthChange, u, 'not solved under the wind-up', true),
       });
     }
@@ -167,6 +197,7 @@ function leafLines(
   hasShackle: boolean,
   windUp: WindUpReading | undefined,
   u: LengthUnit,
+  torqueIsDefault: boolean,
 ): ReadoutLine[] {
   const lines: ReadoutLine[] = [];
   if (hasShackle) {
@@ -175,26 +206,36 @@ function leafLines(
       key: shackle.id,
       label: shackle.label,
       group: 'leaf',
+      help: metricHelp(shackle),
       ...showMetric(shackle, shackleAngle, u, shackle.missing),
     });
   }
   if (!windUp) return lines;
   const torque = showTorque(windUp.torque, u).text;
   const [angle, rate, bind] = (['angle', 'rate', 'bind'] as const).map(windUpEntry);
+  const under = torqueAssumed(windUp.torque, torqueIsDefault, u);
   lines.push(
     {
       key: angle.id,
       label: `${angle.label} (${torque})`,
       group: 'leaf',
+      help: `${metricHelp(angle)} ${under}`,
       ...showAngle(angle.read(windUp), angle.missing, true),
     },
     {
       key: rate.id,
       label: rate.label,
       group: 'leaf',
+      help: metricHelp(rate),
       ...showMetric(rate, rate.read(windUp), u, rate.missing),
     },
-    { key: bind.id, label: bind.label, group: 'leaf', ...showLength(bind.read(windUp), u) },
+    {
+      key: bind.id,
+      label: bind.label,
+      group: 'leaf',
+      help: `${metricHelp(bind)} ${under}`,
+      ...showLength(bind.read(windUp), u),
+    },
   );
   return lines;
 }
@@ -210,8 +251,10 @@ function loadLines(
   rowLoads: Record<string, number> | undefined,
   sweep: 'heave' | 'roll',
   u: LengthUnit,
+  torqueIsDefault: boolean,
 ): ReadoutLine[] {
   const lines: ReadoutLine[] = [];
+  const help = `${metricHelp(linkLoadEntry)} ${torqueAssumed(loads.torque, torqueIsDefault, u)}`;
   const split = loads.indeterminate
     ? 'more links than the axle motions they locate: the split shown is the least-squares one (equal bushing stiffness); real bushings share it differently'
     : undefined;
@@ -230,6 +273,7 @@ function loadLines(
       label: `${name} ${m.id} ${linkLoadEntry.label}${sweep === 'roll' ? ' at ride' : ''}`,
       group: 'loads',
       member: m.id,
+      help,
       ...shown,
     };
     if (!shown.reason) {
@@ -275,6 +319,7 @@ function metricLine(
     key: entry.id,
     label: entry.shortLabel ?? entry.label,
     group: entry.group ?? 'geometry',
+    help: metricHelp(entry, ctx.axleEnd),
     ...showMetric(entry, read(row), u, entry.why ? why[entry.why] : entry.missing),
   };
 }
@@ -299,9 +344,12 @@ export function readoutLines(
     } else if (item === '*position') {
       const at = heave ? heave.travel : (r as RollRow).roll;
       lines.push({ key: 'position', label: 'Position', group: 'position', text: showPosition(cursor.sweep, at, u) });
-    } else if (item === '*leaf') lines.push(...leafLines(heave?.shackleAngle, hasShackle, extras.windUp, u));
-    else if (item === '*loads') {
-      if (extras.loads) lines.push(...loadLines(ctx, extras.loads, heave?.linkLoads, cursor.sweep, u));
+    } else if (item === '*leaf') {
+      lines.push(...leafLines(heave?.shackleAngle, hasShackle, extras.windUp, u, !!extras.torqueIsDefault));
+    } else if (item === '*loads') {
+      if (extras.loads) {
+        lines.push(...loadLines(ctx, extras.loads, heave?.linkLoads, cursor.sweep, u, !!extras.torqueIsDefault));
+      }
     } else lines.push(...memberLines(ctx, r.members, cursor.sweep, u, extras.windUp));
   }
   return lines;

@@ -13,6 +13,7 @@ export type * from './registry/types';
 export * from './registry/views';
 export * from './registry/members';
 export * from './registry/windUp';
+export * from './registry/help';
 export { heaveEntries, limitsEntries, rollEntries };
 export { driveJointNames } from './registry/heave';
 

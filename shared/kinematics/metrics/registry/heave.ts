@@ -6,6 +6,7 @@ import type { HeaveEntry, RollEntry } from './types';
 import type { HalfShaftReading, HeaveRow, SweepEvent } from '../../types';
 import type { Layout } from '../../../schema/sketchVocabulary';
 import { ALL_LAYOUTS, INDEPENDENT, SOLID_AXLE, WISHBONE } from './layouts';
+import { ROLL_STEER_AXLE_SENSE } from './rollSteerSense';
 
 /** Layouts whose side view has an instant centre (the leaf spring's from its three-link equivalent). */
 const SIDE_VIEW_IC: readonly Layout[] = [
@@ -18,16 +19,16 @@ const SIDE_VIEW_IC: readonly Layout[] = [
 ];
 
 const POSE_AXES = [
-  ['x', 'length', 'mm forward of ride'],
-  ['y', 'length', 'mm to the left of ride'],
-  ['z', 'length', 'mm up from ride'],
-  ['roll', 'angle', 'positive lifts the left side (ISO 8855)'],
-  ['pitch', 'angle', 'positive drops the nose (ISO 8855)'],
-  ['yaw', 'angle', 'positive turns the nose left (ISO 8855)'],
+  ['x', 'length', 'mm forward of ride', 'fore-aft movement'],
+  ['y', 'length', 'mm to the left of ride', 'sideways movement'],
+  ['z', 'length', 'mm up from ride', 'vertical movement'],
+  ['roll', 'angle', 'positive lifts the left side (ISO 8855)', 'roll angle'],
+  ['pitch', 'angle', 'positive drops the nose (ISO 8855)', 'pitch angle'],
+  ['yaw', 'angle', 'positive turns the nose left (ISO 8855)', 'yaw angle'],
 ] as const;
 
 /** The moving body's pose (the axle's, or the body carrying the left wheel), CSV only. */
-const pose: HeaveEntry[] = POSE_AXES.map(([axis, quantity, sign]) => ({
+const pose: HeaveEntry[] = POSE_AXES.map(([axis, quantity, sign, words]) => ({
   key: `pose.${axis}`,
   id: `pose-${axis}`,
   label: `Pose ${axis}`,
@@ -36,20 +37,54 @@ const pose: HeaveEntry[] = POSE_AXES.map(([axis, quantity, sign]) => ({
   read: (r) => r.pose[axis],
   signed: true,
   sign,
+  definition:
+    `The moving body's ${words} from ride (the axle's, or the body carrying the left wheel), ` + "in the body's axes.",
   layouts: ALL_LAYOUTS,
   csv: `pose.${axis}`,
 }));
 
 const DRIVELINE = [
-  ['length', 'ds-len', 'Driveshaft length', 'length', false, 'output joint to pinion joint'],
-  ['plunge', 'ds-plunge', 'Driveshaft plunge', 'length', true, 'positive when the slip yoke extends'],
-  ['outputAngle', 'ds-out', 'Output joint angle', 'angle', false, 'operating angle, never negative'],
-  ['pinionAngle', 'ds-pin', 'Pinion joint angle', 'angle', false, 'operating angle, never negative'],
+  [
+    'length',
+    'ds-len',
+    'Driveshaft length',
+    'length',
+    false,
+    'output joint to pinion joint',
+    'Length of the driveshaft between the centres of its output joint and its pinion joint.',
+  ],
+  [
+    'plunge',
+    'ds-plunge',
+    'Driveshaft plunge',
+    'length',
+    true,
+    'positive when the slip yoke extends',
+    "Change of the driveshaft's length from its length at ride, which the slip yoke must take.",
+  ],
+  [
+    'outputAngle',
+    'ds-out',
+    'Output joint angle',
+    'angle',
+    false,
+    'operating angle, never negative',
+    "Operating angle of the output joint: the 3-D angle between the gearbox's output shaft and the driveshaft.",
+  ],
+  [
+    'pinionAngle',
+    'ds-pin',
+    'Pinion joint angle',
+    'angle',
+    false,
+    'operating angle, never negative',
+    "Operating angle of the pinion joint: the 3-D angle between the driveshaft and the axle's pinion shaft.",
+  ],
 ] as const;
 
 /** The driveshaft, for a sketch with a driveline; `sweep` picks the rows read (heave or roll). */
 export function drivelineEntries<S extends 'heave' | 'roll'>(sweep: S, csv: boolean): Array<HeaveEntry | RollEntry> {
-  return DRIVELINE.map(([field, id, label, quantity, signed, sign]) => ({
+  return DRIVELINE.map(([field, id, label, quantity, signed, sign, definition]) => ({
     key: `driveline.${field}`,
     id,
     label,
@@ -59,6 +94,7 @@ export function drivelineEntries<S extends 'heave' | 'roll'>(sweep: S, csv: bool
     given: (r: { driveline?: HeaveRow['driveline'] }) => !!r.driveline,
     signed,
     sign,
+    definition,
     layouts: SOLID_AXLE,
     group: 'driveline' as const,
     ...(csv ? { csv: `driveline.${field}` } : {}),
@@ -73,17 +109,48 @@ export const driveJointNames: Record<NonNullable<SweepEvent['joint']>, string> =
   'half-shaft-outer': 'Outer half-shaft joint',
 };
 
-const HALF_SHAFT: ReadonlyArray<readonly [keyof HalfShaftReading, string, 'length' | 'angle', boolean, string]> = [
-  ['length', 'length', 'length', false, 'inner joint to outer joint'],
-  ['plunge', 'plunge', 'length', true, 'positive when the shaft must extend'],
-  ['innerAngle', 'inner joint angle', 'angle', false, 'operating angle, never negative'],
-  ['outerAngle', 'outer joint angle', 'angle', false, 'operating angle, never negative'],
+const HALF_SHAFT: ReadonlyArray<
+  readonly [keyof HalfShaftReading, string, 'length' | 'angle', boolean, string, (side: string) => string]
+> = [
+  [
+    'length',
+    'length',
+    'length',
+    false,
+    'inner joint to outer joint',
+    (side) => `Length of the ${side} half-shaft between the centres of its inner and outer joints.`,
+  ],
+  [
+    'plunge',
+    'plunge',
+    'length',
+    true,
+    'positive when the shaft must extend',
+    (side) => `Change of the ${side} half-shaft's length from its length at ride, which its plunging joint must take.`,
+  ],
+  [
+    'innerAngle',
+    'inner joint angle',
+    'angle',
+    false,
+    'operating angle, never negative',
+    (side) =>
+      `Operating angle of the ${side} inner joint: the 3-D angle between the drive unit's output and the shaft.`,
+  ],
+  [
+    'outerAngle',
+    'outer joint angle',
+    'angle',
+    false,
+    'operating angle, never negative',
+    (side) => `Operating angle of the ${side} outer joint: the 3-D angle between the shaft and the wheel's spin axis.`,
+  ],
 ];
 
 /** Half-shafts of independent wheels driven by a frame-mounted unit, per side. */
 export function halfShaftEntries<S extends 'heave' | 'roll'>(sweep: S, csv: boolean): Array<HeaveEntry | RollEntry> {
   return (['left', 'right'] as const).flatMap((side) =>
-    HALF_SHAFT.map(([field, words, quantity, signed, sign]) => ({
+    HALF_SHAFT.map(([field, words, quantity, signed, sign, definition]) => ({
       key: `halfShafts.${side}.${field}`,
       id: `hs-${side}-${field}`,
       label: `Half-shaft ${side} ${words}`,
@@ -93,6 +160,7 @@ export function halfShaftEntries<S extends 'heave' | 'roll'>(sweep: S, csv: bool
       given: (r: { halfShafts?: HeaveRow['halfShafts'] }) => !!r.halfShafts?.[side],
       signed,
       sign,
+      definition: definition(side),
       layouts: INDEPENDENT,
       ...(csv ? { csv: `halfShafts.${side}.${field}` } : {}),
     })),
@@ -114,6 +182,8 @@ export const heaveEntries: HeaveEntry[] = [
     read: (r) => r.travel,
     signed: true,
     sign: 'bump positive, droop negative',
+    definition:
+      "Vertical movement from ride of the wheel centre (of a solid axle: its reference point), imposed by the sweep in the body's axes.",
     layouts: ALL_LAYOUTS,
     csv: 'travel',
   },
@@ -128,6 +198,8 @@ export const heaveEntries: HeaveEntry[] = [
     axle: 'only',
     signed: true,
     sign: "positive when the axle's nose rises",
+    definition:
+      "Change from ride of the axle housing's side-view pitch against the body (body-fixed axes); the pinion shaft turns with it.",
     layouts: SOLID_AXLE,
     csv: 'pinionAngleChange',
     group: 'axle',
@@ -146,6 +218,7 @@ export const heaveEntries: HeaveEntry[] = [
     axle: 'only',
     signed: true,
     sign: 'positive to the left',
+    definition: "Sideways movement of the axle from its ride position, at its reference point in the body's axes.",
     layouts: SOLID_AXLE,
     csv: 'lateralShift',
     group: 'axle',
@@ -163,6 +236,8 @@ export const heaveEntries: HeaveEntry[] = [
     read: (r) => r.foreAftShift,
     signed: true,
     sign: 'positive forward',
+    definition:
+      "Fore-aft movement from ride of the axle (without an axle: of the left wheel centre), in the body's axes.",
     layouts: ALL_LAYOUTS,
     csv: 'foreAftShift',
     group: 'axle',
@@ -180,6 +255,9 @@ export const heaveEntries: HeaveEntry[] = [
     read: (r) => r.instantCenter?.x ?? null,
     signed: false,
     sign: "positive forward, in the frame's axes (ISO 8855)",
+    definition:
+      "Fore-aft position of the left side's side-view instant centre (where its upper and lower link " +
+      "lines cross, or a trailing arm's pivot axis), in the body's axes.",
     layouts: SIDE_VIEW_IC,
     csv: 'instantCenter.x',
     group: 'geometry',
@@ -195,6 +273,8 @@ export const heaveEntries: HeaveEntry[] = [
     read: (r) => r.instantCenter?.z ?? null,
     signed: false,
     sign: "z in the frame's axes (fixed to the body), from the ground at ride; not the height above the ground at this row",
+    definition:
+      "Height of the left side's side-view instant centre in the body-fixed axes, whose zero is the ground at ride.",
     layouts: SIDE_VIEW_IC,
     csv: 'instantCenter.z',
     group: 'geometry',
@@ -211,6 +291,8 @@ export const heaveEntries: HeaveEntry[] = [
     sign:
       'above the ground the tyres stand on at this row (the plane through both contact points), square to it, ' +
       'in the fore-aft plane through the left wheel centre',
+    definition:
+      "Height of the left side's side-view instant centre above the ground the tyres stand on at this row, measured square to that ground.",
     layouts: SIDE_VIEW_IC,
     csv: 'instantCenterAboveGround',
     group: 'geometry',
@@ -226,6 +308,9 @@ export const heaveEntries: HeaveEntry[] = [
     axle: 'or-defined',
     signed: false,
     sign: '100 % when the instant centre line meets the centre of gravity height at the front axle',
+    definition:
+      '100 × the slope of the line from the left contact patch (on trailing arms, whose drive is ' +
+      'frame-mounted: the wheel centre) through the side-view instant centre, over CG height / wheelbase.',
     layouts: [
       'four-link-lateral-rod',
       'triangulated-four-link',
@@ -249,6 +334,9 @@ export const heaveEntries: HeaveEntry[] = [
     read: (r) => r.rollCenterHeight,
     signed: false,
     sign: "z in the frame's axes (fixed to the body), from the ground at ride; not the height above the ground at this row",
+    definition:
+      'Roll centre height on the centreline in the body-fixed axes (zero: the ground at ride), from ' +
+      "the lateral rod, link pairs, spring seats or the arms' contact-patch lines.",
     layouts: ALL_LAYOUTS,
     csv: 'rollCenterHeight',
     group: 'geometry',
@@ -267,6 +355,9 @@ export const heaveEntries: HeaveEntry[] = [
     sign:
       'on the centreline, above the ground the tyres stand on at this row (the plane through both contact ' +
       'points), square to it; the body is held still and the ground moves by the travel',
+    definition:
+      'Roll centre height on the centreline above the ground the tyres stand on at this row, from the ' +
+      'same construction as the body-fixed roll centre.',
     layouts: ALL_LAYOUTS,
     csv: 'rollCenterAboveGround',
     group: 'geometry',
@@ -281,6 +372,9 @@ export const heaveEntries: HeaveEntry[] = [
     read: (r) => r.bind,
     signed: false,
     sign: 'largest constraint residual, never negative',
+    definition:
+      "The largest mismatch between a member's set length and the distance between its ends after the " +
+      'solve: zero when the linkage moves freely.',
     layouts: ALL_LAYOUTS,
     csv: 'bind',
     group: 'geometry',
@@ -295,6 +389,8 @@ export const heaveEntries: HeaveEntry[] = [
     given: given('camberChange'),
     signed: true,
     sign: 'left wheel, positive when the top leans out',
+    definition:
+      "Change from ride of the left wheel's camber in rear view, measured against the body (body-fixed axes), not against the ground.",
     layouts: INDEPENDENT,
     csv: 'camberChange',
     group: 'axle',
@@ -311,6 +407,7 @@ export const heaveEntries: HeaveEntry[] = [
     signed: true,
     digits: 3,
     sign: 'left wheel, positive toe-in',
+    definition: "Change from ride of the left wheel's toe in top view, measured against the body: the bump steer.",
     layouts: INDEPENDENT,
     csv: 'toeChange',
     group: 'axle',
@@ -328,6 +425,9 @@ export const heaveEntries: HeaveEntry[] = [
     sign:
       "left tyre, positive when its contact point moves away from the vehicle's centreline along the ground " +
       "(the lowest point of the tyre circle of the vehicle's tyre radius in the wheel plane); the scrub to keep small",
+    definition:
+      "Change from ride of the left contact patch's distance from the centreline, measured along the " +
+      'ground under the wheels (not at the wheel centre).',
     layouts: INDEPENDENT,
     csv: 'contactTrackChange',
     group: 'axle',
@@ -343,6 +443,8 @@ export const heaveEntries: HeaveEntry[] = [
     given: given('trackChange'),
     signed: true,
     sign: "positive when the left wheel centre moves away from the vehicle's centreline",
+    definition:
+      "Change from ride of the left wheel centre's distance from the centreline, in the body's axes (not at the contact patch).",
     layouts: INDEPENDENT,
     csv: 'trackChange',
     group: 'axle',
@@ -358,6 +460,7 @@ export const heaveEntries: HeaveEntry[] = [
     given: given('casterChange'),
     signed: true,
     sign: 'positive when the top of the kingpin axis moves rearward',
+    definition: "Change from ride of the left kingpin axis' side-view angle from the vertical, in the body's axes.",
     layouts: WISHBONE,
     csv: 'casterChange',
     group: 'axle',
@@ -373,6 +476,9 @@ export const heaveEntries: HeaveEntry[] = [
     given: given('frontViewInstantCenter'),
     signed: false,
     sign: 'positive to the left, from the centreline',
+    definition:
+      "Sideways position of the left wheel carrier's front-view instant centre (its wishbone lines' " +
+      "crossing, or a trailing arm's pivot axis), in the body's axes.",
     layouts: INDEPENDENT,
     csv: 'frontViewInstantCenter.y',
   },
@@ -387,6 +493,8 @@ export const heaveEntries: HeaveEntry[] = [
     given: given('frontViewInstantCenter'),
     signed: false,
     sign: "height in the frame's axes, from the ground at ride",
+    definition:
+      "Height of the left wheel carrier's front-view instant centre in the body-fixed axes, whose zero is the ground at ride.",
     layouts: INDEPENDENT,
     csv: 'frontViewInstantCenter.z',
   },
@@ -400,6 +508,9 @@ export const heaveEntries: HeaveEntry[] = [
     given: given('antiDive'),
     signed: false,
     sign: "100 % when the instant centre line carries all of the wheel's braking load transfer",
+    definition:
+      '100 × front brake share × the slope of the line from the left contact patch through the ' +
+      'side-view instant centre × wheelbase / centre of gravity height.',
     layouts: WISHBONE,
     csv: 'antiDive',
     group: 'geometry',
@@ -408,18 +519,40 @@ export const heaveEntries: HeaveEntry[] = [
   },
   ...(
     [
-      ['inclination', 'kpi', 'Kingpin inclination', 'angle', 'positive when the top of the axis leans inboard'],
-      ['caster', 'kp-caster', 'Caster', 'angle', 'positive when the top of the axis leans rearward'],
+      [
+        'inclination',
+        'kpi',
+        'Kingpin inclination',
+        'angle',
+        'positive when the top of the axis leans inboard',
+        "Front-view angle from the vertical of the left kingpin axis (through the two ball joints), in the body's axes.",
+      ],
+      [
+        'caster',
+        'kp-caster',
+        'Caster',
+        'angle',
+        'positive when the top of the axis leans rearward',
+        "Side-view angle from the vertical of the left kingpin axis (through the two ball joints), in the body's axes.",
+      ],
       [
         'scrubRadius',
         'scrub',
         'Scrub radius',
         'length',
         'positive when the axis meets the ground inboard of the patch',
+        'Sideways distance, at the ground, from the left contact patch to where the kingpin axis meets the ground.',
       ],
-      ['trail', 'trail', 'Mechanical trail', 'length', 'positive when the axis meets the ground ahead of the patch'],
+      [
+        'trail',
+        'trail',
+        'Mechanical trail',
+        'length',
+        'positive when the axis meets the ground ahead of the patch',
+        'Fore-aft distance, at the ground, from the left contact patch to where the kingpin axis meets the ground.',
+      ],
     ] as const
-  ).map(([field, id, label, quantity, sign]): HeaveEntry => ({
+  ).map(([field, id, label, quantity, sign, definition]): HeaveEntry => ({
     key: `kingpin.${field}`,
     id,
     label,
@@ -429,6 +562,7 @@ export const heaveEntries: HeaveEntry[] = [
     given: given('kingpin'),
     signed: false,
     sign,
+    definition,
     layouts: WISHBONE,
     csv: `kingpin.${field}`,
     group: 'geometry',
@@ -446,6 +580,8 @@ export const heaveEntries: HeaveEntry[] = [
     signed: true,
     digits: 1,
     sign: 'left shackle from the vertical, positive when the spring eye lies rearward of the hanger',
+    definition:
+      "Side-view angle of the left shackle, from its frame hanger to the spring eye, against the vertical in the body's axes.",
     layouts: ['leaf-spring'],
     csv: 'shackleAngle',
     group: 'leaf',
@@ -463,6 +599,10 @@ export const heaveEntries: HeaveEntry[] = [
     given: given('rollSteerInTravel'),
     signed: true,
     sign: '100 · yaw / roll of a small roll at this travel: positive when the axle turns its nose left as its left side lifts',
+    definition:
+      "The axle's yaw against the body per unit of roll for a small roll about this heave row's pose, " +
+      'as a percentage: the roll sweep’s roll steer, taken at every travel instead of at ride height only.',
+    axleSense: ROLL_STEER_AXLE_SENSE,
     layouts: SOLID_AXLE,
     group: 'geometry',
     missing: 'no roll at this travel: roll steer is a ratio to the roll angle',

@@ -19,6 +19,8 @@ export interface MemberMetricEntry {
   given?: (m: MemberReading) => boolean;
   signed: boolean;
   sign: string;
+  /** what the number is, in one sentence (types.ts `definition`) */
+  definition: string;
 }
 
 export const memberEntries: MemberMetricEntry[] = [
@@ -30,6 +32,7 @@ export const memberEntries: MemberMetricEntry[] = [
     csv: (id) => `members.${id}.length`,
     signed: false,
     sign: "between the member's two points, never negative",
+    definition: "Centre-to-centre distance between the member's two end points.",
   },
   {
     key: 'lengthChange',
@@ -39,6 +42,7 @@ export const memberEntries: MemberMetricEntry[] = [
     csv: (id) => `members.${id}.lengthChange`,
     signed: true,
     sign: 'length minus ride length: positive when the member extends',
+    definition: "Change of the member's length from its length at ride height.",
   },
   {
     key: 'motionRatio',
@@ -49,6 +53,8 @@ export const memberEntries: MemberMetricEntry[] = [
     given: (m) => m.motionRatio !== undefined,
     signed: false,
     sign: '|d length / d travel|, never negative (heave rows, shocks and springs)',
+    definition:
+      "How fast the member's length changes with wheel travel in the heave sweep: its length change per unit of wheel-centre travel.",
   },
   {
     key: 'wheelRate',
@@ -59,6 +65,8 @@ export const memberEntries: MemberMetricEntry[] = [
     given: (m) => m.wheelRate !== undefined,
     signed: false,
     sign: 'spring rate × motion ratio², never negative (springs with a rate)',
+    definition:
+      "The spring's rate as felt at the wheel centre in heave: the spring's own rate times its motion ratio squared.",
   },
 ];
 
@@ -71,6 +79,9 @@ export const linkLoadEntry = {
   csv: (id: string) => `linkLoads.${id}`,
   signed: true,
   sign: 'tension positive',
+  definition:
+    'Axial force in the link or lateral rod, by statics, from the axle torque pushing the axle at the contact patches; ' +
+    'the springs carry the weight.',
 };
 
 /** The member reading a view names. */

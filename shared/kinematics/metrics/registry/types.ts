@@ -20,6 +20,9 @@ export interface SweepRowOf {
   limits: SweepResult['limits'];
 }
 
+/** Which end of the vehicle a sketch's suspension sits at (`vehicle.axle`; rear when the sketch does not say). */
+export type AxleEnd = 'front' | 'rear';
+
 /** Why a number is missing, where the reason depends on the sketch (the readout words it). */
 export type MissingWhy = 'axle' | 'ic' | 'rc';
 
@@ -54,6 +57,14 @@ interface EntryBase<S extends MetricSweep> {
   digits?: number;
   /** the sign convention in words */
   sign: string;
+  /**
+   * what the number is, in one sentence ending with a period (at most ~200 characters), with the
+   * point it is taken at (wheel centre or contact patch) and the axes it is measured in (body-fixed
+   * or above the ground); the readout, plots, targets and build sheet show it as the quantity's help
+   */
+  definition: string;
+  /** for a quantity whose positive sign reads differently on a front and a rear axle: the words for each */
+  axleSense?: Record<AxleEnd, string>;
   /** the layouts whose sweep gives this number (the schema's layout names) */
   layouts: readonly Layout[];
   /** the CSV column of the heave rows' export; absent when not exported */

@@ -14,6 +14,8 @@ export interface WindUpEntry {
   read: (w: WindUpReading) => number;
   signed: boolean;
   sign: string;
+  /** what the number is, in one sentence (types.ts `definition`) */
+  definition: string;
   /** why the readout shows "—" */
   missing?: string;
 }
@@ -27,6 +29,8 @@ export const windUpEntries: WindUpEntry[] = [
     read: (w) => w.angle,
     signed: true,
     sign: "the axle housing's pitch, positive when the pinion nose rises",
+    definition:
+      "The axle housing's pitch against the body at ride height under the axle torque, as the leaf springs wind up.",
     missing: 'the springs do not resist wind-up',
   },
   {
@@ -37,6 +41,7 @@ export const windUpEntries: WindUpEntry[] = [
     read: (w) => w.rate,
     signed: false,
     sign: 'N·m of axle torque per degree of wind-up, never negative',
+    definition: 'Axle torque per degree of housing wind-up at ride height: how stiffly the leaf springs resist it.',
     missing: 'the springs have no rate',
   },
   {
@@ -47,6 +52,9 @@ export const windUpEntries: WindUpEntry[] = [
     read: (w) => w.bind,
     signed: false,
     sign: 'largest residual of the wound-up solve, never negative',
+    definition:
+      "The largest mismatch between a member's set length and the distance between its ends in the " +
+      'wound-up solve: zero when the axle winds up freely.',
   },
 ];
 
