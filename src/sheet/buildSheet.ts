@@ -12,6 +12,7 @@ import { fixed, MISSING, showMetric, showRate, showRatio } from '../sweep/format
 import {
   memberEntry,
   metricEntry,
+  metricShown,
   sheetView,
   type MetricEntry,
   type SheetItem,
@@ -95,6 +96,15 @@ function memberNote(m: Sketch['members'][number], result: SweepResult | null, u:
 /** Why a number of the build sheet is missing. */
 const SHEET_MISSING = { reached: 'no roll sweep', ride: 'not defined' } as const;
 
+/**
+ * Whether the sheet has a line for the item: a value at ride only where the sweep gives that quantity for
+ * this sketch and it means something there (no anti-squat for a front axle, no anti-dive for a rear one).
+ */
+function sheetShows(item: SheetItem, result: SweepResult): boolean {
+  if (item.at !== 'ride') return true;
+  return metricShown(metricEntry(item.metric) as MetricEntry<'heave'>, result.ride);
+}
+
 /** One geometry line of the build sheet: a metric's limit, its value at ride, or its span over the travel. */
 function sheetLine(item: SheetItem, result: SweepResult, u: LengthUnit): SheetLine {
   const heave = result.heave;
@@ -158,7 +168,9 @@ export function buildSheet(
     return { id: m.id, kind: kindLabel(m.kind), ends: `${m.a} – ${m.b}`, length, note: memberNote(m, result, u) };
   });
 
-  const geometry: SheetLine[] = result ? sheetView.map((item) => sheetLine(item, result, u)) : [];
+  const geometry: SheetLine[] = result
+    ? sheetView.filter((item) => sheetShows(item, result)).map((item) => sheetLine(item, result, u))
+    : [];
   return {
     vehicle,
     frame: sketch.points.filter((p) => p.body === 'frame').map((p) => pivot(p, u)),
