@@ -3,13 +3,12 @@
  * anything but "front" or "rear" is refused with the field named.
  */
 import { describe, expect, it } from 'vitest';
-import { checkSketch, type SketchInput } from '../../../shared/schema/sketch';
+import { checkSketch } from '../../../shared/schema/sketch';
 import { exampleSketch } from '../kinematics/helpers';
 
 function withAxle(axle: unknown): unknown {
-  const doc = structuredClone(exampleSketch()) as SketchInput & { vehicle: Record<string, unknown> };
-  doc.vehicle.axle = axle;
-  return doc;
+  const doc = structuredClone(exampleSketch());
+  return { ...doc, vehicle: { ...doc.vehicle, axle } };
 }
 
 describe('vehicle.axle', () => {
