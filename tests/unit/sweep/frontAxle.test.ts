@@ -89,4 +89,13 @@ describe('the four-link starter as a front axle', () => {
       'rear',
     );
   });
+
+  it('notes a front axle whose links run forward, as a rear sketch marked front would', () => {
+    const unmirrored = runSweep({ ...rear, vehicle: { ...rear.vehicle, axle: 'front' } });
+    const note = (w: string) => w.includes('links run forward');
+    expect(unmirrored.warnings.some(note)).toBe(true);
+    expect(unmirrored.ride.antiDive!).toBeLessThan(0);
+    expect(frontResult.warnings.some(note)).toBe(false);
+    expect(rearResult.warnings.some(note)).toBe(false);
+  });
 });
