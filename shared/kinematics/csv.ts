@@ -5,7 +5,7 @@
  * defined) is an empty cell.
  */
 import type { HeaveRow, SweepResult } from './types';
-import { csvView, linkLoadEntry, memberEntries, metricEntry } from './metrics/registry';
+import { csvView, linkLoadEntry, memberEntries, metricEntry, metricShown } from './metrics/registry';
 
 type Column = { name: string; get: (r: HeaveRow) => number | null | undefined };
 
@@ -44,7 +44,7 @@ function columns(result: SweepResult): Column[] {
         cols.push({ name: linkLoadEntry.csv(id), get: (r) => linkLoadEntry.read(r.linkLoads, id) });
     } else {
       const e = metricEntry({ sweep: 'heave', key: item.key });
-      if (e.csv === undefined || (e.given && !e.given(first))) continue;
+      if (e.csv === undefined || !metricShown(e, first)) continue;
       cols.push({ name: e.csv, get: e.read });
     }
   }

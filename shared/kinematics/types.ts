@@ -137,10 +137,23 @@ export interface HeaveRow {
   kingpin?: KingpinReading | null;
   /**
    * %, anti-dive of the left front wheel under braking, from the contact patch through the side-view
-   * instant centre (`instantCenter`) with the vehicle's front brake share (addition: double wishbone;
-   * metrics/antiDive.ts names the formula); null when not defined
+   * instant centre (`instantCenter`) with the vehicle's front brake share (addition: double wishbone,
+   * and a solid axle at the front; metrics/antiDive.ts names the formula); null when not defined
    */
   antiDive?: number | null;
+  /**
+   * %, anti-lift of a front solid axle under power, from the contact patch through the side-view
+   * instant centre, the axle taking the whole tractive force (addition: solid axles at the front;
+   * metrics/antiLift.ts names the formula); null when not defined or when the sketch has no driveline.
+   * A front axle's rows carry this field and no anti-squat.
+   */
+  antiLift?: number | null;
+  /**
+   * %, anti-lift of a rear solid axle in braking, from the contact patch through the side-view instant
+   * centre with the rear brake share (100 − `vehicle.frontBrakeShare`) (addition: solid axles at the
+   * rear; metrics/antiLift.ts names the formula); null when not defined
+   */
+  antiLiftBraking?: number | null;
   /**
    * deg, the left shackle's side-view angle from the vertical through its frame hanger,
    * positive when the spring eye lies rearward of the hanger (addition: leaf springs)

@@ -11,6 +11,7 @@ import { SketchValidationError, formatPath } from './errors';
 import { vecDistance } from '../vec3';
 import { targetsSchema, tracingSchema } from './boardFields';
 import {
+  axleEnds,
   bodyIds,
   layouts,
   DEFAULT_BIND_THRESHOLD_MM,
@@ -77,6 +78,8 @@ export const vehicleSchema = z.looseObject({
   tireRadius: positiveLength,
   /** %, share of the braking force on the front axle, for anti-dive (addition; default DEFAULT_FRONT_BRAKE_SHARE_PERCENT) */
   frontBrakeShare: z.number().min(0).max(100).optional(),
+  /** which end a solid axle is (addition; absent: DEFAULT_AXLE_END, rear); the board writes it only when chosen */
+  axle: z.enum(axleEnds).optional(),
 });
 
 export const sweepSettingsSchema = z

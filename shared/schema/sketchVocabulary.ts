@@ -17,6 +17,14 @@ export const layouts = [
 ] as const;
 export type Layout = (typeof layouts)[number];
 
+/**
+ * Which end of the vehicle a solid axle is (`vehicle.axle`). The sketch keeps its axes (x forward) either
+ * way, so a front axle's links run rearward to the frame. Absent means rear, as every earlier file is.
+ */
+export const axleEnds = ['front', 'rear'] as const;
+export type AxleEnd = (typeof axleEnds)[number];
+export const DEFAULT_AXLE_END: AxleEnd = 'rear';
+
 /** Bodies a point can belong to. The frame is fixed; the others move. */
 export const bodyIds = [
   'frame',

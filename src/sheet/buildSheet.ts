@@ -14,6 +14,7 @@ import {
   memberEntry,
   metricEntry,
   metricHelp,
+  metricShown,
   sheetView,
   type AxleEnd,
   type MetricEntry,
@@ -100,6 +101,15 @@ function memberNote(m: Sketch['members'][number], result: SweepResult | null, u:
 /** Why a number of the build sheet is missing. */
 const SHEET_MISSING = { reached: 'no roll sweep', ride: 'not defined' } as const;
 
+/**
+ * Whether the sheet has a line for the item: a value at ride only where the sweep gives that quantity for
+ * this sketch and it means something there (no anti-squat for a front axle, no anti-dive for a rear one).
+ */
+function sheetShows(item: SheetItem, result: SweepResult): boolean {
+  if (item.at !== 'ride') return true;
+  return metricShown(metricEntry(item.metric) as MetricEntry<'heave'>, result.ride);
+}
+
 /** One geometry line of the build sheet: a metric's limit, its value at ride, or its span over the travel. */
 function sheetLine(item: SheetItem, result: SweepResult, u: LengthUnit, end: AxleEnd): SheetLine {
   const heave = result.heave;
@@ -168,7 +178,9 @@ export function buildSheet(
     return { id: m.id, kind: kindLabel(m.kind), ends: `${m.a} – ${m.b}`, length, note: memberNote(m, result, u) };
   });
 
-  const geometry: SheetLine[] = result ? sheetView.map((item) => sheetLine(item, result, u, axleEndOf(v))) : [];
+  const geometry: SheetLine[] = result
+    ? sheetView.filter((item) => sheetShows(item, result)).map((item) => sheetLine(item, result, u, axleEndOf(v)))
+    : [];
   return {
     vehicle,
     frame: sketch.points.filter((p) => p.body === 'frame').map((p) => pivot(p, u)),

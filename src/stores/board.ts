@@ -2,7 +2,7 @@ import { defineStore } from 'pinia';
 import { computed, ref, shallowRef } from 'vue';
 import { api, ApiError, errorMessage } from '../api/http';
 import type { Revision, SketchDetail } from '../api/types';
-import { checkSketch, type MemberKind, type Sketch } from '../../shared/schema/sketch';
+import { checkSketch, type AxleEnd, type MemberKind, type Sketch } from '../../shared/schema/sketch';
 import { unitToMm, type Mm } from '../../shared/units';
 import { History } from './board/history';
 import { findPairs } from './board/pairs';
@@ -267,6 +267,11 @@ export const useBoardStore = defineStore('board', () => {
   function setVehicleField(field: edits.VehicleField, value: Mm): EditResult {
     return commit(`Set ${field}`, (d) => edits.setVehicleField(d, field, value));
   }
+
+  /** Puts a solid axle at the front or the rear of the vehicle (`vehicle.axle`). */
+  function setAxleEnd(end: AxleEnd): EditResult {
+    return commit(`Axle at the ${end}`, (d) => edits.setAxleEnd(d, end));
+  }
   /** Renames the sketch. */
   function rename(name: string): EditResult {
     return commit('Rename sketch', (d) => edits.renameSketch(d, name));
@@ -472,6 +477,7 @@ export const useBoardStore = defineStore('board', () => {
     addPoint,
     deletePoint,
     setVehicleField,
+    setAxleEnd,
     rename,
     setSweepSettings,
     setTargets,

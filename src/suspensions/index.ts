@@ -4,7 +4,8 @@
  * one source.
  */
 import { starters } from '../../shared/kinematics/starters';
-import type { Layout } from '../../shared/schema/sketch';
+import { SOLID_AXLE } from '../../shared/kinematics/metrics/registry/layouts';
+import type { AxleEnd, Layout } from '../../shared/schema/sketch';
 import type { SuspensionDescriptor } from './types';
 
 const axle = { legend: 'axle', pivotsTitle: 'Axle pivots' };
@@ -58,3 +59,21 @@ export const layoutOptions: { value: Layout; label: string }[] = Object.values(s
   value: s.layout,
   label: s.label,
 }));
+
+/**
+ * The cross (y–z) view's name for an open sketch: the layout's, except that a solid axle the vehicle block
+ * puts at the front (`vehicle.axle`) is seen in its front view. Rear while no sketch is open.
+ */
+export function crossViewOf(
+  sketch: { layout: string; vehicle: { axle?: AxleEnd } } | null | undefined,
+): SuspensionDescriptor['crossView'] {
+  const d = suspensionOf(sketch?.layout);
+  if (!d) return 'rear';
+  if ((SOLID_AXLE as readonly string[]).includes(d.layout) && sketch?.vehicle.axle === 'front') return 'front';
+  return d.crossView;
+}
+
+/** Whether the layout carries its wheels on one solid axle (the board offers the front / rear choice). */
+export function hasSolidAxle(layout: string | null | undefined): boolean {
+  return (SOLID_AXLE as readonly string[]).includes(layout ?? '');
+}

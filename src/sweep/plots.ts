@@ -206,6 +206,8 @@ export function buildPlots(
     const def = metricEntry(item) as CurveDef;
     // Quantities of a solid axle are not shown at all for a layout without one.
     if (!ctx.hasAxle && def.axle === 'only') continue;
+    // A quantity that means nothing for this sketch (anti-squat of a front axle) is left out.
+    if (item.sweep === 'heave' && (def as MetricEntry<'heave'>).hidden?.(result.ride)) continue;
     const spec = curvePlot(def, result, targets, checks, u, ctx.axleEnd);
     // A quantity the sweep never gives is left out where it is an extra (given only by some layouts), or where
     // the layout has no axle (anti-squat of a front suspension); for an axle it stays, with the reason, because

@@ -315,6 +315,7 @@ function metricLine(
   if (entry.axle === 'only' && !ctx.hasAxle) return null;
   if (entry.axle === 'or-defined' && !ctx.hasAxle && read(row) === null) return null;
   if (given && !given(row)) return null;
+  if (entry.hidden && (entry.hidden as (r: HeaveRow | RollRow) => boolean)(row)) return null;
   return {
     key: entry.id,
     label: entry.shortLabel ?? entry.label,

@@ -6,7 +6,7 @@
 import type { TargetMetric } from '../../schema/boardFields';
 import { heaveEntries } from './registry/heave';
 import { limitsEntries, rollEntries } from './registry/roll';
-import type { AnyEntry, MetricEntry, MetricSweep, TargetEntry } from './registry/types';
+import type { AnyEntry, MetricEntry, MetricSweep, SweepRowOf, TargetEntry } from './registry/types';
 import type { MetricRef } from './registry/views';
 
 export type * from './registry/types';
@@ -31,6 +31,15 @@ export function metricEntry<S extends MetricSweep>(ref: { sweep: S; key: string 
   const e = bySweep[ref.sweep].get(ref.key);
   if (!e) throw new Error(`No ${ref.sweep} metric named "${ref.key}" in the registry.`);
   return e as unknown as MetricEntry<S>;
+}
+
+/**
+ * Whether a screen shows the metric for the sketch swept, judged on one of its rows: the sweep gives it
+ * (`given`) and it means something there (not `hidden`, e.g. anti-squat of a front axle).
+ */
+export function metricShown<S extends MetricSweep>(entry: MetricEntry<S>, row: SweepRowOf[S]): boolean {
+  if (entry.given && !entry.given(row)) return false;
+  return !entry.hidden?.(row);
 }
 
 /** True for a view item that names a metric (not a `*` section). */

@@ -5,8 +5,8 @@
  * with a message for the user; nothing is changed then.
  * Lengths in mm.
  */
-import type { MemberKind, Sketch } from '../../../shared/schema/sketch';
-import { MAX_ID_LENGTH, drivelinePointKeys } from '../../../shared/schema/sketch';
+import type { AxleEnd, MemberKind, Sketch } from '../../../shared/schema/sketch';
+import { DEFAULT_AXLE_END, MAX_ID_LENGTH, drivelinePointKeys } from '../../../shared/schema/sketch';
 import type { Mm } from '../../../shared/units';
 import { vecDistance, type Vec3 } from '../../../shared/vec3';
 
@@ -256,6 +256,18 @@ export type VehicleField = 'wheelbase' | 'cgHeight' | 'track' | 'tireRadius';
 export function setVehicleField(doc: Sketch, field: VehicleField, value: Mm): Sketch {
   if (doc.vehicle[field] === value) return doc;
   return { ...doc, vehicle: { ...doc.vehicle, [field]: value } };
+}
+
+/**
+ * Puts a solid axle at the front or the rear (`vehicle.axle`). Rear is the default: choosing it removes the
+ * field, so a file that never had one is left as it was.
+ */
+export function setAxleEnd(doc: Sketch, end: AxleEnd): Sketch {
+  if ((doc.vehicle.axle ?? DEFAULT_AXLE_END) === end) return doc;
+  const vehicle = { ...doc.vehicle };
+  if (end === DEFAULT_AXLE_END) delete vehicle.axle;
+  else vehicle.axle = end;
+  return { ...doc, vehicle };
 }
 
 /** Top-level fields the board replaces whole. */

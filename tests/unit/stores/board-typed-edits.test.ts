@@ -7,7 +7,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { createPinia, setActivePinia } from 'pinia';
 import type { Sketch } from '../../../shared/schema/sketch';
-import { renameSketch, setSweepSettings, setTargets, setTracing } from '../../../src/stores/board/edits';
+import { renameSketch, setAxleEnd, setSweepSettings, setTargets, setTracing } from '../../../src/stores/board/edits';
 import { useBoardStore } from '../../../src/stores/board';
 import { detailOf, fourLink } from '../board/fixture';
 
@@ -118,5 +118,29 @@ describe('board store: typed whole-field edits', () => {
     expect(board.setTracing(undefined).ok).toBe(false);
     expect(board.setSweepSettings(board.document!.sweep).ok).toBe(false);
     expect(board.document).toEqual(fourLink());
+  });
+});
+
+describe('the axle end (vehicle.axle)', () => {
+  beforeEach(() => setActivePinia(createPinia()));
+
+  it('front is written; rear, the default, is never written into a file that lacks it', () => {
+    const doc = fourLink();
+    expect(setAxleEnd(doc, 'rear')).toBe(doc);
+    const front = setAxleEnd(doc, 'front');
+    expect(front.vehicle.axle).toBe('front');
+    expect(front.vehicle.wheelbase).toBe(doc.vehicle.wheelbase);
+    expect(front.points).toBe(doc.points);
+    expect('axle' in setAxleEnd(front, 'rear').vehicle).toBe(false);
+  });
+
+  it('the board applies it as one undo step', () => {
+    const board = useBoardStore();
+    board.setLoaded(detailOf(fourLink()));
+    const start = JSON.stringify(board.document);
+    expect(board.setAxleEnd('front').ok).toBe(true);
+    expect(board.document!.vehicle.axle).toBe('front');
+    expect(board.undo()).toBe(true);
+    expect(JSON.stringify(board.document)).toBe(start);
   });
 });

@@ -25,6 +25,7 @@ describe('travel plots of a solid axle', () => {
       'pinion',
       'lateral',
       'antisquat',
+      'antilift-brake',
       'foreaft',
       'rc',
       'ic-height',

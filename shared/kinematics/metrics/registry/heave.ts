@@ -5,7 +5,7 @@
 import type { HeaveEntry, RollEntry } from './types';
 import type { HalfShaftReading, HeaveRow, SweepEvent } from '../../types';
 import type { Layout } from '../../../schema/sketchVocabulary';
-import { ALL_LAYOUTS, INDEPENDENT, SOLID_AXLE, WISHBONE } from './layouts';
+import { ALL_LAYOUTS, INDEPENDENT, LINKED_AXLE, SOLID_AXLE, WISHBONE } from './layouts';
 import { ROLL_STEER_AXLE_SENSE } from './rollSteerSense';
 
 /** Layouts whose side view has an instant centre (the leaf spring's from its three-link equivalent). */
@@ -305,6 +305,8 @@ export const heaveEntries: HeaveEntry[] = [
     quantity: 'percent',
     sweep: 'heave',
     read: (r) => r.antiSquat,
+    // A front axle's rows carry anti-lift under power in its place (vehicle.axle).
+    hidden: (r) => r.antiLift !== undefined,
     axle: 'or-defined',
     signed: false,
     sign: '100 % when the instant centre line meets the centre of gravity height at the front axle',
@@ -511,8 +513,46 @@ export const heaveEntries: HeaveEntry[] = [
     definition:
       '100 × front brake share × the slope of the line from the left contact patch through the ' +
       'side-view instant centre × wheelbase / centre of gravity height.',
-    layouts: WISHBONE,
+    layouts: [...LINKED_AXLE, ...WISHBONE],
     csv: 'antiDive',
+    group: 'geometry',
+    why: 'ic',
+    plotEmpty: '',
+  },
+  {
+    key: 'antiLift',
+    id: 'antilift',
+    label: 'Anti-lift under power',
+    quantity: 'percent',
+    sweep: 'heave',
+    read: (r) => r.antiLift,
+    given: given('antiLift'),
+    signed: false,
+    sign: "100 % when the instant centre line carries all of the front's load transfer under power (the axle driving alone)",
+    definition:
+      "A front solid axle's anti-lift under power, taking all the drive: 100 × the slope of the line from the left " +
+      'contact patch through the side-view instant centre × wheelbase / CG height.',
+    layouts: LINKED_AXLE,
+    csv: 'antiLift',
+    group: 'geometry',
+    missing: 'needs a driveline and an upper and lower link',
+    plotEmpty: '',
+  },
+  {
+    key: 'antiLiftBraking',
+    id: 'antilift-brake',
+    label: 'Anti-lift in braking',
+    quantity: 'percent',
+    sweep: 'heave',
+    read: (r) => r.antiLiftBraking,
+    given: given('antiLiftBraking'),
+    signed: false,
+    sign: "100 % when the instant centre line carries all of the rear's braking load transfer",
+    definition:
+      "A rear solid axle's anti-lift in braking: 100 × rear brake share × the slope of the line from the left " +
+      'contact patch through the side-view instant centre × wheelbase / CG height.',
+    layouts: LINKED_AXLE,
+    csv: 'antiLiftBraking',
     group: 'geometry',
     why: 'ic',
     plotEmpty: '',

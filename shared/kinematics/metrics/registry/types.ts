@@ -47,6 +47,11 @@ interface EntryBase<S extends MetricSweep> {
    */
   given?: (row: SweepRowOf[S]) => boolean;
   /**
+   * true where the quantity means nothing for the sketch swept although its layout gives it, judged on
+   * one row: no screen shows it then (anti-squat of a solid axle at the front); absent: never hidden
+   */
+  hidden?: (row: SweepRowOf[S]) => boolean;
+  /**
    * how it belongs to a solid axle: `only` is not shown for a layout without one, `or-defined`
    * is shown without an axle only where the sweep defines it
    */
