@@ -1,12 +1,14 @@
 /**
  * Flags raised along a sweep: shock travel limits, bind over the threshold, driveline
- * joint angles over the limit, and the driveshaft's own rules (drivelineEvents.ts). Each
+ * joint angles over the limit, the driveshaft's own rules (drivelineEvents.ts), and a shock or spring
+ * through a wishbone arm (armClash.ts: at the first row where it does, not interpolated). Each
  * is found on each side of ride height separately, as the first crossing when marching
  * outward, at the travel (or roll) interpolated linearly between the two rows that
  * straddle the limit (crossings.ts).
  */
 import type { Sketch } from '../schema/sketch';
 import { firstCrossing, outward, whereText, type Row, type SweepKind } from './crossings';
+import { armClashEvents } from './armClash';
 import { drivelineEvents } from './drivelineEvents';
 import type { SweepEvent } from './types';
 
@@ -86,5 +88,6 @@ export function sweepEvents(sketch: Sketch, kind: SweepKind, rows: Row[]): Sweep
       for (const e of drivelineEvents(sketch.driveline, kind, side)) push(e);
     }
   }
+  events.push(...armClashEvents(sketch, kind, rows));
   return events.sort((p, q) => Math.abs(p.at) - Math.abs(q.at) || p.at - q.at);
 }

@@ -36,7 +36,10 @@ export interface BodyModel {
   side: 'left' | 'right' | null;
   /** mm, |y| of the wheel centre of a wheel carrier: the lever of body roll at that wheel */
   halfTrack: number;
-  /** how many sketch points are on the body (one point: its rotation moves nothing, so the sweep holds it) */
+  /**
+   * how many sketch points are on the body, a hinge's two axis points included (one point: its rotation moves
+   * nothing, so the sweep holds it)
+   */
   pointCount: number;
 }
 
@@ -79,8 +82,23 @@ export interface HingeConstraint {
   across2: Vec3;
 }
 
+/**
+ * A ball joint (spherical joint): the wishbone arm's point a and the knuckle's copy of that place (b, with the
+ * ride position of a) stay together. Three residuals (mm), the components of pA − pB.
+ */
+export interface CoincidentConstraint {
+  type: 'coincident';
+  member: SketchMember;
+  a: PointModel;
+  b: PointModel;
+}
+
 export type Constraint =
-  DistanceConstraint | HingeConstraint | PlanarConstraint<PointModel> | BendingConstraint<PointModel>;
+  | DistanceConstraint
+  | HingeConstraint
+  | CoincidentConstraint
+  | PlanarConstraint<PointModel>
+  | BendingConstraint<PointModel>;
 
 /** The error for a constraint of a kind the model does not know (built by something other than linkageModelBuild). */
 export function unknownConstraintError(c: never): Error {
@@ -93,6 +111,8 @@ export function constraintRows(c: Constraint): number {
   switch (c.type) {
     case 'hinge':
       return 5;
+    case 'coincident':
+      return 3;
     case 'distance':
     case 'planar':
     case 'bending':
@@ -108,6 +128,7 @@ export function constraintSlots(c: Constraint): number[] {
     case 'hinge':
       return [c.slot];
     case 'distance':
+    case 'coincident':
       return [c.a.slot, c.b.slot].filter((s) => s !== FRAME_SLOT);
     case 'planar':
       return [...new Set(c.pairs.flatMap((p) => [p.a.slot, p.b.slot]))].filter((s) => s !== FRAME_SLOT);
@@ -191,7 +212,9 @@ export function linkageModelBuild(sketch: Sketch): LinkageModel {
       side = carriesLeft ? 'left' : 'right';
       halfTrack = Math.abs((carriesLeft ? wl : wr).y);
     }
-    const pointCount = sketch.points.filter((p) => p.body === id).length;
+    // A hinge's two axis points count too: the body carries copies of them, so its rotation moves something.
+    const hinges = sketch.members.filter((m) => m.kind === 'hinge' && m.body === id).length;
+    const pointCount = sketch.points.filter((p) => p.body === id).length + 2 * hinges;
     bodies.push({ id, slot: bodies.length, role, reference, side, halfTrack, pointCount });
   }
   const bodyById = new Map(bodies.map((b) => [b.id, b]));
@@ -214,6 +237,11 @@ export function linkageModelBuild(sketch: Sketch): LinkageModel {
     // A leaf half holds its length like a link (layouts/leaf-spring/constraints.ts adds its bend and plane).
     if (rigidMemberKinds.includes(m.kind) || m.kind === 'leaf-half') {
       constraints.push({ type: 'distance', member: m, a, b, length: vecLength(vecSub(a.ride, b.ride)) });
+    } else if (m.kind === 'ball-joint') {
+      // The joint is at the arm's point: the knuckle carries its own copy of that place.
+      const knuckle = b.slot === FRAME_SLOT ? null : bodies[b.slot];
+      const held = { ...b, ride: a.ride, local: knuckle ? vecSub(a.ride, knuckle.reference) : a.ride };
+      constraints.push({ type: 'coincident', member: m, a, b: held });
     } else if (m.kind === 'hinge') {
       const body = bodyById.get(m.body);
       if (!body) continue;

@@ -4,13 +4,21 @@
  * - distance (link, lateral rod, tie rod, shackle): r = |pA − pB| − L0,
  *   ∂r/∂q = u · (∂pA/∂q − ∂pB/∂q), u the unit vector from B to A;
  * - hinge: the arm's copies of the axis points stay on the frame axis;
+ * - coincident (ball joint): r = pA − pB, three rows, ∂r/∂q = ∂pA/∂q − ∂pB/∂q;
  * - planar and bending (leaf springs, layouts/leaf-spring/constraints.ts): a pivot's y offset, and a
  *   leaf half's bend.
  * One function per constraint kind; residualsEvaluate switches over the kind, and a kind it
  * does not know is an error, never another kind's rows.
  * A point on a body is p = ref + t + R·local, so ∂p/∂t = I and ∂p/∂angle_k = (∂R/∂angle_k)·local.
  */
-import type { Constraint, DistanceConstraint, HingeConstraint, LinkageModel, PointModel } from './model';
+import type {
+  CoincidentConstraint,
+  Constraint,
+  DistanceConstraint,
+  HingeConstraint,
+  LinkageModel,
+  PointModel,
+} from './model';
 import type { BendingConstraint, PlanarConstraint } from './layouts/leaf-spring/constraints';
 import {
   constraintRows as constraintRowsImported,
@@ -289,6 +297,37 @@ function hingeRows(
   addPointRow(J, row + 4, cols, c.slot, rs, lb.x, lb.y, lb.z, e2.x, e2.y, e2.z, 1, tmp);
 }
 
+/** The three ball-joint rows: the arm's point minus the knuckle's point, per axis. */
+function coincidentRows(
+  model: LinkageModel,
+  c: CoincidentConstraint,
+  state: Float64Array,
+  work: ResidualWork,
+  r: Float64Array,
+  J: Float64Array | null,
+  row: number,
+): void {
+  const { rot, pts, tmp } = work;
+  const cols = model.stateSize;
+  pointPlace(model, c.a, state, rot, pts, 0);
+  pointPlace(model, c.b, state, rot, pts, 3);
+  r[row] = pts[0] - pts[3];
+  r[row + 1] = pts[1] - pts[4];
+  r[row + 2] = pts[2] - pts[5];
+  if (!J) return;
+  for (const [p, sign] of [
+    [c.a, 1],
+    [c.b, -1],
+  ] as const) {
+    if (p.slot === FRAME_SLOT) continue;
+    const rs = rot.sets[p.slot];
+    const l = p.local;
+    addPointRow(J, row, cols, p.slot, rs, l.x, l.y, l.z, 1, 0, 0, sign, tmp);
+    addPointRow(J, row + 1, cols, p.slot, rs, l.x, l.y, l.z, 0, 1, 0, sign, tmp);
+    addPointRow(J, row + 2, cols, p.slot, rs, l.x, l.y, l.z, 0, 0, 1, sign, tmp);
+  }
+}
+
 /**
  * Evaluates the residuals r (length model.residualCount, mm) and, when J is given, the
  * full Jacobian (residualCount × stateSize, row-major) at `state`. Throws for a constraint
@@ -329,6 +368,8 @@ function residualRows(
       return bendingRows(model, c, state, work, r, J, row);
     case 'hinge':
       return hingeRows(model, c, state, work, r, J, row);
+    case 'coincident':
+      return coincidentRows(model, c, state, work, r, J, row);
     default:
       throw unknownConstraintError(c);
   }

@@ -6,7 +6,7 @@
  * Lengths mm, angles degrees, rates N/mm, ratios and percentages plain numbers.
  */
 import type { Deg, Mm, NPerMm } from '../units';
-import type { MovingBodyId } from '../schema/sketch';
+import type { MovingBodyId, WishboneArmBodyId } from '../schema/sketch';
 
 /**
  * Pose of a moving body relative to its ride position: the translation of the body's
@@ -240,7 +240,9 @@ export type SweepEventKind =
   // outside driveline.slipYoke
   | 'joint-angle-low'
   | 'joint-angle-mismatch'
-  | 'slip-yoke';
+  | 'slip-yoke'
+  // addition: a shock or spring whose line passes through a wishbone arm body's triangle (armClash.ts)
+  | 'arm-clash';
 
 export interface SweepEvent {
   kind: SweepEventKind;
@@ -256,6 +258,8 @@ export interface SweepEvent {
   side?: 'left' | 'right';
   /** the driveshaft type, for joint-angle-mismatch events (addition) */
   shaft?: 'single-cardan' | 'double-cardan';
+  /** the wishbone arm body a shock or spring passes through, for arm-clash events (addition) */
+  body?: WishboneArmBodyId;
   /** which end of the slip yoke's travel, for slip-yoke events (addition) */
   end?: 'collapsed' | 'extended';
   /**

@@ -13,7 +13,9 @@ import { targetsSchema, tracingSchema } from './boardFields';
 import {
   axleEnds,
   bodyIds,
+  hingeBodyIds,
   layouts,
+  wishboneArmBodyIds,
   DEFAULT_BIND_THRESHOLD_MM,
   DEFAULT_JOINT_ANGLE_LIMIT_DEG,
   driveshaftTypes,
@@ -58,7 +60,11 @@ export const memberSchema = z.discriminatedUnion('kind', [
     maxLength: positiveLength.optional(),
   }),
   z.looseObject({ ...memberBase, kind: z.literal('spring'), rate: z.number().positive().max(1e6).optional() }),
-  z.looseObject({ ...memberBase, kind: z.literal('hinge'), body: z.enum(['arm-left', 'arm-right']) }),
+  z.looseObject({ ...memberBase, kind: z.literal('hinge'), body: z.enum(hingeBodyIds) }),
+  // Double-wishbone layouts (addition; docs/design/double-wishbone.md): a spherical joint, `a` the ball joint on a
+  // wishbone arm body and `b` the knuckle's point for it. The joint is at `a`: the knuckle is held there (the two
+  // points are normally drawn at one place; a `b` drawn elsewhere only names which knuckle).
+  z.looseObject({ ...memberBase, kind: z.literal('ball-joint') }),
   // Leaf-spring layouts (addition; docs/design/leaf-spring.md): one half of a leaf spring as the SAE
   // three-link model's equivalent link, from its eye `a` (frame hanger or shackle) to its
   // pivot `b` on the axle, bending about `seat` (the axle point at the spring's seat centre);
@@ -160,6 +166,32 @@ type BaseSketch = z.infer<typeof baseSketchSchema>;
 type Path = (string | number)[];
 type Report = (path: Path, message: string) => void;
 
+const isWishboneArm = (body: string): boolean => (wishboneArmBodyIds as readonly string[]).includes(body);
+const bodySide = (body: string): 'left' | 'right' | null =>
+  body.endsWith('-left') ? 'left' : body.endsWith('-right') ? 'right' : null;
+
+/** A member from a wishbone arm to a moving body of the other side: the field of the arm's end, and the problem. */
+function armSideMismatch(aBody: string, bBody: string): { field: 'a' | 'b'; message: string } | null {
+  const [sa, sb] = [bodySide(aBody), bodySide(bBody)];
+  if (!sa || !sb || sa === sb) return null;
+  if (!isWishboneArm(aBody) && !isWishboneArm(bBody)) return null;
+  const field = isWishboneArm(bBody) ? 'b' : 'a';
+  return { field, message: `joins '${aBody}' to '${bBody}': a member on a wishbone arm must stay on its side` };
+}
+
+/** Each wishbone arm body that has points needs its hinge (two frame pivots) and its ball joint to the knuckle. */
+function checkWishboneArms(s: BaseSketch, report: Report): void {
+  for (const arm of wishboneArmBodyIds) {
+    const i = s.points.findIndex((p) => p.body === arm);
+    if (i < 0) continue;
+    if (!s.members.some((m) => m.kind === 'hinge' && m.body === arm))
+      report(['points', i, 'body'], `'${arm}' has no hinge: a wishbone arm turns about two frame pivots`);
+    const onArm = new Set(s.points.filter((p) => p.body === arm).map((p) => p.id));
+    if (!s.members.some((m) => m.kind === 'ball-joint' && onArm.has(m.a)))
+      report(['points', i, 'body'], `'${arm}' has no ball joint: a wishbone arm holds the knuckle at one point`);
+  }
+}
+
 /** The rules that join fields together; each problem names the field it is about. */
 function checkCrossFields(s: BaseSketch, report: Report): void {
   const points = new Map<string, BaseSketch['points'][number]>();
@@ -184,6 +216,18 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
       if (!s.points.some((p) => p.body === m.body)) report(['members', i, 'body'], `no point is on '${m.body}'`);
     } else if (a.body === b.body) {
       report(['members', i, 'b'], `joins two points of one body ('${m.a}' and '${m.b}' are both on '${a.body}')`);
+    }
+    const crossing = armSideMismatch(a.body, b.body);
+    if (crossing) report(['members', i, crossing.field], crossing.message);
+    if (m.kind === 'ball-joint') {
+      if (!isWishboneArm(a.body))
+        report(
+          ['members', i, 'a'],
+          `a ball joint's first point must be on a wishbone arm ('${a.id}' is on '${a.body}')`,
+        );
+      if (!b.body.startsWith('knuckle-'))
+        report(['members', i, 'b'], `a ball joint's second point must be on a knuckle ('${b.id}' is on '${b.body}')`);
+      return;
     }
     if (m.kind === 'leaf-half') {
       if (a.body !== 'frame' && !a.body.startsWith('shackle-')) {
@@ -213,6 +257,7 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
     }
   });
 
+  checkWishboneArms(s, report);
   const wheel = (side: 'left' | 'right') => {
     const ref = s.wheels[side];
     const p = points.get(ref);

@@ -36,6 +36,12 @@ export const bodyIds = [
   // Leaf-spring layouts (addition): the shackle carrying each spring's swinging eye.
   'shackle-left',
   'shackle-right',
+  // Double-wishbone layouts (addition): each wishbone as a body turning about its two frame pivots (a `hinge`),
+  // its ball joint held to the knuckle's by a `ball-joint` member, so a coil-over can sit on the lower arm.
+  'upper-arm-left',
+  'lower-arm-left',
+  'upper-arm-right',
+  'lower-arm-right',
 ] as const;
 export type BodyId = (typeof bodyIds)[number];
 export type MovingBodyId = Exclude<BodyId, 'frame'>;
@@ -49,8 +55,23 @@ export const memberKinds = [
   'spring',
   'hinge',
   'leaf-half',
+  'ball-joint',
 ] as const;
 export type MemberKind = (typeof memberKinds)[number];
+
+/** Bodies that turn about a `hinge`: the trailing arms and the wishbone arm bodies. */
+export const hingeBodyIds = [
+  'arm-left',
+  'arm-right',
+  'upper-arm-left',
+  'lower-arm-left',
+  'upper-arm-right',
+  'lower-arm-right',
+] as const;
+export type HingeBodyId = (typeof hingeBodyIds)[number];
+/** The wishbone arm bodies (each needs its hinge and its ball joint). */
+export const wishboneArmBodyIds = ['upper-arm-left', 'lower-arm-left', 'upper-arm-right', 'lower-arm-right'] as const;
+export type WishboneArmBodyId = (typeof wishboneArmBodyIds)[number];
 
 /** Member kinds that hold a fixed length between their two points (the solver's constraints). */
 export const rigidMemberKinds: readonly MemberKind[] = ['link', 'lateral-rod', 'tie-rod', 'shackle'];

@@ -11,6 +11,8 @@ export const KIND_OPTIONS: { value: MemberKind; label: string; stem: string }[] 
   { value: 'shock', label: 'shock', stem: 'SH' },
   { value: 'spring', label: 'spring', stem: 'SP' },
   { value: 'hinge', label: 'hinge axis', stem: 'H' },
+  // A wishbone arm's ball joint: the arm's point first, the knuckle's second.
+  { value: 'ball-joint', label: 'ball joint', stem: 'BJ' },
 ];
 
 export function kindLabel(kind: string): string {

@@ -212,6 +212,14 @@ function eventFlag(
         detail: `The driveshaft is ${out ? 'longer than the slip yoke’s extended' : 'shorter than the slip yoke’s collapsed'} length${len} beyond ${where}.`,
       };
     }
+    case 'arm-clash':
+      return {
+        ...base,
+        severity: 'negative',
+        title: 'Coil-over through an arm',
+        detail: `${e.member ?? 'A shock or spring'} passes through the ${e.body ?? 'wishbone arm'} from ${where}.`,
+        member: e.member,
+      };
     case 'load-reversal':
     case 'load-limit':
       // Loads come from statics of the axle torque; the sentence is written here in the user's units.

@@ -16,6 +16,7 @@
 import { intersect } from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { pointsAt, runSweep, starters } from '../../shared/kinematics';
+import { wishboneArmsAsLinks } from './wishboneTwoLink';
 import { parseSketch } from '../../shared/schema/sketch';
 import type { Vec3 } from '../../shared/kinematics/vec';
 import { parallelogram, shortLong, wishboneSketch, type WishboneRig } from './wishboneRigs';
@@ -89,11 +90,17 @@ describe('equal, parallel wishbones (a parallelogram; plain geometry)', () => {
 function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
   const sketch = parseSketch(doc);
   const r = runSweep(doc);
-  const ids = (side: string) => ({
-    wc: `WC.${side}`,
-    upper: sketch.members.filter((m) => m.kind === 'link' && m.group === 'upper' && m.b.endsWith(`.${side}`)),
-    lower: sketch.members.filter((m) => m.kind === 'link' && m.group === 'lower' && m.b.endsWith(`.${side}`)),
-  });
+  const body = new Map(sketch.points.map((q) => [q.id, q.body]));
+  // A wishbone's inner pivots and ball joint: two links of its group, or an arm body's hinge and ball joint.
+  const wishbone = (side: string, group: 'upper' | 'lower') => {
+    const links = sketch.members.filter((m) => m.kind === 'link' && m.group === group && m.b.endsWith(`.${side}`));
+    if (links.length === 2) return { inner: [links[0].a, links[1].a], joint: links[0].b };
+    const arm = `${group}-arm-${side === 'l' ? 'left' : 'right'}`;
+    const hinge = sketch.members.find((m) => m.kind === 'hinge' && m.body === arm)!;
+    const ball = sketch.members.find((m) => m.kind === 'ball-joint' && body.get(m.a) === arm)!;
+    return { inner: [hinge.a, hinge.b], joint: ball.a };
+  };
+  const ids = (side: string) => ({ wc: `WC.${side}`, upper: wishbone(side, 'upper'), lower: wishbone(side, 'lower') });
   const l = ids('l');
 
   it(`${label}: front-view instant centre and roll centre at every row match a hand construction (mathjs intersect)`, () => {
@@ -101,8 +108,8 @@ function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
     for (const row of r.heave) {
       const p = pointsAt(sketch, row.bodies);
       const wc = p[l.wc];
-      const up = cutByHand(p[l.upper[0].a], p[l.upper[1].a], p[l.upper[0].b], wc.x);
-      const lo = cutByHand(p[l.lower[0].a], p[l.lower[1].a], p[l.lower[0].b], wc.x);
+      const up = cutByHand(p[l.upper.inner[0]], p[l.upper.inner[1]], p[l.upper.joint], wc.x);
+      const lo = cutByHand(p[l.lower.inner[0]], p[l.lower.inner[1]], p[l.lower.joint], wc.x);
       const ic = intersect(up[0], up[1], lo[0], lo[1]) as number[] | null;
       // Contact patch below the wheel centre on the ground, which has risen by the travel.
       const cp = [wc.y, row.travel];
@@ -133,8 +140,8 @@ function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
     for (const row of r.heave) {
       const p = pointsAt(sketch, row.bodies);
       const wc = p[l.wc];
-      const up = sideCutByHand(p[l.upper[0].a], p[l.upper[1].a], p[l.upper[0].b], wc.y);
-      const lo = sideCutByHand(p[l.lower[0].a], p[l.lower[1].a], p[l.lower[0].b], wc.y);
+      const up = sideCutByHand(p[l.upper.inner[0]], p[l.upper.inner[1]], p[l.upper.joint], wc.y);
+      const lo = sideCutByHand(p[l.lower.inner[0]], p[l.lower.inner[1]], p[l.lower.joint], wc.y);
       const ic = intersect(up[0], up[1], lo[0], lo[1]) as number[] | null;
       if (!ic) {
         expect(row.instantCenter).toBeNull();
@@ -152,6 +159,7 @@ function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
 
 describe('instant centres and roll centre against mathjs', () => {
   crossChecks('starter', starters['double-wishbone']!.build());
+  crossChecks('starter with two-link wishbones', wishboneArmsAsLinks(starters['double-wishbone']!.build()));
   // An uneven sketch: every pivot moved differently, so nothing lines up by accident.
   const skewed = structuredClone(
     starters['double-wishbone']!.build({ caster: 7, upperAxisAngle: 9, lowerAxisAngle: -4 }),

@@ -36,6 +36,15 @@ const wishboneSketch = fc
     }));
     const dropped = new Set(drop.map((i) => doc.members[i].id));
     doc.members = doc.members.filter((m) => !dropped.has(m.id));
+    // A wishbone arm that lost its hinge or its ball joint goes altogether (the schema refuses a half arm).
+    const whole = (body: string) =>
+      doc.members.some((m) => m.kind === 'hinge' && m.body === body) &&
+      doc.members.some((m) => m.kind === 'ball-joint' && doc.points.find((p) => p.id === m.a)?.body === body);
+    const gone = new Set(doc.points.filter((p) => p.body.includes('-arm-') && !whole(p.body)).map((p) => p.id));
+    doc.points = doc.points.filter((p) => !gone.has(p.id));
+    doc.members = doc.members.filter(
+      (m) => !gone.has(m.a) && !gone.has(m.b) && !(m.kind === 'hinge' && !doc.points.some((p) => p.body === m.body)),
+    );
     doc.sweep = { droop, bump, step: 10, roll, rollStep: 1 };
     return doc;
   });

@@ -1,7 +1,8 @@
 /**
  * Finding the double wishbones of a sketch (docs/sketch-format.md): on each knuckle that carries
  * a wheel, an upper and a lower wishbone, each two `link`s of that `group` from two frame
- * pivots to one ball-joint point on the knuckle, and a `tie-rod` from the frame (the rack
+ * pivots to one ball-joint point on the knuckle (or an arm body `<group>-arm-<side>` on a `hinge`
+ * with a `ball-joint` to the knuckle), and a `tie-rod` from the frame (the rack
  * end) to the knuckle (the steering arm). Found from the points and members, never from
  * `layout`. The solver needs none of this (the five links are plain distance constraints on
  * the knuckle, a wheel carrier); it is the plan for the double-wishbone metrics.
@@ -20,8 +21,10 @@ export interface WishboneArm {
   group: WishboneGroup;
   inner: [PointModel, PointModel];
   joint: PointModel;
-  /** ids of its two links */
+  /** ids of its two links, or of its hinge and ball joint when the wishbone is an arm body */
   members: [string, string];
+  /** the arm body, when the wishbone is one (`upper-arm-left`…); null for two links */
+  arm: BodyModel | null;
 }
 
 /** The tie rod: inner end on the frame (rack end), outer end on the knuckle (steering arm). */
@@ -55,7 +58,32 @@ export interface WishbonePlan {
 
 const KNUCKLES = new Set(['knuckle-left', 'knuckle-right']);
 
+/**
+ * A wishbone as an arm body: the hinge of `<group>-arm-<side>` gives the inner pivots, its ball joint's arm point
+ * the joint (the knuckle is held there).
+ */
+function armBodyOf(sketch: Sketch, model: LinkageModel, body: BodyModel, group: WishboneGroup): WishboneArm | null {
+  const side = body.id.endsWith('-left') ? 'left' : 'right';
+  const arm = model.bodyById.get(`${group}-arm-${side}`);
+  if (!arm) return null;
+  const hinge = sketch.members.find((m) => m.kind === 'hinge' && m.body === arm.id);
+  const ball = sketch.members.find(
+    (m) =>
+      m.kind === 'ball-joint' && model.points.get(m.a)!.slot === arm.slot && model.points.get(m.b)!.slot === body.slot,
+  );
+  if (!hinge || !ball) return null;
+  return {
+    group,
+    inner: [model.points.get(hinge.a)!, model.points.get(hinge.b)!],
+    joint: model.points.get(ball.a)!,
+    members: [hinge.id, ball.id],
+    arm,
+  };
+}
+
 function armOf(sketch: Sketch, model: LinkageModel, body: BodyModel, group: WishboneGroup): WishboneArm | null {
+  const asBody = armBodyOf(sketch, model, body, group);
+  if (asBody) return asBody;
   const byJoint = new Map<string, { inner: PointModel; member: string }[]>();
   for (const m of sketch.members) {
     if (m.kind !== 'link' || m.group !== group) continue;
@@ -74,6 +102,7 @@ function armOf(sketch: Sketch, model: LinkageModel, body: BodyModel, group: Wish
       inner: [list[0].inner, list[1].inner],
       joint: model.points.get(jointId)!,
       members: [list[0].member, list[1].member],
+      arm: null,
     };
   }
   return null;

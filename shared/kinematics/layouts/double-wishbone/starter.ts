@@ -1,8 +1,8 @@
 /**
  * Double-wishbone front starter: on each side a knuckle on an upper and a lower wishbone
- * (two links each, from two frame pivots to one ball joint), a tie rod from the rack end to the
- * steering arm, and a coil-over (a shock with a spring on the same two eyes) from the frame to
- * the knuckle. Geometry is invented and plausible for a mid-size pickup front: a short upper
+ * (each an arm body turning about its two frame pivots, holding the knuckle at its ball joint), a tie
+ * rod from the rack end to the steering arm, and a coil-over (a shock with a spring on the same two
+ * eyes) from the frame to the lower arm. Geometry is invented and plausible for a mid-size pickup front: a short upper
  * and long lower arm (camber gain in bump), a low roll centre, a little caster and anti-dive,
  * and the tie rod placed on the line the wishbones ask for (next to no bump steer).
  */
@@ -16,12 +16,17 @@ const LOWER_PIVOT_SPACING_MM = 360;
 const UPPER_PIVOT_SPACING_MM = 260;
 /** The steering arm's outer end, inboard of the wheel centre (mm). */
 const TIE_ROD_OUTER_INSET_MM = 125;
-/** Coil-over eyes: the top on the frame, the bottom on the knuckle, inboard of the wheel centre (mm) and behind it. */
-const COIL_TOP_INSET_MM = 230;
-const COIL_TOP_RISE_MM = 470;
-const COIL_BOTTOM_INSET_MM = 95;
-const COIL_BOTTOM_ABOVE_LOWER_JOINT_MM = 70;
-const COIL_X_MM = -45;
+/**
+ * Coil-over: the bottom eye on the lower arm at this share of the way from the inner pivots to the ball joint
+ * (a trade layout puts it at 55–75 %, for a motion ratio of 0.5–0.7), the top on the frame straight above it.
+ */
+const COIL_ARM_SHARE = 0.62;
+const COIL_LENGTH_MM = 470;
+/**
+ * Fore-aft (mm, ahead of the axle line +): ahead of the upper arm's front leg, so the coil-over passes beside the
+ * upper wishbone, not through it, and away from the tie rod behind the axle line.
+ */
+const COIL_X_MM = 90;
 /** Shock stroke either side of the default sweep's range (mm). */
 const SHOCK_MARGIN_MM = 15;
 const SWEEP = { droop: -120, bump: 120, step: 5, roll: 6, rollStep: 1 };
@@ -82,14 +87,17 @@ const params: StarterParam[] = [
   { key: 'tieRodOuterHeight', label: 'Tie rod outer end height', unit: 'mm', default: 300, min: 120, max: 600 },
   { key: 'tieRodInnerHeight', label: 'Tie rod inner end (rack) height', unit: 'mm', default: 317, min: 120, max: 650 },
   { key: 'rackHalfLength', label: 'Rack end from the centreline', unit: 'mm', default: 350, min: 150, max: 700 },
-  { key: 'springRate', label: 'Coil-over spring rate', unit: 'N/mm', default: 60, min: 5, max: 300 },
+  { key: 'springRate', label: 'Coil-over spring rate', unit: 'N/mm', default: 130, min: 5, max: 300 },
 ];
 
+type StarterBody = 'frame' | 'knuckle' | 'upper-arm' | 'lower-arm';
+
 /** A left point and its mirror on the right: ids `<id>.l` / `<id>.r`. */
-function mirrored(id: string, body: 'frame' | 'knuckle', x: number, y: number, z: number): PointIn[] {
+function mirrored(id: string, body: StarterBody, x: number, y: number, z: number): PointIn[] {
+  const on = (side: 'left' | 'right') => (body === 'frame' ? 'frame' : (`${body}-${side}` as const));
   return [
-    { id: `${id}.l`, body: body === 'frame' ? 'frame' : 'knuckle-left', x: r1(x), y: r1(y), z: r1(z) },
-    { id: `${id}.r`, body: body === 'frame' ? 'frame' : 'knuckle-right', x: r1(x), y: r1(-y), z: r1(z) },
+    { id: `${id}.l`, body: on('left'), x: r1(x), y: r1(y), z: r1(z) },
+    { id: `${id}.r`, body: on('right'), x: r1(x), y: r1(-y), z: r1(z) },
   ];
 }
 
@@ -106,29 +114,35 @@ function build(p: Params): SketchInput {
   const lbjY = wcY - p.lowerJointInset;
   const ubjY = wcY - p.upperJointInset;
   const ubjX = -(p.upperJointHeight - p.lowerJointHeight) * Math.tan(degToRad(p.caster));
-  const coilBottomZ = p.lowerJointHeight + COIL_BOTTOM_ABOVE_LOWER_JOINT_MM;
-  const coilTopZ = coilBottomZ + COIL_TOP_RISE_MM;
+  const lowerInnerY = lbjY - p.lowerArmLength;
+  // The coil-over's bottom eye on the lower arm's line from its inner axis to its ball joint (front view).
+  const coilY = lowerInnerY + COIL_ARM_SHARE * p.lowerArmLength;
+  const coilBottomZ = p.lowerPivotHeight + COIL_ARM_SHARE * (p.lowerJointHeight - p.lowerPivotHeight);
   const points: PointIn[] = [
     ...mirrored('WC', 'knuckle', 0, wcY, wcZ),
-    ...innerPivots('LW', lbjY - p.lowerArmLength, p.lowerPivotHeight, LOWER_PIVOT_SPACING_MM, p.lowerAxisAngle),
+    ...innerPivots('LW', lowerInnerY, p.lowerPivotHeight, LOWER_PIVOT_SPACING_MM, p.lowerAxisAngle),
     ...mirrored('LW.bj', 'knuckle', 0, lbjY, p.lowerJointHeight),
+    ...mirrored('LA.bj', 'lower-arm', 0, lbjY, p.lowerJointHeight),
     ...innerPivots('UW', ubjY - p.upperArmLength, p.upperPivotHeight, UPPER_PIVOT_SPACING_MM, p.upperAxisAngle),
     ...mirrored('UW.bj', 'knuckle', ubjX, ubjY, p.upperJointHeight),
+    ...mirrored('UA.bj', 'upper-arm', ubjX, ubjY, p.upperJointHeight),
     ...mirrored('TR.i', 'frame', p.tieRodX, p.rackHalfLength, p.tieRodInnerHeight),
     ...mirrored('TR.o', 'knuckle', p.tieRodX, wcY - TIE_ROD_OUTER_INSET_MM, p.tieRodOuterHeight),
-    ...mirrored('CO.t', 'frame', COIL_X_MM, wcY - COIL_TOP_INSET_MM, coilTopZ),
-    ...mirrored('CO.b', 'knuckle', COIL_X_MM, wcY - COIL_BOTTOM_INSET_MM, coilBottomZ),
+    ...mirrored('CO.t', 'frame', COIL_X_MM, coilY, coilBottomZ + COIL_LENGTH_MM),
+    ...mirrored('CO.b', 'lower-arm', COIL_X_MM, coilY, coilBottomZ),
   ];
-  const coilRide = Math.hypot(COIL_TOP_INSET_MM - COIL_BOTTOM_INSET_MM, COIL_TOP_RISE_MM);
-  const shMin = Math.max(1, Math.round((coilRide + SWEEP.droop * 1.1 - SHOCK_MARGIN_MM) / 5) * 5);
-  const shMax = Math.round((coilRide + SWEEP.bump * 1.1 + SHOCK_MARGIN_MM) / 5) * 5;
+  // The stroke: the wheel's travel scaled by the lever (eye from the inner axis over the wheel centre from it).
+  const lever = (coilY - lowerInnerY) / (wcY - lowerInnerY);
+  const shMin = Math.max(1, Math.round((COIL_LENGTH_MM + SWEEP.droop * 1.1 * lever - SHOCK_MARGIN_MM) / 5) * 5);
+  const shMax = Math.round((COIL_LENGTH_MM + SWEEP.bump * 1.1 * lever + SHOCK_MARGIN_MM) / 5) * 5;
   const members: MemberIn[] = [];
   for (const s of ['l', 'r']) {
+    const side = s === 'l' ? 'left' : 'right';
     members.push(
-      { id: `LWF${s}`, kind: 'link', group: 'lower', a: `LW.f.${s}`, b: `LW.bj.${s}` },
-      { id: `LWR${s}`, kind: 'link', group: 'lower', a: `LW.r.${s}`, b: `LW.bj.${s}` },
-      { id: `UWF${s}`, kind: 'link', group: 'upper', a: `UW.f.${s}`, b: `UW.bj.${s}` },
-      { id: `UWR${s}`, kind: 'link', group: 'upper', a: `UW.r.${s}`, b: `UW.bj.${s}` },
+      { id: `LW${s}`, kind: 'hinge', body: `lower-arm-${side}`, a: `LW.f.${s}`, b: `LW.r.${s}` },
+      { id: `LBJ${s}`, kind: 'ball-joint', a: `LA.bj.${s}`, b: `LW.bj.${s}` },
+      { id: `UW${s}`, kind: 'hinge', body: `upper-arm-${side}`, a: `UW.f.${s}`, b: `UW.r.${s}` },
+      { id: `UBJ${s}`, kind: 'ball-joint', a: `UA.bj.${s}`, b: `UW.bj.${s}` },
       { id: `TR${s}`, kind: 'tie-rod', a: `TR.i.${s}`, b: `TR.o.${s}` },
       { id: `SH${s}`, kind: 'shock', a: `CO.t.${s}`, b: `CO.b.${s}`, minLength: shMin, maxLength: shMax },
       { id: `SP${s}`, kind: 'spring', a: `CO.t.${s}`, b: `CO.b.${s}`, rate: p.springRate },
@@ -153,13 +167,13 @@ function build(p: Params): SketchInput {
   };
 }
 
-/** Independent front: upper and lower wishbones, rack-and-pinion tie rods, coil-overs on the knuckles. */
+/** Independent front: upper and lower wishbones, rack-and-pinion tie rods, coil-overs on the lower arms. */
 export const doubleWishbone: StarterSpec = {
   layout: 'double-wishbone',
   label: 'Double wishbone (front)',
   description:
     'An upper and a lower wishbone on each side hold the knuckle; a tie rod from the rack steers it and a coil-over from the frame carries it. ' +
-    'Read camber gain, bump steer, roll centre, caster change and anti-dive through the travel. The coil-over is mounted on the knuckle.',
+    'Read camber gain, bump steer, roll centre, caster change and anti-dive through the travel. The coil-over is mounted on the lower wishbone.',
   params,
   build(given) {
     return parseSketch(build(paramsResolve(params, given)));
