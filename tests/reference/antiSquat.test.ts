@@ -10,34 +10,12 @@ import { describe, expect, it } from 'vitest';
 import { pointsAt, runSweep } from '../../shared/kinematics';
 import { parseSketch } from '../../shared/schema/sketch';
 import { antiSquatPercent } from '../../shared/kinematics/metrics/antiSquat';
-import { doc } from './rigs';
+import { doc, IC_RIG_MEMBERS, IC_RIG_POINTS } from './rigs';
 
 function rig() {
-  return doc(
-    [
-      { id: 'WC.l', body: 'axle', x: 0, y: 800, z: 400 },
-      { id: 'WC.r', body: 'axle', x: 0, y: -800, z: 400 },
-      // Lower links on the line through (0, 200) and the IC (1000, 300); uppers through (0, 600) and the IC.
-      { id: 'LL.al', body: 'axle', x: 0, y: 500, z: 200 },
-      { id: 'LL.fl', body: 'frame', x: 600, y: 500, z: 260 },
-      { id: 'LL.ar', body: 'axle', x: 0, y: -500, z: 200 },
-      { id: 'LL.fr', body: 'frame', x: 600, y: -500, z: 260 },
-      { id: 'UL.al', body: 'axle', x: 0, y: 400, z: 600 },
-      { id: 'UL.fl', body: 'frame', x: 500, y: 400, z: 450 },
-      { id: 'UL.ar', body: 'axle', x: 0, y: -400, z: 600 },
-      { id: 'UL.fr', body: 'frame', x: 500, y: -400, z: 450 },
-      { id: 'LR.f', body: 'frame', x: -100, y: 550, z: 420 },
-      { id: 'LR.a', body: 'axle', x: -100, y: -550, z: 420 },
-    ],
-    [
-      { id: 'LLl', kind: 'link', group: 'lower', a: 'LL.fl', b: 'LL.al' },
-      { id: 'LLr', kind: 'link', group: 'lower', a: 'LL.fr', b: 'LL.ar' },
-      { id: 'ULl', kind: 'link', group: 'upper', a: 'UL.fl', b: 'UL.al' },
-      { id: 'ULr', kind: 'link', group: 'upper', a: 'UL.fr', b: 'UL.ar' },
-      { id: 'LR', kind: 'lateral-rod', a: 'LR.f', b: 'LR.a' },
-    ],
-    { vehicle: { wheelbase: 2700, cgHeight: 500, track: 1600, tireRadius: 400 } },
-  );
+  return doc(IC_RIG_POINTS, IC_RIG_MEMBERS, {
+    vehicle: { wheelbase: 2700, cgHeight: 500, track: 1600, tireRadius: 400 },
+  });
 }
 
 describe('anti-squat', () => {

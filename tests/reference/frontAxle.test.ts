@@ -16,38 +16,19 @@ import { intersect } from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { pointsAt, runSweep } from '../../shared/kinematics';
 import { parseSketch, type SketchInput } from '../../shared/schema/sketch';
-import { doc } from './rigs';
+import { doc, IC_RIG_MEMBERS, IC_RIG_POINTS } from './rigs';
 
 const L = 2700;
 const H = 500;
 
 /** The rear rig: lower links through (0, 200) and the IC (1000, 300), uppers through (0, 600) and the IC. */
 const REAR_POINTS: SketchInput['points'] = [
-  { id: 'WC.l', body: 'axle', x: 0, y: 800, z: 400 },
-  { id: 'WC.r', body: 'axle', x: 0, y: -800, z: 400 },
-  { id: 'LL.al', body: 'axle', x: 0, y: 500, z: 200 },
-  { id: 'LL.fl', body: 'frame', x: 600, y: 500, z: 260 },
-  { id: 'LL.ar', body: 'axle', x: 0, y: -500, z: 200 },
-  { id: 'LL.fr', body: 'frame', x: 600, y: -500, z: 260 },
-  { id: 'UL.al', body: 'axle', x: 0, y: 400, z: 600 },
-  { id: 'UL.fl', body: 'frame', x: 500, y: 400, z: 450 },
-  { id: 'UL.ar', body: 'axle', x: 0, y: -400, z: 600 },
-  { id: 'UL.fr', body: 'frame', x: 500, y: -400, z: 450 },
-  { id: 'LR.f', body: 'frame', x: -100, y: 550, z: 420 },
-  { id: 'LR.a', body: 'axle', x: -100, y: -550, z: 420 },
+  ...IC_RIG_POINTS,
   // A driveshaft to the pinion (the axle is driven); its points sit off the links.
   { id: 'DS.o', body: 'frame', x: 1500, y: 0, z: 500 },
   { id: 'DS.oa', body: 'frame', x: 1600, y: 0, z: 500 },
   { id: 'DS.p', body: 'axle', x: 150, y: 0, z: 420 },
   { id: 'DS.pa', body: 'axle', x: 50, y: 0, z: 410 },
-];
-
-const MEMBERS: SketchInput['members'] = [
-  { id: 'LLl', kind: 'link', group: 'lower', a: 'LL.fl', b: 'LL.al' },
-  { id: 'LLr', kind: 'link', group: 'lower', a: 'LL.fr', b: 'LL.ar' },
-  { id: 'ULl', kind: 'link', group: 'upper', a: 'UL.fl', b: 'UL.al' },
-  { id: 'ULr', kind: 'link', group: 'upper', a: 'UL.fr', b: 'UL.ar' },
-  { id: 'LR', kind: 'lateral-rod', a: 'LR.f', b: 'LR.a' },
 ];
 
 const DRIVELINE = { output: 'DS.o', outputAxis: 'DS.oa', pinion: 'DS.p', pinionAxis: 'DS.pa' };
@@ -57,7 +38,7 @@ function rig(end: 'front' | 'rear', frontBrakeShare: number, driven: boolean): S
   // The front rig is the rear one mirrored fore and aft (x → −x): its links run rearward to the frame.
   const points = REAR_POINTS.map((p) => ({ ...p, x: sign * p.x }));
   const vehicle = { wheelbase: L, cgHeight: H, track: 1600, tireRadius: 400, frontBrakeShare };
-  return doc(points, MEMBERS, {
+  return doc(points, IC_RIG_MEMBERS, {
     vehicle: end === 'front' ? { ...vehicle, axle: 'front' as const } : vehicle,
     ...(driven ? { driveline: DRIVELINE } : {}),
   });

@@ -125,3 +125,32 @@ export function fourBarSketch(
     sweep: { droop: -Math.abs(travelTo), bump: Math.abs(travelTo), step: Math.abs(step), roll: 0, rollStep: 1 },
   });
 }
+
+/**
+ * A rear four-link whose side-view instant centre sits, by construction, 1000 mm ahead of the
+ * axle and 300 mm high: the lower links lie on the line through (0, 200) and the instant centre,
+ * the uppers on the line through (0, 600) and it. With a lateral rod behind the axle.
+ */
+export const IC_RIG_POINTS: Pt[] = [
+  { id: 'WC.l', body: 'axle', x: 0, y: 800, z: 400 },
+  { id: 'WC.r', body: 'axle', x: 0, y: -800, z: 400 },
+  { id: 'LL.al', body: 'axle', x: 0, y: 500, z: 200 },
+  { id: 'LL.fl', body: 'frame', x: 600, y: 500, z: 260 },
+  { id: 'LL.ar', body: 'axle', x: 0, y: -500, z: 200 },
+  { id: 'LL.fr', body: 'frame', x: 600, y: -500, z: 260 },
+  { id: 'UL.al', body: 'axle', x: 0, y: 400, z: 600 },
+  { id: 'UL.fl', body: 'frame', x: 500, y: 400, z: 450 },
+  { id: 'UL.ar', body: 'axle', x: 0, y: -400, z: 600 },
+  { id: 'UL.fr', body: 'frame', x: 500, y: -400, z: 450 },
+  { id: 'LR.f', body: 'frame', x: -100, y: 550, z: 420 },
+  { id: 'LR.a', body: 'axle', x: -100, y: -550, z: 420 },
+];
+
+/** The links and the lateral rod of IC_RIG_POINTS. */
+export const IC_RIG_MEMBERS: Mb[] = [
+  { id: 'LLl', kind: 'link', group: 'lower', a: 'LL.fl', b: 'LL.al' },
+  { id: 'LLr', kind: 'link', group: 'lower', a: 'LL.fr', b: 'LL.ar' },
+  { id: 'ULl', kind: 'link', group: 'upper', a: 'UL.fl', b: 'UL.al' },
+  { id: 'ULr', kind: 'link', group: 'upper', a: 'UL.fr', b: 'UL.ar' },
+  { id: 'LR', kind: 'lateral-rod', a: 'LR.f', b: 'LR.a' },
+];
