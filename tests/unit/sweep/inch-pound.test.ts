@@ -9,12 +9,8 @@
  * standard gravity, 3rd CGPM 1901; NIST SP 811 appendix B), 1 in = 25.4 mm, 1 ft = 0.3048 m.
  */
 import { afterEach, describe, expect, it } from 'vitest';
-import { flushPromises, mount } from '@vue/test-utils';
-import { Quasar } from 'quasar';
 import { getActivePinia } from 'pinia';
-import BoardReadout from '../../../src/components/BoardReadout.vue';
 import { useSweepStore } from '../../../src/stores/sweep';
-import { usePrefsStore } from '../../../src/stores/prefs';
 import { runSweep, starters } from '../../../shared/kinematics';
 import type { Sketch } from '../../../shared/schema/sketch';
 import { fixed, showForce, showMetric, showRate, showTorque } from '../../../src/sweep/format';
@@ -23,7 +19,8 @@ import { parseQuantityInput, quantityInputText } from '../../../src/sweep/quanti
 import { buildFlags } from '../../../src/sweep/flags';
 import { buildSheet } from '../../../src/sheet/buildSheet';
 import { windUpEntry } from '../../../shared/kinematics/metrics/registry';
-import { fourLink, onBoard, provideScreenOrientation, settled } from './setup';
+import { fourLink, provideScreenOrientation, settled } from './setup';
+import { mountOnBoard, typeInto, valueOf } from './mountReadout';
 
 provideScreenOrientation();
 
@@ -41,24 +38,6 @@ const LBF_PER_IN = LBF / 25.4;
 const LBF_FT = LBF * 0.3048;
 
 const leafSpring = (): Sketch => starters['leaf-spring']!.build();
-
-async function mountInInches(doc: Sketch) {
-  const stores = await onBoard(doc);
-  usePrefsStore().setUnits('in');
-  const wrapper = mount(BoardReadout as never, { global: { plugins: [[Quasar, {}], stores.pinia] } });
-  await flushPromises();
-  return { ...stores, wrapper };
-}
-
-const valueOf = (w: ReturnType<typeof mount>, key: string) =>
-  w.get(`[data-test="readout-${key}"] .board-readout__value`);
-
-async function typeInto(w: ReturnType<typeof mount>, testId: string, text: string) {
-  const input = w.get(`[data-test="${testId}"]`);
-  await input.setValue(text);
-  await input.trigger('keydown', { key: 'Enter' });
-  await flushPromises();
-}
 
 describe('numbers of force, rate and torque', () => {
   it('show in the file’s units with mm picked and in lbf, lbf/in, lbf·ft with inches', () => {
@@ -117,7 +96,7 @@ describe('a typed force, rate or torque', () => {
 
 describe('the readout in inches', () => {
   it('shows a spring’s wheel rate in lbf/in and each link load in lbf', async () => {
-    const { wrapper, sweep } = await mountInInches(fourLink());
+    const { wrapper, sweep } = await mountOnBoard(fourLink(), { units: 'in' });
     const ride = sweep.result!.ride;
     const springs = sweep.context.members.filter((m) => m.kind === 'spring' && m.rate !== undefined);
     expect(springs.length).toBeGreaterThan(0);
@@ -132,7 +111,7 @@ describe('the readout in inches', () => {
   });
 
   it('shows the wind-up torque in lbf·ft and reads a typed axle torque in lbf·ft', async () => {
-    const { wrapper, sweep, board } = await mountInInches(leafSpring());
+    const { wrapper, sweep, board } = await mountOnBoard(leafSpring(), { units: 'in' });
     const w = sweep.result!.windUp!;
     expect(wrapper.get('[data-test="readout-windup"]').text()).toContain(`${fixed(w.torque / LBF_FT, 0)} lbf·ft`);
     expect(valueOf(wrapper, 'windup-rate').text()).toBe(`${fixed(w.rate / LBF_FT, 0)} lbf·ft/°`);

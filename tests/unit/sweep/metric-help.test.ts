@@ -6,9 +6,6 @@
  * the torque box say which axle torque they assume.
  */
 import { afterEach, describe, expect, it } from 'vitest';
-import { flushPromises, mount } from '@vue/test-utils';
-import { Quasar } from 'quasar';
-import BoardReadout from '../../../src/components/BoardReadout.vue';
 import { useSweepStore } from '../../../src/stores/sweep';
 import type { Sketch } from '../../../shared/schema/sketch';
 import { DEFAULT_AXLE_TORQUE_NM } from '../../../shared/schema/sketchVocabulary';
@@ -23,7 +20,8 @@ import { readoutLines } from '../../../src/sweep/readout';
 import { buildPlots } from '../../../src/sweep/plots';
 import { buildSheet } from '../../../src/sheet/buildSheet';
 import { runSweep } from '../../../shared/kinematics';
-import { fourLink, onBoard, provideScreenOrientation, settled } from './setup';
+import { fourLink, provideScreenOrientation, settled } from './setup';
+import { mountOnBoard } from './mountReadout';
 
 provideScreenOrientation();
 
@@ -31,13 +29,6 @@ afterEach(() => {
   useSweepStore().dispose();
   localStorage.clear();
 });
-
-async function mountOnBoard(doc: Sketch) {
-  const stores = await onBoard(doc);
-  const wrapper = mount(BoardReadout as never, { global: { plugins: [[Quasar, {}], stores.pinia] } });
-  await flushPromises();
-  return { ...stores, wrapper };
-}
 
 const frontAxle = (): Sketch => {
   const doc = fourLink();

@@ -1,13 +1,12 @@
 // @vitest-environment happy-dom
 import { afterEach, describe, expect, it } from 'vitest';
-import { mount, flushPromises } from '@vue/test-utils';
-import { Quasar } from 'quasar';
+import { flushPromises } from '@vue/test-utils';
 import BoardReadout from '../../../src/components/BoardReadout.vue';
 import BoardFlags from '../../../src/components/BoardFlags.vue';
 import { useSweepStore } from '../../../src/stores/sweep';
 import { usePrefsStore } from '../../../src/stores/prefs';
-import { fourLink, onBoard, settled, provideScreenOrientation } from './setup';
-import type { Sketch } from '../../../shared/schema/sketch';
+import { fourLink, settled, provideScreenOrientation } from './setup';
+import { mountOnBoard, valueOf } from './mountReadout';
 
 provideScreenOrientation();
 
@@ -16,19 +15,9 @@ afterEach(() => {
   localStorage.clear();
 });
 
-async function mountOnBoard<T>(component: T, doc?: Sketch) {
-  const stores = await onBoard(doc);
-  const wrapper = mount(component as never, { global: { plugins: [[Quasar, {}], stores.pinia] } });
-  await flushPromises();
-  return { ...stores, wrapper };
-}
-
-const valueOf = (w: ReturnType<typeof mount>, key: string) =>
-  w.get(`[data-test="readout-${key}"] .board-readout__value`);
-
 describe('the readout', () => {
   it('shows the ride row by default, in mm, with the sweep’s own numbers', async () => {
-    const { wrapper, sweep } = await mountOnBoard(BoardReadout);
+    const { wrapper, sweep } = await mountOnBoard(undefined, { component: BoardReadout });
     expect(wrapper.get('[data-test="readout-position"]').text()).toBe('at ride height');
     const ride = sweep.result!.ride;
     expect(valueOf(wrapper, 'antisquat').text()).toBe(`${ride.antiSquat!.toFixed(1)} %`);
@@ -37,7 +26,7 @@ describe('the readout', () => {
   });
 
   it('follows the travel slider and the user’s unit', async () => {
-    const { wrapper, sweep } = await mountOnBoard(BoardReadout);
+    const { wrapper, sweep } = await mountOnBoard(undefined, { component: BoardReadout });
     usePrefsStore().setUnits('in');
     sweep.setTravel(50);
     await flushPromises();
@@ -58,7 +47,7 @@ describe('the readout', () => {
       const a = p(`UL.a${side}`);
       f.z = a.z + slope * (f.x - a.x);
     }
-    const { wrapper } = await mountOnBoard(BoardReadout, doc);
+    const { wrapper } = await mountOnBoard(doc, { component: BoardReadout });
     for (const key of ['ic-x', 'ic-height']) {
       const cell = valueOf(wrapper, key);
       expect(cell.text()).toBe('—');
@@ -72,13 +61,13 @@ describe('the readout', () => {
   });
 
   it('selects the member when its line is clicked', async () => {
-    const { wrapper, board } = await mountOnBoard(BoardReadout);
+    const { wrapper, board } = await mountOnBoard(undefined, { component: BoardReadout });
     await wrapper.get('[data-test="readout-member-SHl"]').trigger('click');
     expect(board.selectedMember).toBe('SHl');
   });
 
   it('lists the problems of an invalid sketch instead of numbers from nowhere', async () => {
-    const { wrapper, sweep } = await mountOnBoard(BoardReadout);
+    const { wrapper, sweep } = await mountOnBoard(undefined, { component: BoardReadout });
     const bad = fourLink();
     bad.members[1] = { ...bad.members[1], b: 'missing' };
     sweep.run(bad);
@@ -92,7 +81,7 @@ describe('the readout', () => {
 
 describe('the flags', () => {
   it('lists each flag with where it starts, and a click selects the member concerned', async () => {
-    const { wrapper, board, sweep } = await mountOnBoard(BoardFlags);
+    const { wrapper, board, sweep } = await mountOnBoard(undefined, { component: BoardFlags });
     const rideLen = sweep.result!.ride.members.SHl.length;
     board.setMemberField('SHl', 'maxLength', Math.round(rideLen + 20));
     await settled(sweep);
@@ -108,7 +97,7 @@ describe('the flags', () => {
   });
 
   it('counts the flags that ask for action, and says so when there are none', async () => {
-    const { wrapper, board, sweep } = await mountOnBoard(BoardFlags);
+    const { wrapper, board, sweep } = await mountOnBoard(undefined, { component: BoardFlags });
     const count = Number(wrapper.get('[data-test="flags-count"]').text());
     expect(count).toBe(sweep.flags.filter((f) => f.severity !== 'info').length);
     expect(count).toBeGreaterThan(0);

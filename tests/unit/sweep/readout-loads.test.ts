@@ -5,16 +5,14 @@
  * notes, and the axle-torque / link-load-limit inputs that edit the sketch's sweep block.
  */
 import { afterEach, describe, expect, it } from 'vitest';
-import { flushPromises, mount } from '@vue/test-utils';
-import { Quasar } from 'quasar';
-import BoardReadout from '../../../src/components/BoardReadout.vue';
 import { useSweepStore } from '../../../src/stores/sweep';
 import { starters } from '../../../shared/kinematics';
 import type { Sketch } from '../../../shared/schema/sketch';
 import { fixed } from '../../../src/sweep/format';
 import { readoutLines, EMPTY_CONTEXT } from '../../../src/sweep/readout';
 import { parseSweepNumber } from '../../../src/sweep/loadInput';
-import { fourLink, onBoard, provideScreenOrientation, settled } from './setup';
+import { fourLink, provideScreenOrientation, settled } from './setup';
+import { mountOnBoard, typeInto, valueOf } from './mountReadout';
 
 provideScreenOrientation();
 
@@ -29,23 +27,6 @@ const FORCE_BALANCE_TOLERANCE_N = 1e-3;
 const ANGLE_TOLERANCE_DEG = 1e-9;
 
 const leafSpring = (): Sketch => starters['leaf-spring']!.build();
-
-async function mountOnBoard(doc: Sketch) {
-  const stores = await onBoard(doc);
-  const wrapper = mount(BoardReadout as never, { global: { plugins: [[Quasar, {}], stores.pinia] } });
-  await flushPromises();
-  return { ...stores, wrapper };
-}
-
-const valueOf = (w: ReturnType<typeof mount>, key: string) =>
-  w.get(`[data-test="readout-${key}"] .board-readout__value`);
-
-async function typeInto(w: ReturnType<typeof mount>, testId: string, text: string) {
-  const input = w.get(`[data-test="${testId}"]`);
-  await input.setValue(text);
-  await input.trigger('keydown', { key: 'Enter' });
-  await flushPromises();
-}
 
 describe('the readout on a leaf-sprung axle', () => {
   it('shows the shackle angle, the wind-up and each shock’s length change in heave and in wind-up', async () => {
