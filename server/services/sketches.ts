@@ -234,16 +234,33 @@ export async function copySketch(user: PublicUser, id: number): Promise<SketchDe
   return copyOf(user, await ownSketch(user, id));
 }
 
-/** The sketch file and a file name for it. */
-export async function exportSketch(user: PublicUser, id: number) {
-  const row = await ownSketch(user, id);
-  const base =
-    row.name
+/** A download's file name from the sketch's name: letters, digits, dots and dashes only, `sketch` when none is left. */
+export function fileBaseName(name: string): string {
+  return (
+    name
       .replace(/[^A-Za-z0-9 ._-]+/g, '')
       .trim()
       .replace(/\s+/g, '-')
-      .slice(0, 80) || 'sketch';
-  return { fileName: `${base}.arcwright.json`, document: JSON.parse(row.document) as unknown };
+      .slice(0, 80) || 'sketch'
+  );
+}
+
+/** The sketch file and a file name for it. */
+export async function exportSketch(user: PublicUser, id: number) {
+  const row = await ownSketch(user, id);
+  return { fileName: `${fileBaseName(row.name)}.arcwright.json`, document: JSON.parse(row.document) as unknown };
+}
+
+/** A stored sketch's name and document, for the downloads made from it. */
+export interface StoredDocument {
+  name: string;
+  document: unknown;
+}
+
+/** One of the caller's sketches, for a download. */
+export async function ownDocument(user: PublicUser, id: number): Promise<StoredDocument> {
+  const row = await ownSketch(user, id);
+  return { name: row.name, document: JSON.parse(row.document) as unknown };
 }
 
 /**
@@ -278,6 +295,12 @@ async function sharedSketch(token: string): Promise<Sketch> {
 export async function getShared(viewer: PublicUser | null, token: string): Promise<SketchDetail> {
   const detail = detailOf(await sharedSketch(token), viewer);
   return { ...detail, canEdit: false, shareToken: null };
+}
+
+/** A sketch opened by its share link, for a download. */
+export async function sharedDocument(token: string): Promise<StoredDocument> {
+  const row = await sharedSketch(token);
+  return { name: row.name, document: JSON.parse(row.document) as unknown };
 }
 
 export async function copyShared(user: PublicUser, token: string): Promise<SketchDetail> {
