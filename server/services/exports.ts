@@ -11,7 +11,8 @@ import { pointSchema } from '../../shared/schema/sketch';
 import { z } from 'zod';
 import type { LengthUnit } from '../../shared/units';
 import { unprocessable } from '../middleware/http-error';
-import { fileBaseName, type StoredDocument } from './sketches';
+import type { StoredDocument } from './sketches';
+import { downloadBaseName } from '../../shared/downloadName';
 
 export interface CsvFile {
   fileName: string;
@@ -40,7 +41,7 @@ export function sweepCsvFile(stored: StoredDocument, units: LengthUnit): CsvFile
       : [`the sweep could not run: ${err instanceof Error ? err.message : String(err)}`];
     throw unprocessable(`this sketch cannot be swept: ${problems[0]}`, problems);
   }
-  return { fileName: `${fileBaseName(stored.name)}-sweep.csv`, text };
+  return { fileName: `${downloadBaseName(stored.name)}-sweep.csv`, text };
 }
 
 /**
@@ -51,7 +52,7 @@ export function hardpointsCsvFile(stored: StoredDocument, units: LengthUnit): Cs
   const points = z.array(pointSchema).safeParse((stored.document as { points?: unknown } | null)?.points);
   if (!points.success) throw unprocessable("this sketch's pivots cannot be read");
   return {
-    fileName: `${fileBaseName(stored.name)}-hardpoints.csv`,
+    fileName: `${downloadBaseName(stored.name)}-hardpoints.csv`,
     text: hardpointsCsv({ points: points.data }, units),
   };
 }

@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { Op, fn, col, where as sqlWhere, type Transaction, type WhereOptions } from 'sequelize';
 import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/sketch';
+import { downloadBaseName } from '../../shared/downloadName';
 import { Sketch, SketchRevision, User, type PublicUser, type ShareMode } from '../models';
 import { badRequest, conflict, notFound } from '../middleware/http-error';
 import type { ListQuery } from '../../shared/schema/sketchRequests';
@@ -234,21 +235,10 @@ export async function copySketch(user: PublicUser, id: number): Promise<SketchDe
   return copyOf(user, await ownSketch(user, id));
 }
 
-/** A download's file name from the sketch's name: letters, digits, dots and dashes only, `sketch` when none is left. */
-export function fileBaseName(name: string): string {
-  return (
-    name
-      .replace(/[^A-Za-z0-9 ._-]+/g, '')
-      .trim()
-      .replace(/\s+/g, '-')
-      .slice(0, 80) || 'sketch'
-  );
-}
-
 /** The sketch file and a file name for it. */
 export async function exportSketch(user: PublicUser, id: number) {
   const row = await ownSketch(user, id);
-  return { fileName: `${fileBaseName(row.name)}.arcwright.json`, document: JSON.parse(row.document) as unknown };
+  return { fileName: `${downloadBaseName(row.name)}.arcwright.json`, document: JSON.parse(row.document) as unknown };
 }
 
 /** A stored sketch's name and document, for the downloads made from it. */

@@ -190,3 +190,8 @@ export function readHardpoints(text: string, sketch: Pick<Sketch, 'points'>): Ha
   reading.notListed = sketch.points.filter((p) => !seen.has(p.id)).map((p) => p.id);
   return reading;
 }
+
+/** Where the reading's changes put each pivot they move (mm), for the one edit that applies them. */
+export function placementsOf(reading: HardpointReading): Map<string, Position> {
+  return new Map(reading.changes.map((c) => [c.id, c.to]));
+}
