@@ -48,7 +48,7 @@ export function createApp(ctx: AppContext): Express {
   api.use('/auth', authRoutes(config, mailer));
   api.use(uploadRoutes(config));
   api.use('/sketches', sketchRoutes(config, mailer));
-  api.use('/shared', sharedRoutes());
+  api.use('/shared', sharedRoutes(config));
   api.use('/admin', adminRoutes());
   api.use(sweepRoutes(config));
   api.use(apiNotFound);

@@ -68,3 +68,20 @@ export function resetRequestLimiters(config: ServerConfig): { perAddress: Reques
     }),
   };
 }
+
+/**
+ * Sweeps per address per minute (POST /api/sweep, the sweep CSV): each is CPU on the one event loop (tens
+ * of ms for a typical sketch), so they are capped.
+ */
+export function sweepLimiter(config: ServerConfig): RequestHandler {
+  return rateLimit({
+    windowMs: 60_000,
+    limit: config.sweepMaxPerMinute,
+    keyGenerator: addressKey,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: (_req, res) => {
+      res.status(429).json({ error: 'too many sweeps from this address; wait a minute' });
+    },
+  });
+}

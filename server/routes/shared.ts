@@ -2,6 +2,8 @@ import { Router } from 'express';
 import { requireUser, currentUser } from '../middleware/require-user';
 import { notFound } from '../middleware/http-error';
 import * as sketches from '../services/sketches';
+import type { ServerConfig } from '../config';
+import { exportRoutes } from './exports';
 
 const TOKEN_PATTERN = /^[A-Za-z0-9_-]{16,64}$/;
 
@@ -11,12 +13,17 @@ function tokenParam(raw: unknown): string {
 }
 
 /** /api/shared/:token: a sketch opened by its read-only link, for guests too. */
-export function sharedRoutes(): Router {
+export function sharedRoutes(config: ServerConfig): Router {
   const router = Router();
 
   router.get('/:token', async (req, res) => {
     res.json(await sketches.getShared(req.user ?? null, tokenParam(req.params.token)));
   });
+
+  router.use(
+    '/:token',
+    exportRoutes(config, (req) => sketches.sharedDocument(tokenParam(req.params.token))),
+  );
 
   router.post('/:token/copy', requireUser, async (req, res) => {
     res.status(201).json(await sketches.copyShared(currentUser(req), tokenParam(req.params.token)));

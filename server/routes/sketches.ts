@@ -7,6 +7,7 @@ import { createSketchBody, listQuery, shareBody, updateSketchBody } from '../../
 import * as sketches from '../services/sketches';
 import type { Mailer } from '../services/mail/mailer';
 import { shareNoticeMail } from '../services/mail/messages';
+import { exportRoutes } from './exports';
 
 /** /api/sketches: the caller's own sketches. Someone else's sketch is 404 on every route. */
 export function sketchRoutes(config: ServerConfig, mailer: Mailer): Router {
@@ -69,6 +70,11 @@ export function sketchRoutes(config: ServerConfig, mailer: Mailer): Router {
     res.attachment(fileName);
     res.type('application/json').send(JSON.stringify(document, null, 2));
   });
+
+  router.use(
+    '/:id',
+    exportRoutes(config, (req) => sketches.ownDocument(currentUser(req), idParam(req, 'id'))),
+  );
 
   router.post('/:id/share', async (req, res) => {
     const user = currentUser(req);

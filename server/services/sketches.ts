@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { Op, fn, col, where as sqlWhere, type Transaction, type WhereOptions } from 'sequelize';
 import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/sketch';
+import { downloadBaseName } from '../../shared/downloadName';
 import { Sketch, SketchRevision, User, type PublicUser, type ShareMode } from '../models';
 import { badRequest, conflict, notFound } from '../middleware/http-error';
 import type { ListQuery } from '../../shared/schema/sketchRequests';
@@ -237,13 +238,19 @@ export async function copySketch(user: PublicUser, id: number): Promise<SketchDe
 /** The sketch file and a file name for it. */
 export async function exportSketch(user: PublicUser, id: number) {
   const row = await ownSketch(user, id);
-  const base =
-    row.name
-      .replace(/[^A-Za-z0-9 ._-]+/g, '')
-      .trim()
-      .replace(/\s+/g, '-')
-      .slice(0, 80) || 'sketch';
-  return { fileName: `${base}.arcwright.json`, document: JSON.parse(row.document) as unknown };
+  return { fileName: `${downloadBaseName(row.name)}.arcwright.json`, document: JSON.parse(row.document) as unknown };
+}
+
+/** A stored sketch's name and document, for the downloads made from it. */
+export interface StoredDocument {
+  name: string;
+  document: unknown;
+}
+
+/** One of the caller's sketches, for a download. */
+export async function ownDocument(user: PublicUser, id: number): Promise<StoredDocument> {
+  const row = await ownSketch(user, id);
+  return { name: row.name, document: JSON.parse(row.document) as unknown };
 }
 
 /**
@@ -278,6 +285,12 @@ async function sharedSketch(token: string): Promise<Sketch> {
 export async function getShared(viewer: PublicUser | null, token: string): Promise<SketchDetail> {
   const detail = detailOf(await sharedSketch(token), viewer);
   return { ...detail, canEdit: false, shareToken: null };
+}
+
+/** A sketch opened by its share link, for a download. */
+export async function sharedDocument(token: string): Promise<StoredDocument> {
+  const row = await sharedSketch(token);
+  return { name: row.name, document: JSON.parse(row.document) as unknown };
 }
 
 export async function copyShared(user: PublicUser, token: string): Promise<SketchDetail> {

@@ -33,6 +33,6 @@ export { sweepSketch } from './sweep';
 export { pointsAt } from './points';
 export { poseApply } from './pose';
 export type { Vec3 } from './vec';
-export { heaveRowsCsv } from './csv';
+export { heaveRowsCsv, sweepCsv } from './csv';
 export { sweepEnvelope } from './envelope';
 export type { EnvelopeCell, EnvelopeSettings } from './envelope';

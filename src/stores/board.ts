@@ -4,6 +4,7 @@ import { api, ApiError, errorMessage } from '../api/http';
 import type { Revision, SketchDetail } from '../api/types';
 import { checkSketch, type AxleEnd, type MemberKind, type Sketch } from '../../shared/schema/sketch';
 import { unitToMm, type Mm } from '../../shared/units';
+import type { Vec3 } from '../../shared/vec3';
 import { History } from './board/history';
 import { findPairs } from './board/pairs';
 import * as edits from './board/edits';
@@ -228,6 +229,10 @@ export const useBoardStore = defineStore('board', () => {
   // ---- edits ------------------------------------------------------------------------
   function setPointCoordinate(id: string, axis: edits.Axis, value: Mm): EditResult {
     return commit(`Set ${id}.${axis}`, (d) => edits.setPointCoordinate(d, id, axis, value, mirrorPairs()));
+  }
+  /** Puts pivots at the positions of an imported hardpoint table (mm), as one undo step. */
+  function placePoints(positions: ReadonlyMap<string, Vec3>, label: string): EditResult {
+    return commit(label, (d) => edits.placePoints(d, positions));
   }
   function renamePoint(from: string, to: string): EditResult {
     const r = commit(`Rename ${from} to ${to}`, (d) => edits.renamePoint(d, from, to));
@@ -467,6 +472,7 @@ export const useBoardStore = defineStore('board', () => {
     undo,
     redo,
     setPointCoordinate,
+    placePoints,
     renamePoint,
     renameMember,
     setMemberKind,

@@ -79,6 +79,19 @@ export function movePoints(
   return { ...doc, points };
 }
 
+/**
+ * Puts pivots where a table says (mm), each exactly: no mirroring, since a table gives every pivot it
+ * moves. An unknown id changes nothing and throws.
+ */
+export function placePoints(doc: Sketch, positions: ReadonlyMap<string, Vec3>): Sketch {
+  for (const id of positions.keys()) pointIndex(doc, id);
+  const points = doc.points.map((p) => {
+    const to = positions.get(p.id);
+    return to && (to.x !== p.x || to.y !== p.y || to.z !== p.z) ? { ...p, x: to.x, y: to.y, z: to.z } : p;
+  });
+  return points.every((p, i) => p === doc.points[i]) ? doc : { ...doc, points };
+}
+
 /** Sets one coordinate of a pivot (mm); with `pairs` the partner moves by the mirror-image delta. */
 export function setPointCoordinate(
   doc: Sketch,
