@@ -8,8 +8,14 @@ export interface ServerConfig {
   databasePath: string;
   /** Folder for uploaded files (tracing photos); never served statically. */
   uploadsDir: string;
-  /** Origin used in links inside e-mails, without a trailing slash. */
+  /**
+   * Origin of every link the app hands out (in e-mails and API answers), without a trailing slash.
+   * Without PUBLIC_URL it is `http://localhost:<port>`, settled on the port the server really listens on
+   * (`listenOn` in server/listen.ts), so PORT=0 or a port other than 3000 still gives working links.
+   */
   publicUrl: string;
+  /** True when PUBLIC_URL was set: the listening port then leaves `publicUrl` alone. */
+  publicUrlFixed: boolean;
   /** When set, mail goes to this SMTP server and the local mail catcher stays off. */
   smtpUrl: string | null;
   /** Sender address of outgoing mail. */
@@ -32,6 +38,8 @@ export interface ServerConfig {
   signupMaxPerAddress: number;
   /** Sweeps (POST /api/sweep) allowed per address per minute. */
   sweepMaxPerMinute: number;
+  /** Share links sent by e-mail per account per hour. */
+  shareMailMaxPerHour: number;
   /** Folder of the built client; served when it exists. */
   distDir: string;
 }
@@ -53,18 +61,26 @@ function trustProxyFrom(value: string | undefined): boolean | number | string {
   return Number.isInteger(n) ? n : value;
 }
 
+/** The default public origin for a server listening on `port` of this machine. */
+export function localUrl(port: number): string {
+  return `http://localhost:${port}`;
+}
+
 /** Reads the configuration from `env` (process.env by default). Throws naming the variable on a bad value. */
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
   const root = process.cwd();
-  const publicUrl = (env.PUBLIC_URL || 'http://localhost:3000').replace(/\/+$/, '');
+  const port = intFrom(env.PORT, 3000, 'PORT');
+  const publicUrlFixed = Boolean(env.PUBLIC_URL);
+  const publicUrl = publicUrlFixed ? env.PUBLIC_URL!.replace(/\/+$/, '') : localUrl(port);
   const production = env.NODE_ENV === 'production';
   const sessionSecret = env.SESSION_SECRET || '';
   if (production && !sessionSecret) throw new Error('SESSION_SECRET must be set when NODE_ENV=production');
   return {
-    port: intFrom(env.PORT, 3000, 'PORT'),
+    port,
     databasePath: path.resolve(root, env.DATABASE_PATH || 'data/arcwright.sqlite'),
     uploadsDir: path.resolve(root, env.UPLOADS_DIR || 'data/uploads'),
     publicUrl,
+    publicUrlFixed,
     smtpUrl: env.SMTP_URL || null,
     mailFrom: env.MAIL_FROM || 'Arcwright <no-reply@arcwright.demo.test>',
     // A fixed development secret keeps sessions across restarts on a laptop; production must set its own.
@@ -78,6 +94,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     loginWindowMs: 15 * MINUTE_MS,
     signupMaxPerAddress: intFrom(env.SIGNUP_MAX_PER_ADDRESS, 30, 'SIGNUP_MAX_PER_ADDRESS'),
     sweepMaxPerMinute: intFrom(env.SWEEP_MAX_PER_MINUTE, 120, 'SWEEP_MAX_PER_MINUTE'),
+    shareMailMaxPerHour: intFrom(env.SHARE_MAIL_MAX_PER_HOUR, 20, 'SHARE_MAIL_MAX_PER_HOUR'),
     distDir: path.resolve(root, env.DIST_DIR || 'dist'),
   };
 }

@@ -5,10 +5,11 @@ import { seedDemoData } from './seed';
 import { setUpMail } from './services/mail';
 import { purgeDeleted } from './services/uploads';
 import { createApp } from './app';
+import { listenOn } from './listen';
 
 const PURGE_EVERY_MS = 6 * 3600_000;
 
-/** Opens the database, migrates, seeds, starts the mail catcher (unless SMTP_URL), and listens on PORT. */
+/** Opens the database, migrates, seeds, starts the mail catcher (unless SMTP_URL), and listens on PORT (0: any free port). */
 async function main(): Promise<void> {
   const config = loadConfig();
   const sequelize = await openDatabase(config.databasePath);
@@ -27,9 +28,10 @@ async function main(): Promise<void> {
   setInterval(purge, PURGE_EVERY_MS).unref();
 
   const app = createApp({ sequelize, config, mailer: mail.mailer });
-  const server = app.listen(config.port, () => {
-    console.log(`[arcwright] listening on http://localhost:${config.port} (database ${config.databasePath})`);
-  });
+  const server = await listenOn(app, config);
+  console.log(
+    `[arcwright] listening on http://localhost:${config.port}, links to ${config.publicUrl} (database ${config.databasePath})`,
+  );
 
   let closing = false;
   const shutdown = (signal: string) => {

@@ -85,3 +85,20 @@ export function sweepLimiter(config: ServerConfig): RequestHandler {
     },
   });
 }
+
+/**
+ * Share links mailed per account per hour (POST /api/sketches/:id/share with an `email`). Requests without
+ * an address and refused ones (400, 404) do not count. Mount after `requireUser`.
+ */
+export function shareMailLimiter(config: ServerConfig): RequestHandler {
+  return rateLimit({
+    windowMs: HOUR_MS,
+    limit: config.shareMailMaxPerHour,
+    keyGenerator: (req) => `user:${req.user?.id ?? 'none'}`,
+    skip: (req) => (req.body as { email?: unknown } | undefined)?.email === undefined,
+    skipFailedRequests: true,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: tooMany('too many share mails from this account'),
+  });
+}

@@ -3,6 +3,7 @@ import { SequelizeStorage, Umzug, type MigrationParams } from 'umzug';
 import * as accounts from './0001-accounts';
 import * as sketches from './0002-sketches';
 import * as mail from './0003-mail';
+import * as shareRecipients from './0004-share-recipients';
 
 /** A migration step: receives the query interface, never the models (they change, migrations do not). */
 export type Migration = (params: MigrationParams<QueryInterface>) => Promise<void>;
@@ -17,6 +18,7 @@ const steps: [name: string, module: MigrationModule][] = [
   ['0001-accounts', accounts],
   ['0002-sketches', sketches],
   ['0003-mail', mail],
+  ['0004-share-recipients', shareRecipients],
 ];
 
 export function createMigrator(sequelize: Sequelize): Umzug<QueryInterface> {

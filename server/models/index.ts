@@ -9,8 +9,21 @@ import { SketchRevision } from './sketch-revision.model';
 import { Upload } from './upload.model';
 import { OutboxMessage } from './outbox-message.model';
 import { PasswordReset } from './password-reset.model';
+import { ShareRecipient } from './share-recipient.model';
 
-export { User, Shop, ClassGroup, ClassMember, Session, Sketch, SketchRevision, Upload, OutboxMessage, PasswordReset };
+export {
+  User,
+  Shop,
+  ClassGroup,
+  ClassMember,
+  Session,
+  Sketch,
+  SketchRevision,
+  Upload,
+  OutboxMessage,
+  PasswordReset,
+  ShareRecipient,
+};
 export { shareModes, type ShareMode } from './sketch.model';
 export { roles, toPublicUser, type Role, type PublicUser } from './user.model';
 
@@ -27,6 +40,7 @@ export function initModels(sequelize: Sequelize): void {
     Upload,
     OutboxMessage,
     PasswordReset,
+    ShareRecipient,
   ])
     model.initModel(sequelize);
 
@@ -44,6 +58,9 @@ export function initModels(sequelize: Sequelize): void {
   SketchRevision.belongsTo(Sketch, { foreignKey: 'sketchId' });
   Sketch.hasMany(Upload, { foreignKey: 'sketchId', as: 'uploads' });
   Upload.belongsTo(Sketch, { foreignKey: 'sketchId' });
+
+  Sketch.hasMany(ShareRecipient, { foreignKey: 'sketchId', as: 'recipients' });
+  ShareRecipient.belongsTo(Sketch, { foreignKey: 'sketchId' });
 
   User.hasMany(PasswordReset, { foreignKey: 'userId' });
   PasswordReset.belongsTo(User, { foreignKey: 'userId' });

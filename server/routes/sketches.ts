@@ -3,6 +3,7 @@ import type { ServerConfig } from '../config';
 import { requireUser, currentUser } from '../middleware/require-user';
 import { idParam } from '../middleware/params';
 import { parseOr400 } from '../middleware/validate';
+import { shareMailLimiter } from '../middleware/rate-limit';
 import { createSketchBody, listQuery, shareBody, updateSketchBody } from '../../shared/schema/sketchRequests';
 import * as sketches from '../services/sketches';
 import type { Mailer } from '../services/mail/mailer';
@@ -76,17 +77,21 @@ export function sketchRoutes(config: ServerConfig, mailer: Mailer): Router {
     exportRoutes(config, (req) => sketches.ownDocument(currentUser(req), idParam(req, 'id'))),
   );
 
-  router.post('/:id/share', async (req, res) => {
+  router.get('/:id/share', async (req, res) => {
+    res.json(await sketches.getShareState(currentUser(req), idParam(req, 'id'), config));
+  });
+
+  // One message per send, to one address; sends are counted per account (shareMailLimiter).
+  router.post('/:id/share', shareMailLimiter(config), async (req, res) => {
     const user = currentUser(req);
     const id = idParam(req, 'id');
     const body = parseOr400(shareBody, req.body);
-    const shared = await sketches.setShare(user, id, body.mode);
-    const url = shared.shareToken ? `${config.publicUrl}/shared/${shared.shareToken}` : null;
-    if (body.email && url) {
+    const { name, ...state } = await sketches.setShare(user, id, body, config);
+    if (body.email && state.url) {
       // Queued, not awaited: a failed send is retried and logged, and never undoes the share.
-      mailer.queue(shareNoticeMail(config, { to: body.email, from: user, sketchName: shared.name, url }));
+      mailer.queue(shareNoticeMail(config, { to: body.email, from: user, sketchName: name, url: state.url }));
     }
-    res.json({ share: shared.share, shareToken: shared.shareToken, url });
+    res.json(state);
   });
 
   return router;

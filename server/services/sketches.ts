@@ -2,10 +2,19 @@ import { randomBytes } from 'node:crypto';
 import { Op, fn, col, where as sqlWhere, type Transaction, type WhereOptions } from 'sequelize';
 import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/sketch';
 import { downloadBaseName } from '../../shared/downloadName';
-import { Sketch, SketchRevision, User, type PublicUser, type ShareMode } from '../models';
+import { ShareRecipient, Sketch, SketchRevision, User, type PublicUser } from '../models';
 import { badRequest, conflict, notFound } from '../middleware/http-error';
-import type { ListQuery } from '../../shared/schema/sketchRequests';
-import type { Page, RevisionDetail, RevisionList, SketchDetail, SketchSummary } from '../../shared/schema/apiResponses';
+import type { ListQuery, ShareBody } from '../../shared/schema/sketchRequests';
+import type {
+  Page,
+  RevisionDetail,
+  RevisionList,
+  ShareState,
+  SketchDetail,
+  SketchSummary,
+} from '../../shared/schema/apiResponses';
+import type { ServerConfig } from '../config';
+import { sharedSketchUrl } from './links';
 
 /** A soft-deleted sketch can be restored for this long (ms); then it is purged. */
 export const RESTORE_WINDOW_MS = 30 * 24 * 3600_000;
@@ -253,22 +262,62 @@ export async function ownDocument(user: PublicUser, id: number): Promise<StoredD
   return { name: row.name, document: JSON.parse(row.document) as unknown };
 }
 
+/** Most mailings of one link listed in the share dialog, newest first. */
+const RECIPIENTS_LISTED = 100;
+
+async function shareStateOf(row: Sketch, config: ServerConfig, t?: Transaction): Promise<ShareState> {
+  const recipients = await ShareRecipient.findAll({
+    where: { sketchId: row.id },
+    order: [
+      ['sentAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    limit: RECIPIENTS_LISTED,
+    transaction: t,
+  });
+  return {
+    share: row.share,
+    shareToken: row.shareToken,
+    url: row.share === 'link' && row.shareToken ? sharedSketchUrl(config, row.shareToken) : null,
+    recipients: recipients.map((r) => ({ email: r.email, sentAt: r.sentAt.toISOString(), live: !r.linkRevokedAt })),
+  };
+}
+
+/** Whether the caller's sketch has a live read-only link, the link, and who it was mailed to. */
+export async function getShareState(user: PublicUser, id: number, config: ServerConfig): Promise<ShareState> {
+  return shareStateOf(await ownSketch(user, id), config);
+}
+
 /**
- * Sets who may open the sketch. Turning the link on makes a new random token (the old link
- * stays dead); sharing again while it is on keeps the link others already have.
+ * Sets who may open the sketch, and with `email` records that the link is mailed there, in one transaction
+ * (the caller queues the mail once it has committed). Turning the link on makes a new random token (the old
+ * link stays dead); sharing again while it is on keeps the link others already have. Revoking marks every
+ * earlier mailing's link as no longer working.
  */
-export async function setShare(user: PublicUser, id: number, mode: ShareMode) {
+export async function setShare(
+  user: PublicUser,
+  id: number,
+  change: ShareBody,
+  config: ServerConfig,
+): Promise<ShareState & { name: string }> {
   return transaction(async (t) => {
     const row = await ownSketch(user, id, t);
-    if (mode === 'private') {
+    if (change.mode === 'private') {
       await row.update({ share: 'private', shareToken: null }, { transaction: t });
+      await ShareRecipient.update(
+        { linkRevokedAt: new Date() },
+        { where: { sketchId: row.id, linkRevokedAt: null }, transaction: t },
+      );
     } else if (row.share !== 'link' || !row.shareToken) {
       await row.update(
         { share: 'link', shareToken: randomBytes(SHARE_TOKEN_BYTES).toString('base64url') },
         { transaction: t },
       );
     }
-    return { share: row.share, shareToken: row.shareToken, name: row.name };
+    if (change.email) {
+      await ShareRecipient.create({ sketchId: row.id, senderId: user.id, email: change.email }, { transaction: t });
+    }
+    return { ...(await shareStateOf(row, config, t)), name: row.name };
   });
 }
 

@@ -63,6 +63,26 @@ export interface Page<T> {
 /** GET /api/sketches: one page of the library. */
 export const sketchPageSchema = pageSchema(sketchSummarySchema);
 
+/** One e-mail of a sketch's read-only link. `live`: the link it carried still works (not revoked since). */
+export const shareRecipientSchema = z.strictObject({
+  email: z.string(),
+  sentAt: isoTime,
+  live: z.boolean(),
+});
+export type ShareRecipient = z.infer<typeof shareRecipientSchema>;
+
+/**
+ * GET and POST /api/sketches/:id/share: whether the read-only link is on, the link itself (an absolute address
+ * under PUBLIC_URL, null while private) and who it was mailed to, newest first.
+ */
+export const shareStateSchema = z.strictObject({
+  share: z.enum(shareModes),
+  shareToken: z.string().nullable(),
+  url: z.string().nullable(),
+  recipients: z.array(shareRecipientSchema),
+});
+export type ShareState = z.infer<typeof shareStateSchema>;
+
 /** One saved version of a sketch, as the history lists it. */
 export const revisionSchema = z.strictObject({
   rev: z.number().int().positive(),

@@ -23,10 +23,20 @@ export const updateSketchBody = z.strictObject({
   version: z.int('must be a whole number').positive(),
 });
 
-export const shareBody = z.strictObject({
-  mode: z.enum(shareModes),
-  email: emailField.optional(),
-});
+/**
+ * POST /api/sketches/:id/share: turn the read-only link on ('link') or revoke it ('private'); with `email`, also
+ * mail the link to that one address (only with the link on: a revoked link cannot be sent).
+ */
+export const shareBody = z
+  .strictObject({
+    mode: z.enum(shareModes),
+    email: emailField.optional(),
+  })
+  .refine((b) => b.email === undefined || b.mode === 'link', {
+    path: ['email'],
+    message: "a link can only be sent with mode 'link'",
+  });
+export type ShareBody = z.infer<typeof shareBody>;
 
 const flag = z
   .enum(['0', '1'])

@@ -5,6 +5,8 @@ export type {
   Page,
   PublicUser as User,
   Revision,
+  ShareRecipient,
+  ShareState,
   SketchDetail,
   SketchSummary,
 } from '../../shared/schema/apiResponses';

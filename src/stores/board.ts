@@ -19,6 +19,8 @@ export const NUDGE_COALESCE_MS = 1500;
 /** Nudge step with snap off, in each display unit (Shift multiplies by NUDGE_BIG_FACTOR). */
 export const FINE_NUDGE_STEP = { mm: 1, in: 0.05 } as const;
 export const NUDGE_BIG_FACTOR = 10;
+/** What a read-only link that was revoked (or never existed) shows in place of the board. */
+export const SHARED_LINK_GONE = 'This link no longer works.';
 
 /** The sketch's record on the server, without its document. */
 export type SketchMeta = Omit<SketchDetail, 'document'>;
@@ -397,10 +399,12 @@ export const useBoardStore = defineStore('board', () => {
     } catch (err) {
       document.value = null;
       meta.value = null;
-      loadError.value =
-        err instanceof ApiError && err.status === 404
-          ? 'This sketch does not exist, or is not shared with you.'
-          : errorMessage(err);
+      const missing = err instanceof ApiError && err.status === 404;
+      loadError.value = !missing
+        ? errorMessage(err)
+        : token !== null
+          ? SHARED_LINK_GONE
+          : 'This sketch does not exist, or is not shared with you.';
     } finally {
       loading.value = false;
     }

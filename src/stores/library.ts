@@ -3,7 +3,7 @@ import { ref } from 'vue';
 import { api } from '../api/http';
 import type { Page, SketchDetail, SketchSummary } from '../api/types';
 import type { Layout } from '../../shared/schema/sketch';
-import type { LibraryQuery } from '../../shared/schema/sketchRequests';
+import type { LibraryQuery, ShareMode } from '../../shared/schema/sketchRequests';
 import { starters } from '../../shared/kinematics';
 
 /** Longest sketch name the server takes. */
@@ -85,5 +85,24 @@ export const useLibraryStore = defineStore('library', () => {
     await load();
   }
 
-  return { query, items, total, loading, load, createFromStarter, importFile, rename, copy, remove, restore };
+  /** The sketch's read-only link was turned on or revoked (the share dialog): its row says so at once. */
+  function noteShare(id: number, share: ShareMode) {
+    const row = items.value.find((s) => s.id === id);
+    if (row) row.share = share;
+  }
+
+  return {
+    query,
+    items,
+    total,
+    loading,
+    load,
+    noteShare,
+    createFromStarter,
+    importFile,
+    rename,
+    copy,
+    remove,
+    restore,
+  };
 });

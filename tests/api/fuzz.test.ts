@@ -18,6 +18,7 @@ const TABLES = [
   'uploads',
   'outbox',
   'password_resets',
+  'share_recipients',
 ];
 
 let server: TestServer;
@@ -42,6 +43,7 @@ beforeAll(async () => {
     LOGIN_MAX_PER_ACCOUNT: '100000',
     SIGNUP_MAX_PER_ADDRESS: '100000',
     SWEEP_MAX_PER_MINUTE: '100000',
+    SHARE_MAIL_MAX_PER_HOUR: '100000',
   });
   member = await newMember(server.app, 'fuzzed');
   admin = await new Caller(server.app).signIn(demo.admin.email, demo.admin.password);

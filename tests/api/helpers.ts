@@ -59,12 +59,15 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
   };
 }
 
-/** A browser-like caller: keeps its cookie and sends the session's CSRF token on every write. */
+/**
+ * A browser-like caller: keeps its cookie and sends the session's CSRF token on every write. `app` is the
+ * Express app (supertest starts it on a passing port per request) or the address of a server already listening.
+ */
 export class Caller {
   readonly agent: ReturnType<typeof request.agent>;
   token = '';
 
-  constructor(app: Express) {
+  constructor(app: Express | string) {
     this.agent = request.agent(app);
   }
 
@@ -115,7 +118,10 @@ export const demo = {
 
 let counter = 0;
 /** A new member account, signed in. */
-export async function newMember(app: Express, label = 'user'): Promise<Caller & { email: string; password: string }> {
+export async function newMember(
+  app: Express | string,
+  label = 'user',
+): Promise<Caller & { email: string; password: string }> {
   counter += 1;
   const email = `${label}-${counter}-${Date.now()}@example.test`;
   const password = `pass-${label}-${counter}-long`;

@@ -31,7 +31,13 @@ const routes: Route[] = [
   { method: 'post', path: (id) => `/api/sketches/${id}/restore/1` },
   { method: 'post', path: (id) => `/api/sketches/${id}/copy` },
   { method: 'get', path: (id) => `/api/sketches/${id}/export` },
+  { method: 'get', path: (id) => `/api/sketches/${id}/share` },
   { method: 'post', path: (id) => `/api/sketches/${id}/share`, body: () => ({ mode: 'link' }) },
+  {
+    method: 'post',
+    path: (id) => `/api/sketches/${id}/share`,
+    body: () => ({ mode: 'link', email: 'someone@example.test' }),
+  },
   { method: 'post', path: (id) => `/api/sketches/${id}/uploads` },
 ];
 

@@ -296,7 +296,7 @@ describe('share links', () => {
     expect((await request(server.app).post(`/api/shared/${on.body.shareToken}/copy`)).status).toBe(403);
 
     const off = await alice.post(`/api/sketches/${s.id}/share`).send({ mode: 'private' });
-    expect(off.body).toEqual({ share: 'private', shareToken: null, url: null });
+    expect(off.body).toEqual({ share: 'private', shareToken: null, url: null, recipients: [] });
     expect((await request(server.app).get(`/api/shared/${on.body.shareToken}`)).status).toBe(404);
 
     const reshared = await alice.post(`/api/sketches/${s.id}/share`).send({ mode: 'link' });

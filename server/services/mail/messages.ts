@@ -1,6 +1,7 @@
 import type { ServerConfig } from '../../config';
 import type { PublicUser } from '../../models';
 import type { MailMessage } from './mailer';
+import { passwordResetUrl } from '../links';
 
 /** The link drawn as a button; mail clients ignore style sheets, so the style is inline. */
 const BUTTON_STYLE =
@@ -38,7 +39,7 @@ export function passwordResetMail(
   token: string,
   validMinutes: number,
 ): MailMessage {
-  const url = `${config.publicUrl}/reset?token=${encodeURIComponent(token)}`;
+  const url = passwordResetUrl(config, token);
   const footer = 'If you did not ask for this, ignore this mail: your password stays as it is.';
   return {
     to: to.email,

@@ -31,9 +31,17 @@ describe('server configuration', () => {
     });
   });
 
+  it('without PUBLIC_URL, links go to this machine on the chosen port', () => {
+    const c = loadConfig({ PORT: '8080' });
+    expect(c.publicUrl).toBe('http://localhost:8080');
+    expect(c.publicUrlFixed).toBe(false);
+    expect(loadConfig({ PORT: '8080', PUBLIC_URL: 'https://arcwright.example.test' }).publicUrlFixed).toBe(true);
+  });
+
   it('names the variable when a value is bad', () => {
     expect(() => loadConfig({ PORT: 'eighty' })).toThrow(/PORT/);
     expect(() => loadConfig({ SESSION_IDLE_MINUTES: '-5' })).toThrow(/SESSION_IDLE_MINUTES/);
+    expect(() => loadConfig({ SHARE_MAIL_MAX_PER_HOUR: 'lots' })).toThrow(/SHARE_MAIL_MAX_PER_HOUR/);
   });
 
   it('insists on SESSION_SECRET in production', () => {
