@@ -128,7 +128,13 @@ describe('matching frame pivots by position', () => {
   });
 
   it('follows the tolerance the user sets: 4 mm apart share at 5 mm, 6 mm apart do not', () => {
-    const m = matchBrackets([[at('A', 0, 0, 0), at('B', 100, 0, 0)], [at('C', 4, 0, 0), at('D', 106, 0, 0)]], 5);
+    const m = matchBrackets(
+      [
+        [at('A', 0, 0, 0), at('B', 100, 0, 0)],
+        [at('C', 4, 0, 0), at('D', 106, 0, 0)],
+      ],
+      5,
+    );
     expect(m.brackets.map(ids)).toEqual(['0:A 1:C', '0:B', '1:D']);
     expect(m.nearMisses.map((n) => [n.move.id, n.by])).toEqual([['D', expect.closeTo(1, 9)]]);
   });
