@@ -74,8 +74,13 @@ export function keyNumbers(variants: readonly KeyVariant[], u: LengthUnit): KeyR
         cells: variants.map((v) => {
           if (!v.result) return notSwept(v);
           const checks = checkTargets(v.result, readTargets(v.document));
-          const flags = buildFlags(v.result, v.document.members, checks, u).map((f) => f.title);
-          return { text: flags.length ? String(flags.length) : 'none', flags };
+          const titles = buildFlags(v.result, v.document.members, checks, u).map((f) => f.title);
+          // One line per kind of flag, with how many times it is raised ("4 × Joint angle too small").
+          const flags = [...new Set(titles)].map((t) => {
+            const n = titles.filter((x) => x === t).length;
+            return n > 1 ? `${n} × ${t}` : t;
+          });
+          return { text: titles.length ? String(titles.length) : 'none', flags };
         }),
       });
       continue;
