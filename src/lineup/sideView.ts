@@ -5,6 +5,7 @@
  */
 import type { Sketch } from '../../shared/schema/sketch';
 import { fixed } from '../sweep/format';
+import { framePivots } from '../../shared/lineup/framePivots';
 import { mmToUnit, type LengthUnit, type Mm } from '../../shared/units';
 import {
   boundsOf,
@@ -21,13 +22,23 @@ import {
 
 /** px kept clear for the z axis's labels (left) and the x axis's (bottom). */
 export const AXIS_LEFT_PX = 44;
-export const AXIS_BOTTOM_PX = 30;
+export const AXIS_BOTTOM_PX = 38;
 
-/** The transform showing every given sketch's pivots and tyre, with the ground, inside the axes. */
+/**
+ * The points the line-up draws of a sketch: its moving pivots and its frame brackets. A frame point no
+ * member is mounted on (the driveline's reference points: the gearbox output far forward) is no bracket
+ * and would only shrink the drawing, so it is left out.
+ */
+export function drawnPoints(sketch: Sketch): Sketch['points'] {
+  const brackets = new Set(framePivots(sketch).map((p) => p.id));
+  return sketch.points.filter((p) => p.body !== 'frame' || brackets.has(p.id));
+}
+
+/** The transform showing every given sketch's drawn points and tyre, with the ground, inside the axes. */
 export function fitSideView(sketches: readonly Sketch[], width: Px, height: Px): ViewTransform | null {
   // The pivots, and each tyre's top and front and back, so the wheels are in view too.
   const planes: PlanePoint[] = sketches.flatMap((v) => {
-    const pts = v.points.map((p) => planeOf('side', p));
+    const pts = drawnPoints(v).map((p) => planeOf('side', p));
     const wheel = v.points.find((p) => p.id === v.wheels.left);
     if (wheel) {
       const r = v.vehicle.tireRadius;
