@@ -127,3 +127,19 @@ test('three rear suspensions of three starters on one frame: the brackets they s
   await snap(page, 'lineup-platform-phone');
   await page.screenshot({ path: `${ARTIFACTS}/lineup-platform-phone-full.png`, fullPage: true });
 });
+
+test('a front layout is matched only with front layouts, until the user asks for front and rear together', async ({
+  page,
+}) => {
+  const rear = await save(page, 'Rear axle', starters['four-link-lateral-rod']!.build());
+  const front = await save(page, 'Front wishbones', starters['double-wishbone']!.build());
+  await page.goto(`/lineup?ids=${rear},${front}`);
+  await expect($(page, 'lineup-brackets-summary')).toHaveCount(2);
+  await expect($(page, 'lineup-brackets-summary').nth(1)).toContainText(
+    '“Front wishbones” is the only front layout here: its 12 frame brackets are matched with no other',
+  );
+  await $(page, 'lineup-across-ends').click();
+  await expect($(page, 'lineup-across-ends')).toHaveAttribute('aria-checked', 'true');
+  await expect($(page, 'lineup-brackets-summary')).toHaveCount(1);
+  await expect($(page, 'lineup-brackets-summary')).toContainText('common to all 2 variants');
+});
