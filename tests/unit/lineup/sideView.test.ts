@@ -1,7 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { starters } from '../../../shared/kinematics';
 import { toScreen } from '../../../src/canvas/transform';
-import { AXIS_BOTTOM_PX, AXIS_LEFT_PX, fitSideView, pivotsNear, sideAxes } from '../../../src/lineup/sideView';
+import {
+  AXIS_BOTTOM_PX,
+  AXIS_LEFT_PX,
+  drawnPoints,
+  fitSideView,
+  pivotsNear,
+  sideAxes,
+} from '../../../src/lineup/sideView';
 
 describe('the line-up side view', () => {
   it('puts ticks every 200 mm at 0.5 px/mm, where the transform puts those x and z, and a 100 px scale bar', () => {
@@ -28,11 +35,14 @@ describe('the line-up side view', () => {
     expect(a.bar.px).toBeCloseTo(63.5, 9);
   });
 
-  it('fits every pivot of every variant inside the axes', () => {
+  it('fits every drawn pivot of every variant inside the axes, and draws no driveline reference point', () => {
     const sketches = [starters['leaf-spring']!.build(), starters['four-link-lateral-rod']!.build()];
+    // The gearbox output (DS.o, DS.oa) is a frame point no member uses: no bracket, not drawn.
+    expect(drawnPoints(sketches[1]).some((p) => p.id === 'DS.o' || p.id === 'DS.oa')).toBe(false);
+    expect(drawnPoints(sketches[1]).some((p) => p.id === 'DS.p')).toBe(true);
     const t = fitSideView(sketches, 390, 340)!;
     for (const s of sketches)
-      for (const p of s.points) {
+      for (const p of drawnPoints(s)) {
         const q = toScreen('side', t, p);
         expect(q.px, p.id).toBeGreaterThanOrEqual(AXIS_LEFT_PX);
         expect(q.px, p.id).toBeLessThanOrEqual(390);
