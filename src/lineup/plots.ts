@@ -17,11 +17,13 @@ export interface PlottedVariant {
   name: string;
   document: Sketch;
   result: SweepResult | null;
+  /** left out of the plots by the user's toggle; the others keep their colours */
+  hidden?: boolean;
 }
 
 export function lineupPlots(variants: readonly PlottedVariant[], u: LengthUnit): PlotSpec[] {
   const perVariant = variants.map((v) =>
-    v.result
+    v.result && !v.hidden
       ? buildPlots(
           v.result,
           {

@@ -1,7 +1,9 @@
 /**
  * The line-up: two to four sketches side by side, read-only. It loads them from the API,
- * sweeps each with runSweep (the very result the board shows for it), and builds the bracket
- * list of their frame pivots. It edits nothing: a variant is changed on its own board.
+ * sweeps each with runSweep (the very result the board shows for it), and matches their frame
+ * pivots by position into brackets. It edits no sketch: a variant is changed on its own board; what
+ * it holds of its own is how the line-up is looked at (the tolerance, which variants are drawn,
+ * whether front and rear layouts are matched together).
  */
 import { defineStore } from 'pinia';
 import { computed, ref, shallowRef } from 'vue';
@@ -9,7 +11,9 @@ import { api, errorMessage } from '../api/http';
 import { sweepOnce } from '../sweep/sweepOnce';
 import type { SketchDetail } from '../api/types';
 import type { SweepResult } from '../../shared/kinematics/types';
-import { bracketList } from '../../shared/lineup/brackets';
+import { DEFAULT_BRACKET_TOLERANCE_MM, matchBrackets, type BracketMatch } from '../../shared/lineup/brackets';
+import { framePivots } from '../../shared/lineup/framePivots';
+import { matchGroups, suspensionEnd, type MatchGroup } from '../../shared/lineup/ends';
 import { parseLineupIds } from './lineup/ids';
 
 export interface LineupVariant {
@@ -25,7 +29,39 @@ export const useLineupStore = defineStore('lineup', () => {
   /** why the line-up could not open (a missing sketch, a bad address) */
   const error = ref<string | null>(null);
 
-  const brackets = computed(() => bracketList(variants.value.map((v) => v.detail.document)));
+  /** mm: frame pivots at most this far apart share a bracket */
+  const tolerance = ref(DEFAULT_BRACKET_TOLERANCE_MM);
+  /** match front and rear layouts together (the user insists) */
+  const acrossEnds = ref(false);
+  /** the variants (by place) left out of the side view and the plots; the brackets still count them */
+  const hidden = ref<number[]>([]);
+
+  const ends = computed(() => variants.value.map((v) => suspensionEnd(v.detail.document)));
+  const pivots = computed(() => variants.value.map((v) => framePivots(v.detail.document)));
+  /** one match per group of variants compared together (one group unless front and rear are kept apart) */
+  const matches = computed<(MatchGroup & { match: BracketMatch })[]>(() =>
+    matchGroups(ends.value, acrossEnds.value).map((g) => ({
+      ...g,
+      match: matchBrackets(
+        g.variants.map((i) => pivots.value[i]),
+        tolerance.value,
+        g.variants,
+      ),
+    })),
+  );
+
+  /** mm; the page checks it against MIN/MAX_BRACKET_TOLERANCE_MM before it sets it */
+  function setTolerance(mm: number): void {
+    tolerance.value = mm;
+  }
+
+  function setAcrossEnds(on: boolean): void {
+    acrossEnds.value = on;
+  }
+
+  function toggleHidden(place: number): void {
+    hidden.value = hidden.value.includes(place) ? hidden.value.filter((i) => i !== place) : [...hidden.value, place];
+  }
 
   async function load(raw: unknown): Promise<void> {
     error.value = null;
@@ -39,6 +75,7 @@ export const useLineupStore = defineStore('lineup', () => {
     try {
       const details = await Promise.all(parsed.ids.map((id) => api.get<SketchDetail>(`/api/sketches/${id}`)));
       variants.value = details.map((detail) => ({ detail, ...sweepOnce(detail.document) }));
+      hidden.value = [];
     } catch (err) {
       variants.value = [];
       error.value = `The line-up could not open: ${errorMessage(err)}.`;
@@ -47,5 +84,18 @@ export const useLineupStore = defineStore('lineup', () => {
     }
   }
 
-  return { variants, loading, error, brackets, load };
+  return {
+    variants,
+    loading,
+    error,
+    tolerance,
+    acrossEnds,
+    hidden,
+    ends,
+    matches,
+    setTolerance,
+    setAcrossEnds,
+    toggleHidden,
+    load,
+  };
 });

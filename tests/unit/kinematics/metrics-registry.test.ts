@@ -8,6 +8,7 @@ import { heaveRowsCsv, runSweep, starters } from '../../../shared/kinematics';
 import type { SweepResult } from '../../../shared/kinematics';
 import {
   csvView,
+  lineupView,
   isMetricRef,
   linkLoadEntry,
   memberEntries,
@@ -142,6 +143,7 @@ describe('the metric registry', () => {
       ['csv', csvView],
       ['targets', targetsView],
       ['sheet', sheetView.flatMap((i) => ('metric' in i ? [i.metric] : i.metrics))],
+      ['line-up', lineupView.map((i) => (typeof i === 'string' ? i : i.metric))],
     ];
     for (const [name, view] of views) {
       const refs = view.filter(isMetricRef);

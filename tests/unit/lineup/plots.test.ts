@@ -40,6 +40,20 @@ describe('the line-up plots', () => {
     );
     expect(plots.find((p) => p.key === 'pinion')!.series.map((s) => s.label)).toEqual(['ok']);
   });
+
+  it('leave out a variant the user hides, the others keeping their colours', () => {
+    const a = fourLink();
+    const result = runSweep(a);
+    const plots = lineupPlots(
+      [
+        { name: 'first', document: a, result, hidden: true },
+        { name: 'second', document: a, result },
+      ],
+      'mm',
+    );
+    const pinion = plots.find((p) => p.key === 'pinion')!;
+    expect(pinion.series.map((s) => [s.label, s.color])).toEqual([['second', VARIANT_COLORS[1]]]);
+  });
 });
 
 describe('a line-up address', () => {

@@ -208,3 +208,29 @@ export const sheetView: SheetItem[] = [
   { at: 'range', metric: heave('pinionAngleChange') },
   { at: 'range', metric: heave('lateralShift') },
 ];
+
+/**
+ * The line-up's key numbers, one column per variant: a `travel` item at ride, at full bump and at full
+ * droop (a change from ride, `signed` in the registry, only at the two ends: it is 0 at ride by
+ * definition), a `whole` item once for the sweep; `*flags` is each variant's flags.
+ */
+export type LineupItem = { at: 'travel'; metric: MetricRef } | { at: 'whole'; metric: MetricRef } | '*flags';
+
+export const lineupView: LineupItem[] = [
+  ...[
+    'travel',
+    'antiSquat',
+    'antiLiftBraking',
+    'antiDive',
+    'antiLift',
+    'instantCenterAboveGround',
+    'rollCenterAboveGround',
+    'pinionAngleChange',
+    'lateralShift',
+    'camberChange',
+    'toeChange',
+    'trackChange',
+  ].map((key) => ({ at: 'travel' as const, metric: heave(key) })),
+  { at: 'whole', metric: limits('articulation') },
+  '*flags',
+];
