@@ -8,7 +8,7 @@ import type { LinkageModel } from '../model';
 import { BodyRotations, pointPlace } from '../residuals';
 import type { SteerEvent } from '../types';
 import { vec, vecAngle, vecDot, vecLength, vecScale, vecSub, type Vec3 } from '../vec';
-import type { SteerLinkage, SteerSide } from './linkage';
+import { rackSet, type SteerLinkage, type SteerSide } from './linkage';
 import type { RackSolved } from './march';
 import { steerAngle } from './rows';
 
@@ -41,7 +41,7 @@ export function tieRodArmAngle(model: LinkageModel, state: Float64Array, s: Stee
   return Math.min(a, 180 - a);
 }
 
-/** The lock event of one direction of the march. */
+/** The lock event of one direction of the march; leaves the rack at the event's travel. */
 export function lockEvent(
   model: LinkageModel,
   linkage: SteerLinkage,
@@ -50,6 +50,8 @@ export function lockEvent(
   limit: RackSolved | null,
 ): SteerEvent {
   const at = limit ?? reached;
+  // The tie rods' inner ends where the rack is at that row (the march leaves them wherever it stopped).
+  rackSet(linkage.input, at.rack);
   const leftSteer = steerAngle(at.state, linkage.left);
   const rightSteer = steerAngle(at.state, linkage.right);
   const wheels = `left wheel ${deg(leftSteer)}, right wheel ${deg(rightSteer)}`;

@@ -144,14 +144,7 @@ export function marchRack(rc: RackContext, start: RackSolved, values: readonly n
   let prev = start;
   let before: RackSolved | null = null;
   for (const v of values) {
-    let next = stepRack(rc, prev, v, before);
-    if (!next) {
-      // Near a toggle the predictor overshoots before the linkage is at its limit: retry in sub-steps.
-      let sub: RackSolved | null = prev;
-      for (let k = 1; k <= RETRY_SUBSTEPS && sub; k++)
-        sub = stepRack(rc, sub, prev.rack + ((v - prev.rack) * k) / RETRY_SUBSTEPS);
-      next = sub;
-    }
+    const next = stepRack(rc, prev, v, before) ?? subSteps(rc, prev, v);
     if (!next) return { rows, limit: bisectLimit(rc, prev, v), failedAt: v };
     rows.push(next);
     before = prev;
@@ -160,13 +153,21 @@ export function marchRack(rc: RackContext, start: RackSolved, values: readonly n
   return { rows, limit: null, failedAt: null };
 }
 
+/** Near a toggle the predictor overshoots before the linkage is at its limit: the row reached in sub-steps. */
+function subSteps(rc: RackContext, from: RackSolved, to: number): RackSolved | null {
+  let sub: RackSolved | null = from;
+  for (let k = 1; k <= RETRY_SUBSTEPS && sub; k++)
+    sub = stepRack(rc, sub, from.rack + ((to - from.rack) * k) / RETRY_SUBSTEPS);
+  return sub;
+}
+
 /** The furthest solvable row between a solved row and a rack value that fails. */
 function bisectLimit(rc: RackContext, good: RackSolved, bad: number): RackSolved {
   let best = good;
   let fail = bad;
   for (let i = 0; i < LIMIT_BISECTION_STEPS; i++) {
     const mid = 0.5 * (best.rack + fail);
-    const next = stepRack(rc, best, mid);
+    const next = stepRack(rc, best, mid) ?? subSteps(rc, best, mid);
     if (next) best = next;
     else fail = mid;
   }
