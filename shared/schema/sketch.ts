@@ -349,9 +349,11 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
   }
 
   const sw = s.sweep;
-  if (sw.steer && sw.steer.step > sw.steer.rack)
-    report(['sweep', 'steer', 'step'], `must be at most the rack travel (${sw.steer.rack} mm)`);
-  const steerRows = sw.steer ? gridCount(-sw.steer.rack, sw.steer.rack, sw.steer.step) : 0;
+  // A steer block whose own fields are refused above adds no second problem here.
+  const steer = sw.steer && sw.steer.rack > 0 && sw.steer.step > 0 ? sw.steer : null;
+  if (steer && steer.step > steer.rack)
+    report(['sweep', 'steer', 'step'], `must be at most the rack travel (${steer.rack} mm)`);
+  const steerRows = steer ? gridCount(-steer.rack, steer.rack, steer.step) : 0;
   const rows = gridCount(sw.droop, sw.bump, sw.step) + gridCount(-sw.roll, sw.roll, sw.rollStep) + steerRows;
   if (rows > MAX_SWEEP_ROWS) {
     report(
