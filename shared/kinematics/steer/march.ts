@@ -103,8 +103,21 @@ function stepRack(rc: RackContext, from: RackSolved, to: number, before: RackSol
   const delta = to - from.rack;
   const state = new Float64Array(from.state);
   const span = before ? from.rack - before.rack : 0;
-  const k = before && span !== 0 ? (0.5 * delta * delta) / span : 0;
-  for (const c of drive.free) state[c] += from.rate[c] * delta + (before ? (from.rate[c] - before.rate[c]) * k : 0);
+  if (before && span !== 0) {
+    // Cubic Hermite extrapolation through the two rows' poses and rates: steer turns faster and faster
+    // toward lock, and the second-order predictor of march.ts leaves a Newton step more a row than this.
+    const t = (to - before.rack) / span;
+    const [h00, h10, h01, h11] = [
+      2 * t ** 3 - 3 * t ** 2 + 1,
+      t ** 3 - 2 * t ** 2 + t,
+      -2 * t ** 3 + 3 * t ** 2,
+      t ** 3 - t ** 2,
+    ];
+    for (const c of drive.free)
+      state[c] = h00 * before.state[c] + h10 * span * before.rate[c] + h01 * from.state[c] + h11 * span * from.rate[c];
+  } else {
+    for (const c of drive.free) state[c] += from.rate[c] * delta;
+  }
   driveApply(model, state, 0, 0);
   rackSet(rc.input, to);
   const predicted = new Float64Array(state);

@@ -10,7 +10,7 @@ import { marchPlan } from '../grid';
 import { layoutReaders } from '../layouts/readers';
 import type { MarchContext } from '../march';
 import type { LinkageModel } from '../model';
-import type { SteerResult } from '../types';
+import type { SteerResult, SteerRow } from '../types';
 import { bumpSteerMap, mapRackPositions } from './bumpSteerMap';
 import { lockEvent } from './events';
 import { rackSet, type SteerLinkage } from './linkage';
@@ -50,10 +50,14 @@ export interface RackSweep {
   rc: RackContext;
   /** solved rows, −rack → +rack */
   solved: RackSolved[];
+  rows: SteerRow[];
   events: SteerResult['events'];
 }
 
-/** The rows of the rack march both ways from the solved ride state, and the lock events. */
+/**
+ * The rows of the rack march both ways from the solved ride state, and the lock events; the rack is left
+ * centred. The steer sweep without its bump-steer map (the benchmark times this against the heave march).
+ */
 export function rackSweep(
   ctx: MarchContext,
   linkage: SteerLinkage,
@@ -71,7 +75,14 @@ export function rackSweep(
     lockEvent(ctx.model, linkage, rack, left.rows.at(-1) ?? start, left.limit),
     lockEvent(ctx.model, linkage, -rack, right.rows.at(-1) ?? start, right.limit),
   ];
-  return { rc, solved, events };
+  const rowPlan = steerRowPlanBuild(ctx.model, linkage);
+  const rows = solved.map((s) => {
+    // A row reads the rack's points (the tie rods' inner ends) where the rack is at that row.
+    rackSet(linkage.input, s.rack);
+    return steerRowBuild(rowPlan, s);
+  });
+  rackSet(linkage.input, 0);
+  return { rc, solved, rows, events };
 }
 
 /** The steer sweep of a validated sketch whose `sweep.steer` is set, on the heave sweep's solver. */
@@ -81,12 +92,7 @@ export function steerSweep(sketch: Sketch, ctx: MarchContext, rideState: Float64
   const linkage = steeringOf(ctx.model);
   if (typeof linkage === 'string') return noSteer(linkage);
   try {
-    const { rc, solved, events } = rackSweep(ctx, linkage, rideState, settings.rack, settings.step);
-    const plan = steerRowPlanBuild(ctx.model, linkage);
-    const rows = solved.map((s) => {
-      rackSet(linkage.input, s.rack);
-      return steerRowBuild(plan, s);
-    });
+    const { rc, solved, rows, events } = rackSweep(ctx, linkage, rideState, settings.rack, settings.step);
     const sw = sketch.sweep;
     const bumpSteer = bumpSteerMap(rc, mapRackPositions(solved), sw.droop, sw.bump, sw.step);
     const u = linkage.input.direction;
