@@ -14,7 +14,7 @@ import type { RackContext, RackSolved } from './march';
 import { steerAngle } from './rows';
 
 /** Heave steps of each curve over the whole travel, at most (fewer when the sweep's own step is coarser). */
-export const MAP_INTERVALS = 16;
+export const MAP_INTERVALS = 12;
 
 /** The rack positions of the map: each lock, half way to it, and centre (ordered −lock … +lock, no repeats). */
 export function mapRackPositions(rows: readonly RackSolved[]): RackSolved[] {

@@ -117,9 +117,9 @@ describe('the steer sweep of the double-wishbone starter', () => {
     const at = map.worstAt!;
     const point = map.curves.find((c) => c.rack === at.rack)!.points.find((p) => p.travel === at.travel)!;
     expect(point[at.side]).toBe(map.worst);
-    // Each curve runs from droop to bump (in at most 16 steps) and passes travel 0 with no toe change.
+    // Each curve runs from droop to bump (in at most 12 steps) and passes travel 0 with no toe change.
     for (const c of map.curves) {
-      expect(c.points.length).toBeLessThanOrEqual(17);
+      expect(c.points.length).toBeLessThanOrEqual(13);
       expect(c.points.find((p) => p.travel === 0)).toEqual({ travel: 0, left: 0, right: 0 });
     }
   });
