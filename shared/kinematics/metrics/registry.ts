@@ -7,7 +7,7 @@ import type { TargetMetric } from '../../schema/boardFields';
 import { heaveEntries } from './registry/heave';
 import { limitsEntries, rollEntries } from './registry/roll';
 import { bumpSteerEntries, steerEntries } from './registry/steer';
-import type { AnyEntry, MetricEntry, MetricSweep, SweepRowOf, TargetEntry } from './registry/types';
+import type { AnyEntry, MetricEntry, MetricSweep, SweepRowOf, TargetEntry, TargetSweep } from './registry/types';
 import type { MetricRef } from './registry/views';
 
 export type * from './registry/types';
@@ -56,14 +56,13 @@ export function isMetricRef(item: MetricRef | string): item is MetricRef {
   return typeof item !== 'string';
 }
 
-/** The sweeps a target band can be set in (the steer sweep's quantities take none yet). */
 type TargetCapable = TargetEntry<'heave'> | TargetEntry<'roll'> | TargetEntry<'limits'>;
 const targetSweepEntries = [...heaveEntries, ...rollEntries, ...limitsEntries];
 
 /** The entries a target band can be set on, by target key. */
 export const targetEntries = Object.fromEntries(
   targetSweepEntries.filter((e): e is TargetCapable => e.target === true).map((e) => [e.key, e]),
-) as Record<TargetMetric, TargetEntry>;
+) as Record<TargetMetric, TargetEntry<TargetSweep>>;
 
 /** The target-capable keys in registry order (a test holds them equal to the schema's list). */
 export const registryTargetKeys: TargetMetric[] = targetSweepEntries

@@ -16,6 +16,9 @@ import type { BumpSteerMap, HeaveRow, RollRow, SteerRow, SweepResult } from '../
  */
 export type MetricSweep = 'heave' | 'roll' | 'limits' | 'steer' | 'bumpSteer';
 
+/** The sweeps whose metrics a target band can be set on (the steer sweep's take none yet). */
+export type TargetSweep = 'heave' | 'roll' | 'limits';
+
 /** A row of each sweep; `limits` metrics read the result's limits, `bumpSteer` metrics the map (`steer.bumpSteer`). */
 export interface SweepRowOf {
   heave: HeaveRow;
