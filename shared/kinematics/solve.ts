@@ -242,6 +242,23 @@ export class PoseSolver {
     for (let j = 0; j < n; j++) out[free[j]] = this.step[j];
   }
 
+  /**
+   * Sensitivity of the solved pose to a parameter that moves frame points rather than imposed
+   * coordinates (the steer sweep's rack): `dr` is ∂r/∂parameter at the fixed pose (length m); writes
+   * d(state)/d(parameter) into `out` (imposed coordinates 0, free ones from J_free·dq = −dr in the
+   * least-squares sense). Uses the Jacobian of the last solve.
+   */
+  sensitivityToResiduals(dr: Float64Array, out: Float64Array): void {
+    const { free, n, m } = this;
+    out.fill(0);
+    if (n === 0 || m === 0) return;
+    if (!this.qrIsUndamped || !this.factored) {
+      if (!this.factor(0)) return;
+    }
+    this.back(dr, -1, this.step);
+    for (let j = 0; j < n; j++) out[free[j]] = this.step[j];
+  }
+
   /** Forces a fresh factorisation at the current Jacobian before the next sensitivity. */
   refactor(): void {
     this.factor(0);

@@ -17,6 +17,7 @@ import { sweepEvents } from './events';
 import { linkLoads, linkLoadsApply } from './loads';
 import { windUpReading } from './windUp';
 import { rollSteerInTravel } from './rollSteerInTravel';
+import { steerSweep } from './steer/sweep';
 import type { HeaveRow, RollRow, SweepEvent, SweepResult } from './types';
 
 /** A null-space motion that moves no point of its body faster than this (mm per unit) is idle (a shackle spinning on its own axis). */
@@ -144,6 +145,10 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
     events.push(...sweepEvents(sketch, 'roll', roll));
   }
 
+  // Last, on the same solver: the steer sweep moves the rack's frame points and puts them back.
+  const steer = sw.steer && !options.heaveOnly ? steerSweep(sketch, ctx, ride.state) : undefined;
+  if (steer?.problem) warnings.push(steer.problem);
+
   return {
     heave,
     roll,
@@ -159,5 +164,6 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
     ride: rideRow,
     ...(windUp ? { windUp } : {}),
     ...(loads ? { loads: loads.summary } : {}),
+    ...(steer ? { steer } : {}),
   };
 }

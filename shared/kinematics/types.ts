@@ -298,6 +298,104 @@ export interface SweepResult {
   windUp?: WindUpReading;
   /** solid axles on links: axial link loads by statics from the axle torque (addition; loads.ts) */
   loads?: LinkLoadSummary;
+  /** the steer sweep, when the sketch's `sweep.steer` asks for one (addition; steer/sweep.ts) */
+  steer?: SteerResult;
+}
+
+/**
+ * One row of the steer sweep (addition): the steering input moved, the body at ride height (each wheel
+ * centre held at its ride height), the knuckles solved on their links.
+ */
+export interface SteerRow {
+  /** mm, rack travel from centre along the line through the tie rods' inner ends, positive toward the vehicle's left (+y) */
+  rack: Mm;
+  /** deg, the left wheel's steer angle from straight ahead in top view, positive when it turns toward the vehicle's left (yaw) */
+  leftSteer: Deg;
+  /** deg, the right wheel's steer angle, same sign as `leftSteer` */
+  rightSteer: Deg;
+  /**
+   * %, 100 · (inner − outer) / (ideal inner − outer), the ideal inner angle the Ackermann condition gives for the
+   * outer wheel's angle (steer/readings.ts names the source); null at straight ahead, where it is not defined
+   */
+  ackermann: number | null;
+  /**
+   * mm, from the turning centre (where the outer front wheel's axle line in the ground meets the rear axle line,
+   * `vehicle.wheelbase` behind the front wheel centres) to the outer front wheel's contact patch; null straight ahead
+   */
+  turningRadius: Mm | null;
+  /** mm, largest absolute constraint residual */
+  bind: Mm;
+  /** poses of every moving body, for drawing the wheels turned (the rack's points move by `rack` along `rackDirection`) */
+  bodies: BodyPoses;
+}
+
+/** Toe change over heave at one rack position (addition: the bump-steer map). */
+export interface BumpSteerCurve {
+  /** mm, the rack position the curve is taken at (0: straight ahead) */
+  rack: Mm;
+  /** ordered droop → bump; rows past a lock-up at this rack position are left out */
+  points: {
+    /** mm, heave travel */
+    travel: Mm;
+    /** deg, left wheel's toe change from travel 0 at this rack position, positive toe-in */
+    left: Deg;
+    /** deg, right wheel's toe change, positive toe-in */
+    right: Deg;
+  }[];
+}
+
+/** Bump steer at straight ahead and out to lock (addition). */
+export interface BumpSteerMap {
+  /** one curve per rack position, ordered by rack (−lock … 0 … +lock) */
+  curves: BumpSteerCurve[];
+  /** deg, the toe change of largest size over every curve and both wheels (signed, positive toe-in); null without points */
+  worst: Deg | null;
+  /** where the worst value is; null with `worst` */
+  worstAt: { rack: Mm; travel: Mm; side: 'left' | 'right' } | null;
+}
+
+export type SteerEventKind =
+  // the rack reaches the end of the travel asked for: the steering lock
+  | 'steer-lock'
+  // a tie rod and its steering arm come into line before the rack's end: the lock (and the end of the tie rods' reach)
+  | 'steer-toggle'
+  // the linkage cannot follow the rack any further for another reason (a wishbone or the wheel's height)
+  | 'steer-lock-up';
+
+/** A steer sweep event (addition): shaped like SweepEvent, `at` in mm of rack travel. */
+export interface SteerEvent {
+  kind: SteerEventKind;
+  sweep: 'steer';
+  /** mm of rack travel (the toggle's interpolated by bisection) */
+  at: Mm;
+  /** the side whose tie rod comes into line, for steer-toggle */
+  side?: 'left' | 'right';
+  /** deg, the wheels' steer angles at the lock */
+  leftSteer: Deg;
+  rightSteer: Deg;
+  /** one plain sentence for the flags list, naming the field (`sweep.steer.rack`) where the travel asked is past reach */
+  message: string;
+}
+
+/** The steer sweep (addition; docs/sketch-format.md, "The steer sweep"). */
+export interface SteerResult {
+  /** what the steering input is: a rack moved along a line (mm) */
+  input: 'rack';
+  /** ordered −rack → +rack, the travel 0 row (straight ahead) included; empty when the sketch does not steer */
+  rows: SteerRow[];
+  /** unit vector the rack moves along for positive travel (y > 0); null when the sketch does not steer */
+  rackDirection: { x: number; y: number; z: number } | null;
+  /** ids of the frame points the rack moves (the tie rods' inner ends) */
+  rackPoints: string[];
+  /** mm, the rack travel reached each way (the lock): the first and last rows' `rack` */
+  rackMin: Mm;
+  rackMax: Mm;
+  /** lock and toggle, one event each way */
+  events: SteerEvent[];
+  /** toe change over heave at straight ahead and at rack positions out to lock; null when the sketch does not steer */
+  bumpSteer: BumpSteerMap | null;
+  /** why there is no steer sweep, naming the field (the sentence is in `warnings` too); null when there is one */
+  problem: string | null;
 }
 
 export interface SweepOptions {
@@ -315,7 +413,7 @@ export interface SweepOptions {
     /** N */
     linkLoadLimit: number;
   }>;
-  /** skip the roll sweep (roll: []) */
+  /** skip the roll sweep (roll: []) and the steer sweep (no `steer`) */
   heaveOnly?: boolean;
 }
 

@@ -26,6 +26,7 @@ import {
   MAX_MEMBERS,
   MAX_NAME_LENGTH,
   MAX_POINTS,
+  MAX_RACK_TRAVEL_MM,
   MAX_ROLL_DEG,
   MAX_SWEEP_ROWS,
   MAX_TRAVEL_MM,
@@ -111,6 +112,18 @@ export const sweepSettingsSchema = z
     axleTorque: z.number().min(-MAX_AXLE_TORQUE_NM).max(MAX_AXLE_TORQUE_NM).optional(),
     /** N, a link whose axial load exceeds this (either sign) is flagged; no limit when absent (addition) */
     linkLoadLimit: z.number().gt(0).max(1e8).optional(),
+    /**
+     * The steer sweep (addition; absent: none): the rack moves `rack` mm each way along the line through the
+     * tie rods' inner ends, by `step` mm, at ride height (docs/sketch-format.md, "The steer sweep").
+     */
+    steer: z
+      .looseObject({
+        /** mm each way, positive */
+        rack: z.number().gt(0).max(MAX_RACK_TRAVEL_MM),
+        /** mm, positive, at most `rack` */
+        step: z.number().gt(0).max(MAX_RACK_TRAVEL_MM),
+      })
+      .optional(),
   })
   .prefault({});
 
@@ -336,7 +349,12 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
   }
 
   const sw = s.sweep;
-  const rows = gridCount(sw.droop, sw.bump, sw.step) + gridCount(-sw.roll, sw.roll, sw.rollStep);
+  // A steer block whose own fields are refused above adds no second problem here.
+  const steer = sw.steer && sw.steer.rack > 0 && sw.steer.step > 0 ? sw.steer : null;
+  if (steer && steer.step > steer.rack)
+    report(['sweep', 'steer', 'step'], `must be at most the rack travel (${steer.rack} mm)`);
+  const steerRows = steer ? gridCount(-steer.rack, steer.rack, steer.step) : 0;
+  const rows = gridCount(sw.droop, sw.bump, sw.step) + gridCount(-sw.roll, sw.roll, sw.rollStep) + steerRows;
   if (rows > MAX_SWEEP_ROWS) {
     report(
       ['sweep'],

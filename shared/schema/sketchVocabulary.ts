@@ -79,7 +79,7 @@ export const rigidMemberKinds: readonly MemberKind[] = ['link', 'lateral-rod', '
 /** Size bounds, so that a document can never make the solver or the server work without end. */
 export const MAX_POINTS = 200;
 export const MAX_MEMBERS = 200;
-/** Heave rows plus roll rows of one sweep. */
+/** Heave rows plus roll rows (plus steer rows, when the sketch asks for a steer sweep) of one sweep. */
 export const MAX_SWEEP_ROWS = 2000;
 /** No coordinate or vehicle dimension beyond 100 m: keeps every derived number finite. */
 export const MAX_COORDINATE_MM = 100_000;
@@ -87,6 +87,11 @@ export const MAX_COORDINATE_MM = 100_000;
 export const MAX_TRAVEL_MM = 2000;
 /** Articulation either way, degrees (beyond this the small-part geometry of a sketch means nothing). */
 export const MAX_ROLL_DEG = 45;
+/**
+ * mm, the most rack travel a steer sweep may ask for each way: far beyond any rack (a light truck's moves about
+ * 75 mm each way), so a slip of a digit is refused rather than marched.
+ */
+export const MAX_RACK_TRAVEL_MM = 500;
 export const MAX_ID_LENGTH = 64;
 export const MAX_NAME_LENGTH = 200;
 /** A member shorter than this is a drawing slip (two pivots on top of each other), not a part. */

@@ -8,7 +8,7 @@
 import { targetMetrics, targetsSchema, type TargetBand, type Targets } from '../../shared/schema/boardFields';
 import type { TargetMetric } from '../../shared/schema/boardFields';
 import type { HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
-import { targetEntries, type MetricSweep } from '../../shared/kinematics/metrics/registry';
+import { targetEntries, type TargetSweep } from '../../shared/kinematics/metrics/registry';
 import type { Deg, Mm } from '../../shared/units';
 
 // The board's stores and components take the band types from here, beside the checks.
@@ -52,7 +52,7 @@ export interface TargetCheck {
   value?: number;
   /** the worst value in the window, file unit */
   worst?: number;
-  sweep: MetricSweep;
+  sweep: TargetSweep;
 }
 
 function inBand(v: number, b: TargetBand): boolean {

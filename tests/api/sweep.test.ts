@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Caller, startTestServer, type TestServer } from './helpers';
 import { sketchFile } from './fixtures';
-import { runSweep } from '../../shared/kinematics';
+import { runSweep, starters } from '../../shared/kinematics';
 
 let server: TestServer;
 let guest: Caller;
@@ -38,6 +38,58 @@ describe('POST /api/sweep', () => {
     const res = await guest.post('/api/sweep').send(doc);
     expect(res.status).toBe(400);
     expect(res.body.details).toContain('driveline.slipYoke.extended: must be longer than collapsed (1500 mm)');
+  });
+
+  it('answers the steer sweep of a steered sketch: rows, lock events and the bump-steer map', async () => {
+    const doc = starters['double-wishbone']!.build();
+    const res = await guest.post('/api/sweep').send(doc);
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual(JSON.parse(JSON.stringify(runSweep(doc))));
+    expect(res.body.steer.rows).toHaveLength(25);
+    expect(res.body.steer.events.map((e: { kind: string }) => e.kind)).toEqual(['steer-lock', 'steer-lock']);
+    expect(res.body.steer.bumpSteer.curves.length).toBe(5);
+  });
+
+  it('answers 400 naming sweep.steer for a bad rack step', async () => {
+    const doc = sketchFile();
+    doc.sweep = { ...(doc.sweep as object), steer: { rack: 40, step: 0 } };
+    const res = await guest.post('/api/sweep').send(doc);
+    expect(res.status).toBe(400);
+    expect(res.body.details).toContain('sweep.steer.step: must be greater than 0');
+    doc.sweep = { ...(doc.sweep as object), steer: { rack: 40, step: 50 } };
+    const larger = await guest.post('/api/sweep').send(doc);
+    expect(larger.status).toBe(400);
+    expect(larger.body.details).toContain('sweep.steer.step: must be at most the rack travel (40 mm)');
+  });
+
+  it('answers 200 with heave and roll and a warning naming sweep.steer for a layout that does not steer', async () => {
+    const doc = sketchFile();
+    doc.sweep = { ...(doc.sweep as object), steer: { rack: 40, step: 5 } };
+    const res = await guest.post('/api/sweep').send(doc);
+    expect(res.status).toBe(200);
+    expect(res.body.heave.length).toBeGreaterThan(0);
+    expect(res.body.roll.length).toBeGreaterThan(0);
+    expect(res.body.steer.rows).toEqual([]);
+    expect(res.body.steer.problem).toMatch(/^sweep\.steer: /);
+    expect(res.body.warnings).toContain(res.body.steer.problem);
+  });
+
+  it('answers 200 with the toggle named for a rack travel past the tie rods’ reach, heave and roll as always', async () => {
+    const doc = starters['double-wishbone']!.build();
+    const far = { ...doc, sweep: { ...doc.sweep, steer: { rack: 100, step: 5 } } };
+    const res = await guest.post('/api/sweep').send(far);
+    expect(res.status).toBe(200);
+    const [up] = res.body.steer.events;
+    expect(up.kind).toBe('steer-toggle');
+    expect(up.message).toMatch(/^sweep\.steer\.rack: \+100 mm is past the tie rods' reach/);
+    expect(res.body.heave).toEqual(JSON.parse(JSON.stringify(runSweep(doc).heave)));
+    // JSON would write NaN as null: the library's own result is walked for a number that is not finite.
+    const notFinite: string[] = [];
+    JSON.stringify(runSweep(far), (key, v) => {
+      if (typeof v === 'number' && !Number.isFinite(v)) notFinite.push(key);
+      return v;
+    });
+    expect(notFinite).toEqual([]);
   });
 
   it('answers 413 above 256 KB', async () => {

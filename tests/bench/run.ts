@@ -3,10 +3,22 @@
  * by 5 and 17 roll rows ±8° by 1) and of a 21 × 21 heave × roll envelope. Targets: a full
  * sweep ≤ 1 ms median (the board re-sweeps on every pointer move), the envelope ≤ 40 ms.
  * A benchmark, not a test: it prints figures and never fails on time.
+ *
+ * Then the steer sweep of the double-wishbone starter: 25 rack rows (±60 mm by 5) beside 25 heave rows
+ * (±60 mm by 5), each marched and read on one solver from the solved ride row, and the starter's full sweep
+ * with and without its steer block (the difference is the steer sweep with its bump-steer map).
+ * `npm run bench -- --steer` prints that comparison alone.
  */
 import os from 'node:os';
 import { runSweep, starters, sweepEnvelope, sweepSketch } from '../../shared/kinematics';
 import { parseSketch } from '../../shared/schema/sketch';
+import { driveBuild } from '../../shared/kinematics/drive';
+import { marchPlan } from '../../shared/kinematics/grid';
+import { march, solveStart, type MarchContext } from '../../shared/kinematics/march';
+import { linkageModelBuild } from '../../shared/kinematics/model';
+import { heaveRowBuild, rowPlanBuild } from '../../shared/kinematics/rows';
+import { PoseSolver } from '../../shared/kinematics/solve';
+import { rackSweep, steeringOf } from '../../shared/kinematics/steer/sweep';
 
 const FULL = { droop: -150, bump: 150, step: 5, roll: 8, rollStep: 1 };
 const GRID = { droop: -150, bump: 150, step: 15, roll: 8, rollStep: 0.8 };
@@ -30,41 +42,87 @@ function time(f: () => unknown, n: number, warm = Math.max(20, n >> 2)): { media
   return { median: median(t), p90: t[Math.floor(t.length * 0.9)] };
 }
 
-const rows: string[][] = [];
-for (const spec of Object.values(starters)) {
-  const doc = { ...spec!.build(), sweep: FULL };
-  const sketch = parseSketch(doc);
-  const check = runSweep(doc);
-  const full = time(() => runSweep(doc), 400);
-  const solveOnly = time(() => sweepSketch(sketch), 400);
-  const grid = time(() => sweepEnvelope(sketch, GRID), 40, 5);
-  const cells = sweepEnvelope(sketch, GRID).flat();
-  rows.push([
-    spec!.layout,
-    `${check.heave.length}+${check.roll.length}`,
-    full.median.toFixed(3),
-    full.p90.toFixed(3),
-    solveOnly.median.toFixed(3),
-    `${cells.filter((c) => c.pose).length}/${cells.length}`,
-    grid.median.toFixed(2),
-    grid.p90.toFixed(2),
-  ]);
+function startersTable(): void {
+  const rows: string[][] = [];
+  for (const spec of Object.values(starters)) {
+    const doc = { ...spec!.build(), sweep: FULL };
+    const sketch = parseSketch(doc);
+    const check = runSweep(doc);
+    const full = time(() => runSweep(doc), 400);
+    const solveOnly = time(() => sweepSketch(sketch), 400);
+    const grid = time(() => sweepEnvelope(sketch, GRID), 40, 5);
+    const cells = sweepEnvelope(sketch, GRID).flat();
+    rows.push([
+      spec!.layout,
+      `${check.heave.length}+${check.roll.length}`,
+      full.median.toFixed(3),
+      full.p90.toFixed(3),
+      solveOnly.median.toFixed(3),
+      `${cells.filter((c) => c.pose).length}/${cells.length}`,
+      grid.median.toFixed(2),
+      grid.p90.toFixed(2),
+    ]);
+  }
+
+  const head = [
+    'starter',
+    'rows',
+    'full sweep median ms',
+    'p90 ms',
+    'without validation ms',
+    'grid cells',
+    '21×21 grid median ms',
+    'p90 ms',
+  ];
+  const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
+  const line = (cells: string[]) => `| ${cells.map((c, i) => c.padEnd(widths[i])).join(' | ')} |`;
+  console.log(`Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}`);
+  console.log(line(head));
+  console.log(`|${widths.map((w) => '-'.repeat(w + 2)).join('|')}|`);
+  for (const r of rows) console.log(line(r));
+  console.log('targets: full sweep ≤ 1 ms median, grid ≤ 40 ms median');
 }
 
-const head = [
-  'starter',
-  'rows',
-  'full sweep median ms',
-  'p90 ms',
-  'without validation ms',
-  'grid cells',
-  '21×21 grid median ms',
-  'p90 ms',
-];
-const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
-const line = (cells: string[]) => `| ${cells.map((c, i) => c.padEnd(widths[i])).join(' | ')} |`;
-console.log(`Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}`);
-console.log(line(head));
-console.log(`|${widths.map((w) => '-'.repeat(w + 2)).join('|')}|`);
-for (const r of rows) console.log(line(r));
-console.log('targets: full sweep ≤ 1 ms median, grid ≤ 40 ms median');
+/** 25 steer rows against 25 heave rows of the double-wishbone starter, on one solver from the solved ride row. */
+function steerTable(): void {
+  const doc = starters['double-wishbone']!.build();
+  const sketch = parseSketch(doc);
+  const model = linkageModelBuild(sketch);
+  const drive = driveBuild(model);
+  const solver = new PoseSolver(model, drive);
+  const ctx: MarchContext = { model, drive, solver, redundancy: 0 };
+  const ride = solveStart(ctx, 'travel')!;
+  const { rank } = solver.rankAnalysis();
+  ctx.redundancy = Math.max(0, solver.m - rank);
+  solver.regularize = rank < solver.n;
+  const rowPlan = rowPlanBuild(model);
+  const heavePlan = marchPlan(-60, 60, 5);
+  const heave = () => {
+    const up = march(ctx, ride, 'travel', heavePlan.up).rows;
+    const down = march(ctx, ride, 'travel', heavePlan.down).rows;
+    return [...down.reverse(), ride, ...up].map((r) => heaveRowBuild(rowPlan, r));
+  };
+  const linkage = steeringOf(model);
+  if (typeof linkage === 'string') throw new Error(linkage);
+  const steer = () => rackSweep(ctx, linkage, ride.state, 60, 5).rows;
+  const heaveRows = heave().length;
+  const steerRows = steer().length;
+  const h = time(heave, 400);
+  const st = time(steer, 400);
+  const { steer: _, ...plainSweep } = sketch.sweep;
+  const plainDoc = { ...doc, sweep: plainSweep };
+  const full = time(() => runSweep(doc), 200);
+  const plain = time(() => runSweep(plainDoc), 200);
+  console.log(`Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}`);
+  console.log('double-wishbone starter, ms (median / p90):');
+  console.log(`  heave sweep, ${heaveRows} rows:  ${h.median.toFixed(3)} / ${h.p90.toFixed(3)}`);
+  console.log(`  steer sweep, ${steerRows} rows:  ${st.median.toFixed(3)} / ${st.p90.toFixed(3)}`);
+  console.log(
+    `  full sweep with sweep.steer (steer rows + bump-steer map): ${full.median.toFixed(3)} / ${full.p90.toFixed(3)}`,
+  );
+  console.log(`  full sweep without sweep.steer: ${plain.median.toFixed(3)} / ${plain.p90.toFixed(3)}`);
+  console.log('target: the steer sweep costs no more than the heave sweep of the same row count');
+}
+
+if (!process.argv.includes('--steer')) startersTable();
+steerTable();

@@ -11,6 +11,7 @@ import type { LinkageModel, PointModel } from '../model';
 import type { FrontPoint, HeaveRow, RollRow, SidePoint } from '../types';
 import type { Vec3 } from '../vec';
 import type { StarterSpec } from './starterTypes';
+import type { SteerLinkage } from '../steer/linkage';
 
 /** Where a point is in the row being read (mm). */
 export type PlacePoint = (p: PointModel) => Vec3;
@@ -43,6 +44,12 @@ export interface LayoutReader {
   name: string;
   /** the plan when the model has this family's parts (or has something to note about them); null otherwise */
   plan(model: LinkageModel): LayoutRowPlan | null;
+  /**
+   * For a layout that steers: its steering (the input and, each side, the wheel's body, steering axis and tie
+   * rod) when the model has it, a sentence naming the problem when its parts cannot steer, null when it has no
+   * steering parts at all (steer/sweep.ts asks every reader in turn)
+   */
+  steering?(model: LinkageModel): SteerLinkage | string | null;
 }
 
 /** Everything one layout type is: its starter and its readings. */

@@ -6,7 +6,8 @@
 import type { TargetMetric } from '../../schema/boardFields';
 import { heaveEntries } from './registry/heave';
 import { limitsEntries, rollEntries } from './registry/roll';
-import type { AnyEntry, MetricEntry, MetricSweep, SweepRowOf, TargetEntry } from './registry/types';
+import { bumpSteerEntries, steerEntries } from './registry/steer';
+import type { AnyEntry, MetricEntry, MetricSweep, SweepRowOf, TargetEntry, TargetSweep } from './registry/types';
 import type { MetricRef } from './registry/views';
 
 export type * from './registry/types';
@@ -14,16 +15,24 @@ export * from './registry/views';
 export * from './registry/members';
 export * from './registry/windUp';
 export * from './registry/help';
-export { heaveEntries, limitsEntries, rollEntries };
+export { bumpSteerEntries, heaveEntries, limitsEntries, rollEntries, steerEntries };
 export { driveJointNames } from './registry/heave';
 
-/** Every entry, heave then roll then the whole-sweep readings. */
-export const metricEntries: readonly AnyEntry[] = [...heaveEntries, ...rollEntries, ...limitsEntries];
+/** Every entry, heave then roll then the whole-sweep readings, then the steer sweep's. */
+export const metricEntries: readonly AnyEntry[] = [
+  ...heaveEntries,
+  ...rollEntries,
+  ...limitsEntries,
+  ...steerEntries,
+  ...bumpSteerEntries,
+];
 
 const bySweep: Record<MetricSweep, Map<string, AnyEntry>> = {
   heave: new Map(heaveEntries.map((e) => [e.key, e])),
   roll: new Map(rollEntries.map((e) => [e.key, e])),
   limits: new Map(limitsEntries.map((e) => [e.key, e])),
+  steer: new Map(steerEntries.map((e) => [e.key, e])),
+  bumpSteer: new Map(bumpSteerEntries.map((e) => [e.key, e])),
 };
 
 /** The entry a view names; throws for a name no entry has (a slip in a view, caught by the tests). */
@@ -47,12 +56,15 @@ export function isMetricRef(item: MetricRef | string): item is MetricRef {
   return typeof item !== 'string';
 }
 
+type TargetCapable = TargetEntry<'heave'> | TargetEntry<'roll'> | TargetEntry<'limits'>;
+const targetSweepEntries = [...heaveEntries, ...rollEntries, ...limitsEntries];
+
 /** The entries a target band can be set on, by target key. */
 export const targetEntries = Object.fromEntries(
-  metricEntries.filter((e): e is TargetEntry => e.target === true).map((e) => [e.key, e]),
-) as Record<TargetMetric, TargetEntry>;
+  targetSweepEntries.filter((e): e is TargetCapable => e.target === true).map((e) => [e.key, e]),
+) as Record<TargetMetric, TargetEntry<TargetSweep>>;
 
 /** The target-capable keys in registry order (a test holds them equal to the schema's list). */
-export const registryTargetKeys: TargetMetric[] = metricEntries
-  .filter((e): e is TargetEntry => e.target === true)
+export const registryTargetKeys: TargetMetric[] = targetSweepEntries
+  .filter((e): e is TargetCapable => e.target === true)
   .map((e) => e.key);

@@ -88,6 +88,34 @@ describe('sweep command', () => {
   }, 30000);
 });
 
+describe('sweep command: the steer sweep', () => {
+  it('prints the steer sweep of a steered starter, and of a layout that does not steer a warning naming sweep.steer', () => {
+    const starter = sweepCommand(['--starter', 'double-wishbone'], dir);
+    const steered = JSON.parse(sweepCommand([write('steered.json', starter.stdout!)], dir).stdout!);
+    expect(steered.steer.rows).toHaveLength(25);
+    expect(steered.steer.events.map((e: { kind: string }) => e.kind)).toEqual(['steer-lock', 'steer-lock']);
+    const rigid = write('rigid.json', JSON.stringify({ ...exampleSketch(), sweep: { steer: { rack: 40, step: 5 } } }));
+    const out = sweepCommand([rigid], dir);
+    expect(out.code).toBe(0);
+    const result = JSON.parse(out.stdout!);
+    expect(result.heave.length).toBeGreaterThan(0);
+    expect(result.roll.length).toBeGreaterThan(0);
+    expect(result.warnings).toContain(result.steer.problem);
+    expect(result.steer.problem).toMatch(/^sweep\.steer: /);
+  });
+
+  it('refuses a bad rack step with exit 2 and the field named', () => {
+    const bad = write(
+      'bad-steer.json',
+      JSON.stringify({ ...exampleSketch(), sweep: { steer: { rack: 40, step: -1 } } }),
+    );
+    const out = sweepCommand([bad], dir);
+    expect(out.code).toBe(2);
+    expect(out.stdout).toBeUndefined();
+    expect(out.stderr).toEqual(['bad-steer.json: sweep.steer.step: must be greater than 0']);
+  });
+});
+
 describe('sweep command: --starter', () => {
   it('prints a valid sketch file of the asked layout for every layout with a starter, and exits 0', () => {
     const withStarter = ['four-link-lateral-rod', 'leaf-spring', 'double-wishbone'];

@@ -45,7 +45,7 @@ describe('the definitions of the registry', () => {
   });
 
   it('gives each quantity its own words within a sweep (no definition copied onto another quantity)', () => {
-    for (const sweep of ['heave', 'roll'] as const) {
+    for (const sweep of ['heave', 'roll', 'steer'] as const) {
       const defs = metricEntries.filter((e) => e.sweep === sweep).map((e) => e.definition);
       expect(new Set(defs).size).toBe(defs.length);
     }

@@ -10,6 +10,8 @@ import {
   csvView,
   lineupView,
   isMetricRef,
+  plotsSteerView,
+  readoutSteerView,
   linkLoadEntry,
   memberEntries,
   metricEntries,
@@ -35,9 +37,20 @@ const swept: Array<{ layout: Layout; result: SweepResult }> = (Object.keys(start
   result: runSweep(starters[layout]!.build()),
 }));
 
-/** The rows an entry reads: its sweep's rows, or the whole sweep's limits. */
+/** The rows an entry reads: its sweep's rows, the whole sweep's limits, or the steer sweep's rows or map. */
 function rowsOf(e: AnyEntry, result: SweepResult): unknown[] {
-  return e.sweep === 'heave' ? result.heave : e.sweep === 'roll' ? result.roll : [result.limits];
+  switch (e.sweep) {
+    case 'heave':
+      return result.heave;
+    case 'roll':
+      return result.roll;
+    case 'limits':
+      return [result.limits];
+    case 'steer':
+      return result.steer?.rows ?? [];
+    case 'bumpSteer':
+      return result.steer?.bumpSteer ? [result.steer.bumpSteer] : [];
+  }
 }
 
 const readOf = (e: AnyEntry) => e.read as (row: unknown) => number | null | undefined;
@@ -100,7 +113,7 @@ describe('the metric registry', () => {
   });
 
   it('names each quantity once per sweep: keys, board ids and labels are unique within a sweep', () => {
-    for (const sweep of ['heave', 'roll', 'limits'] as const) {
+    for (const sweep of ['heave', 'roll', 'limits', 'steer', 'bumpSteer'] as const) {
       const of = metricEntries.filter((e) => e.sweep === sweep);
       for (const field of ['key', 'id', 'label'] as const) {
         const names = of.map((e) => e[field]);
@@ -142,6 +155,8 @@ describe('the metric registry', () => {
       ['plots independent', plotsIndependentView],
       ['csv', csvView],
       ['targets', targetsView],
+      ['readout steer', readoutSteerView],
+      ['plots steer', plotsSteerView],
       ['sheet', sheetView.flatMap((i) => ('metric' in i ? [i.metric] : i.metrics))],
       ['line-up', lineupView.map((i) => (typeof i === 'string' ? i : i.metric))],
     ];

@@ -5,6 +5,7 @@
 import type { LayoutReader } from '../types';
 import { wishboneNotes } from './notes';
 import { wishbonePlanBuild } from './plan';
+import { wishboneSteering } from './steering';
 import { wishboneHeaveFields, wishboneRollCentres, wishboneRollFields } from './rows';
 
 export const doubleWishboneReader: LayoutReader = {
@@ -22,4 +23,5 @@ export const doubleWishboneReader: LayoutReader = {
       notes: (heave) => wishboneNotes(model, plan, heave),
     };
   },
+  steering: (model) => wishboneSteering(wishbonePlanBuild(model)),
 };

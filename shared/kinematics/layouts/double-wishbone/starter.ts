@@ -4,7 +4,8 @@
  * rod from the rack end to the steering arm, and a coil-over (a shock with a spring on the same two
  * eyes) from the frame to the lower arm. Geometry is invented and plausible for a mid-size pickup front: a short upper
  * and long lower arm (camber gain in bump), a low roll centre, a little caster and anti-dive,
- * and the tie rod placed on the line the wishbones ask for (next to no bump steer).
+ * and the tie rod placed on the line the wishbones ask for (next to no bump steer). The rack (700 mm between its
+ * tie-rod pivots, 60 mm of travel each way, short of the tie rods' toggle) is a light truck's, and the sweep steers it.
  */
 import { degToRad } from '../../../units';
 import { parseSketch, type SketchInput } from '../../../schema/sketch';
@@ -30,6 +31,8 @@ const COIL_X_MM = 90;
 /** Shock stroke either side of the default sweep's range (mm). */
 const SHOCK_MARGIN_MM = 15;
 const SWEEP = { droop: -120, bump: 120, step: 5, roll: 6, rollStep: 1 };
+/** Rack rows of the steer sweep (mm): 25 rows over ±60 mm. */
+const RACK_STEP_MM = 5;
 
 const params: StarterParam[] = [
   { key: 'track', label: 'Track', unit: 'mm', default: 1620, min: 1200, max: 2200 },
@@ -87,6 +90,7 @@ const params: StarterParam[] = [
   { key: 'tieRodOuterHeight', label: 'Tie rod outer end height', unit: 'mm', default: 300, min: 120, max: 600 },
   { key: 'tieRodInnerHeight', label: 'Tie rod inner end (rack) height', unit: 'mm', default: 317, min: 120, max: 650 },
   { key: 'rackHalfLength', label: 'Rack end from the centreline', unit: 'mm', default: 350, min: 150, max: 700 },
+  { key: 'rackTravel', label: 'Rack travel each way', unit: 'mm', default: 60, min: 10, max: 200 },
   { key: 'springRate', label: 'Coil-over spring rate', unit: 'N/mm', default: 130, min: 5, max: 300 },
 ];
 
@@ -163,7 +167,7 @@ function build(p: Params): SketchInput {
     points,
     members,
     wheels: { left: 'WC.l', right: 'WC.r' },
-    sweep: { ...SWEEP },
+    sweep: { ...SWEEP, steer: { rack: p.rackTravel, step: Math.min(RACK_STEP_MM, p.rackTravel) } },
   };
 }
 

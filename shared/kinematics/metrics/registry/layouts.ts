@@ -23,3 +23,5 @@ export const LINKED_AXLE: readonly Layout[] = [
  */
 export const INDEPENDENT: readonly Layout[] = ['trailing-arm', 'double-wishbone'];
 export const WISHBONE: readonly Layout[] = ['double-wishbone'];
+/** Layouts that steer: their sketches may carry `sweep.steer` (steer/sweep.ts). */
+export const STEERED: readonly Layout[] = ['double-wishbone'];

@@ -8,16 +8,24 @@
 import type { Layout } from '../../../schema/sketchVocabulary';
 import type { TargetMetric } from '../../../schema/boardFields';
 import type { QuantityKind } from '../../../units';
-import type { HeaveRow, RollRow, SweepResult } from '../../types';
+import type { BumpSteerMap, HeaveRow, RollRow, SteerRow, SweepResult } from '../../types';
 
-/** The sweep a metric is read from; `limits` holds the one-number readings of the whole sweep (articulation). */
-export type MetricSweep = 'heave' | 'roll' | 'limits';
+/**
+ * The sweep a metric is read from; `limits` holds the one-number readings of the whole sweep (articulation),
+ * `steer` the steer sweep's rows, `bumpSteer` the one-number readings of its bump-steer map.
+ */
+export type MetricSweep = 'heave' | 'roll' | 'limits' | 'steer' | 'bumpSteer';
 
-/** A row of each sweep; `limits` metrics read the result's limits. */
+/** The sweeps whose metrics a target band can be set on (the steer sweep's take none yet). */
+export type TargetSweep = 'heave' | 'roll' | 'limits';
+
+/** A row of each sweep; `limits` metrics read the result's limits, `bumpSteer` metrics the map (`steer.bumpSteer`). */
 export interface SweepRowOf {
   heave: HeaveRow;
   roll: RollRow;
   limits: SweepResult['limits'];
+  steer: SteerRow;
+  bumpSteer: BumpSteerMap;
 }
 
 /** Which end of the vehicle a sketch's suspension sits at (`vehicle.axle`; rear when the sketch does not say). */
@@ -101,4 +109,6 @@ export type MetricEntry<S extends MetricSweep = MetricSweep> = TargetEntry<S> | 
 export type HeaveEntry = MetricEntry<'heave'>;
 export type RollEntry = MetricEntry<'roll'>;
 export type LimitsEntry = MetricEntry<'limits'>;
-export type AnyEntry = HeaveEntry | RollEntry | LimitsEntry;
+export type SteerEntry = MetricEntry<'steer'>;
+export type BumpSteerEntry = MetricEntry<'bumpSteer'>;
+export type AnyEntry = HeaveEntry | RollEntry | LimitsEntry | SteerEntry | BumpSteerEntry;

@@ -15,6 +15,7 @@ export interface MetricRef {
 const heave = (key: string): MetricRef => ({ sweep: 'heave', key });
 const roll = (key: string): MetricRef => ({ sweep: 'roll', key });
 const limits = (key: string): MetricRef => ({ sweep: 'limits', key });
+const steer = (key: string): MetricRef => ({ sweep: 'steer', key });
 
 export type ViewItem<M extends string> = MetricRef | M;
 
@@ -114,6 +115,24 @@ export const plotsIndependentView: ViewItem<'*shocks'>[] = [
   ].map(heave),
   '*shocks',
   ...['bind', 'rollSteer'].map(roll),
+];
+
+/**
+ * The readout of a steer row (a layout that steers, at the steer slider): the rack, both wheels, Ackermann and
+ * the turning radius there, then the worst bump steer of the map out to lock.
+ */
+export const readoutSteerView: MetricRef[] = [
+  ...['rack', 'leftSteer', 'rightSteer', 'ackermann', 'turningRadius'].map(steer),
+  { sweep: 'bumpSteer', key: 'worst' },
+];
+
+/**
+ * Steer plots against rack travel, then `*bumpSteerMap`: toe change against travel, one curve per rack position
+ * of `steer.bumpSteer.curves`, each wheel.
+ */
+export const plotsSteerView: ViewItem<'*bumpSteerMap'>[] = [
+  ...['leftSteer', 'rightSteer', 'ackermann', 'turningRadius'].map(steer),
+  '*bumpSteerMap',
 ];
 
 /** The targets table, in order (the schema's target metrics, which a test holds equal). */
