@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { runSweep, starters } from '../../../shared/kinematics';
-import { buildSheet } from '../../../src/sheet/buildSheet';
+import { buildSheet } from '../../../shared/sheet/buildSheet';
 
 const fourLink = () => starters['four-link-lateral-rod']!.build();
 

@@ -12,7 +12,7 @@ import { metricEntry, type MetricEntry } from '../../../shared/kinematics/metric
 import type { Sketch } from '../../../shared/schema/sketch';
 import { readoutLines, type SweepContext } from '../../../src/sweep/readout';
 import { buildPlots } from '../../../src/sweep/plots';
-import { buildSheet } from '../../../src/sheet/buildSheet';
+import { buildSheet } from '../../../shared/sheet/buildSheet';
 import { crossViewOf } from '../../../src/suspensions';
 
 function frontFourLink(): Sketch {

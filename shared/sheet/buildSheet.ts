@@ -4,11 +4,11 @@
  * every member centre to centre at ride height, the shocks' lengths across the travel against
  * their stroke, and the geometry the sweep reads at ride. Pure; the page only lays it out.
  */
-import type { SweepResult } from '../../shared/kinematics/types';
-import type { Sketch } from '../../shared/schema/sketch';
-import { formatLength, mmToUnit, type LengthUnit } from '../../shared/units';
-import { vecDistance } from '../../shared/vec3';
-import { fixed, MISSING, showMetric, showRate, showRatio } from '../sweep/format';
+import type { SweepResult } from '../kinematics/types';
+import type { Sketch } from '../schema/sketch';
+import { formatLength, mmToUnit, type LengthUnit } from '../units';
+import { vecDistance } from '../vec3';
+import { fixed, MISSING, showMetric, showRate, showRatio } from '../display/format';
 import {
   axleEndOf,
   memberEntry,
@@ -19,8 +19,8 @@ import {
   type AxleEnd,
   type MetricEntry,
   type SheetItem,
-} from '../../shared/kinematics/metrics/registry';
-import { kindLabel } from '../board/memberKinds';
+} from '../kinematics/metrics/registry';
+import { kindLabel } from '../display/memberKinds';
 
 export interface SheetPivot {
   id: string;

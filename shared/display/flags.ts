@@ -5,11 +5,11 @@
  * words are written here in the user's units. The sweep's plain-sentence notes (its
  * assumptions) are not flags: the readout shows them beside the numbers they qualify.
  */
-import type { HeaveRow, RollRow, SweepEvent, SweepResult } from '../../shared/kinematics';
-import type { SketchMember } from '../../shared/schema/sketch';
-import type { LengthUnit } from '../../shared/units';
+import type { HeaveRow, RollRow, SweepEvent, SweepResult } from '../kinematics';
+import type { SketchMember } from '../schema/sketch';
+import type { LengthUnit } from '../units';
 import type { TargetCheck } from './targets';
-import { driveJointNames, targetEntries } from '../../shared/kinematics/metrics/registry';
+import { driveJointNames, targetEntries } from '../kinematics/metrics/registry';
 import {
   fixed,
   quantityUnit,
