@@ -13,7 +13,7 @@ import type { Sketch } from '../../../shared/schema/sketch';
 import { readoutLines, type SweepContext } from '../../../src/sweep/readout';
 import { buildPlots } from '../../../src/sweep/plots';
 import { buildSheet } from '../../../shared/sheet/buildSheet';
-import { crossViewOf } from '../../../src/suspensions';
+import { crossViewOf } from '../../../shared/suspensions';
 
 function frontFourLink(): Sketch {
   const d = starters['four-link-lateral-rod'].build();
