@@ -2,6 +2,9 @@ import { Router } from 'express';
 import { requireUser, currentUser } from '../middleware/require-user';
 import { notFound } from '../middleware/http-error';
 import * as sketches from '../services/sketches';
+import { parseOr400 } from '../middleware/validate';
+import { buildSheetQuery } from '../../shared/schema/sketchRequests';
+import { sendBuildSheet } from './buildSheet';
 
 const TOKEN_PATTERN = /^[A-Za-z0-9_-]{16,64}$/;
 
@@ -16,6 +19,12 @@ export function sharedRoutes(): Router {
 
   router.get('/:token', async (req, res) => {
     res.json(await sketches.getShared(req.user ?? null, tokenParam(req.params.token)));
+  });
+
+  router.get('/:token/build-sheet', async (req, res) => {
+    const token = tokenParam(req.params.token);
+    const query = parseOr400(buildSheetQuery, req.query, 'invalid query');
+    await sendBuildSheet(res, await sketches.sharedSheetSource(token), query);
   });
 
   router.post('/:token/copy', requireUser, async (req, res) => {

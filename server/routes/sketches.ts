@@ -3,10 +3,17 @@ import type { ServerConfig } from '../config';
 import { requireUser, currentUser } from '../middleware/require-user';
 import { idParam } from '../middleware/params';
 import { parseOr400 } from '../middleware/validate';
-import { createSketchBody, listQuery, shareBody, updateSketchBody } from '../../shared/schema/sketchRequests';
+import {
+  buildSheetQuery,
+  createSketchBody,
+  listQuery,
+  shareBody,
+  updateSketchBody,
+} from '../../shared/schema/sketchRequests';
 import * as sketches from '../services/sketches';
 import type { Mailer } from '../services/mail/mailer';
 import { shareNoticeMail } from '../services/mail/messages';
+import { sendBuildSheet } from './buildSheet';
 
 /** /api/sketches: the caller's own sketches. Someone else's sketch is 404 on every route. */
 export function sketchRoutes(config: ServerConfig, mailer: Mailer): Router {
@@ -68,6 +75,11 @@ export function sketchRoutes(config: ServerConfig, mailer: Mailer): Router {
     const { fileName, document } = await sketches.exportSketch(currentUser(req), idParam(req, 'id'));
     res.attachment(fileName);
     res.type('application/json').send(JSON.stringify(document, null, 2));
+  });
+
+  router.get('/:id/build-sheet', async (req, res) => {
+    const query = parseOr400(buildSheetQuery, req.query, 'invalid query');
+    await sendBuildSheet(res, await sketches.sheetSource(currentUser(req), idParam(req, 'id')), query);
   });
 
   router.post('/:id/share', async (req, res) => {

@@ -1,7 +1,8 @@
 import { randomBytes } from 'node:crypto';
 import { Op, fn, col, where as sqlWhere, type Transaction, type WhereOptions } from 'sequelize';
 import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/sketch';
-import { Sketch, SketchRevision, User, type PublicUser, type ShareMode } from '../models';
+import { Shop, Sketch, SketchRevision, User, type PublicUser, type ShareMode } from '../models';
+import type { SheetSource } from './buildSheetPdf/document';
 import { badRequest, conflict, notFound } from '../middleware/http-error';
 import type { ListQuery } from '../../shared/schema/sketchRequests';
 import type { Page, RevisionDetail, RevisionList, SketchDetail, SketchSummary } from '../../shared/schema/apiResponses';
@@ -234,16 +235,21 @@ export async function copySketch(user: PublicUser, id: number): Promise<SketchDe
   return copyOf(user, await ownSketch(user, id));
 }
 
-/** The sketch file and a file name for it. */
-export async function exportSketch(user: PublicUser, id: number) {
-  const row = await ownSketch(user, id);
-  const base =
-    row.name
+/** A file name's stem from a sketch's name: letters, digits, dots and dashes only (spaces become dashes). */
+export function fileStem(name: string): string {
+  return (
+    name
       .replace(/[^A-Za-z0-9 ._-]+/g, '')
       .trim()
       .replace(/\s+/g, '-')
-      .slice(0, 80) || 'sketch';
-  return { fileName: `${base}.arcwright.json`, document: JSON.parse(row.document) as unknown };
+      .slice(0, 80) || 'sketch'
+  );
+}
+
+/** The sketch file and a file name for it. */
+export async function exportSketch(user: PublicUser, id: number) {
+  const row = await ownSketch(user, id);
+  return { fileName: `${fileStem(row.name)}.arcwright.json`, document: JSON.parse(row.document) as unknown };
 }
 
 /**
@@ -272,6 +278,30 @@ async function sharedSketch(token: string): Promise<Sketch> {
   });
   if (!row) throw notFound('this link is not shared (any more)');
   return row;
+}
+
+/** What the build sheet names of a sketch besides its document: its owner and the owner's shop. */
+async function sheetSourceOf(row: Sketch): Promise<SheetSource> {
+  const owner = await User.findByPk(row.ownerId, { attributes: ['name', 'shopId'] });
+  const shop = owner?.shopId ? await Shop.findByPk(owner.shopId, { attributes: ['name'] }) : null;
+  return {
+    name: row.name,
+    owner: owner?.name ?? '',
+    shop: shop?.name ?? null,
+    version: row.version,
+    savedAt: row.updatedAt,
+    document: JSON.parse(row.document) as SketchDocument,
+  };
+}
+
+/** The caller's own sketch for its build sheet. */
+export async function sheetSource(user: PublicUser, id: number): Promise<SheetSource> {
+  return sheetSourceOf(await ownSketch(user, id));
+}
+
+/** A sketch opened by its share link, for its build sheet. */
+export async function sharedSheetSource(token: string): Promise<SheetSource> {
+  return sheetSourceOf(await sharedSketch(token));
 }
 
 /** A sketch opened by its share link, read-only for everyone (the owner edits through /api/sketches). */

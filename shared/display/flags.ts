@@ -235,7 +235,8 @@ function eventFlag(
   }
 }
 
-function bandText(check: TargetCheck, u: LengthUnit): string {
+/** A target band in words, in the user's unit ("60.0–90.0 %", "within ±3.0°", "at least 8.0°"). */
+export function bandText(check: Pick<TargetCheck, 'metric' | 'band'>, u: LengthUnit): string {
   const q = targetEntries[check.metric].quantity;
   const unit = quantityUnit(q, u);
   const d = (v: number) => fixed(toDisplay(v, q, u), q === 'length' && u === 'in' ? 2 : 1);
