@@ -19,11 +19,17 @@ describe('the build sheet', () => {
     );
   });
 
-  it('lists frame brackets apart from the moving pivots, every pivot once', () => {
+  it('lists frame brackets apart from the moving pivots and the driveline reference points, every pivot once', () => {
     const doc = fourLink();
     const sheet = buildSheet(doc, null, null, 'mm');
-    expect(sheet.frame.map((p) => p.id)).toEqual(doc.points.filter((p) => p.body === 'frame').map((p) => p.id));
-    expect(sheet.frame.length + sheet.moving.length).toBe(doc.points.length);
+    // The driveshaft's joint centres and shaft axes place the driveline: a fabricator cuts no bracket for them.
+    const d = doc.driveline!;
+    const reference = [d.output, d.outputAxis, d.pinion, d.pinionAxis];
+    expect(sheet.frame.map((p) => p.id)).toEqual(
+      doc.points.filter((p) => p.body === 'frame' && !reference.includes(p.id)).map((p) => p.id),
+    );
+    expect(sheet.driveline.map((p) => p.id).sort()).toEqual([...reference].sort());
+    expect(sheet.frame.length + sheet.moving.length + sheet.driveline.length).toBe(doc.points.length);
     const ul = doc.points.find((p) => p.id === 'UL.fl')!;
     expect(sheet.frame.find((p) => p.id === 'UL.fl')).toMatchObject({ x: ul.x.toFixed(1), z: ul.z.toFixed(1) });
   });
