@@ -52,5 +52,7 @@ test('the board menu and the build sheet page download the build sheet as a PDF,
   expect(a4.size[2]).toBeCloseTo((210 / 25.4) * 72, 1);
   expect(a4.size[3]).toBeCloseTo((297 / 25.4) * 72, 1);
   expect(a4.text).toContain('x (in)');
-  expect(a4.text).toContain(`UL.fl ${(ul.x / 25.4).toFixed(2)} ${(ul.y / 25.4).toFixed(2)} ${(ul.z / 25.4).toFixed(2)}`);
+  expect(a4.text).toContain(
+    `UL.fl ${(ul.x / 25.4).toFixed(2)} ${(ul.y / 25.4).toFixed(2)} ${(ul.z / 25.4).toFixed(2)}`,
+  );
 });
