@@ -45,7 +45,7 @@ export const listQuery = z.object({
 export type ListQuery = z.infer<typeof listQuery>;
 
 /** The build sheet PDF's query: the paper it is laid out for and the unit of its lengths. */
-export const buildSheetQuery = z.object({
+export const buildSheetQuery = z.strictObject({
   paper: z.enum(['a4', 'letter'], { error: 'expected a4 or letter' }).default('a4'),
   units: z.enum(['mm', 'in'], { error: 'expected mm or in' }).default('mm'),
 });

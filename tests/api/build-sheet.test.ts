@@ -123,6 +123,12 @@ describe('GET /api/sketches/:id/build-sheet', () => {
     const units = await alice.get(`/api/sketches/${id}/build-sheet?units=cm`);
     expect(units.status).toBe(400);
     expect(units.body.details.join(' ')).toMatch(/^units: /);
+    const twice = await alice.get(`/api/sketches/${id}/build-sheet?paper=a4&paper=letter`);
+    expect(twice.status).toBe(400);
+    expect(twice.body.details.join(' ')).toMatch(/^paper: /);
+    const unknown = await alice.get(`/api/sketches/${id}/build-sheet?scale=5`);
+    expect(unknown.status).toBe(400);
+    expect(unknown.body.details.join(' ')).toContain('scale');
   });
 
   it('is the owner’s alone: someone else gets 404, a guest 401', async () => {

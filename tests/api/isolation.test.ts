@@ -31,6 +31,7 @@ const routes: Route[] = [
   { method: 'post', path: (id) => `/api/sketches/${id}/restore/1` },
   { method: 'post', path: (id) => `/api/sketches/${id}/copy` },
   { method: 'get', path: (id) => `/api/sketches/${id}/export` },
+  { method: 'get', path: (id) => `/api/sketches/${id}/build-sheet` },
   { method: 'post', path: (id) => `/api/sketches/${id}/share`, body: () => ({ mode: 'link' }) },
   { method: 'post', path: (id) => `/api/sketches/${id}/uploads` },
 ];

@@ -34,21 +34,37 @@ export interface SheetSource {
 
 const day = (d: Date) => d.toISOString().slice(0, 10);
 
+function h2(s: string): Content {
+  return { text: s, style: 'h2' };
+}
+
 const head = (s: string, right = false): TableCell => ({ text: s, bold: true, alignment: right ? 'right' : 'left' });
 
-/** A table with its header repeated on each page; `right` lists the columns of numbers (right-aligned). */
+/**
+ * A titled table whose title and column heads repeat on each page it runs over and never stand alone at the
+ * foot of a page; `right` lists the columns of numbers (right-aligned).
+ */
 function table(
+  title: string,
   widths: (string | number)[],
   header: string[],
   rows: TableCell[][],
   empty: string,
   right: number[] = [],
 ): Content {
-  if (!rows.length) return { text: empty, italics: true, margin: [0, 0, 0, 6] };
+  if (!rows.length)
+    return { stack: [h2(title), { text: empty, italics: true }], unbreakable: true, margin: [0, 0, 0, 6] };
+  const titleRow: TableCell[] = header.map((_, i) => (i ? '' : { text: title, style: 'h2', colSpan: header.length }));
   const cells = header.map((s, i) => head(s, right.includes(i)));
   return {
-    table: { headerRows: 1, dontBreakRows: true, widths, body: [cells, ...rows] },
-    layout: 'lightHorizontalLines',
+    table: { headerRows: 2, keepWithHeaderRows: 1, dontBreakRows: true, widths, body: [titleRow, cells, ...rows] },
+    layout: {
+      hLineWidth: (i, node) => (i < 2 || i === node.table.body.length ? 0 : i === 2 ? 1.2 : 0.5),
+      vLineWidth: () => 0,
+      paddingLeft: (i) => (i ? 4 : 0),
+      paddingTop: () => 2,
+      paddingBottom: () => 2,
+    },
     margin: [0, 0, 0, 8],
   };
 }
@@ -62,8 +78,6 @@ function pivotRows(pivots: SheetPivot[], withBody: boolean): TableCell[][] {
     { text: p.z, alignment: 'right' },
   ]);
 }
-
-const h2 = (s: string): Content => ({ text: s, style: 'h2' });
 
 function titleBlock(src: SheetSource, sheet: BuildSheet, u: LengthUnit, paper: Paper): Content {
   const pair = (a: string, b: string): TableCell[] => [{ text: a, bold: true }, b];
@@ -147,23 +161,23 @@ export function buildSheetDocument(src: SheetSource, paper: Paper, u: LengthUnit
       ],
       unbreakable: true,
     },
-    h2('Pivot codes'),
     table(
+      'Pivot codes',
       [55, 75, '*'],
       ['Code', 'On', 'What meets there'],
       pivotLegend(doc).map((l) => [l.id, l.on, l.joins]),
       'No pivots.',
     ),
-    h2('Frame brackets'),
     table(
+      'Frame brackets',
       ['*', 60, 60, 60],
       ['Pivot', coord('x'), coord('y'), coord('z')],
       pivotRows(sheet.frame, false),
       'No frame brackets.',
       [1, 2, 3],
     ),
-    h2(sheet.movingTitle),
     table(
+      sheet.movingTitle,
       ['*', 90, 60, 60, 60],
       ['Pivot', 'On', coord('x'), coord('y'), coord('z')],
       pivotRows(sheet.moving, true),
@@ -173,8 +187,8 @@ export function buildSheetDocument(src: SheetSource, paper: Paper, u: LengthUnit
   ];
   if (sheet.driveline.length)
     content.push(
-      h2('Driveline reference points (not brackets)'),
       table(
+        'Driveline reference points (not brackets)',
         ['*', 90, 60, 60, 60],
         ['Point', 'On', coord('x'), coord('y'), coord('z')],
         pivotRows(sheet.driveline, true),
@@ -183,35 +197,42 @@ export function buildSheetDocument(src: SheetSource, paper: Paper, u: LengthUnit
       ),
     );
   content.push(
-    h2('Members, centre to centre at ride height'),
     table(
+      'Members, centre to centre at ride height',
       [45, 55, 80, 55, '*'],
       ['Member', 'Kind', 'Ends', 'Length', 'Notes'],
       sheet.members.map((m) => [m.id, m.kind, m.ends, { text: m.length, alignment: 'right' }, m.note]),
       'No members.',
       [3],
     ),
-    h2('Vehicle'),
     table(
+      'Vehicle',
       ['*', 120],
       ['Quantity', 'Value'],
       sheet.vehicle.map((l) => [l.label, l.value]),
       '',
     ),
-    h2(`Geometry of the ${sheet.layout.toLowerCase()}`),
   );
+  const geometryTitle = `Geometry of the ${sheet.layout.toLowerCase()}`;
   if (sheet.problem)
     content.push({
-      text: [
-        { text: 'No sweep. ', bold: true },
-        `${sheet.problem}. The pivots, members and drawings above are the sketch as saved; the readings of the ` +
-          'sweep (travel, geometry over the travel, targets and flags) are missing until it can be swept.',
+      stack: [
+        h2(geometryTitle),
+        {
+          text: [
+            { text: 'No sweep. ', bold: true },
+            `${sheet.problem}. The pivots, members and drawings above are the sketch as saved; the readings of ` +
+              'the sweep (travel, geometry over the travel, targets and flags) are missing until it can be swept.',
+          ],
+        },
       ],
+      unbreakable: true,
       margin: [0, 0, 0, 8],
     });
   else
     content.push(
       table(
+        geometryTitle,
         ['*', 170],
         ['Quantity', 'Value'],
         sheet.geometry.map((l) => [l.label, l.reason ? `${l.value} (${l.reason})` : l.value]),
@@ -219,23 +240,27 @@ export function buildSheetDocument(src: SheetSource, paper: Paper, u: LengthUnit
       ),
     );
   content.push(
-    h2('Targets'),
     table(
+      'Targets',
       [120, 90, '*'],
       ['Quantity', 'Wanted', 'Sweep'],
       sheet.targets.map((t) => [t.label, t.band, t.status]),
       'No targets set.',
     ),
-    h2('Flags'),
-    sheet.problem
-      ? { text: 'Not swept: no flags can be raised.', italics: true }
-      : sheet.flags.length
-        ? {
-            ul: sheet.flags.map((f) => ({
-              text: [{ text: `${f.severity === 'negative' ? 'Stop: ' : ''}${f.title}. `, bold: true }, f.detail],
-            })),
-          }
-        : { text: 'No flags: the sweep raised no warning and meets every target.', italics: true },
+    {
+      stack: [
+        h2('Flags'),
+        sheet.problem
+          ? { text: 'Not swept: no flags can be raised.', italics: true }
+          : sheet.flags.length
+            ? {
+                ul: sheet.flags.map((f) => ({
+                  text: [{ text: `${f.severity === 'negative' ? 'Stop: ' : ''}${f.title}. `, bold: true }, f.detail],
+                })),
+              }
+            : { text: 'No flags: the sweep raised no warning and meets every target.', italics: true },
+      ],
+    },
   );
 
   return {
