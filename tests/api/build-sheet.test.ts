@@ -50,6 +50,8 @@ async function pdfText(bytes: Uint8Array): Promise<{ text: string; pages: number
 }
 
 const squash = (s: string) => s.replace(/\s+/g, ' ');
+/** A coordinate as the sheet prints it: mm to one decimal, with a true minus sign. */
+const mm = (v: number) => v.toFixed(1).replace('-', '\u2212');
 
 describe('GET /api/sketches/:id/build-sheet', () => {
   it('answers a PDF download named for the sketch, holding the pivot table, the datum sentence and the caution', async () => {
@@ -70,13 +72,13 @@ describe('GET /api/sketches/:id/build-sheet', () => {
     const frame = points.filter((p) => p.body === 'frame' && !p.id.startsWith('DS.'));
     expect(frame.length).toBeGreaterThan(4);
     const brackets = text.slice(text.indexOf('Frame brackets'), text.indexOf('Axle pivots'));
-    for (const p of frame) expect(brackets).toContain(`${p.id} ${p.x.toFixed(1)} ${p.y.toFixed(1)} ${p.z.toFixed(1)}`);
+    for (const p of frame) expect(brackets).toContain(`${p.id} ${mm(p.x)} ${mm(p.y)} ${mm(p.z)}`);
     // The driveshaft's joints place the driveline, they are no brackets (they get their own table).
     expect(brackets).not.toContain('DS.o');
     expect(text).toContain('Driveline reference points (not brackets)');
     // Each moving pivot too, and the drawings' scale and axes.
     const moving = points.filter((p) => p.body === 'axle' && !p.id.startsWith('DS.'));
-    for (const p of moving) expect(text).toContain(`${p.id} axle ${p.x.toFixed(1)}`);
+    for (const p of moving) expect(text).toContain(`${p.id} axle ${mm(p.x)} ${mm(p.y)} ${mm(p.z)}`);
     expect(text).toMatch(/Side view, seen from the vehicle’s left, scale 1:\d+/);
     expect(text).toMatch(/Rear view, seen from behind, scale 1:\d+/);
     expect(text).toContain('+x forward');
@@ -92,8 +94,8 @@ describe('GET /api/sketches/:id/build-sheet', () => {
     const [a, b] = [points.get(link.a)!, points.get(link.b)!];
     const length = Math.hypot(a.x - b.x, a.y - b.y, a.z - b.z);
 
-    const mm = await pdfText(asBytes(await binary(alice.get(`/api/sketches/${id}/build-sheet`))));
-    expect(mm.text).toContain(`${length.toFixed(1)} mm`);
+    const inMm = await pdfText(asBytes(await binary(alice.get(`/api/sketches/${id}/build-sheet`))));
+    expect(inMm.text).toContain(`${length.toFixed(1)} mm`);
 
     const inch = await pdfText(asBytes(await binary(alice.get(`/api/sketches/${id}/build-sheet?units=in`))));
     // 25.4 mm to the inch (the international inch, by definition).
@@ -172,7 +174,7 @@ describe('the build sheet of a sketch that cannot be swept', () => {
     expect(text).toContain('No sweep. The sketch cannot be swept:');
     expect(text).toContain("no point 'GONE'");
     const ll = (doc.points as unknown as Point[]).find((p) => p.id === 'LL.fl')!;
-    expect(text).toContain(`LL.fl ${ll.x.toFixed(1)} ${ll.y.toFixed(1)} ${ll.z.toFixed(1)}`);
+    expect(text).toContain(`LL.fl ${mm(ll.x)} ${mm(ll.y)} ${mm(ll.z)}`);
     expect(text).toContain(squash(CAUTION_TEXT));
   });
 });
