@@ -116,6 +116,26 @@ function caution(): Content {
   };
 }
 
+/** The flags, the heading kept with the first of them. */
+function flagsSection(sheet: BuildSheet): Content {
+  const item = (f: BuildSheet['flags'][number]): Content => ({
+    text: [{ text: `${f.severity === 'negative' ? 'Stop: ' : ''}${f.title}. `, bold: true }, f.detail],
+  });
+  const [first, ...rest] = sheet.flags;
+  if (sheet.problem || !first) {
+    const none = sheet.problem
+      ? 'Not swept: no flags can be raised.'
+      : 'No flags: the sweep raised no warning and meets every target.';
+    return { stack: [h2('Flags'), { text: none, italics: true }], unbreakable: true };
+  }
+  return {
+    stack: [
+      { stack: [h2('Flags'), { ul: [item(first)] }], unbreakable: true },
+      ...(rest.length ? [{ ul: rest.map(item) }] : []),
+    ],
+  };
+}
+
 /** The PDF build sheet of a sketch, in `u`, on `paper`. A sketch that cannot be swept still prints its geometry. */
 export function buildSheetDocument(src: SheetSource, paper: Paper, u: LengthUnit): TDocumentDefinitions {
   const doc = src.document;
@@ -247,20 +267,7 @@ export function buildSheetDocument(src: SheetSource, paper: Paper, u: LengthUnit
       sheet.targets.map((t) => [t.label, t.band, t.status]),
       'No targets set.',
     ),
-    {
-      stack: [
-        h2('Flags'),
-        sheet.problem
-          ? { text: 'Not swept: no flags can be raised.', italics: true }
-          : sheet.flags.length
-            ? {
-                ul: sheet.flags.map((f) => ({
-                  text: [{ text: `${f.severity === 'negative' ? 'Stop: ' : ''}${f.title}. `, bold: true }, f.detail],
-                })),
-              }
-            : { text: 'No flags: the sweep raised no warning and meets every target.', italics: true },
-      ],
-    },
+    flagsSection(sheet),
   );
 
   return {
