@@ -4,6 +4,9 @@ import { notFound } from '../middleware/http-error';
 import * as sketches from '../services/sketches';
 import type { ServerConfig } from '../config';
 import { exportRoutes } from './exports';
+import { parseOr400 } from '../middleware/validate';
+import { buildSheetQuery } from '../../shared/schema/sketchRequests';
+import { sendBuildSheet } from './buildSheet';
 
 const TOKEN_PATTERN = /^[A-Za-z0-9_-]{16,64}$/;
 
@@ -24,6 +27,12 @@ export function sharedRoutes(config: ServerConfig): Router {
     '/:token',
     exportRoutes(config, (req) => sketches.sharedDocument(tokenParam(req.params.token))),
   );
+
+  router.get('/:token/build-sheet', async (req, res) => {
+    const token = tokenParam(req.params.token);
+    const query = parseOr400(buildSheetQuery, req.query, 'invalid query');
+    await sendBuildSheet(res, await sketches.sharedSheetSource(token), query);
+  });
 
   router.post('/:token/copy', requireUser, async (req, res) => {
     res.status(201).json(await sketches.copyShared(currentUser(req), tokenParam(req.params.token)));

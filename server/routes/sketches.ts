@@ -4,11 +4,18 @@ import { requireUser, currentUser } from '../middleware/require-user';
 import { idParam } from '../middleware/params';
 import { parseOr400 } from '../middleware/validate';
 import { shareMailLimiter } from '../middleware/rate-limit';
-import { createSketchBody, listQuery, shareBody, updateSketchBody } from '../../shared/schema/sketchRequests';
+import {
+  buildSheetQuery,
+  createSketchBody,
+  listQuery,
+  shareBody,
+  updateSketchBody,
+} from '../../shared/schema/sketchRequests';
 import * as sketches from '../services/sketches';
 import type { Mailer } from '../services/mail/mailer';
 import { shareNoticeMail } from '../services/mail/messages';
 import { exportRoutes } from './exports';
+import { sendBuildSheet } from './buildSheet';
 
 /** /api/sketches: the caller's own sketches. Someone else's sketch is 404 on every route. */
 export function sketchRoutes(config: ServerConfig, mailer: Mailer): Router {
@@ -76,6 +83,11 @@ export function sketchRoutes(config: ServerConfig, mailer: Mailer): Router {
     '/:id',
     exportRoutes(config, (req) => sketches.ownDocument(currentUser(req), idParam(req, 'id'))),
   );
+
+  router.get('/:id/build-sheet', async (req, res) => {
+    const query = parseOr400(buildSheetQuery, req.query, 'invalid query');
+    await sendBuildSheet(res, await sketches.sheetSource(currentUser(req), idParam(req, 'id')), query);
+  });
 
   router.get('/:id/share', async (req, res) => {
     res.json(await sketches.getShareState(currentUser(req), idParam(req, 'id'), config));

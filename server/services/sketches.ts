@@ -2,7 +2,8 @@ import { randomBytes } from 'node:crypto';
 import { Op, fn, col, where as sqlWhere, type Transaction, type WhereOptions } from 'sequelize';
 import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/sketch';
 import { downloadBaseName } from '../../shared/downloadName';
-import { ShareRecipient, Sketch, SketchRevision, User, type PublicUser } from '../models';
+import { ShareRecipient, Shop, Sketch, SketchRevision, User, type PublicUser } from '../models';
+import type { SheetSource } from './buildSheetPdf/document';
 import { badRequest, conflict, notFound } from '../middleware/http-error';
 import type { ListQuery, ShareBody } from '../../shared/schema/sketchRequests';
 import type {
@@ -328,6 +329,30 @@ async function sharedSketch(token: string): Promise<Sketch> {
   });
   if (!row) throw notFound('this link is not shared (any more)');
   return row;
+}
+
+/** What the build sheet names of a sketch besides its document: its owner and the owner's shop. */
+async function sheetSourceOf(row: Sketch): Promise<SheetSource> {
+  const owner = await User.findByPk(row.ownerId, { attributes: ['name', 'shopId'] });
+  const shop = owner?.shopId ? await Shop.findByPk(owner.shopId, { attributes: ['name'] }) : null;
+  return {
+    name: row.name,
+    owner: owner?.name ?? '',
+    shop: shop?.name ?? null,
+    version: row.version,
+    savedAt: row.updatedAt,
+    document: JSON.parse(row.document) as SketchDocument,
+  };
+}
+
+/** The caller's own sketch for its build sheet. */
+export async function sheetSource(user: PublicUser, id: number): Promise<SheetSource> {
+  return sheetSourceOf(await ownSketch(user, id));
+}
+
+/** A sketch opened by its share link, for its build sheet. */
+export async function sharedSheetSource(token: string): Promise<SheetSource> {
+  return sheetSourceOf(await sharedSketch(token));
 }
 
 /** A sketch opened by its share link, read-only for everyone (the owner edits through /api/sketches). */

@@ -7,6 +7,7 @@
  */
 import type { Sketch } from '../schema/sketch';
 import type { Vec3 } from '../vec3';
+import { drivelineReferenceIds } from '../drivelineReferences';
 
 export interface FramePivot {
   /** the point's id in its sketch */
@@ -17,15 +18,6 @@ export interface FramePivot {
 
 type Mounted = Pick<Sketch, 'points' | 'members' | 'driveline' | 'halfShafts'>;
 
-/** The ids of the sketch's driveline reference points (never brackets). */
-function drivelineReferences(sketch: Mounted): Set<string> {
-  const refs = new Set<string>();
-  if (sketch.driveline) for (const id of [sketch.driveline.output, sketch.driveline.outputAxis]) refs.add(id);
-  for (const side of [sketch.halfShafts?.left, sketch.halfShafts?.right])
-    if (side) for (const id of [side.inner, side.innerAxis]) refs.add(id);
-  return refs;
-}
-
 /** The sketch's frame brackets in the order of its points. */
 export function framePivots(sketch: Mounted): FramePivot[] {
   const used = new Set<string>();
@@ -33,7 +25,7 @@ export function framePivots(sketch: Mounted): FramePivot[] {
     used.add(m.a);
     used.add(m.b);
   }
-  const refs = drivelineReferences(sketch);
+  const refs = drivelineReferenceIds(sketch);
   return sketch.points
     .filter((p) => p.body === 'frame' && used.has(p.id) && !refs.has(p.id))
     .map((p) => ({ id: p.id, at: { x: p.x, y: p.y, z: p.z } }));

@@ -53,6 +53,13 @@ export const listQuery = z.object({
   deleted: flag,
 });
 export type ListQuery = z.infer<typeof listQuery>;
+
+/** The build sheet PDF's query: the paper it is laid out for and the unit of its lengths. */
+export const buildSheetQuery = z.strictObject({
+  paper: z.enum(['a4', 'letter'], { error: 'expected a4 or letter' }).default('a4'),
+  units: z.enum(['mm', 'in'], { error: 'expected mm or in' }).default('mm'),
+});
+export type BuildSheetQuery = z.infer<typeof buildSheetQuery>;
 /**
  * The library list's query as the client keeps it between pages: the fields of `listQuery`, with "any layout"
  * held as null (a select's empty value) and without the bin flag, which the library list never sends.

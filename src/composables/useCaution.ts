@@ -1,5 +1,5 @@
 /**
- * The product's caution on the board (its words are in src/board/caution.ts): shown once per user,
+ * The product's caution on the board (its words are in shared/display/caution.ts): shown once per user,
  * dismissible, and always reachable from the board's menu. Which users have dismissed it is
  * kept in local storage, so it stays dismissed across visits on this browser.
  */

@@ -15,10 +15,10 @@ import {
   metricShown,
   type MetricEntry,
 } from '../../shared/kinematics/metrics/registry';
-import { showMetric, type Shown } from '../sweep/format';
-import { buildFlags } from '../sweep/flags';
-import { checkTargets, readTargets } from '../sweep/targets';
-import { layoutLabel } from '../suspensions';
+import { showMetric, type Shown } from '../../shared/display/format';
+import { buildFlags } from '../../shared/display/flags';
+import { checkTargets, readTargets } from '../../shared/display/targets';
+import { layoutLabel } from '../../shared/suspensions';
 
 export interface KeyVariant {
   document: Sketch;

@@ -4,7 +4,7 @@
  * the pivot nearest a pointer. Pure (stage pixels in, stage pixels out); LineupSideView draws it.
  */
 import type { Sketch } from '../../shared/schema/sketch';
-import { fixed } from '../sweep/format';
+import { fixed } from '../../shared/display/format';
 import { framePivots } from '../../shared/lineup/framePivots';
 import { mmToUnit, type LengthUnit, type Mm } from '../../shared/units';
 import {

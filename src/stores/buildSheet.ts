@@ -7,7 +7,7 @@ import { ref, shallowRef } from 'vue';
 import { api, errorMessage } from '../api/http';
 import type { SketchDetail } from '../api/types';
 import type { SweepResult } from '../../shared/kinematics/types';
-import { sweepOnce } from '../sweep/sweepOnce';
+import { sweepOnce } from '../../shared/sheet/sweepOnce';
 
 export const useBuildSheetStore = defineStore('buildSheet', () => {
   const detail = shallowRef<SketchDetail | null>(null);

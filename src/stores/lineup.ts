@@ -8,7 +8,7 @@
 import { defineStore } from 'pinia';
 import { computed, ref, shallowRef } from 'vue';
 import { api, errorMessage } from '../api/http';
-import { sweepOnce } from '../sweep/sweepOnce';
+import { sweepOnce } from '../../shared/sheet/sweepOnce';
 import type { SketchDetail } from '../api/types';
 import type { SweepResult } from '../../shared/kinematics/types';
 import { DEFAULT_BRACKET_TOLERANCE_MM, matchBrackets, type BracketMatch } from '../../shared/lineup/brackets';

@@ -7,7 +7,7 @@ import type { HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
 import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
 import { mmToUnit } from '../../shared/units';
-import { bandIsSet, type TargetCheck, type Targets } from './targets';
+import { bandIsSet, type TargetCheck, type Targets } from '../../shared/display/targets';
 import {
   isMetricRef,
   memberEntry,
@@ -19,7 +19,7 @@ import {
   type AxleEnd,
   type MetricEntry,
 } from '../../shared/kinematics/metrics/registry';
-import { quantityUnit, toDisplay } from './format';
+import { quantityUnit, toDisplay } from '../../shared/display/format';
 import type { SweepContext } from './readout';
 
 export interface PlotPoint {

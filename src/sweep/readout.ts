@@ -31,7 +31,7 @@ import {
   showRatio,
   showTorque,
   type Shown,
-} from './format';
+} from '../../shared/display/format';
 
 export interface ReadoutLine extends Shown {
   key: string;

@@ -4,8 +4,8 @@
  * its upper end, is refused with a message and changes nothing.
  */
 import type { LengthUnit, QuantityKind } from '../../shared/units';
-import { fixed, fromDisplay, quantityUnit, toDisplay } from './format';
-import type { TargetBand, Targets } from './targets';
+import { fixed, fromDisplay, quantityUnit, toDisplay } from '../../shared/display/format';
+import type { TargetBand, Targets } from '../../shared/display/targets';
 import type { TargetMetric } from '../../shared/schema/boardFields';
 import { targetEntries } from '../../shared/kinematics/metrics/registry';
 

@@ -32,6 +32,7 @@ const routes: Route[] = [
   { method: 'post', path: (id) => `/api/sketches/${id}/copy` },
   { method: 'get', path: (id) => `/api/sketches/${id}/export` },
   { method: 'get', path: (id) => `/api/sketches/${id}/share` },
+  { method: 'get', path: (id) => `/api/sketches/${id}/build-sheet` },
   { method: 'post', path: (id) => `/api/sketches/${id}/share`, body: () => ({ mode: 'link' }) },
   {
     method: 'post',

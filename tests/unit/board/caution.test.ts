@@ -4,7 +4,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { defineComponent, h, nextTick } from 'vue';
 import type { VueWrapper } from '@vue/test-utils';
 import BoardCaution from '../../../src/components/BoardCaution.vue';
-import { CAUTION_TEXT, CAUTION_TITLE } from '../../../src/board/caution';
+import { CAUTION_TEXT, CAUTION_TITLE } from '../../../shared/display/caution';
 import { useBoardStore } from '../../../src/stores/board';
 import { useSessionStore } from '../../../src/stores/session';
 import { mountOnBoard } from './mount';

@@ -17,7 +17,7 @@ import {
 import { residualsEvaluate, residualWorkCreate } from '../../../shared/kinematics/residuals';
 import { starters } from '../../../shared/kinematics/starters';
 import { layouts } from '../../../shared/schema/sketchVocabulary';
-import { layoutLabel, layoutOptions, suspensionOf, suspensions } from '../../../src/suspensions';
+import { layoutLabel, layoutOptions, suspensionOf, suspensions } from '../../../shared/suspensions';
 
 /** The model of a starter's sketch with one constraint of a kind the solver does not have. */
 function modelWithUnknownConstraint(): LinkageModel {

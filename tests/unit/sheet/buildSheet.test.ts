@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { runSweep, starters } from '../../../shared/kinematics';
-import { buildSheet } from '../../../src/sheet/buildSheet';
+import { buildSheet } from '../../../shared/sheet/buildSheet';
 
 const fourLink = () => starters['four-link-lateral-rod']!.build();
 
@@ -19,11 +19,17 @@ describe('the build sheet', () => {
     );
   });
 
-  it('lists frame brackets apart from the moving pivots, every pivot once', () => {
+  it('lists frame brackets apart from the moving pivots and the driveline reference points, every pivot once', () => {
     const doc = fourLink();
     const sheet = buildSheet(doc, null, null, 'mm');
-    expect(sheet.frame.map((p) => p.id)).toEqual(doc.points.filter((p) => p.body === 'frame').map((p) => p.id));
-    expect(sheet.frame.length + sheet.moving.length).toBe(doc.points.length);
+    // The driveshaft's joint centres and shaft axes place the driveline: a fabricator cuts no bracket for them.
+    const d = doc.driveline!;
+    const reference = [d.output, d.outputAxis, d.pinion, d.pinionAxis];
+    expect(sheet.frame.map((p) => p.id)).toEqual(
+      doc.points.filter((p) => p.body === 'frame' && !reference.includes(p.id)).map((p) => p.id),
+    );
+    expect(sheet.driveline.map((p) => p.id).sort()).toEqual([...reference].sort());
+    expect(sheet.frame.length + sheet.moving.length + sheet.driveline.length).toBe(doc.points.length);
     const ul = doc.points.find((p) => p.id === 'UL.fl')!;
     expect(sheet.frame.find((p) => p.id === 'UL.fl')).toMatchObject({ x: ul.x.toFixed(1), z: ul.z.toFixed(1) });
   });
@@ -46,5 +52,56 @@ describe('the build sheet', () => {
     expect(sheet.geometry).toEqual([]);
     expect(sheet.problem).toContain('cannot be swept');
     expect(sheet.members).toHaveLength(doc.members.length);
+  });
+
+  it('gives a double wishbone its own geometry lines and none of a solid axle, every one with a value', () => {
+    const doc = starters['double-wishbone']!.build();
+    const sheet = buildSheet(doc, runSweep(doc), null, 'mm');
+    const labels = sheet.geometry.map((l) => l.label);
+    for (const l of [
+      'Camber change over the travel',
+      'Toe change (bump steer) over the travel',
+      'Caster at ride',
+      'Caster change over the travel',
+      'Anti-dive at ride',
+      'Roll centre height at ride',
+      'Wheel centre track change over the travel',
+    ])
+      expect(labels).toContain(l);
+    for (const l of labels) expect(l).not.toMatch(/Pinion|Lateral shift|Anti-squat|Anti-lift/);
+    for (const l of sheet.geometry) expect(l.value, l.label).not.toBe('—');
+    expect(sheet.crossView).toBe('front');
+    expect(sheet.movingTitle).toBe('Knuckle pivots');
+  });
+
+  it('gives a solid axle no wheel-attitude lines (camber, toe, kingpin): its layout does not give them', () => {
+    const doc = fourLink();
+    const labels = buildSheet(doc, runSweep(doc), null, 'mm').geometry.map((l) => l.label);
+    expect(labels).toContain('Pinion angle change over the travel');
+    for (const l of labels) expect(l).not.toMatch(/Camber|Toe|Caster|Kingpin|Scrub|trail|track change/i);
+  });
+
+  it('keeps the half-shafts\u2019 joints and axes of a trailing arm out of the frame brackets', () => {
+    const doc = starters['trailing-arm']!.build();
+    const sheet = buildSheet(doc, null, null, 'mm');
+    const h = doc.halfShafts!.left!;
+    for (const id of [h.inner, h.innerAxis]) {
+      expect(sheet.frame.map((p) => p.id)).not.toContain(id);
+      expect(sheet.driveline.map((p) => p.id)).toContain(id);
+    }
+    expect(sheet.frame.map((p) => p.id)).toContain('HA.ol');
+  });
+
+  it('lists each target band with how the sweep meets it, and a missed one where it leaves the band', () => {
+    const doc = { ...fourLink(), targets: { antiSquat: { min: 90, max: 120 }, lateralShift: { min: -15, max: 15 } } };
+    const result = runSweep(doc);
+    const sheet = buildSheet(doc, result, null, 'mm');
+    // The band sits above the anti-squat the sweep reads at ride, so the sheet must call it missed there.
+    expect(result.ride.antiSquat!).toBeLessThan(90);
+    const anti = sheet.targets.find((t) => t.label === 'Anti-squat')!;
+    expect(anti.band).toBe('90.0–120.0 %');
+    expect(anti.status).toMatch(/^missed: .* wanted 90\.0–120\.0 %\.$/);
+    expect(sheet.targets.find((t) => t.label === 'Lateral shift')!.band).toBe('within ±15.0 mm');
+    expect(buildSheet(doc, null, 'cannot', 'mm').targets.map((t) => t.status)).toEqual(['not checked', 'not checked']);
   });
 });

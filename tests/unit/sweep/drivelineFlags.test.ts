@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { runSweep, starters } from '../../../shared/kinematics';
 import type { SketchInput } from '../../../shared/schema/sketch';
-import { buildFlags } from '../../../src/sweep/flags';
+import { buildFlags } from '../../../shared/display/flags';
 
 const starter = starters['four-link-lateral-rod'].build();
 const withDriveline = (settings: Record<string, unknown>): SketchInput => ({

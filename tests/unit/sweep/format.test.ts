@@ -1,6 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { MISSING, showAngle, showLength, showPercent, showPosition, showRatio, fixed } from '../../../src/sweep/format';
+import {
+  MISSING,
+  showAngle,
+  showLength,
+  showPercent,
+  showPosition,
+  showRatio,
+  fixed,
+} from '../../../shared/display/format';
 
 describe('numbers on the board', () => {
   it('never show NaN: a missing number is a dash with its reason', () => {

@@ -12,8 +12,8 @@ import { metricEntry, type MetricEntry } from '../../../shared/kinematics/metric
 import type { Sketch } from '../../../shared/schema/sketch';
 import { readoutLines, type SweepContext } from '../../../src/sweep/readout';
 import { buildPlots } from '../../../src/sweep/plots';
-import { buildSheet } from '../../../src/sheet/buildSheet';
-import { crossViewOf } from '../../../src/suspensions';
+import { buildSheet } from '../../../shared/sheet/buildSheet';
+import { crossViewOf } from '../../../shared/suspensions';
 
 function frontFourLink(): Sketch {
   const d = starters['four-link-lateral-rod'].build();

@@ -18,7 +18,7 @@ import {
 } from '../../../shared/kinematics/metrics/registry';
 import { readoutLines } from '../../../src/sweep/readout';
 import { buildPlots } from '../../../src/sweep/plots';
-import { buildSheet } from '../../../src/sheet/buildSheet';
+import { buildSheet } from '../../../shared/sheet/buildSheet';
 import { runSweep } from '../../../shared/kinematics';
 import { fourLink, provideScreenOrientation, settled } from './setup';
 import { mountOnBoard } from './mountReadout';

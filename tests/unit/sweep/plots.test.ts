@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { runSweep, starters } from '../../../shared/kinematics';
 import type { SweepResult } from '../../../shared/kinematics';
 import { buildPlots } from '../../../src/sweep/plots';
-import { checkTargets } from '../../../src/sweep/targets';
+import { checkTargets } from '../../../shared/display/targets';
 import type { SweepContext } from '../../../src/sweep/readout';
 
 /** 1 in = 25.4 mm exactly (international inch, 1959); conversions are one multiplication, so 1e-9 is generous. */

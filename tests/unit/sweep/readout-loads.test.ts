@@ -8,7 +8,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { useSweepStore } from '../../../src/stores/sweep';
 import { starters } from '../../../shared/kinematics';
 import type { Sketch } from '../../../shared/schema/sketch';
-import { fixed } from '../../../src/sweep/format';
+import { fixed } from '../../../shared/display/format';
 import { readoutLines, EMPTY_CONTEXT } from '../../../src/sweep/readout';
 import { parseSweepNumber } from '../../../src/sweep/loadInput';
 import { fourLink, provideScreenOrientation, settled } from './setup';

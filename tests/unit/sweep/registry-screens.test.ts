@@ -22,7 +22,7 @@ import type { Layout } from '../../../shared/schema/sketchVocabulary';
 import type { LengthUnit } from '../../../shared/units';
 import { readoutLines, type ReadoutLine, type SweepContext } from '../../../src/sweep/readout';
 import { buildPlots } from '../../../src/sweep/plots';
-import { checkTargets } from '../../../src/sweep/targets';
+import { checkTargets } from '../../../shared/display/targets';
 
 const INCH_MM = 25.4;
 

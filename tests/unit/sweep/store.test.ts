@@ -5,7 +5,7 @@ import { createPinia, setActivePinia } from 'pinia';
 import { intersect } from 'mathjs';
 import { runSweep } from '../../../shared/kinematics';
 import type { Sketch } from '../../../shared/schema/sketch';
-import { startingTargets } from '../../../src/sweep/targets';
+import { startingTargets } from '../../../shared/display/targets';
 import { configureSweepRunner, useSweepStore } from '../../../src/stores/sweep';
 import { useBoardStore } from '../../../src/stores/board';
 import { computeSweep, type SweepAnswer, type SweepRequest } from '../../../src/workers/sweep.protocol';

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import type { HeaveRow, RollRow, SweepResult } from '../../../shared/kinematics';
-import { checkTarget, checkTargets, readTargets } from '../../../src/sweep/targets';
+import { checkTarget, checkTargets, readTargets } from '../../../shared/display/targets';
 import { editTarget, fieldText } from '../../../src/sweep/targetsEditor';
-import { buildFlags } from '../../../src/sweep/flags';
+import { buildFlags } from '../../../shared/display/flags';
 
 const pose = { x: 0, y: 0, z: 0, roll: 0, pitch: 0, yaw: 0 };
 

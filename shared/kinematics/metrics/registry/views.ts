@@ -207,7 +207,9 @@ export const csvView: ViewItem<'*members' | '*linkLoads'>[] = [
 
 /**
  * The build sheet's geometry lines: `reached` is the sweep's limit, `ride` the ride row's value,
- * `range` the smallest and largest over the travel; `point` pairs a point's coordinates.
+ * `range` the smallest and largest over the travel; `point` pairs a point's coordinates. A sheet
+ * shows only the lines whose metrics the sketch's layout gives (each entry's `layouts`), so a
+ * solid axle's sheet has no camber and a double wishbone's no pinion angle.
  */
 export type SheetItem =
   | { at: 'reached'; metric: MetricRef }
@@ -226,6 +228,15 @@ export const sheetView: SheetItem[] = [
   { at: 'ride', metric: heave('rollCenterAboveGround') },
   { at: 'range', metric: heave('pinionAngleChange') },
   { at: 'range', metric: heave('lateralShift') },
+  { at: 'range', metric: heave('camberChange') },
+  { at: 'range', metric: heave('toeChange') },
+  { at: 'ride', metric: heave('kingpin.caster') },
+  { at: 'range', metric: heave('casterChange') },
+  { at: 'ride', metric: heave('kingpin.inclination') },
+  { at: 'ride', metric: heave('kingpin.scrubRadius') },
+  { at: 'ride', metric: heave('kingpin.trail') },
+  { at: 'range', metric: heave('contactTrackChange') },
+  { at: 'range', metric: heave('trackChange') },
 ];
 
 /**

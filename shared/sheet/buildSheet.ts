@@ -1,14 +1,22 @@
 /**
  * The build sheet as data: what a fabricator needs from a sketch to cut and weld it, in the
- * user's unit. Every pivot's position (frame brackets apart from the axle's or arms' mounts),
- * every member centre to centre at ride height, the shocks' lengths across the travel against
- * their stroke, and the geometry the sweep reads at ride. Pure; the page only lays it out.
+ * user's unit. Every pivot's position (frame brackets apart from the axle's or arms' mounts and
+ * from the driveline's reference points), every member centre to centre at ride height, the
+ * shocks' lengths across the travel against their stroke, the geometry the sweep reads for the
+ * layout, and the targets and flags. Pure: the browser's printable page and the server's PDF
+ * both lay out this one model.
  */
-import type { SweepResult } from '../../shared/kinematics/types';
-import type { Sketch } from '../../shared/schema/sketch';
-import { formatLength, mmToUnit, type LengthUnit } from '../../shared/units';
-import { vecDistance } from '../../shared/vec3';
-import { fixed, MISSING, showMetric, showRate, showRatio } from '../sweep/format';
+import { drivelineReferenceIds } from '../drivelineReferences';
+import type { SweepResult } from '../kinematics/types';
+import type { Sketch } from '../schema/sketch';
+import { formatLength, mmToUnit, type LengthUnit } from '../units';
+import { vecDistance } from '../vec3';
+import { fixed, MISSING, showMetric, showRate, showRatio } from '../display/format';
+import { bandText, buildFlags, type Flag } from '../display/flags';
+import { bandIsSet, checkTargets, readTargets, type TargetCheck } from '../display/targets';
+import type { TargetMetric } from '../schema/boardFields';
+import { starters } from '../kinematics/starters';
+import { crossViewOf, suspensionOf } from '../suspensions';
 import {
   axleEndOf,
   memberEntry,
@@ -16,11 +24,12 @@ import {
   metricHelp,
   metricShown,
   sheetView,
+  targetEntries,
   type AxleEnd,
   type MetricEntry,
   type SheetItem,
-} from '../../shared/kinematics/metrics/registry';
-import { kindLabel } from '../board/memberKinds';
+} from '../kinematics/metrics/registry';
+import { kindLabel } from '../display/memberKinds';
 
 export interface SheetPivot {
   id: string;
@@ -44,19 +53,53 @@ export interface SheetMember {
 export interface SheetLine {
   label: string;
   value: string;
+  /** why the value is missing ("—"), where it is */
+  reason?: string;
   /** what the quantity is and its sign convention, from the registry (the label's tooltip) */
   help?: string;
 }
 
+/** One target band and how the sweep meets it. */
+export interface SheetTarget {
+  label: string;
+  /** the band in words ("60.0–90.0 %") */
+  band: string;
+  /** "met", or where it is missed, or why it cannot be checked */
+  status: string;
+}
+
+export interface SheetFlag {
+  severity: Flag['severity'];
+  title: string;
+  detail: string;
+}
+
 export interface BuildSheet {
+  /** the layout's name */
+  layout: string;
+  /** the cross (y–z) view's name: a front layout's is its front view */
+  crossView: 'front' | 'rear';
+  /** the moving pivots' table title ("Axle pivots", "Knuckle pivots") */
+  movingTitle: string;
   vehicle: SheetLine[];
+  /** frame pivots that carry a bracket */
   frame: SheetPivot[];
   moving: SheetPivot[];
+  /** the driveline's and half-shafts' reference points (on the frame or a moving body): not brackets */
+  driveline: SheetPivot[];
   members: SheetMember[];
   /** the sweep's readings; empty with `problem` set when the sketch cannot be swept */
   geometry: SheetLine[];
+  targets: SheetTarget[];
+  flags: SheetFlag[];
   problem: string | null;
 }
+
+/** Where the sketch's datum is and which way its axes point (docs/sketch-format.md, "Axes and signs"). */
+export const DATUM_TEXT =
+  'Datum: x = 0 is the line under the wheel centres, y = 0 the vehicle\u2019s centreline, z = 0 the ground at ride ' +
+  'height. x points forward, y to the vehicle\u2019s left, z up. Every coordinate on this sheet is measured from ' +
+  'this datum.';
 
 function coordinate(v: number, u: LengthUnit): string {
   const d = u === 'in' ? 2 : 1;
@@ -102,12 +145,16 @@ function memberNote(m: Sketch['members'][number], result: SweepResult | null, u:
 const SHEET_MISSING = { reached: 'no roll sweep', ride: 'not defined' } as const;
 
 /**
- * Whether the sheet has a line for the item: a value at ride only where the sweep gives that quantity for
- * this sketch and it means something there (no anti-squat for a front axle, no anti-dive for a rear one).
+ * Whether the sheet has a line for the item: only where the sketch's layout gives the quantity (the
+ * registry's `layouts`), and a reading of the travel only where the sweep gives it for this sketch and it
+ * means something there (no anti-squat for a front axle, no anti-dive for a rear one).
  */
-function sheetShows(item: SheetItem, result: SweepResult): boolean {
-  if (item.at !== 'ride') return true;
-  return metricShown(metricEntry(item.metric) as MetricEntry<'heave'>, result.ride);
+function sheetShows(item: SheetItem, result: SweepResult, layout: string): boolean {
+  const refs = 'metric' in item ? [item.metric] : item.metrics;
+  const entries = refs.map((r) => metricEntry(r));
+  if (!entries.every((e) => (e.layouts as readonly string[]).includes(layout))) return false;
+  if (item.at === 'reached') return true;
+  return entries.every((e) => metricShown(e as MetricEntry<'heave'>, result.ride));
 }
 
 /** One geometry line of the build sheet: a metric's limit, its value at ride, or its span over the travel. */
@@ -142,11 +189,8 @@ function sheetLine(item: SheetItem, result: SweepResult, u: LengthUnit, end: Axl
   }
   const read = (entry as MetricEntry<'heave'>).read;
   if (item.at === 'ride') {
-    return {
-      label: `${entry.label} at ride`,
-      help,
-      value: showMetric(entry, read(result.ride), u, SHEET_MISSING.ride).text,
-    };
+    const shown = showMetric(entry, read(result.ride), u, SHEET_MISSING.ride);
+    return { label: `${entry.label} at ride`, help, value: shown.text, reason: shown.reason };
   }
   const vals = heave.map(read).filter((x): x is number => x !== null && x !== undefined && Number.isFinite(x));
   const show = (v: number) => showMetric(entry, v, u, '').text;
@@ -154,7 +198,28 @@ function sheetLine(item: SheetItem, result: SweepResult, u: LengthUnit, end: Axl
     label: `${entry.label} over the travel`,
     help,
     value: vals.length ? `${show(Math.min(...vals))} to ${show(Math.max(...vals))}` : MISSING,
+    reason: vals.length ? undefined : 'not defined anywhere in the travel',
   };
+}
+
+/** Each target band with how the sweep meets it; a missed one in the words of its flag (where it leaves the band). */
+function sheetTargets(sketch: Sketch, checks: TargetCheck[] | null, flags: Flag[], u: LengthUnit): SheetTarget[] {
+  if (!checks) {
+    return Object.entries(readTargets(sketch))
+      .filter(([, band]) => bandIsSet(band))
+      .map(([metric, band]) => {
+        const m = metric as TargetMetric;
+        return { label: targetEntries[m].label, band: bandText({ metric: m, band: band! }, u), status: 'not checked' };
+      });
+  }
+  return checks.map((c) => {
+    const flag = flags.find((f) => f.key === `target-${c.metric}`);
+    return {
+      label: targetEntries[c.metric].label,
+      band: bandText(c, u),
+      status: c.status === 'met' ? 'met' : `${c.status === 'missed' ? 'missed' : 'not checked'}: ${flag?.detail ?? ''}`,
+    };
+  });
 }
 
 export function buildSheet(
@@ -179,14 +244,25 @@ export function buildSheet(
   });
 
   const geometry: SheetLine[] = result
-    ? sheetView.filter((item) => sheetShows(item, result)).map((item) => sheetLine(item, result, u, axleEndOf(v)))
+    ? sheetView
+        .filter((item) => sheetShows(item, result, sketch.layout))
+        .map((item) => sheetLine(item, result, u, axleEndOf(v)))
     : [];
+  const reference = drivelineReferenceIds(sketch);
+  const checks = result ? checkTargets(result, readTargets(sketch)) : null;
+  const flags = buildFlags(result, sketch.members, checks ?? [], u);
   return {
+    layout: starters[sketch.layout]?.label ?? sketch.layout,
+    crossView: crossViewOf(sketch),
+    movingTitle: suspensionOf(sketch.layout)?.moving.pivotsTitle ?? 'Axle pivots',
     vehicle,
-    frame: sketch.points.filter((p) => p.body === 'frame').map((p) => pivot(p, u)),
-    moving: sketch.points.filter((p) => p.body !== 'frame').map((p) => pivot(p, u)),
+    frame: sketch.points.filter((p) => p.body === 'frame' && !reference.has(p.id)).map((p) => pivot(p, u)),
+    moving: sketch.points.filter((p) => p.body !== 'frame' && !reference.has(p.id)).map((p) => pivot(p, u)),
+    driveline: sketch.points.filter((p) => reference.has(p.id)).map((p) => pivot(p, u)),
     members,
     geometry,
+    targets: sheetTargets(sketch, checks, flags, u),
+    flags: flags.map((f) => ({ severity: f.severity, title: f.title, detail: f.detail })),
     problem,
   };
 }

@@ -1,4 +1,4 @@
-import type { Layout } from '../../shared/schema/sketch';
+import type { Layout } from '../schema/sketch';
 
 /**
  * What the board draws over the linkage for a layout, beyond the pivots and members:

@@ -5,11 +5,11 @@
  * words are written here in the user's units. The sweep's plain-sentence notes (its
  * assumptions) are not flags: the readout shows them beside the numbers they qualify.
  */
-import type { HeaveRow, RollRow, SweepEvent, SweepResult } from '../../shared/kinematics';
-import type { SketchMember } from '../../shared/schema/sketch';
-import type { LengthUnit } from '../../shared/units';
+import type { HeaveRow, RollRow, SweepEvent, SweepResult } from '../kinematics';
+import type { SketchMember } from '../schema/sketch';
+import type { LengthUnit } from '../units';
 import type { TargetCheck } from './targets';
-import { driveJointNames, targetEntries } from '../../shared/kinematics/metrics/registry';
+import { driveJointNames, targetEntries } from '../kinematics/metrics/registry';
 import {
   fixed,
   quantityUnit,
@@ -235,7 +235,8 @@ function eventFlag(
   }
 }
 
-function bandText(check: TargetCheck, u: LengthUnit): string {
+/** A target band in words, in the user's unit ("60.0–90.0 %", "within ±3.0°", "at least 8.0°"). */
+export function bandText(check: Pick<TargetCheck, 'metric' | 'band'>, u: LengthUnit): string {
   const q = targetEntries[check.metric].quantity;
   const unit = quantityUnit(q, u);
   const d = (v: number) => fixed(toDisplay(v, q, u), q === 'length' && u === 'in' ? 2 : 1);

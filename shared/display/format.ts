@@ -13,8 +13,8 @@ import {
   type LengthUnit,
   type Mm,
   type QuantityKind,
-} from '../../shared/units';
-import type { MetricEntry } from '../../shared/kinematics/metrics/registry';
+} from '../units';
+import type { MetricEntry } from '../kinematics/metrics/registry';
 
 /** Shown for a number that does not exist; the reason goes to the tooltip. */
 export const MISSING = '—';

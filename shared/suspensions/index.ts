@@ -1,11 +1,11 @@
 /**
- * The client's descriptor of every layout type, keyed by layout so that a layout without one
+ * How the board and the build sheet show every layout type, keyed by layout so that a layout without one
  * is a type error. The name comes from the layout's starter (shared/kinematics/layouts), its
  * one source.
  */
-import { starters } from '../../shared/kinematics/starters';
-import { SOLID_AXLE } from '../../shared/kinematics/metrics/registry/layouts';
-import type { AxleEnd, Layout } from '../../shared/schema/sketch';
+import { starters } from '../kinematics/starters';
+import { SOLID_AXLE } from '../kinematics/metrics/registry/layouts';
+import type { AxleEnd, Layout } from '../schema/sketch';
 import type { SuspensionDescriptor } from './types';
 
 const axle = { legend: 'axle', pivotsTitle: 'Axle pivots' };

@@ -5,11 +5,11 @@
  * file's units: % for anti-squat and roll steer, degrees for angles, mm for lengths. The
  * field's schema is the shared one (shared/schema/boardFields.ts), so the server checks it too.
  */
-import { targetMetrics, targetsSchema, type TargetBand, type Targets } from '../../shared/schema/boardFields';
-import type { TargetMetric } from '../../shared/schema/boardFields';
-import type { HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
-import { targetEntries, type TargetSweep } from '../../shared/kinematics/metrics/registry';
-import type { Deg, Mm } from '../../shared/units';
+import { targetMetrics, targetsSchema, type TargetBand, type Targets } from '../schema/boardFields';
+import type { TargetMetric } from '../schema/boardFields';
+import type { HeaveRow, RollRow, SweepResult } from '../kinematics';
+import { targetEntries, type TargetSweep } from '../kinematics/metrics/registry';
+import type { Deg, Mm } from '../units';
 
 // The board's stores and components take the band types from here, beside the checks.
 export type { TargetBand, Targets };

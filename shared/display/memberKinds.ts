@@ -1,5 +1,5 @@
 /** Member kinds as the board names them, and the id stem a new member of each kind gets. */
-import type { MemberKind } from '../../shared/schema/sketch';
+import type { MemberKind } from '../schema/sketch';
 
 export const KIND_OPTIONS: { value: MemberKind; label: string; stem: string }[] = [
   { value: 'link', label: 'link', stem: 'L' },
