@@ -173,6 +173,7 @@ export function knuckleRig(sketch: Sketch, side: 'left' | 'right') {
     if (m.kind === 'ball-joint' && b.body === knuckle) {
       // An arm body: its ball joint stays at its ride distance from both frame pivots of the arm's hinge.
       const hinge = sketch.members.find((h) => h.kind === 'hinge' && h.body === a.body)!;
+      if (dist(xyzOf(a), xyzOf(b)) > 1e-9) throw new Error(`${m.id}: the arm's and the knuckle's points are apart`);
       tie(at(hinge.a), b);
       tie(at(hinge.b), b);
     }

@@ -3,8 +3,9 @@
  * - equal, parallel wishbones (a parallelogram in the front view) give no camber change in
  *   heave, and the wheel centre follows the arms' circle (plain geometry);
  * - the front-view instant centre and roll centre (docs/sketch-format.md's construction) and the
- *   side-view instant centre, rebuilt by hand at every row with mathjs `intersect` (line–plane
- *   and line–line), not the solver's own code;
+ *   side-view instant centre, built at every row with mathjs `intersect` (line–plane and line–line)
+ *   on the knuckle solved in the test from the hardpoints (independentPose.ts: Gauss–Newton least
+ *   squares), not on the points the sweep placed;
  * - anti-dive from that side-view instant centre by the published formula (Milliken &
  *   Milliken, Race Car Vehicle Dynamics, ch. 17 — formula form from memory, unverified);
  * - a tie rod on the line from its outer end through the front-view instant centre gives no
@@ -15,10 +16,10 @@
  */
 import { intersect } from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import { pointsAt, runSweep, starters } from '../../shared/kinematics';
+import { runSweep, starters } from '../../shared/kinematics';
 import { wishboneArmsAsLinks } from './wishboneTwoLink';
 import { parseSketch } from '../../shared/schema/sketch';
-import type { Vec3 } from '../../shared/kinematics/vec';
+import { knuckleAt, knucklePlace, knuckleRig } from './independentPose';
 import { parallelogram, shortLong, wishboneSketch, type WishboneRig } from './wishboneRigs';
 
 /** deg: a parallelogram keeps the knuckle square to within the solver's convergence (1e-8 mm over ~350 mm arms). */
@@ -29,6 +30,7 @@ const POS_TOL_MM = 1e-6;
 const REL_TOL = 1e-8;
 
 type YZ = [number, number];
+type Vec3 = { x: number; y: number; z: number };
 const xyz = (p: Vec3) => [p.x, p.y, p.z];
 
 /**
@@ -98,15 +100,28 @@ function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
     const arm = `${group}-arm-${side === 'l' ? 'left' : 'right'}`;
     const hinge = sketch.members.find((m) => m.kind === 'hinge' && m.body === arm)!;
     const ball = sketch.members.find((m) => m.kind === 'ball-joint' && body.get(m.a) === arm)!;
-    return { inner: [hinge.a, hinge.b], joint: ball.a };
+    return { inner: [hinge.a, hinge.b], joint: ball.b };
   };
   const ids = (side: string) => ({ wc: `WC.${side}`, upper: wishbone(side, 'upper'), lower: wishbone(side, 'lower') });
   const l = ids('l');
+  // The left knuckle solved in the test from the hardpoints (independentPose.ts), not the sweep's placed points.
+  const rig = knuckleRig(sketch, 'left');
+  const solvedAt = (travel: number) => {
+    const pose = knuckleAt(rig, travel);
+    const out: Record<string, Vec3> = {};
+    for (const q of sketch.points) {
+      if (q.body === 'frame') out[q.id] = q;
+      if (q.body !== 'knuckle-left') continue;
+      const [x, y, z] = knucklePlace(rig, pose, [q.x, q.y, q.z]);
+      out[q.id] = { x, y, z };
+    }
+    return out;
+  };
 
   it(`${label}: front-view instant centre and roll centre at every row match a hand construction (mathjs intersect)`, () => {
     let checked = 0;
     for (const row of r.heave) {
-      const p = pointsAt(sketch, row.bodies);
+      const p = solvedAt(row.travel);
       const wc = p[l.wc];
       const up = cutByHand(p[l.upper.inner[0]], p[l.upper.inner[1]], p[l.upper.joint], wc.x);
       const lo = cutByHand(p[l.lower.inner[0]], p[l.lower.inner[1]], p[l.lower.joint], wc.x);
@@ -138,7 +153,7 @@ function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
   it(`${label}: side-view instant centre and anti-dive at every row match a hand construction`, () => {
     const share = sketch.vehicle.frontBrakeShare ?? 65;
     for (const row of r.heave) {
-      const p = pointsAt(sketch, row.bodies);
+      const p = solvedAt(row.travel);
       const wc = p[l.wc];
       const up = sideCutByHand(p[l.upper.inner[0]], p[l.upper.inner[1]], p[l.upper.joint], wc.y);
       const lo = sideCutByHand(p[l.lower.inner[0]], p[l.lower.inner[1]], p[l.lower.joint], wc.y);
@@ -165,6 +180,12 @@ describe('instant centres and roll centre against mathjs', () => {
     starters['double-wishbone']!.build({ caster: 7, upperAxisAngle: 9, lowerAxisAngle: -4 }),
   ) as ReturnType<typeof wishboneSketch>;
   skewed.points = skewed.points.map((q, i) => ({ ...q, x: q.x + ((i * 37) % 23) - 11, z: q.z + ((i * 53) % 17) - 8 }));
+  // Each ball joint's arm point goes where its knuckle point went: the joint stays one point.
+  for (const m of skewed.members) {
+    if (m.kind !== 'ball-joint') continue;
+    const k = skewed.points.find((q) => q.id === m.b)!;
+    skewed.points = skewed.points.map((q) => (q.id === m.a ? { ...q, x: k.x, y: k.y, z: k.z } : q));
+  }
   crossChecks('skewed starter', skewed);
 });
 
