@@ -227,3 +227,18 @@ export function armAt(sketch: Sketch, wheel: string, travel: number) {
   const s = gaussNewton((q) => [place(q[0], xyzOf(w))[2] - (w.z + travel)], [0]);
   return { theta: s.q[0], worst: s.worst, place: (p: V3) => place(s.q[0], p), axis: u };
 }
+
+/** Every frame and axle point of the sketch with the axle at `pose`, by id (mm). */
+export function axlePoints(
+  sketch: Sketch,
+  rig: AxleRig,
+  pose: AxlePose,
+): Record<string, { x: number; y: number; z: number }> {
+  const out: Record<string, { x: number; y: number; z: number }> = {};
+  for (const p of sketch.points) {
+    if (p.body !== 'frame' && p.body !== 'axle') continue;
+    const [x, y, z] = p.body === 'frame' ? xyzOf(p) : axlePlace(rig, pose, xyzOf(p));
+    out[p.id] = { x, y, z };
+  }
+  return out;
+}
