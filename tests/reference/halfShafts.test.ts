@@ -9,7 +9,8 @@
  *   the shaft, the outer joint between the shaft and the wheel's spin axis (pointing outboard).
  */
 import { describe, expect, it } from 'vitest';
-import { runSweep, starters, type HalfShaftReading } from '../../shared/kinematics';
+import { runSweep, starters } from '../../shared/kinematics';
+import type { HalfShaftReading } from '../../shared/kinematics/types';
 import { parseSketch, type Sketch } from '../../shared/schema/sketch';
 import { armAt, DEG, dist, xyzOf, type V3 } from './independentPose';
 
