@@ -15,7 +15,10 @@ export interface BadInputCase {
 }
 
 const wishbone = () => structuredClone(starters['double-wishbone']!.build()) as SketchInput;
-const indexOf = <T>(list: T[], f: (x: T) => boolean) => list.findIndex(f);
+/** Where the first point on `body` sits in the starter's point list. */
+const pointOn = (body: string) => wishbone().points.findIndex((p) => p.body === body);
+/** Where member `id` sits in the starter's member list. */
+const memberAt = (id: string) => wishbone().members.findIndex((m) => m.id === id);
 
 function withoutMember(id: string) {
   const d = wishbone();
@@ -27,7 +30,9 @@ export const badInputCases: BadInputCase[] = [
   {
     name: 'an arm body without its hinge (its two frame pivots)',
     doc: () => withoutMember('LWl'),
-    problem: `points[${indexOf(wishbone().points, (p) => p.body === 'lower-arm-left')}].body: 'lower-arm-left' has no hinge: a wishbone arm turns about two frame pivots`,
+    problem:
+      `points[${pointOn('lower-arm-left')}].body: ` +
+      `'lower-arm-left' has no hinge: a wishbone arm turns about two frame pivots`,
   },
   {
     name: "an arm body's hinge with a pivot off the frame",
@@ -36,12 +41,14 @@ export const badInputCases: BadInputCase[] = [
       d.members = d.members.map((m) => (m.id === 'UWr' ? { ...m, b: 'UW.bj.r' } : m));
       return d;
     },
-    problem: `members[${indexOf(wishbone().members, (m) => m.id === 'UWr')}].b: a hinge axis point must be on the frame ('UW.bj.r' is on 'knuckle-right')`,
+    problem: `members[${memberAt('UWr')}].b: a hinge axis point must be on the frame ('UW.bj.r' is on 'knuckle-right')`,
   },
   {
     name: 'an arm body without its ball joint',
     doc: () => withoutMember('UBJr'),
-    problem: `points[${indexOf(wishbone().points, (p) => p.body === 'upper-arm-right')}].body: 'upper-arm-right' has no ball joint: a wishbone arm holds the knuckle at one point`,
+    problem:
+      `points[${pointOn('upper-arm-right')}].body: ` +
+      `'upper-arm-right' has no ball joint: a wishbone arm holds the knuckle at one point`,
   },
   {
     name: 'a member ending on an arm of the other side',
@@ -50,7 +57,9 @@ export const badInputCases: BadInputCase[] = [
       d.members = d.members.map((m) => (m.id === 'SPl' ? { ...m, a: 'TR.o.r' } : m));
       return d;
     },
-    problem: `members[${indexOf(wishbone().members, (m) => m.id === 'SPl')}].b: joins 'knuckle-right' to 'lower-arm-left': a member on a wishbone arm must stay on its side`,
+    problem:
+      `members[${memberAt('SPl')}].b: ` +
+      `joins 'knuckle-right' to 'lower-arm-left': a member on a wishbone arm must stay on its side`,
   },
   {
     name: 'slip-yoke limits in the wrong order',
