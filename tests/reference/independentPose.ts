@@ -11,7 +11,7 @@
  *   imposed, x, y, pitch and yaw are free; every link and lateral rod keeps its ride length.
  * - A double-wishbone knuckle: its wheel centre is its reference point; its z is imposed, the other five
  *   coordinates free; each ball joint keeps its distance from both inner pivots of its wishbone (two links, or
- *   an arm body's hinge), and the tie rod its length.
+ *   an arm body's hinge, the joint then at the arm's point, which the knuckle carries), and the tie rod its length.
  * - A trailing arm: one angle about its hinge axis (Rodrigues' rotation formula), set so the wheel centre
  *   reaches the travel.
  */
@@ -171,11 +171,11 @@ export function knuckleRig(sketch: Sketch, side: 'left' | 'right') {
     if ((m.kind === 'link' || m.kind === 'tie-rod') && a.body === 'frame' && b.body === knuckle) tie(a, b);
     if ((m.kind === 'link' || m.kind === 'tie-rod') && b.body === 'frame' && a.body === knuckle) tie(b, a);
     if (m.kind === 'ball-joint' && b.body === knuckle) {
-      // An arm body: its ball joint stays at its ride distance from both frame pivots of the arm's hinge.
+      // An arm body: the joint is at the arm's point `a` (docs/sketch-format.md: the knuckle is held at `a`), the
+      // knuckle carrying that place; it stays at its ride distance from both frame pivots of the arm's hinge.
       const hinge = sketch.members.find((h) => h.kind === 'hinge' && h.body === a.body)!;
-      if (dist(xyzOf(a), xyzOf(b)) > 1e-9) throw new Error(`${m.id}: the arm's and the knuckle's points are apart`);
-      tie(at(hinge.a), b);
-      tie(at(hinge.b), b);
+      tie(at(hinge.a), a);
+      tie(at(hinge.b), a);
     }
   }
   return { wc, rods, side };

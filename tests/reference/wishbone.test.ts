@@ -100,7 +100,7 @@ function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
     const arm = `${group}-arm-${side === 'l' ? 'left' : 'right'}`;
     const hinge = sketch.members.find((m) => m.kind === 'hinge' && m.body === arm)!;
     const ball = sketch.members.find((m) => m.kind === 'ball-joint' && body.get(m.a) === arm)!;
-    return { inner: [hinge.a, hinge.b], joint: ball.b };
+    return { inner: [hinge.a, hinge.b], joint: ball.a };
   };
   const ids = (side: string) => ({ wc: `WC.${side}`, upper: wishbone(side, 'upper'), lower: wishbone(side, 'lower') });
   const l = ids('l');
@@ -109,9 +109,11 @@ function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
   const solvedAt = (travel: number) => {
     const pose = knuckleAt(rig, travel);
     const out: Record<string, Vec3> = {};
+    // The knuckle's points, and each arm's ball-joint point, which the knuckle carries (the joint is at the arm's point).
+    const carried = new Set(sketch.members.filter((m) => m.kind === 'ball-joint').map((m) => m.a));
     for (const q of sketch.points) {
       if (q.body === 'frame') out[q.id] = q;
-      if (q.body !== 'knuckle-left') continue;
+      if (q.body !== 'knuckle-left' && !(carried.has(q.id) && q.body.endsWith('-left'))) continue;
       const [x, y, z] = knucklePlace(rig, pose, [q.x, q.y, q.z]);
       out[q.id] = { x, y, z };
     }
@@ -180,12 +182,6 @@ describe('instant centres and roll centre against mathjs', () => {
     starters['double-wishbone']!.build({ caster: 7, upperAxisAngle: 9, lowerAxisAngle: -4 }),
   ) as ReturnType<typeof wishboneSketch>;
   skewed.points = skewed.points.map((q, i) => ({ ...q, x: q.x + ((i * 37) % 23) - 11, z: q.z + ((i * 53) % 17) - 8 }));
-  // Each ball joint's arm point goes where its knuckle point went: the joint stays one point.
-  for (const m of skewed.members) {
-    if (m.kind !== 'ball-joint') continue;
-    const k = skewed.points.find((q) => q.id === m.b)!;
-    skewed.points = skewed.points.map((q) => (q.id === m.a ? { ...q, x: k.x, y: k.y, z: k.z } : q));
-  }
   crossChecks('skewed starter', skewed);
 });
 

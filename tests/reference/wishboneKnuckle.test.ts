@@ -34,7 +34,8 @@ function jointsOf(sketch: Sketch) {
     if (link && link.kind === 'link') return link.b;
     const arm = `${group}-arm-left`;
     const ball = sketch.members.find((m) => m.kind === 'ball-joint' && body.get(m.a) === arm)!;
-    return ball.b;
+    // The joint is at the arm's point, which the knuckle carries (docs/sketch-format.md).
+    return ball.a;
   };
   return { lower: joint('lower'), upper: joint('upper'), wc: sketch.wheels.left };
 }
