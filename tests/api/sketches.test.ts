@@ -4,6 +4,7 @@ import { newMember, startTestServer, type Caller, type TestServer } from './help
 import { sketchFile } from './fixtures';
 import { Sketch, SketchRevision } from '../../server/models';
 import { RESTORE_WINDOW_MS } from '../../server/services/sketches';
+import { badInputCases } from '../unit/schema/badInputCases';
 
 let server: TestServer;
 let alice: Caller;
@@ -260,6 +261,25 @@ describe('copy, import and export', () => {
     expect(file.format).toBe('arcwright.sketch');
     expect(file.points).toEqual(imported.body.document.points);
   });
+
+  for (const c of badInputCases) {
+    it(`refuses to create, import or save ${c.name}, naming the field and storing nothing`, async () => {
+      const before = await Sketch.count();
+      const imported = await alice.post('/api/sketches/import').send(c.doc());
+      expect(imported.status).toBe(400);
+      expect(imported.body.details).toContain(c.problem);
+      const created = await alice.post('/api/sketches').send({ name: 'Faulty', document: c.doc() });
+      expect(created.status).toBe(400);
+      expect(created.body.details).toContain(`document.${c.problem}`);
+      expect(await Sketch.count()).toBe(before);
+      // A save of a stored sketch with the fault is refused alike and keeps the stored version.
+      const s = await create(alice);
+      const saved = await alice.put(`/api/sketches/${s.id}`).send({ document: c.doc(), version: 1 });
+      expect(saved.status).toBe(400);
+      expect(saved.body.details).toContain(`document.${c.problem}`);
+      expect((await Sketch.findByPk(s.id))!.version).toBe(1);
+    });
+  }
 
   it('refuses to import something that is not a sketch, naming the problems', async () => {
     const res = await alice.post('/api/sketches/import').send({ format: 'other', points: 3 });

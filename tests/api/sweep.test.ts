@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Caller, startTestServer, type TestServer } from './helpers';
 import { sketchFile } from './fixtures';
 import { runSweep, starters } from '../../shared/kinematics';
+import { badInputCases } from '../unit/schema/badInputCases';
 
 let server: TestServer;
 let guest: Caller;
@@ -91,6 +92,14 @@ describe('POST /api/sweep', () => {
     });
     expect(notFinite).toEqual([]);
   });
+
+  for (const c of badInputCases) {
+    it(`answers 400 naming the field for ${c.name}`, async () => {
+      const res = await guest.post('/api/sweep').send(c.doc());
+      expect(res.status).toBe(400);
+      expect(res.body.details).toContain(c.problem);
+    });
+  }
 
   it('answers 413 above 256 KB', async () => {
     const doc = { ...sketchFile(), padding: 'x'.repeat(260 * 1024) };

@@ -3,7 +3,8 @@
  * - @flatten-js/core circle–circle intersection gives the four-bar's coupler joint B from
  *   the crank joint A (both branches); the solver's B must be one of them at every row;
  * - mathjs `intersect` gives line crossings: the side-view instant centre of the example
- *   file at every row, and mathjs' own documented case for our line crossing.
+ *   file at every row (its links crossed on the axle solved in the test, independentPose.ts), and
+ *   mathjs' own documented case for our line crossing.
  */
 import Flatten from '@flatten-js/core';
 import { intersect } from 'mathjs';
@@ -12,6 +13,7 @@ import { pointsAt, runSweep } from '../../shared/kinematics';
 import { lineCrossing2d } from '../../shared/kinematics/metrics/instantCenter';
 import { parseSketch } from '../../shared/schema/sketch';
 import { exampleSketch } from '../unit/kinematics/helpers';
+import { axleAt, axlePoints, axleRig } from './independentPose';
 import { fourBarSketch } from './rigs';
 
 /** mm: the solver's convergence (1e-8) with round-off on 1000 mm numbers. */
@@ -57,9 +59,11 @@ describe('instant centre against mathjs intersect', () => {
     const d = exampleSketch();
     const sketch = parseSketch(d);
     const r = runSweep(d);
+    const rig = axleRig(sketch);
     let checked = 0;
     for (const row of r.heave) {
-      const p = pointsAt(sketch, row.bodies);
+      // The axle solved in the test at the row's travel (independentPose.ts), not the sweep's placed points.
+      const p = axlePoints(sketch, rig, axleAt(rig, row.travel));
       const xz = (id: string) => [p[id].x, p[id].z];
       const m = intersect(xz('UL.fl'), xz('UL.al'), xz('LL.fl'), xz('LL.al')) as number[] | null;
       if (!row.instantCenter) continue;

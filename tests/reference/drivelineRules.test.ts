@@ -1,5 +1,7 @@
 /**
- * The driveshaft's rules against angles and lengths computed in the test from the solved points:
+ * The driveshaft's rules against angles and lengths computed in the test on the axle solved in the test at each
+ * row's travel (independentPose.ts: Gauss–Newton least squares from the sketch's hardpoints, not the sweep's
+ * placed points):
  * - a joint's operating angle is the angle between two lines, θ = acos(u·v / (|u|·|v|)) (any vector
  *   algebra text), here by mathjs `dot` and `norm` on the gearbox shaft, the driveshaft and the pinion shaft;
  * - the driveshaft's length is the distance between the joint centres, √(Δx² + Δy² + Δz²);
@@ -9,9 +11,10 @@
  */
 import { dot, norm } from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import { pointsAt, runSweep, starters, type HeaveRow, type SweepEvent } from '../../shared/kinematics';
+import { runSweep, starters, type HeaveRow, type SweepEvent } from '../../shared/kinematics';
 import { parseSketch, type SketchInput } from '../../shared/schema/sketch';
 import { exampleSketch } from '../unit/kinematics/helpers';
+import { axleAt, axlePoints, axleRig } from './independentPose';
 import { translatingAxle } from './rigs';
 
 /** Interpolation between rows is exact to round-off; 1e-6 mm (or degrees) is far below any step. */
@@ -36,13 +39,14 @@ interface Independent {
   length: number;
 }
 
-/** Each heave row's joint angles and shaft length, from the solved points alone. */
+/** Each heave row's joint angles and shaft length, on the axle solved in the test. */
 function independent(input: SketchInput): { rows: Independent[]; events: SweepEvent[] } {
   const sketch = parseSketch(input);
   const result = runSweep(input);
   const d = sketch.driveline!;
+  const rig = axleRig(sketch);
   const rows = result.heave.map((r: HeaveRow) => {
-    const p = pointsAt(sketch, r.bodies);
+    const p = axlePoints(sketch, rig, axleAt(rig, r.travel));
     const shaft = sub(p[d.pinion], p[d.output]);
     return {
       travel: r.travel,

@@ -9,13 +9,15 @@
  *   front, under power:  %anti-lift         = (front drive share, here 100 %) · tanθ · L/h.
  * The rig places the instant centre by construction (both link lines aimed at it), so the expected
  * figures are worked by hand here; the front rig is the rear one mirrored fore and aft, so each front
- * reading must equal its rear counterpart. The instant centre at every row is cross-checked with mathjs
- * `intersect`, and the percentages with the ratio computed in the test.
+ * reading must equal its rear counterpart. At every row the instant centre is found with mathjs `intersect` on
+ * the axle solved in the test at that travel (independentPose.ts: Gauss–Newton least squares from the sketch's
+ * hardpoints, not the sweep's placed points), and the percentages with the ratio computed in the test.
  */
 import { intersect } from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import { pointsAt, runSweep } from '../../shared/kinematics';
+import { runSweep } from '../../shared/kinematics';
 import { parseSketch, type SketchInput } from '../../shared/schema/sketch';
+import { axleAt, axlePoints, axleRig } from './independentPose';
 import { doc, IC_RIG_MEMBERS, IC_RIG_POINTS } from './rigs';
 
 const L = 2700;
@@ -62,7 +64,7 @@ describe('solid axle at the rear: anti-squat and anti-lift in braking', () => {
   it('anti-lift in braking follows the rear brake share at every row (mathjs intersect for the IC)', () => {
     const sketch = parseSketch(rig('rear', 60, true));
     for (const row of r.heave) {
-      const p = pointsAt(sketch, row.bodies);
+      const p = axlePoints(sketch, axleRig(sketch), axleAt(axleRig(sketch), row.travel));
       const xz = (id: string) => [p[id].x, p[id].z];
       const ic = intersect(xz('UL.fl'), xz('UL.al'), xz('LL.fl'), xz('LL.al')) as number[];
       const tan = (ic[1] - row.travel) / (ic[0] - p['WC.l'].x);
@@ -99,7 +101,7 @@ describe('solid axle at the front: anti-dive and anti-lift under power, never an
   it('anti-dive follows the front brake share at every row (mathjs intersect for the IC)', () => {
     const sketch = parseSketch(rig('front', 40, true));
     for (const row of front.heave) {
-      const p = pointsAt(sketch, row.bodies);
+      const p = axlePoints(sketch, axleRig(sketch), axleAt(axleRig(sketch), row.travel));
       const xz = (id: string) => [p[id].x, p[id].z];
       const ic = intersect(xz('UL.fl'), xz('UL.al'), xz('LL.fl'), xz('LL.al')) as number[];
       // Rising rearward: the run is from the instant centre forward to the patch.

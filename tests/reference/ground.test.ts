@@ -13,15 +13,16 @@
  * - A solid axle in pure heave with the body held still: the ground rises with the axle, so a
  *   height above it is the body-fixed z minus the travel, less any gap between the wheel centre's
  *   ride height and the tyre radius (closed form).
- * - A solid axle rolled: the ground is found here by an independent search (bisection on its tilt,
- *   each tyre's lowest point by sampling its circle and golden-section refinement), the roll
- *   centre from the lateral rod's placed ends, and its height by the distance from a point to a line.
+ * - A solid axle rolled: the axle is rolled in the test (independentPose.ts, Gauss–Newton least squares
+ *   from the hardpoints), the ground under it found by an independent search (bisection on its tilt,
+ *   each tyre's lowest point by sampling its circle and golden-section refinement), the roll centre from
+ *   the lateral rod's ends on that axle, and its height by the distance from a point to a line.
  */
 import { describe, expect, it } from 'vitest';
-import { pointsAt, runSweep, starters } from '../../shared/kinematics';
-import { poseApply } from '../../shared/kinematics/pose';
+import { runSweep, starters } from '../../shared/kinematics';
 import type { SweepResult } from '../../shared/kinematics';
 import { parseSketch, type SketchInput } from '../../shared/schema/sketch';
+import { axleAt, axlePoints, axleRig, DEG, rotate } from './independentPose';
 import { parallelogram, wishboneSketch } from './wishboneRigs';
 
 /** mm: the solver's convergence (1e-6 mm) with round-off through a few hundred mm of lever. */
@@ -205,18 +206,15 @@ describe('a solid axle (the four-link starter)', () => {
     const sketch = parseSketch(doc);
     const result = runSweep(sketch);
     const rod = sketch.members.find((m) => m.kind === 'lateral-rod')!;
-    const left = sketch.points.find((p) => p.id === sketch.wheels.left)!;
-    const right = sketch.points.find((p) => p.id === sketch.wheels.right)!;
-    const ref = { x: (left.x + right.x) / 2, y: (left.y + right.y) / 2, z: (left.z + right.z) / 2 };
+    const rig = axleRig(sketch);
     const rolled = result.roll.filter((row) => Math.abs(row.roll) > 2);
     expect(rolled.length).toBeGreaterThan(2);
     for (const row of rolled) {
-      const pose = row.bodies.axle!;
-      const at = pointsAt(sketch, row.bodies);
-      // The axle's lateral axis turned by its pose: the spin axis of both tyres.
-      const o = poseApply(pose, ref, ref);
-      const yEnd = poseApply(pose, ref, { x: ref.x, y: ref.y + 1, z: ref.z });
-      const axis = { x: yEnd.x - o.x, y: yEnd.y - o.y, z: yEnd.z - o.z };
+      // The axle rolled in the test (independentPose.ts), not the sweep's pose: its lateral axis is both tyres' spin axis.
+      const pose = axleAt(rig, 0, row.roll * DEG);
+      const at = axlePoints(sketch, rig, pose);
+      const [ax, ay, az] = rotate(pose.roll, pose.q[2], pose.q[3], [0, 1, 0]);
+      const axis = { x: ax, y: ay, z: az };
       const g = groundBySearch(
         [at[sketch.wheels.left], at[sketch.wheels.right]],
         axis,

@@ -3,8 +3,9 @@
  * - equal, parallel wishbones (a parallelogram in the front view) give no camber change in
  *   heave, and the wheel centre follows the arms' circle (plain geometry);
  * - the front-view instant centre and roll centre (docs/sketch-format.md's construction) and the
- *   side-view instant centre, rebuilt by hand at every row with mathjs `intersect` (line–plane
- *   and line–line), not the solver's own code;
+ *   side-view instant centre, built at every row with mathjs `intersect` (line–plane and line–line)
+ *   on the knuckle solved in the test from the hardpoints (independentPose.ts: Gauss–Newton least
+ *   squares), not on the points the sweep placed;
  * - anti-dive from that side-view instant centre by the published formula (Milliken &
  *   Milliken, Race Car Vehicle Dynamics, ch. 17 — formula form from memory, unverified);
  * - a tie rod on the line from its outer end through the front-view instant centre gives no
@@ -15,10 +16,10 @@
  */
 import { intersect } from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import { pointsAt, runSweep, starters } from '../../shared/kinematics';
+import { runSweep, starters } from '../../shared/kinematics';
 import { wishboneArmsAsLinks } from './wishboneTwoLink';
 import { parseSketch } from '../../shared/schema/sketch';
-import type { Vec3 } from '../../shared/kinematics/vec';
+import { knuckleAt, knucklePlace, knuckleRig } from './independentPose';
 import { parallelogram, shortLong, wishboneSketch, type WishboneRig } from './wishboneRigs';
 
 /** deg: a parallelogram keeps the knuckle square to within the solver's convergence (1e-8 mm over ~350 mm arms). */
@@ -29,6 +30,7 @@ const POS_TOL_MM = 1e-6;
 const REL_TOL = 1e-8;
 
 type YZ = [number, number];
+type Vec3 = { x: number; y: number; z: number };
 const xyz = (p: Vec3) => [p.x, p.y, p.z];
 
 /**
@@ -102,11 +104,26 @@ function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
   };
   const ids = (side: string) => ({ wc: `WC.${side}`, upper: wishbone(side, 'upper'), lower: wishbone(side, 'lower') });
   const l = ids('l');
+  // The left knuckle solved in the test from the hardpoints (independentPose.ts), not the sweep's placed points.
+  const rig = knuckleRig(sketch, 'left');
+  const solvedAt = (travel: number) => {
+    const pose = knuckleAt(rig, travel);
+    const out: Record<string, Vec3> = {};
+    // The knuckle's points, and each arm's ball-joint point, which the knuckle carries (the joint is at the arm's point).
+    const carried = new Set(sketch.members.filter((m) => m.kind === 'ball-joint').map((m) => m.a));
+    for (const q of sketch.points) {
+      if (q.body === 'frame') out[q.id] = q;
+      if (q.body !== 'knuckle-left' && !(carried.has(q.id) && q.body.endsWith('-left'))) continue;
+      const [x, y, z] = knucklePlace(rig, pose, [q.x, q.y, q.z]);
+      out[q.id] = { x, y, z };
+    }
+    return out;
+  };
 
   it(`${label}: front-view instant centre and roll centre at every row match a hand construction (mathjs intersect)`, () => {
     let checked = 0;
     for (const row of r.heave) {
-      const p = pointsAt(sketch, row.bodies);
+      const p = solvedAt(row.travel);
       const wc = p[l.wc];
       const up = cutByHand(p[l.upper.inner[0]], p[l.upper.inner[1]], p[l.upper.joint], wc.x);
       const lo = cutByHand(p[l.lower.inner[0]], p[l.lower.inner[1]], p[l.lower.joint], wc.x);
@@ -138,7 +155,7 @@ function crossChecks(label: string, doc: ReturnType<typeof wishboneSketch>) {
   it(`${label}: side-view instant centre and anti-dive at every row match a hand construction`, () => {
     const share = sketch.vehicle.frontBrakeShare ?? 65;
     for (const row of r.heave) {
-      const p = pointsAt(sketch, row.bodies);
+      const p = solvedAt(row.travel);
       const wc = p[l.wc];
       const up = sideCutByHand(p[l.upper.inner[0]], p[l.upper.inner[1]], p[l.upper.joint], wc.y);
       const lo = sideCutByHand(p[l.lower.inner[0]], p[l.lower.inner[1]], p[l.lower.joint], wc.y);

@@ -5,7 +5,8 @@
  *   row the closed form of the spring's length over the arm's angle (plain geometry);
  * - a shock whose line enters the upper arm's triangle in droop: the travel where it starts, from the arm's angle
  *   by hand; the crossing test on hand-built segments and triangles;
- * - the starter and the same starter with its wishbones written as two links each sweep alike;
+ * - the starter and the same starter with its wishbones written as two links each warn alike (their curves are
+ *   checked against a knuckle solved in the test in wishboneKnuckle.test.ts);
  * - the schema refuses an arm without its hinge or ball joint, and a member from an arm to the other side.
  */
 import { describe, expect, it } from 'vitest';
@@ -144,18 +145,8 @@ describe('the starter sweeps alike with arm bodies and with two-link wishbones',
   const arms = runSweep(doc);
   const links = runSweep(wishboneArmsAsLinks(doc));
 
-  it('gives the same camber, toe, track and caster curves within 1e-6 (two solves of one linkage)', () => {
+  it('warns alike (the curves of both are checked against a knuckle solved in the test: wishboneKnuckle.test.ts)', () => {
     expect(links.heave.map((h) => h.travel)).toEqual(arms.heave.map((h) => h.travel));
-    arms.heave.forEach((h, i) => {
-      const o = links.heave[i];
-      expect(Math.abs(h.camberChange! - o.camberChange!)).toBeLessThan(1e-6);
-      expect(Math.abs(h.toeChange! - o.toeChange!)).toBeLessThan(1e-6);
-      expect(Math.abs(h.trackChange! - o.trackChange!)).toBeLessThan(1e-6);
-      expect(Math.abs(h.casterChange! - o.casterChange!)).toBeLessThan(1e-6);
-    });
-    arms.roll.forEach((x, i) => {
-      expect(Math.abs(x.camberToGround!.left - links.roll[i].camberToGround!.left)).toBeLessThan(1e-6);
-    });
     expect(links.warnings).toEqual(arms.warnings);
   });
 

@@ -7,6 +7,7 @@ import { sweepCommand } from '../../../shared/cli/sweep';
 import { heaveRowsCsv, runSweep } from '../../../shared/kinematics';
 import { checkSketch, layouts } from '../../../shared/schema/sketch';
 import { exampleSketch } from './helpers';
+import { badInputCases } from '../schema/badInputCases';
 
 const dir = mkdtempSync(path.join(tmpdir(), 'arcwright-sweep-'));
 const write = (name: string, text: string) => {
@@ -59,6 +60,16 @@ describe('sweep command', () => {
       expect.stringMatching(/^many\.json: layout: expected one of/),
     ]);
   });
+
+  for (const [i, c] of badInputCases.entries()) {
+    it(`refuses ${c.name} with exit 2, naming the field`, () => {
+      const file = write(`fault-${i}.json`, JSON.stringify(c.doc()));
+      const out = sweepCommand([file], dir);
+      expect(out.code).toBe(2);
+      expect(out.stdout).toBeUndefined();
+      expect(out.stderr).toContain(`${file}: ${c.problem}`);
+    });
+  }
 
   it('behaves the same as a process: exit code 2, no stack trace, empty stdout', () => {
     const root = path.resolve(__dirname, '../../..');
