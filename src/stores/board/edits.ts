@@ -54,8 +54,23 @@ export function memberLength(doc: Sketch, m: Member): Mm | null {
 }
 
 /**
+ * The other end of each ball joint: the arm's point and the knuckle's are one place (the sweep takes the
+ * joint at the arm's point), so moving either moves both.
+ */
+function ballJointPartners(doc: Sketch): Map<string, string> {
+  const partners = new Map<string, string>();
+  for (const m of doc.members)
+    if (m.kind === 'ball-joint') {
+      partners.set(m.a, m.b);
+      partners.set(m.b, m.a);
+    }
+  return partners;
+}
+
+/**
  * Moves pivots by the given deltas (mm). With `pairs`, each moved pivot's partner that is not
- * itself being moved follows with the mirror-image delta (y negated).
+ * itself being moved follows with the mirror-image delta (y negated). A ball joint's other point
+ * follows with the same delta.
  */
 export function movePoints(
   doc: Sketch,
@@ -69,6 +84,11 @@ export function movePoints(
       if (partner && !deltas.has(partner))
         all.set(partner, { x: d.x, y: d.y === undefined ? undefined : -d.y, z: d.z });
     }
+  }
+  const joined = ballJointPartners(doc);
+  for (const [id, d] of [...all]) {
+    const other = joined.get(id);
+    if (other && !all.has(other)) all.set(other, d);
   }
   for (const id of all.keys()) pointIndex(doc, id);
   const points = doc.points.map((p) => {

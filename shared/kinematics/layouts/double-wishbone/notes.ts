@@ -143,9 +143,34 @@ function bumpSteerNote(s: WishboneSide, heave: HeaveRow[]): string | null {
   );
 }
 
+/** A ball joint's two points further apart than this (mm) are worth a note: below any drawing precision. */
+export const BALL_JOINT_APART_MM = 0.5;
+
+/**
+ * A ball joint whose arm point and knuckle point are apart: the sweep puts the joint at the arm's point
+ * (the knuckle's is its copy), so the knuckle's own point is not where the joint is and its readings would
+ * mislead; the note says so and which point was used.
+ */
+function ballJointApartNotes(model: LinkageModel): string[] {
+  const out: string[] = [];
+  for (const m of model.sketch.members) {
+    if (m.kind !== 'ball-joint') continue;
+    const a = model.points.get(m.a),
+      b = model.points.get(m.b);
+    if (!a || !b) continue;
+    const apart = vecDistance(a.ride, b.ride);
+    if (apart > BALL_JOINT_APART_MM)
+      out.push(
+        `Ball joint ${m.id}: its arm point ${m.a} and knuckle point ${m.b} are ${apart.toFixed(1)} mm apart; ` +
+          `the joint is taken at ${m.a}. Put ${m.b} on it.`,
+      );
+  }
+  return out;
+}
+
 /** Notes for the result's warnings list. */
 export function wishboneNotes(model: LinkageModel, plan: WishbonePlan | null, heave: HeaveRow[]): string[] {
-  const out: string[] = [];
+  const out: string[] = ballJointApartNotes(model);
   for (const sideName of ['left', 'right'] as const) {
     const knuckle = knuckleCarrying(model, sideName);
     const found = plan && (sideName === 'left' ? plan.left : plan.right);
