@@ -71,6 +71,26 @@ function crossing(rows: Independent[], dir: 1 | -1, f: (r: Independent) => numbe
   return null;
 }
 
+/** The sketch with its gearbox shaft and pinion turned onto the driveshaft's line at ride (both joints at 0°). */
+function straightShaft(doc: SketchInput): SketchInput {
+  const d = doc.driveline!;
+  const at = (id: string) => doc.points.find((p) => p.id === id)!;
+  const out = at(d.output),
+    pin = at(d.pinion);
+  const u = sub(out, pin);
+  const k = 100 / (norm(u) as number);
+  const placed: Record<string, V> = {
+    [d.outputAxis]: [out.x + u[0] * k, out.y + u[1] * k, out.z + u[2] * k],
+    [d.pinionAxis]: [pin.x - u[0] * k, pin.y - u[1] * k, pin.z - u[2] * k],
+  };
+  return {
+    ...doc,
+    points: doc.points.map((p) =>
+      placed[p.id] ? { ...p, x: placed[p.id][0], y: placed[p.id][1], z: placed[p.id][2] } : p,
+    ),
+  };
+}
+
 const withDriveline = (doc: SketchInput, settings: Record<string, unknown>): SketchInput => ({
   ...doc,
   driveline: { ...doc.driveline!, ...settings },
@@ -104,11 +124,11 @@ describe('joint angle under the minimum', () => {
     expect(quiet.events.filter((x) => x.kind === 'joint-angle-low')).toEqual([]);
   });
 
-  it('is off at 0, and on at the 0.5° default for the starter whose shaft runs straight at ride', () => {
-    const starter = starters['four-link-lateral-rod'].build();
-    const off = independent(withDriveline(starter, { minJointAngle: 0 }));
+  it('is off at 0, and on at the 0.5° default for a shaft that runs straight at ride', () => {
+    const straight = straightShaft(starters['four-link-lateral-rod'].build());
+    const off = independent(withDriveline(straight, { minJointAngle: 0 }));
     expect(off.events.filter((x) => x.kind === 'joint-angle-low')).toEqual([]);
-    const on = independent(starter);
+    const on = independent(straight);
     const ride = on.rows.find((r) => r.travel === 0)!;
     expect(ride.output).toBeLessThan(0.5);
     expect(ride.pinion).toBeLessThan(0.5);
@@ -118,6 +138,21 @@ describe('joint angle under the minimum', () => {
       ['output', 0],
       ['pinion', 0],
     ]);
+  });
+
+  it('leaves the starter clear at ride, its joints about 2° apiece, and starts where the angles fall under 0.5° in bump', () => {
+    const { rows, events } = independent(starters['four-link-lateral-rod'].build());
+    const ride = rows.find((r) => r.travel === 0)!;
+    expect(ride.output).toBeCloseTo(2, 1);
+    expect(ride.pinion).toBeCloseTo(2, 1);
+    const low = events.filter((x) => x.kind === 'joint-angle-low');
+    for (const joint of ['output', 'pinion'] as const) {
+      const expected = crossing(rows, 1, (r) => -r[joint], -0.5);
+      expect(expected!).toBeGreaterThan(0);
+      const e = low.filter((x) => x.joint === joint);
+      expect(e).toHaveLength(1);
+      expect(e[0].at).toBeCloseTo(expected!, AT_DIGITS);
+    }
   });
 });
 

@@ -104,19 +104,31 @@ export function solidAxleBase(p: Params): { points: PointIn[]; members: MemberIn
     { id: 'SPr', kind: 'spring', a: 'SP.fr', b: 'SP.ar', rate: p.springRate },
   );
 
-  // A one-piece driveshaft from the gearbox output, both joints straight at ride.
-  const out = { x: 1600, z: wc + 90 };
-  const pin = { x: 190, z: wc + 15 };
-  const dx = out.x - pin.x,
-    dz = out.z - pin.z,
-    len = Math.hypot(dx, dz);
-  points.push(
-    { id: 'DS.o', body: 'frame', x: out.x, y: 0, z: r1(out.z) },
-    { id: 'DS.oa', body: 'frame', x: r1(out.x + (100 * dx) / len), y: 0, z: r1(out.z + (100 * dz) / len) },
-    { id: 'DS.p', body: 'axle', x: pin.x, y: 0, z: r1(pin.z) },
-    { id: 'DS.pa', body: 'axle', x: r1(pin.x - (100 * dx) / len), y: 0, z: r1(pin.z - (100 * dz) / len) },
-  );
+  points.push(...driveshaftPoints(wc));
   return { points, members };
+}
+
+/** Each driveshaft joint's operating angle at ride in the starters (deg): within the usual 1–3° (common practice, no published source). */
+const STARTER_JOINT_ANGLE_DEG = 2;
+
+/**
+ * A one-piece driveshaft from the gearbox output to the pinion. The output shaft and the pinion point
+ * parallel to each other, each STARTER_JOINT_ANGLE_DEG off the shaft's line at ride: equal angles whose
+ * speed fluctuations cancel, and enough angle to keep the needle bearings turning. Heights above the
+ * wheel centre `wc` (mm); each axis point 100 mm from its joint.
+ */
+export function driveshaftPoints(wc: number): PointIn[] {
+  const out = { x: 1600, z: r1(wc + 90) };
+  const pin = { x: 190, z: r1(wc + 15) };
+  const axisSlope = Math.atan2(out.z - pin.z, out.x - pin.x) - degToRad(STARTER_JOINT_ANGLE_DEG);
+  const ax = 100 * Math.cos(axisSlope),
+    az = 100 * Math.sin(axisSlope);
+  return [
+    { id: 'DS.o', body: 'frame', x: out.x, y: 0, z: out.z },
+    { id: 'DS.oa', body: 'frame', x: r1(out.x + ax), y: 0, z: r1(out.z + az) },
+    { id: 'DS.p', body: 'axle', x: pin.x, y: 0, z: pin.z },
+    { id: 'DS.pa', body: 'axle', x: r1(pin.x - ax), y: 0, z: r1(pin.z - az) },
+  ];
 }
 
 /** The document around points and members. */

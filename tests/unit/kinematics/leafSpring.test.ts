@@ -118,7 +118,8 @@ describe('wind-up', () => {
     expect(w.members.SHl.lengthChange).toBeLessThan(-1);
     expect(w.members.SHr.lengthChange).toBeGreaterThan(1);
     expect(w.bind).toBeLessThan(HELD_TOL_MM);
-    expect(w.driveline!.pinionAngle).toBeGreaterThan(result.ride.driveline!.pinionAngle);
+    // The starter's pinion points 2° below the shaft's line at ride: the housing turning nose-up closes that angle.
+    expect(w.driveline!.pinionAngle).toBeLessThan(result.ride.driveline!.pinionAngle - 1);
   });
 
   it("scales with the axle torque (option or file), reverses with it, and needs the halves' rates", () => {

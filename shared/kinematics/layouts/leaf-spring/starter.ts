@@ -9,7 +9,7 @@
  */
 import { degToRad } from '../../../units';
 import { parseSketch, type SketchInput } from '../../../schema/sketch';
-import { paramsResolve, r1, type MemberIn, type Params, type PointIn } from '../starterParts';
+import { driveshaftPoints, paramsResolve, r1, type MemberIn, type Params, type PointIn } from '../starterParts';
 import type { StarterParam, StarterSpec } from '../starterTypes';
 
 /** The equivalent link's share of the cantilever length (SAE three-link model, from memory, unverified). */
@@ -133,12 +133,6 @@ export const leafSpring: StarterSpec = {
     const left = side(p, 'l', half, p.shockStagger);
     const right = side(p, 'r', -half, -p.shockStagger);
     const wc = p.tireRadius;
-    // A one-piece driveshaft from the gearbox output, both joints straight at ride (as the link starters).
-    const out = { x: 1600, z: wc + 90 };
-    const pin = { x: 190, z: wc + 15 };
-    const dx = out.x - pin.x,
-      dz = out.z - pin.z,
-      len = Math.hypot(dx, dz);
     const doc: SketchInput = {
       format: 'arcwright.sketch',
       version: 1,
@@ -150,10 +144,7 @@ export const leafSpring: StarterSpec = {
         { id: 'WC.r', body: 'axle', x: 0, y: r1(-p.track / 2), z: r1(wc) },
         ...left.points,
         ...right.points,
-        { id: 'DS.o', body: 'frame', x: out.x, y: 0, z: r1(out.z) },
-        { id: 'DS.oa', body: 'frame', x: r1(out.x + (100 * dx) / len), y: 0, z: r1(out.z + (100 * dz) / len) },
-        { id: 'DS.p', body: 'axle', x: pin.x, y: 0, z: r1(pin.z) },
-        { id: 'DS.pa', body: 'axle', x: r1(pin.x - (100 * dx) / len), y: 0, z: r1(pin.z - (100 * dz) / len) },
+        ...driveshaftPoints(wc),
       ],
       members: [...left.members, ...right.members],
       wheels: { left: 'WC.l', right: 'WC.r' },
