@@ -187,8 +187,8 @@ describe('Ackermann, turning radius and the toggle on a trapezoid solved by hand
 
   it('turns each wheel by the closed-form angle of its four-bar', () => {
     for (const row of steer.rows) {
-      expect(row.leftSteer, `rack ${row.rack}`).toBeCloseTo(trapezoidAngle(1, row.rack), 6);
-      expect(row.rightSteer, `rack ${row.rack}`).toBeCloseTo(trapezoidAngle(-1, row.rack), 6);
+      expect(row.leftSteer, `rack ${row.rack}`).toBeCloseTo(trapezoidAngle(1, row.rack!), 6);
+      expect(row.rightSteer, `rack ${row.rack}`).toBeCloseTo(trapezoidAngle(-1, row.rack!), 6);
     }
   });
 
@@ -200,8 +200,8 @@ describe('Ackermann, turning radius and the toggle on a trapezoid solved by hand
         expect(row.ackermann).toBeNull();
         continue;
       }
-      const l = trapezoidAngle(1, row.rack) * DEG,
-        r = trapezoidAngle(-1, row.rack) * DEG;
+      const l = trapezoidAngle(1, row.rack!) * DEG,
+        r = trapezoidAngle(-1, row.rack!) * DEG;
       // The pair turns toward the side of the larger angle; the inner wheel is on that side.
       const left = l + r > 0;
       const inner = Math.abs(left ? l : r),
