@@ -10,35 +10,15 @@
  * linkage's branch); roll steer is then the central difference 100·(yaw(+δ) − yaw(−δ))/(2δ) of two
  * poses solved at ±δ of roll.
  */
-import { QR, Matrix } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { runSweep, starters } from '../../shared/kinematics';
 import { parseSketch, type Sketch } from '../../shared/schema/sketch';
+import { DEG, gaussNewton, rotateIso, type V3 } from './rigidPose';
 
-type V3 = [number, number, number];
-const DEG = Math.PI / 180;
 /** deg of roll for the central difference */
 const DELTA = 0.1;
 /** % roll steer: the sweep's slope at roll 0 against a ±0.1° difference (a third-order term apart) */
 const TOL = 0.01;
-
-function rotate(roll: number, pitch: number, yaw: number, v: V3): V3 {
-  const [cr, sr, cp, sp, cy, sy] = [
-    Math.cos(roll),
-    Math.sin(roll),
-    Math.cos(pitch),
-    Math.sin(pitch),
-    Math.cos(yaw),
-    Math.sin(yaw),
-  ];
-  // Rx, then Ry, then Rz.
-  const x1 = v[0],
-    y1 = cr * v[1] - sr * v[2],
-    z1 = sr * v[1] + cr * v[2];
-  const x2 = cp * x1 + sp * z1,
-    z2 = -sp * x1 + cp * z1;
-  return [cy * x2 - sy * y1, sy * x2 + cy * y1, z2];
-}
 
 /** The axle's links as frame point, axle point (relative to the reference) and length. */
 function axleLinks(sketch: Sketch) {
@@ -62,32 +42,14 @@ function axleLinks(sketch: Sketch) {
 /** Residuals for q = [x, y, pitch, yaw] (mm, rad) at a travel (mm) and roll (rad). */
 function residuals(rig: ReturnType<typeof axleLinks>, q: number[], travel: number, roll: number): number[] {
   return rig.links.map(({ F, local, L }) => {
-    const r = rotate(roll, q[2], q[3], local);
+    const r = rotateIso(roll, q[2], q[3], local);
     const P = [rig.ref[0] + q[0] + r[0], rig.ref[1] + q[1] + r[1], rig.ref[2] + travel + r[2]];
     return Math.hypot(P[0] - F[0], P[1] - F[1], P[2] - F[2]) - L;
   });
 }
 
-function gaussNewton(rig: ReturnType<typeof axleLinks>, start: number[], travel: number, roll: number): number[] {
-  const q = [...start];
-  const h = 1e-7;
-  for (let it = 0; it < 60; it++) {
-    const r = residuals(rig, q, travel, roll);
-    const J = new Matrix(r.length, 4);
-    for (let k = 0; k < 4; k++) {
-      const up = [...q],
-        dn = [...q];
-      up[k] += h;
-      dn[k] -= h;
-      const ru = residuals(rig, up, travel, roll),
-        rd = residuals(rig, dn, travel, roll);
-      for (let i = 0; i < r.length; i++) J.set(i, k, (ru[i] - rd[i]) / (2 * h));
-    }
-    const step = new QR(J).solve(Matrix.columnVector(r.map((v) => -v))).to1DArray();
-    for (let k = 0; k < 4; k++) q[k] += step[k];
-    if (Math.max(...step.map(Math.abs)) < 1e-13) break;
-  }
-  return q;
+function solvePose(rig: ReturnType<typeof axleLinks>, start: number[], travel: number, roll: number): number[] {
+  return gaussNewton((q) => residuals(rig, q, travel, roll), start);
 }
 
 /** % roll steer at a travel, by central difference of independently solved poses. */
@@ -95,9 +57,9 @@ function independentRollSteer(sketch: Sketch, travel: number): number {
   const rig = axleLinks(sketch);
   let q = [0, 0, 0, 0];
   const steps = Math.round(Math.abs(travel) / 10);
-  for (let k = 1; k <= steps; k++) q = gaussNewton(rig, q, (travel * k) / steps, 0);
-  const up = gaussNewton(rig, q, travel, DELTA * DEG),
-    dn = gaussNewton(rig, q, travel, -DELTA * DEG);
+  for (let k = 1; k <= steps; k++) q = solvePose(rig, q, (travel * k) / steps, 0);
+  const up = solvePose(rig, q, travel, DELTA * DEG),
+    dn = solvePose(rig, q, travel, -DELTA * DEG);
   return (100 * (up[3] - dn[3])) / DEG / (2 * DELTA);
 }
 

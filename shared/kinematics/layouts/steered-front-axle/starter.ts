@@ -22,8 +22,8 @@ const FRONT_DEFAULTS: Record<string, number> = {
   lowerAngle: 7,
   lowerDrop: 170,
   lowerSpread: 860,
-  upperLength: 760,
-  upperAngle: 0,
+  upperLength: 900,
+  upperAngle: 3,
   upperRise: 180,
   springRate: 60,
 };
