@@ -11,6 +11,7 @@ import type { PointModel } from '../model';
 import { vec, vecCross, vecDot, vecLength, vecScale, vecSub, type Vec3 } from '../vec';
 
 const DEG = Math.PI / 180;
+const NO_SWEEP = 'there is no steer sweep; the heave and roll sweeps are not affected.';
 
 export interface PitmanInput {
   kind: 'pitman';
@@ -43,13 +44,13 @@ export function pitmanInput(pivot: PointModel, axisPoint: PointModel, ball: Poin
   const d = vecSub(axisPoint.ride, pivot.ride);
   const dl = vecLength(d);
   if (!(dl >= MIN_MEMBER_LENGTH_MM))
-    return `pitmanArm.axis: '${axisPoint.id}' is at the box pivot '${pivot.id}', so they draw no output axis; no steer sweep.`;
+    return `pitmanArm.axis: '${axisPoint.id}' is at the box pivot '${pivot.id}', so they draw no output axis: ${NO_SWEEP}`;
   let axis = vecScale(d, 1 / dl);
   const r = vecSub(ball.ride, pivot.ride);
   const across = vecSub(r, vecScale(axis, vecDot(r, axis)));
   const length = vecLength(across);
   if (!(length >= MIN_MEMBER_LENGTH_MM))
-    return `pitmanArm.ball: '${ball.id}' lies on the box's output axis, so the pitman arm has no length; no steer sweep.`;
+    return `pitmanArm.ball: '${ball.id}' lies on the box's output axis, so the pitman arm has no length: ${NO_SWEEP}`;
   // A positive swing moves the ball toward +y (the rack's sense); an arm whose ball swings square to y keeps the axis as drawn.
   if (vecCross(axis, across).y < 0) axis = vecScale(axis, -1);
   return {

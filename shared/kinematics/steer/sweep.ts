@@ -92,7 +92,7 @@ export function steerSweep(sketch: Sketch, ctx: MarchContext, rideState: Float64
   const settings = sketch.sweep.steer;
   if (!settings) return noSteer('sweep.steer: not set, so there is no steer sweep.');
   const linkage = steeringOf(ctx.model);
-  if (typeof linkage === 'string') return noSteer(linkage);
+  if (typeof linkage === 'string') return noSteer(linkage, settings.pitman !== undefined ? 'pitman' : 'rack');
   const kind = linkage.input.kind;
   const travel = settings[kind];
   if (travel === undefined)
