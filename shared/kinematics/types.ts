@@ -135,7 +135,10 @@ export interface HeaveRow {
    * axle; layouts/steered-front-axle/rows.ts)
    */
   wheelSteer?: { left: Deg; right: Deg };
-  /** deg, change of the left kingpin axis' side-view angle, positive when its top moves rearward (addition: double wishbone, steered front axle) */
+  /**
+   * deg, change of the left kingpin axis' side-view angle, positive when its top moves rearward (addition: double
+   * wishbone, steered front axle)
+   */
   casterChange?: Deg | null;
   /** front-view instant centre of the left knuckle (docs/sketch-format.md construction); null when the wishbone lines are parallel (addition: double wishbone) */
   frontViewInstantCenter?: FrontPoint | null;

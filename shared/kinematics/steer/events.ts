@@ -139,6 +139,8 @@ export function lockEvent(
     at: at.at,
     leftSteer,
     rightSteer,
-    message: `${field}: the linkage cannot follow the ${rack ? 'rack' : 'pitman arm'} past ${show(at.at)} of the ${show(asked)} asked for (${wheels}); ${stops}.`,
+    message:
+      `${field}: the linkage cannot follow the ${rack ? 'rack' : 'pitman arm'} past ${show(at.at)} of the ` +
+      `${show(asked)} asked for (${wheels}); ${stops}.`,
   };
 }

@@ -33,7 +33,9 @@ export function steeredAxleNotes(model: LinkageModel, plan: SteeredAxlePlan, hea
     }
   }
   if (!worst || !(Math.abs(worst.value) > BUMP_STEER_NOTE_DEG)) return [];
-  const steer = `The wheels steer by themselves over bumps: the ${worst.side} wheel turns ${worst.value.toFixed(2)}° at ${worst.travel} mm of travel.`;
+  const steer =
+    `The wheels steer by themselves over bumps: the ${worst.side} wheel turns ${worst.value.toFixed(2)}° ` +
+    `at ${worst.travel} mm of travel.`;
   const rod = model.sketch.members.find((m) => m.kind === 'lateral-rod');
   const drag = plan.dragLink;
   if (!rod || !drag) return [steer];

@@ -72,7 +72,8 @@ export const steeredFrontAxle: StarterSpec = {
   layout: 'steered-front-axle',
   label: 'Steered front axle (three-link, track bar)',
   description:
-    'A solid front axle on two lower links, one upper link and a track bar; each knuckle turns on its kingpin, steered by a pitman arm, a drag link and a tie rod. The drag link against the track bar decides the bump steer.',
+    'A solid front axle on two lower links, one upper link and a track bar; each knuckle turns on its kingpin, ' +
+    'steered by a pitman arm, a drag link and a tie rod. The drag link against the track bar decides the bump steer.',
   params,
   build(given) {
     const p = paramsResolve(params, given);
