@@ -184,7 +184,8 @@ export const rollEntries: RollEntry[] = [
   ),
   ...(['left', 'right'] as const).map((side): RollEntry => ({
     key: `wheelSteer.${side}`,
-    id: `wheel-steer-${side}`,
+    // Apart from the heave rows' bump steer, which the same list of plots shows.
+    id: `roll-wheel-steer-${side}`,
     label: `${side === 'left' ? 'Left' : 'Right'} wheel steer in roll`,
     quantity: 'angle',
     sweep: 'roll',
