@@ -104,7 +104,8 @@ export const bumpSteerEntries: BumpSteerEntry[] = [
     digits: 3,
     sign: 'positive toe-in, of the wheel and place where its size is largest',
     definition:
-      'The largest toe change over the travel of either wheel, at straight ahead and at steering positions (rack or pitman arm) out to lock.',
+      'The largest toe change over the travel of either wheel, at straight ahead and at steering positions ' +
+      '(rack or pitman arm) out to lock.',
     layouts: STEERED,
   },
 ];
