@@ -39,6 +39,12 @@ export const demoSketches: DemoSketch[] = [
     params: { track: 1500, tireRadius: 320, wheelbase: 2600, cgHeight: 520, sweepAngle: 20 },
   },
   {
+    owner: 'maker@demo.test',
+    layout: 'steered-front-axle',
+    name: 'Marsh Wren crawler, steered front axle',
+    params: { track: 1700, tireRadius: 445, wheelbase: 2850, ballHeight: 560, trackBarHeight: 450 },
+  },
+  {
     owner: 'instructor@demo.test',
     layout: 'four-link-lateral-rod',
     name: 'Chassis 210 starter: four-link with lateral rod',

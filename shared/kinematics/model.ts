@@ -65,19 +65,26 @@ export interface DistanceConstraint {
 }
 
 /**
- * A hinge: the arm body turns about the frame axis a→b. Five residuals (mm): the arm's copy
- * of point a stays on a (three), its copy of b stays on the axis line through b (the two
- * components across the axis), so a consistent hinge adds no spurious redundancy.
+ * A hinge: the arm body turns about the axis a→b, on the frame (an arm's pivots) or on a moving body (a knuckle's
+ * kingpin axis on the axle). Five residuals (mm): the arm's copy of point a stays on a (three), its copy of b stays
+ * on the axis line through b (the two components across the axis, which turn with the axis body), so a consistent
+ * hinge adds no spurious redundancy.
  */
 export interface HingeConstraint {
   type: 'hinge';
   member: SketchMember;
   slot: number;
+  /** the body carrying the axis points: FRAME_SLOT, or a moving body's slot (a knuckle's axle) */
+  axisSlot: number;
+  /** mm, the axis points at ride */
   axisA: Vec3;
   axisB: Vec3;
+  /** mm, the axis points less the axis body's reference point (the ride positions on the frame) */
+  axisLocalA: Vec3;
+  axisLocalB: Vec3;
   localA: Vec3;
   localB: Vec3;
-  /** unit vectors across the axis */
+  /** unit vectors across the axis, at ride (in the axis body's axes) */
   across1: Vec3;
   across2: Vec3;
 }
@@ -126,7 +133,7 @@ export function constraintRows(c: Constraint): number {
 export function constraintSlots(c: Constraint): number[] {
   switch (c.type) {
     case 'hinge':
-      return [c.slot];
+      return c.axisSlot === FRAME_SLOT ? [c.slot] : [c.slot, c.axisSlot];
     case 'distance':
     case 'coincident':
       return [c.a.slot, c.b.slot].filter((s) => s !== FRAME_SLOT);
@@ -250,8 +257,11 @@ export function linkageModelBuild(sketch: Sketch): LinkageModel {
         type: 'hinge',
         member: m,
         slot: body.slot,
+        axisSlot: a.slot,
         axisA: a.ride,
         axisB: b.ride,
+        axisLocalA: a.local,
+        axisLocalB: b.local,
         localA: vecSub(a.ride, body.reference),
         localB: vecSub(b.ride, body.reference),
         across1,

@@ -145,10 +145,17 @@ export interface ResidualWork {
   rot: BodyRotations;
   pts: Float64Array;
   tmp: Float64Array;
+  /** a hinge's two across vectors where its axis body has them */
+  hingeAcross: Float64Array;
 }
 
 export function residualWorkCreate(model: LinkageModel): ResidualWork {
-  return { rot: new BodyRotations(model.bodies.length), pts: new Float64Array(6), tmp: new Float64Array(3) };
+  return {
+    rot: new BodyRotations(model.bodies.length),
+    pts: new Float64Array(6),
+    tmp: new Float64Array(3),
+    hingeAcross: new Float64Array(6),
+  };
 }
 
 /** Residual rows of a distance constraint (one), and their Jacobian row when J is given. */
@@ -256,7 +263,11 @@ function bendingRows(
   }
 }
 
-/** The five hinge rows: the arm's copy of axis point a stays on a, its copy of b on the axis line through b. */
+/**
+ * The five hinge rows: the arm's copy of axis point a stays on a, its copy of b on the axis line through b.
+ * On a moving axis body (a knuckle's kingpin on the axle) the axis points are that body's and the across
+ * vectors E = R·e turn with it: r = (p_b − q_b)·E, so ∂r/∂θ of the axis body also carries (p_b − q_b)·(∂R/∂θ)·e.
+ */
 function hingeRows(
   model: LinkageModel,
   c: HingeConstraint,
@@ -271,30 +282,83 @@ function hingeRows(
   const body = model.bodies[c.slot];
   const so = c.slot * POSE_SIZE;
   const rs = rot.sets[c.slot];
+  const moving = c.axisSlot !== FRAME_SLOT;
+  // The axis points and across vectors where the axis body has them (the frame's: as drawn).
+  let qax = c.axisA.x,
+    qay = c.axisA.y,
+    qaz = c.axisA.z,
+    qbx = c.axisB.x,
+    qby = c.axisB.y,
+    qbz = c.axisB.z;
+  const E = work.hingeAcross;
+  if (moving) {
+    const axis = model.bodies[c.axisSlot];
+    const ao = c.axisSlot * POSE_SIZE;
+    const ars = rot.sets[c.axisSlot];
+    const ox = axis.reference.x + state[ao],
+      oy = axis.reference.y + state[ao + 1],
+      oz = axis.reference.z + state[ao + 2];
+    mat3Apply(ars, 0, c.axisLocalA.x, c.axisLocalA.y, c.axisLocalA.z, E, 0);
+    qax = ox + E[0];
+    qay = oy + E[1];
+    qaz = oz + E[2];
+    mat3Apply(ars, 0, c.axisLocalB.x, c.axisLocalB.y, c.axisLocalB.z, E, 0);
+    qbx = ox + E[0];
+    qby = oy + E[1];
+    qbz = oz + E[2];
+    mat3Apply(ars, 0, c.across1.x, c.across1.y, c.across1.z, E, 0);
+    mat3Apply(ars, 0, c.across2.x, c.across2.y, c.across2.z, E, 3);
+  } else {
+    E[0] = c.across1.x;
+    E[1] = c.across1.y;
+    E[2] = c.across1.z;
+    E[3] = c.across2.x;
+    E[4] = c.across2.y;
+    E[5] = c.across2.z;
+  }
   // Arm's copy of axis point a, placed.
   mat3Apply(rs, 0, c.localA.x, c.localA.y, c.localA.z, pts, 0);
-  const ax = body.reference.x + state[so] + pts[0] - c.axisA.x;
-  const ay = body.reference.y + state[so + 1] + pts[1] - c.axisA.y;
-  const az = body.reference.z + state[so + 2] + pts[2] - c.axisA.z;
+  const ax = body.reference.x + state[so] + pts[0] - qax;
+  const ay = body.reference.y + state[so + 1] + pts[1] - qay;
+  const az = body.reference.z + state[so + 2] + pts[2] - qaz;
   mat3Apply(rs, 0, c.localB.x, c.localB.y, c.localB.z, pts, 3);
-  const bx = body.reference.x + state[so] + pts[3] - c.axisB.x;
-  const by = body.reference.y + state[so + 1] + pts[4] - c.axisB.y;
-  const bz = body.reference.z + state[so + 2] + pts[5] - c.axisB.z;
+  const bx = body.reference.x + state[so] + pts[3] - qbx;
+  const by = body.reference.y + state[so + 1] + pts[4] - qby;
+  const bz = body.reference.z + state[so + 2] + pts[5] - qbz;
   r[row] = ax;
   r[row + 1] = ay;
   r[row + 2] = az;
-  r[row + 3] = bx * c.across1.x + by * c.across1.y + bz * c.across1.z;
-  r[row + 4] = bx * c.across2.x + by * c.across2.y + bz * c.across2.z;
+  r[row + 3] = bx * E[0] + by * E[1] + bz * E[2];
+  r[row + 4] = bx * E[3] + by * E[4] + bz * E[5];
   if (!J) return;
   const la = c.localA,
-    lb = c.localB,
-    e1 = c.across1,
-    e2 = c.across2;
+    lb = c.localB;
   addPointRow(J, row, cols, c.slot, rs, la.x, la.y, la.z, 1, 0, 0, 1, tmp);
   addPointRow(J, row + 1, cols, c.slot, rs, la.x, la.y, la.z, 0, 1, 0, 1, tmp);
   addPointRow(J, row + 2, cols, c.slot, rs, la.x, la.y, la.z, 0, 0, 1, 1, tmp);
-  addPointRow(J, row + 3, cols, c.slot, rs, lb.x, lb.y, lb.z, e1.x, e1.y, e1.z, 1, tmp);
-  addPointRow(J, row + 4, cols, c.slot, rs, lb.x, lb.y, lb.z, e2.x, e2.y, e2.z, 1, tmp);
+  addPointRow(J, row + 3, cols, c.slot, rs, lb.x, lb.y, lb.z, E[0], E[1], E[2], 1, tmp);
+  addPointRow(J, row + 4, cols, c.slot, rs, lb.x, lb.y, lb.z, E[3], E[4], E[5], 1, tmp);
+  if (!moving) return;
+  const as = c.axisSlot;
+  const ars = rot.sets[as];
+  const qa = c.axisLocalA,
+    qb = c.axisLocalB;
+  addPointRow(J, row, cols, as, ars, qa.x, qa.y, qa.z, 1, 0, 0, -1, tmp);
+  addPointRow(J, row + 1, cols, as, ars, qa.x, qa.y, qa.z, 0, 1, 0, -1, tmp);
+  addPointRow(J, row + 2, cols, as, ars, qa.x, qa.y, qa.z, 0, 0, 1, -1, tmp);
+  addPointRow(J, row + 3, cols, as, ars, qb.x, qb.y, qb.z, E[0], E[1], E[2], -1, tmp);
+  addPointRow(J, row + 4, cols, as, ars, qb.x, qb.y, qb.z, E[3], E[4], E[5], -1, tmp);
+  // The across vectors turn with the axis body.
+  const base = as * POSE_SIZE + POSE_ROLL;
+  for (const [k, e] of [
+    [3, c.across1],
+    [4, c.across2],
+  ] as const) {
+    for (let a = 0; a < 3; a++) {
+      mat3Apply(ars, 9 * (a + 1), e.x, e.y, e.z, tmp, 0);
+      J[(row + k) * cols + base + a] += bx * tmp[0] + by * tmp[1] + bz * tmp[2];
+    }
+  }
 }
 
 /** The three ball-joint rows: the arm's point minus the knuckle's point, per axis. */

@@ -7,6 +7,7 @@ import type { Layout } from '../schema/sketch';
 import { doubleWishbone } from './layouts/double-wishbone/starter';
 import { fourLinkLateralRod } from './layouts/four-link-lateral-rod/starter';
 import { leafSpring } from './layouts/leaf-spring/starter';
+import { steeredFrontAxle } from './layouts/steered-front-axle/starter';
 import type { StarterSpec } from './layouts/starterTypes';
 import { threeLinkLateralRod } from './layouts/three-link-lateral-rod/starter';
 import { trailingArm } from './layouts/trailing-arm/starter';
@@ -19,6 +20,7 @@ export const starters: Record<Layout, StarterSpec> = {
   'double-wishbone': doubleWishbone,
   'trailing-arm': trailingArm,
   'leaf-spring': leafSpring,
+  'steered-front-axle': steeredFrontAxle,
 };
 
 export type { StarterParam, StarterSpec } from './layouts/starterTypes';

@@ -129,7 +129,16 @@ export interface HeaveRow {
   contactTrackChange?: Mm | null;
   /** mm, change of the left wheel centre's distance from y = 0 (addition: arms and knuckles) */
   trackChange?: Mm;
-  /** deg, change of the left kingpin axis' side-view angle, positive when its top moves rearward (addition: double wishbone) */
+  /**
+   * deg, each wheel's steer angle change from ride in top view, positive when it turns toward the vehicle's left
+   * (as yaw): on a steered solid axle, the bump steer of the drag link against the track bar (addition: steered front
+   * axle; layouts/steered-front-axle/rows.ts)
+   */
+  wheelSteer?: { left: Deg; right: Deg };
+  /**
+   * deg, change of the left kingpin axis' side-view angle, positive when its top moves rearward (addition: double
+   * wishbone, steered front axle)
+   */
   casterChange?: Deg | null;
   /** front-view instant centre of the left knuckle (docs/sketch-format.md construction); null when the wishbone lines are parallel (addition: double wishbone) */
   frontViewInstantCenter?: FrontPoint | null;
@@ -195,6 +204,11 @@ export interface RollRow {
    * the frame's axes), positive when the top leans out (addition: double wishbone)
    */
   camberToGround?: { left: Deg; right: Deg };
+  /**
+   * deg, each wheel's steer angle change from ride in top view, positive when it turns toward the vehicle's left
+   * (as yaw), the axle's own roll steer included (addition: steered front axle)
+   */
+  wheelSteer?: { left: Deg; right: Deg };
   /** roll centre in the frame's axes: where the two contact-patch lines through the front-view instant centres cross; null when they do not (addition: double wishbone) */
   rollCenter?: FrontPoint | null;
   /**
@@ -307,8 +321,16 @@ export interface SweepResult {
  * centre held at its ride height), the knuckles solved on their links.
  */
 export interface SteerRow {
-  /** mm, rack travel from centre along the line through the tie rods' inner ends, positive toward the vehicle's left (+y) */
-  rack: Mm;
+  /**
+   * mm, rack travel from centre along the line through the tie rods' inner ends, positive toward the vehicle's left
+   * (+y); present when the input is a rack (`SteerResult.input`), absent for a pitman arm
+   */
+  rack?: Mm;
+  /**
+   * deg, the pitman arm's swing from straight ahead about the steering box's output axis, positive when its ball
+   * moves toward the vehicle's left (+y); present when the input is a pitman arm (addition), absent for a rack
+   */
+  pitman?: Deg;
   /** deg, the left wheel's steer angle from straight ahead in top view, positive when it turns toward the vehicle's left (yaw) */
   leftSteer: Deg;
   /** deg, the right wheel's steer angle, same sign as `leftSteer` */
@@ -325,14 +347,19 @@ export interface SteerRow {
   turningRadius: Mm | null;
   /** mm, largest absolute constraint residual */
   bind: Mm;
-  /** poses of every moving body, for drawing the wheels turned (the rack's points move by `rack` along `rackDirection`) */
+  /**
+   * poses of every moving body, for drawing the wheels turned (the rack's points move by `rack` along `rackDirection`;
+   * the pitman arm's ball turns by `pitman` about `SteerResult.pitmanArm`'s axis)
+   */
   bodies: BodyPoses;
 }
 
-/** Toe change over heave at one rack position (addition: the bump-steer map). */
+/** Toe change over heave at one steering position (addition: the bump-steer map). */
 export interface BumpSteerCurve {
-  /** mm, the rack position the curve is taken at (0: straight ahead) */
-  rack: Mm;
+  /** mm, the rack position the curve is taken at (0: straight ahead); absent for a pitman arm */
+  rack?: Mm;
+  /** deg, the pitman arm's swing the curve is taken at (0: straight ahead); absent for a rack (addition) */
+  pitman?: Deg;
   /** ordered droop → bump; rows past a lock-up at this rack position are left out */
   points: {
     /** mm, heave travel */
@@ -350,8 +377,8 @@ export interface BumpSteerMap {
   curves: BumpSteerCurve[];
   /** deg, the toe change of largest size over every curve and both wheels (signed, positive toe-in); null without points */
   worst: Deg | null;
-  /** where the worst value is; null with `worst` */
-  worstAt: { rack: Mm; travel: Mm; side: 'left' | 'right' } | null;
+  /** where the worst value is (at `rack` or `pitman`, as the rows); null with `worst` */
+  worstAt: { rack?: Mm; pitman?: Deg; travel: Mm; side: 'left' | 'right' } | null;
 }
 
 export type SteerEventKind =
@@ -362,37 +389,54 @@ export type SteerEventKind =
   // the linkage cannot follow the rack any further for another reason (a wishbone or the wheel's height)
   | 'steer-lock-up';
 
-/** A steer sweep event (addition): shaped like SweepEvent, `at` in mm of rack travel. */
+/** A steer sweep event (addition): shaped like SweepEvent, `at` in the input's unit (mm of rack, degrees of pitman arm). */
 export interface SteerEvent {
   kind: SteerEventKind;
   sweep: 'steer';
-  /** mm of rack travel (the toggle's interpolated by bisection) */
-  at: Mm;
-  /** the side whose tie rod comes into line, for steer-toggle */
+  /** mm of rack travel, or degrees of pitman arm (the toggle's interpolated by bisection) */
+  at: number;
+  /** the side whose tie rod comes into line, for steer-toggle (the drag link's knuckle side for the drag link) */
   side?: 'left' | 'right';
+  /** which rod and arm come into line, for steer-toggle (addition; absent: a tie rod) */
+  part?: 'tie-rod' | 'drag-link' | 'pitman-arm';
   /** deg, the wheels' steer angles at the lock */
   leftSteer: Deg;
   rightSteer: Deg;
-  /** one plain sentence for the flags list, naming the field (`sweep.steer.rack`) where the travel asked is past reach */
+  /** one plain sentence for the flags list, naming the field (`sweep.steer.rack`, `.pitman`) where the travel asked is past reach */
   message: string;
 }
 
 /** The steer sweep (addition; docs/sketch-format.md, "The steer sweep"). */
 export interface SteerResult {
-  /** what the steering input is: a rack moved along a line (mm) */
-  input: 'rack';
-  /** ordered −rack → +rack, the travel 0 row (straight ahead) included; empty when the sketch does not steer */
+  /**
+   * what the steering input is, and so the rows' field that holds its position: a rack moved along a line (`rack`,
+   * mm), or a pitman arm swung about the steering box's output axis (`pitman`, degrees; addition)
+   */
+  input: 'rack' | 'pitman';
+  /** ordered −travel → +travel, the 0 row (straight ahead) included; empty when the sketch does not steer */
   rows: SteerRow[];
   /** unit vector the rack moves along for positive travel (y > 0); null when the sketch does not steer */
   rackDirection: { x: number; y: number; z: number } | null;
   /** ids of the frame points the rack moves (the tie rods' inner ends) */
   rackPoints: string[];
-  /** mm, the rack travel reached each way (the lock): the first and last rows' `rack` */
+  /** mm, the rack travel reached each way (the lock): the first and last rows' `rack`; 0 for a pitman arm */
   rackMin: Mm;
   rackMax: Mm;
+  /**
+   * the pitman arm (addition; when `input` is 'pitman'): the ball's point id, the box pivot, the unit output axis
+   * (oriented so that a positive swing moves the ball toward +y), the arm's length, and the swing reached each way
+   */
+  pitmanArm?: {
+    ball: string;
+    pivot: { x: Mm; y: Mm; z: Mm };
+    axis: { x: number; y: number; z: number };
+    length: Mm;
+    min: Deg;
+    max: Deg;
+  };
   /** lock and toggle, one event each way */
   events: SteerEvent[];
-  /** toe change over heave at straight ahead and at rack positions out to lock; null when the sketch does not steer */
+  /** toe change over heave at straight ahead and at steering positions out to lock; null when the sketch does not steer */
   bumpSteer: BumpSteerMap | null;
   /** why there is no steer sweep, naming the field (the sentence is in `warnings` too); null when there is one */
   problem: string | null;

@@ -26,11 +26,13 @@ import {
   MAX_MEMBERS,
   MAX_NAME_LENGTH,
   MAX_POINTS,
+  MAX_PITMAN_SWING_DEG,
   MAX_RACK_TRAVEL_MM,
   MAX_ROLL_DEG,
   MAX_SWEEP_ROWS,
   MAX_TRAVEL_MM,
   MIN_MEMBER_LENGTH_MM,
+  pitmanLayouts,
 } from './sketchVocabulary';
 
 export * from './sketchVocabulary';
@@ -118,9 +120,11 @@ export const sweepSettingsSchema = z
      */
     steer: z
       .looseObject({
-        /** mm each way, positive */
-        rack: z.number().gt(0).max(MAX_RACK_TRAVEL_MM),
-        /** mm, positive, at most `rack` */
+        /** mm each way, positive (a layout steered by a rack) */
+        rack: z.number().gt(0).max(MAX_RACK_TRAVEL_MM).optional(),
+        /** degrees each way, positive (addition: a layout steered by a pitman arm, `pitmanLayouts`) */
+        pitman: z.number().gt(0).max(MAX_PITMAN_SWING_DEG).optional(),
+        /** mm of rack or degrees of pitman arm, positive, at most the travel */
         step: z.number().gt(0).max(MAX_RACK_TRAVEL_MM),
       })
       .optional(),
@@ -168,6 +172,13 @@ const baseSketchSchema = z.looseObject({
       right: z.looseObject({ inner: id, innerAxis: id, outer: id, outerAxis: id }).optional(),
     })
     .optional(),
+  /**
+   * A steering box's pitman arm (addition, `pitmanLayouts`): frame points `pivot` (where the box's output shaft
+   * carries the arm) and `axis` (a second point on that shaft's axis), and `ball` (the arm's ball, where the drag
+   * link starts). Each is optional here so that a sketch missing one still sweeps heave and roll; the steer sweep
+   * names what is missing (docs/design/steered-front-axle.md).
+   */
+  pitmanArm: z.looseObject({ pivot: id.optional(), axis: id.optional(), ball: id.optional() }).optional(),
   sweep: sweepSettingsSchema,
   /** the designer's target bands (addition; boardFields.ts) */
   targets: targetsSchema.optional(),
@@ -205,6 +216,50 @@ function checkWishboneArms(s: BaseSketch, report: Report): void {
   }
 }
 
+/**
+ * `sweep.steer`'s input: a rack (mm) for a layout steered by a rack, a pitman arm's swing (degrees) for one steered
+ * by a pitman arm, never both; the step at most the travel. Returns the steer rows it asks for (0 when refused).
+ */
+function checkSteerInput(
+  layout: BaseSketch['layout'],
+  steer: NonNullable<BaseSketch['sweep']['steer']>,
+  report: Report,
+) {
+  const path = ['sweep', 'steer'];
+  const pitmanLayout = pitmanLayouts.includes(layout);
+  if (steer.rack !== undefined && steer.pitman !== undefined) {
+    report([...path, 'pitman'], 'give rack (mm) or pitman (degrees), not both');
+    return 0;
+  }
+  if (pitmanLayout && steer.rack !== undefined) {
+    report(
+      [...path, 'rack'],
+      `the ${layout} layout turns a pitman arm, not a rack: give sweep.steer.pitman (degrees each way) instead`,
+    );
+    return 0;
+  }
+  if (!pitmanLayout && steer.pitman !== undefined) {
+    report([...path, 'pitman'], `the ${layout} layout has no pitman arm: give sweep.steer.rack (mm each way) instead`);
+    return 0;
+  }
+  const travel = pitmanLayout ? steer.pitman : steer.rack;
+  if (travel === undefined) {
+    report(
+      [...path, pitmanLayout ? 'pitman' : 'rack'],
+      pitmanLayout ? 'required, the pitman arm swing in degrees each way' : 'required, the rack travel in mm each way',
+    );
+    return 0;
+  }
+  // A block whose own fields are refused by the field schemas adds no second problem here.
+  if (!(travel > 0 && steer.step > 0)) return 0;
+  if (steer.step > travel)
+    report(
+      [...path, 'step'],
+      pitmanLayout ? `must be at most the pitman swing (${travel}°)` : `must be at most the rack travel (${travel} mm)`,
+    );
+  return gridCount(-travel, travel, steer.step);
+}
+
 /** The rules that join fields together; each problem names the field it is about. */
 function checkCrossFields(s: BaseSketch, report: Report): void {
   const points = new Map<string, BaseSketch['points'][number]>();
@@ -222,10 +277,14 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
     if (!b) report(['members', i, 'b'], `no point '${m.b}'`);
     if (!a || !b) return;
     if (m.kind === 'hinge') {
-      if (a.body !== 'frame')
-        report(['members', i, 'a'], `a hinge axis point must be on the frame ('${a.id}' is on '${a.body}')`);
-      if (b.body !== 'frame')
-        report(['members', i, 'b'], `a hinge axis point must be on the frame ('${b.id}' is on '${b.body}')`);
+      // A knuckle turns about its kingpin axis on the axle; an arm about two frame pivots.
+      const axisBody = m.body.startsWith('knuckle-') ? 'axle' : 'frame';
+      const where =
+        axisBody === 'axle'
+          ? "a knuckle's hinge (kingpin) axis point must be on the axle"
+          : 'a hinge axis point must be on the frame';
+      if (a.body !== axisBody) report(['members', i, 'a'], `${where} ('${a.id}' is on '${a.body}')`);
+      if (b.body !== axisBody) report(['members', i, 'b'], `${where} ('${b.id}' is on '${b.body}')`);
       if (!s.points.some((p) => p.body === m.body)) report(['members', i, 'body'], `no point is on '${m.body}'`);
     } else if (a.body === b.body) {
       report(['members', i, 'b'], `joins two points of one body ('${m.a}' and '${m.b}' are both on '${a.body}')`);
@@ -349,11 +408,7 @@ function checkCrossFields(s: BaseSketch, report: Report): void {
   }
 
   const sw = s.sweep;
-  // A steer block whose own fields are refused above adds no second problem here.
-  const steer = sw.steer && sw.steer.rack > 0 && sw.steer.step > 0 ? sw.steer : null;
-  if (steer && steer.step > steer.rack)
-    report(['sweep', 'steer', 'step'], `must be at most the rack travel (${steer.rack} mm)`);
-  const steerRows = steer ? gridCount(-steer.rack, steer.rack, steer.step) : 0;
+  const steerRows = sw.steer ? checkSteerInput(s.layout, sw.steer, report) : 0;
   const rows = gridCount(sw.droop, sw.bump, sw.step) + gridCount(-sw.roll, sw.roll, sw.rollStep) + steerRows;
   if (rows > MAX_SWEEP_ROWS) {
     report(

@@ -6,7 +6,7 @@
  * already validated, and carrying zod there would only add to the download.
  * Lengths in mm, angles in degrees, torques in N·m.
  */
-/** The six layouts a sketch can come from (the starter it was built from). */
+/** The seven layouts a sketch can come from (the starter it was built from). */
 export const layouts = [
   'four-link-lateral-rod',
   'triangulated-four-link',
@@ -14,6 +14,8 @@ export const layouts = [
   'leaf-spring',
   'trailing-arm',
   'double-wishbone',
+  // Addition: a front solid axle on links and a track bar, its knuckles on kingpins, steered by a pitman arm.
+  'steered-front-axle',
 ] as const;
 export type Layout = (typeof layouts)[number];
 
@@ -59,7 +61,10 @@ export const memberKinds = [
 ] as const;
 export type MemberKind = (typeof memberKinds)[number];
 
-/** Bodies that turn about a `hinge`: the trailing arms and the wishbone arm bodies. */
+/**
+ * Bodies that turn about a `hinge`: the trailing arms and the wishbone arm bodies about two frame pivots, and
+ * (addition) a solid axle's knuckles about their kingpin axis through two axle points.
+ */
 export const hingeBodyIds = [
   'arm-left',
   'arm-right',
@@ -67,6 +72,8 @@ export const hingeBodyIds = [
   'lower-arm-left',
   'upper-arm-right',
   'lower-arm-right',
+  'knuckle-left',
+  'knuckle-right',
 ] as const;
 export type HingeBodyId = (typeof hingeBodyIds)[number];
 /** The wishbone arm bodies (each needs its hinge and its ball joint). */
@@ -92,6 +99,13 @@ export const MAX_ROLL_DEG = 45;
  * 75 mm each way), so a slip of a digit is refused rather than marched.
  */
 export const MAX_RACK_TRAVEL_MM = 500;
+/**
+ * Degrees, the most pitman arm swing a steer sweep may ask for each way: a steering box turns its arm about 45°
+ * each way, so anything past a quarter turn is a slip of a digit.
+ */
+export const MAX_PITMAN_SWING_DEG = 90;
+/** The layouts whose steer sweep turns a pitman arm (`sweep.steer.pitman`); every other steered layout moves a rack. */
+export const pitmanLayouts: readonly Layout[] = ['steered-front-axle'];
 export const MAX_ID_LENGTH = 64;
 export const MAX_NAME_LENGTH = 200;
 /** A member shorter than this is a drawing slip (two pivots on top of each other), not a part. */

@@ -4,7 +4,7 @@
  * one source.
  */
 import { starters } from '../kinematics/starters';
-import { SOLID_AXLE } from '../kinematics/metrics/registry/layouts';
+import { SOLID_AXLE, STEERED } from '../kinematics/metrics/registry/layouts';
 import type { AxleEnd, Layout } from '../schema/sketch';
 import type { SuspensionDescriptor } from './types';
 
@@ -42,6 +42,10 @@ export const suspensions: Record<Layout, SuspensionDescriptor> = {
     moving: { legend: 'arm / knuckle', pivotsTitle: 'Knuckle pivots' },
     antiSquatFrom: 'contact-patch',
   },
+  'steered-front-axle': {
+    ...solidAxle('steered-front-axle', { legend: 'axle / knuckle', pivotsTitle: 'Axle and knuckle pivots' }),
+    crossView: 'front',
+  },
 };
 
 /** The descriptor of a layout, or null for a name that is not one (a document from elsewhere). */
@@ -73,7 +77,12 @@ export function crossViewOf(
   return d.crossView;
 }
 
-/** Whether the layout carries its wheels on one solid axle (the board offers the front / rear choice). */
+/**
+ * Whether the layout carries its wheels on one solid axle whose end the sketch chooses (the board offers the front /
+ * rear choice); a steered axle is always the front.
+ */
 export function hasSolidAxle(layout: string | null | undefined): boolean {
-  return (SOLID_AXLE as readonly string[]).includes(layout ?? '');
+  return (
+    (SOLID_AXLE as readonly string[]).includes(layout ?? '') && !(STEERED as readonly string[]).includes(layout ?? '')
+  );
 }

@@ -75,6 +75,39 @@ describe('POST /api/sweep', () => {
     expect(res.body.warnings).toContain(res.body.steer.problem);
   });
 
+  it('answers the steered front axle: pitman rows, a pitman arm missing its box pivot, a rack refused', async () => {
+    const doc = starters['steered-front-axle']!.build();
+    const res = await guest.post('/api/sweep').send(doc);
+    expect(res.status).toBe(200);
+    expect(res.body.steer.input).toBe('pitman');
+    expect(res.body.steer.rows).toHaveLength(29);
+    expect(res.body.steer.rows[0]).toMatchObject({ pitman: -35 });
+    expect(res.body.ride.wheelSteer).toEqual({ left: 0, right: 0 });
+
+    const noPivot = { ...doc, pitmanArm: { axis: 'SB.a', ball: 'PM.b' } };
+    const missing = await guest.post('/api/sweep').send(noPivot);
+    expect(missing.status).toBe(200);
+    expect(missing.body.steer.rows).toEqual([]);
+    expect(missing.body.steer.problem).toMatch(/^pitmanArm\.pivot: the pitman arm has no box pivot/);
+    expect(missing.body.warnings).toContain(missing.body.steer.problem);
+    expect(missing.body.heave).toEqual(JSON.parse(JSON.stringify(runSweep(doc).heave)));
+    expect(missing.body.roll.length).toBeGreaterThan(0);
+
+    const rack = { ...doc, sweep: { ...doc.sweep, steer: { rack: 40, step: 5 } } };
+    const refused = await guest.post('/api/sweep').send(rack);
+    expect(refused.status).toBe(400);
+    expect(refused.body.details).toContain(
+      'sweep.steer.rack: the steered-front-axle layout turns a pitman arm, not a rack: give sweep.steer.pitman (degrees each way) instead',
+    );
+
+    const far = { ...doc, sweep: { ...doc.sweep, steer: { pitman: 90, step: 5 } } };
+    const past = await guest.post('/api/sweep').send(far);
+    expect(past.status).toBe(200);
+    expect(past.body.steer.events[1].message).toMatch(
+      /^sweep\.steer\.pitman: -90\.0° is past the steering linkage's reach/,
+    );
+  });
+
   it('answers 200 with the toggle named for a rack travel past the tie rods’ reach, heave and roll as always', async () => {
     const doc = starters['double-wishbone']!.build();
     const far = { ...doc, sweep: { ...doc.sweep, steer: { rack: 100, step: 5 } } };

@@ -18,7 +18,7 @@ import { march, solveStart, type MarchContext } from '../../shared/kinematics/ma
 import { linkageModelBuild } from '../../shared/kinematics/model';
 import { heaveRowBuild, rowPlanBuild } from '../../shared/kinematics/rows';
 import { PoseSolver } from '../../shared/kinematics/solve';
-import { rackSweep, steeringOf } from '../../shared/kinematics/steer/sweep';
+import { steerInputSweep, steeringOf } from '../../shared/kinematics/steer/sweep';
 
 const FULL = { droop: -150, bump: 150, step: 5, roll: 8, rollStep: 1 };
 const GRID = { droop: -150, bump: 150, step: 15, roll: 8, rollStep: 0.8 };
@@ -104,7 +104,7 @@ function steerTable(): void {
   };
   const linkage = steeringOf(model);
   if (typeof linkage === 'string') throw new Error(linkage);
-  const steer = () => rackSweep(ctx, linkage, ride.state, 60, 5).rows;
+  const steer = () => steerInputSweep(ctx, linkage, ride.state, 60, 5).rows;
   const heaveRows = heave().length;
   const steerRows = steer().length;
   const h = time(heave, 400);

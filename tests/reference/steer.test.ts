@@ -5,7 +5,7 @@
  *    each wishbone from its frame pivots to the ball joint, and the tie rod from the rack end moved along
  *    the rack line), its wheel centre held at ride height: Newton's method on the five length residuals
  *    over the knuckle's rotation vector (Rodrigues' formula) and its x, y translation, with a numerical
- *    Jacobian and ml-matrix's LU solve, stepping the rack from centre in 1 mm steps to stay on the
+ *    Jacobian and ml-matrix's QR (rigidPose.ts), stepping the rack from centre in 1 mm steps to stay on the
  *    linkage's branch. The steer angle is the heading of the line where the wheel plane meets the ground
  *    (n × up, n the spin axis): plain vector geometry.
  * 2. A planar trapezoid (vertical kingpins, level steering arms, level tie rods and rack): each knuckle's
@@ -19,28 +19,11 @@ import { Matrix, solve } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { runSweep, starters } from '../../shared/kinematics';
 import type { SketchInput } from '../../shared/schema/sketch';
+import { DEG, gaussNewton, headingOfSpin, norm, rodrigues, sub, type V3 } from './rigidPose';
 import { wishboneSketch, type WishboneRig } from './wishboneRigs';
 
-type V3 = [number, number, number];
-const DEG = Math.PI / 180;
 /** deg: the sweep's solve converges to 1e-6 mm over arms of ~150 mm, far below this */
 const ANGLE_TOL_DEG = 1e-5;
-
-const sub = (a: V3, b: V3): V3 => [a[0] - b[0], a[1] - b[1], a[2] - b[2]];
-const norm = (a: V3) => Math.hypot(a[0], a[1], a[2]);
-const cross = (a: V3, b: V3): V3 => [a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2], a[0] * b[1] - a[1] * b[0]];
-
-/** Rodrigues' rotation of v by the rotation vector w (rad). */
-function rodrigues(w: V3, v: V3): V3 {
-  const th = norm(w);
-  if (th < 1e-15) return [...v];
-  const k: V3 = [w[0] / th, w[1] / th, w[2] / th];
-  const kv = cross(k, v);
-  const kd = k[0] * v[0] + k[1] * v[1] + k[2] * v[2];
-  const c = Math.cos(th),
-    s = Math.sin(th);
-  return [0, 1, 2].map((i) => v[i] * c + kv[i] * s + k[i] * kd * (1 - c)) as V3;
-}
 
 /** One knuckle on five links, from the sketch's points (ids of the double-wishbone starter). */
 function knuckleRig(doc: SketchInput, s: 'l' | 'r') {
@@ -78,34 +61,14 @@ function residuals(rig: Rig, q: number[], rack: number): number[] {
 }
 
 function newton(rig: Rig, start: number[], rack: number): number[] {
-  const q = [...start];
-  const h = 1e-7;
-  for (let it = 0; it < 50; it++) {
-    const r = residuals(rig, q, rack);
-    if (Math.max(...r.map(Math.abs)) < 1e-11) break;
-    const J = new Matrix(5, 5);
-    for (let k = 0; k < 5; k++) {
-      const up = [...q],
-        dn = [...q];
-      up[k] += h;
-      dn[k] -= h;
-      const ru = residuals(rig, up, rack),
-        rd = residuals(rig, dn, rack);
-      for (let i = 0; i < 5; i++) J.set(i, k, (ru[i] - rd[i]) / (2 * h));
-    }
-    const dq = solve(J, Matrix.columnVector(r.map((v) => -v)));
-    for (let k = 0; k < 5; k++) q[k] += dq.get(k, 0);
-  }
+  const q = gaussNewton((x) => residuals(rig, x, rack), start);
   expect(Math.max(...residuals(rig, q, rack).map(Math.abs))).toBeLessThan(1e-9);
   return q;
 }
 
 /** deg, the wheel's heading (positive to the vehicle's left) from the solved rotation vector. */
 function heading(rig: Rig, q: number[]): number {
-  const n = rodrigues([q[0], q[1], q[2]], [0, rig.side === 'l' ? 1 : -1, 0]);
-  let f = cross(n, [0, 0, 1]);
-  if (f[0] < 0) f = [-f[0], -f[1], -f[2]];
-  return Math.atan2(f[1], f[0]) / DEG;
+  return headingOfSpin(rodrigues([q[0], q[1], q[2]], [0, rig.side === 'l' ? 1 : -1, 0]));
 }
 
 /** The knuckle's heading at each rack value, reached from centre in 1 mm steps. */
@@ -187,8 +150,8 @@ describe('Ackermann, turning radius and the toggle on a trapezoid solved by hand
 
   it('turns each wheel by the closed-form angle of its four-bar', () => {
     for (const row of steer.rows) {
-      expect(row.leftSteer, `rack ${row.rack}`).toBeCloseTo(trapezoidAngle(1, row.rack), 6);
-      expect(row.rightSteer, `rack ${row.rack}`).toBeCloseTo(trapezoidAngle(-1, row.rack), 6);
+      expect(row.leftSteer, `rack ${row.rack}`).toBeCloseTo(trapezoidAngle(1, row.rack!), 6);
+      expect(row.rightSteer, `rack ${row.rack}`).toBeCloseTo(trapezoidAngle(-1, row.rack!), 6);
     }
   });
 
@@ -200,8 +163,8 @@ describe('Ackermann, turning radius and the toggle on a trapezoid solved by hand
         expect(row.ackermann).toBeNull();
         continue;
       }
-      const l = trapezoidAngle(1, row.rack) * DEG,
-        r = trapezoidAngle(-1, row.rack) * DEG;
+      const l = trapezoidAngle(1, row.rack!) * DEG,
+        r = trapezoidAngle(-1, row.rack!) * DEG;
       // The pair turns toward the side of the larger angle; the inner wheel is on that side.
       const left = l + r > 0;
       const inner = Math.abs(left ? l : r),

@@ -7,6 +7,7 @@ import type { Layout } from '../../schema/sketch';
 import { doubleWishboneLayout } from './double-wishbone';
 import { fourLinkLateralRodLayout } from './four-link-lateral-rod';
 import { leafSpringLayout } from './leaf-spring';
+import { steeredFrontAxleLayout } from './steered-front-axle';
 import { threeLinkLateralRodLayout } from './three-link-lateral-rod';
 import { trailingArmLayout } from './trailing-arm';
 import { triangulatedFourLinkLayout } from './triangulated-four-link';
@@ -19,6 +20,7 @@ export const layoutModules: Record<Layout, LayoutModule> = {
   'leaf-spring': leafSpringLayout,
   'trailing-arm': trailingArmLayout,
   'double-wishbone': doubleWishboneLayout,
+  'steered-front-axle': steeredFrontAxleLayout,
 };
 
 export type { LayoutModule, LayoutReader, LayoutRowPlan, PlacePoint } from './types';

@@ -10,6 +10,7 @@ import { halfShaftReader } from '../halfShaft';
 import { doubleWishboneReader } from './double-wishbone/reader';
 import { leafSpringReader } from './leaf-spring/reader';
 import { solidAxleLinksReader } from './solid-axle-links/reader';
+import { steeredFrontAxleReader } from './steered-front-axle/reader';
 import { trailingArmReader } from './trailing-arm/reader';
 import type { LayoutReader } from './types';
 
@@ -19,4 +20,5 @@ export const layoutReaders: readonly LayoutReader[] = [
   halfShaftReader,
   leafSpringReader,
   doubleWishboneReader,
+  steeredFrontAxleReader,
 ];

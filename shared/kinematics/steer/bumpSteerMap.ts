@@ -1,6 +1,6 @@
 /**
- * Bump steer at straight ahead and out to lock: with the rack held at a few positions (centre, half
- * way to each lock, each lock), the heave march of march.ts from that steer row, and each wheel's toe
+ * Bump steer at straight ahead and out to lock: with the steering input (rack or pitman arm) held at a few
+ * positions (centre, half way to each lock, each lock), the heave march of march.ts from that steer row, and each wheel's toe
  * change from the row at travel 0 there. Toe as the heave rows' (positive toe-in), so the straight-ahead
  * curve's left wheel is the heave sweep's `toeChange`. The heave grid is coarser than the sweep's
  * (at most MAP_INTERVALS steps over the travel): the map is for its shape and its worst value.
@@ -9,27 +9,27 @@ import { marchPlan } from '../grid';
 import { march, rowRateFor, type SolvedRow } from '../march';
 import type { BumpSteerCurve, BumpSteerMap } from '../types';
 import { cleanZero } from '../clean';
-import { rackSet } from './linkage';
-import type { RackContext, RackSolved } from './march';
+import { steerInputField, steerInputSet } from './linkage';
+import type { InputContext, InputSolved } from './march';
 import { steerAngle } from './rows';
 
 /** Heave steps of each curve over the whole travel, at most (fewer when the sweep's own step is coarser). */
 export const MAP_INTERVALS = 12;
 
-/** The rack positions of the map: each lock, half way to it, and centre (ordered −lock … +lock, no repeats). */
-export function mapRackPositions(rows: readonly RackSolved[]): RackSolved[] {
+/** The input positions of the map: each lock, half way to it, and centre (ordered −lock … +lock, no repeats). */
+export function mapRackPositions(rows: readonly InputSolved[]): InputSolved[] {
   if (rows.length === 0) return [];
   const nearest = (target: number) =>
-    rows.reduce((a, b) => (Math.abs(b.rack - target) < Math.abs(a.rack - target) ? b : a));
-  const lo = rows[0].rack;
-  const hi = rows[rows.length - 1].rack;
+    rows.reduce((a, b) => (Math.abs(b.at - target) < Math.abs(a.at - target) ? b : a));
+  const lo = rows[0].at;
+  const hi = rows[rows.length - 1].at;
   const picks = [lo, lo / 2, 0, hi / 2, hi].map(nearest);
   return [...new Set(picks)];
 }
 
 export function bumpSteerMap(
-  rc: RackContext,
-  at: readonly RackSolved[],
+  rc: InputContext,
+  at: readonly InputSolved[],
   droop: number,
   bump: number,
   step: number,
@@ -41,7 +41,7 @@ export function bumpSteerMap(
   let worst: BumpSteerMap['worst'] = null;
   let worstAt: BumpSteerMap['worstAt'] = null;
   for (const r of at) {
-    rackSet(input, r.rack);
+    steerInputSet(input, r.at);
     const start = rowRateFor(ctx, { travel: 0, roll: 0, state: r.state, rate: r.rate, bind: r.bind }, 'travel');
     const up = march(ctx, start, 'travel', plan.up).rows;
     const down = march(ctx, start, 'travel', plan.down).rows;
@@ -58,10 +58,10 @@ export function bumpSteerMap(
       for (const side of ['left', 'right'] as const)
         if (worst === null || Math.abs(p[side]) > Math.abs(worst)) {
           worst = p[side];
-          worstAt = { rack: r.rack, travel: p.travel, side };
+          worstAt = { ...steerInputField(input, r.at), travel: p.travel, side };
         }
-    curves.push({ rack: r.rack, points });
+    curves.push({ ...steerInputField(input, r.at), points });
   }
-  rackSet(input, 0);
+  steerInputSet(input, 0);
   return { curves, worst, worstAt };
 }

@@ -1,12 +1,14 @@
 /**
  * What a steered layout hands the steer sweep: the steering input (the frame points it moves and
  * how), and on each side the body carrying the wheel, its steering axis and its tie rod. A layout's
- * reader supplies it (`LayoutReader.steering`); the sweep never looks at `layout`. The rack is the
- * one input so far: the line through the two tie rods' inner ends, moved along itself.
+ * reader supplies it (`LayoutReader.steering`); the sweep never looks at `layout`. Two inputs: a rack
+ * (the line through the two tie rods' inner ends, moved along itself, mm) and a pitman arm (its ball
+ * swung about the steering box's output axis, degrees; pitman.ts).
  */
 import { MIN_MEMBER_LENGTH_MM } from '../../schema/sketchVocabulary';
 import type { BodyModel, PointModel } from '../model';
 import { vec, vecLength, vecScale, vecSub, type Vec3 } from '../vec';
+import { pitmanSet, pitmanVelocity, type PitmanInput } from './pitman';
 
 /** One side of a steered front. */
 export interface SteerSide {
@@ -16,7 +18,10 @@ export interface SteerSide {
   wheel: PointModel;
   /** two points on the steering axis, lower then upper (the ball joints) */
   axis: [PointModel, PointModel];
-  /** the tie rod: `inner` moved by the input, `outer` on the steering arm */
+  /**
+   * the tie rod: `outer` on this side's steering arm, `inner` its other end (moved by a rack; on a solid axle the
+   * other knuckle's arm)
+   */
   tieRod: { member: string; inner: PointModel; outer: PointModel };
 }
 
@@ -29,10 +34,50 @@ export interface RackInput {
   direction: Vec3;
 }
 
+export type SteerInput = RackInput | PitmanInput;
+
+/**
+ * A pitman arm's drag link (addition): from the arm's ball (`ball`, a frame point the input swings) to the
+ * steering arm of one knuckle (`arm`, on `side`'s body). The lock also looks for it in line with either arm.
+ */
+export interface DragLink {
+  member: string;
+  ball: PointModel;
+  arm: PointModel;
+  side: 'left' | 'right';
+}
+
 export interface SteerLinkage {
-  input: RackInput;
+  input: SteerInput;
   left: SteerSide;
   right: SteerSide;
+  /** the drag link, when the input is a pitman arm */
+  dragLink?: DragLink;
+}
+
+/** The frame points an input moves, each with where it sits straight ahead. */
+export function steerInputPoints(input: SteerInput): { point: PointModel; centre: Vec3 }[] {
+  return input.kind === 'rack' ? input.points : [input.ball];
+}
+
+/**
+ * Moves the input to `at` (mm of rack, degrees of pitman arm): its frame points' positions in the model. The
+ * solver reads a frame point where the model places it, so this is what the steer sweep imposes;
+ * `steerInputSet(input, 0)` puts them back where the sketch has them.
+ */
+export function steerInputSet(input: SteerInput, at: number): void {
+  if (input.kind === 'rack') rackSet(input, at);
+  else pitmanSet(input, at);
+}
+
+/** A row's field holding the input's position: `{ rack }` (mm) or `{ pitman }` (degrees). */
+export function steerInputField(input: SteerInput, at: number): { rack: number } | { pitman: number } {
+  return input.kind === 'rack' ? { rack: at } : { pitman: at };
+}
+
+/** mm per unit of input (mm of rack, degree of pitman arm): how fast the input moves its frame point at `at`. */
+export function steerInputVelocity(input: SteerInput, at: number): Vec3 {
+  return input.kind === 'rack' ? input.direction : pitmanVelocity(input, at);
 }
 
 /**

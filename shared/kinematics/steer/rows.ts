@@ -11,8 +11,8 @@ import { mat3Apply, poseFromState, rotationSetCreate, rotationSetFill, POSE_ROLL
 import { BodyRotations, pointPlace } from '../residuals';
 import type { BodyPoses, SteerRow } from '../types';
 import { vec, type Vec3 } from '../vec';
-import type { SteerLinkage, SteerSide } from './linkage';
-import type { RackSolved } from './march';
+import { steerInputField, type SteerLinkage, type SteerSide } from './linkage';
+import type { InputSolved } from './march';
 import { ackermannPercent, innerOuter, turningRadius } from './readings';
 
 /** What every row of one sweep shares: the wheelbase, the ground's height and the rear axle line. */
@@ -49,8 +49,11 @@ export function steerRowPlanBuild(model: LinkageModel, linkage: SteerLinkage): S
 const spinScratch = rotationSetCreate();
 const spinOut = new Float64Array(3);
 
+/** What a steer angle is read from: the body carrying the wheel, and its side. */
+type SteeredBody = Pick<SteerSide, 'body' | 'side'>;
+
 /** The wheel's outward spin axis (unit) in the state. */
-function spinAxis(state: Float64Array, s: SteerSide): Vec3 {
+function spinAxis(state: Float64Array, s: SteeredBody): Vec3 {
   const o = s.body.slot * POSE_SIZE + POSE_ROLL;
   rotationSetFill(spinScratch, state[o], state[o + 1], state[o + 2]);
   mat3Apply(spinScratch, 0, 0, s.side === 'left' ? 1 : -1, 0, spinOut, 0);
@@ -61,7 +64,7 @@ function spinAxis(state: Float64Array, s: SteerSide): Vec3 {
  * deg, a wheel's steer angle: positive toward the vehicle's left (yaw). A left wheel toed in points its
  * nose right, so its steer angle is minus its toe; a right wheel toed in points left.
  */
-export function steerAngle(state: Float64Array, s: SteerSide): number {
+export function steerAngle(state: Float64Array, s: SteeredBody): number {
   const toe = toeOfAxis(spinAxis(state, s), s.side);
   return s.side === 'left' ? -toe : toe;
 }
@@ -105,7 +108,7 @@ function bodiesOf(model: LinkageModel, state: Float64Array): BodyPoses {
   return out;
 }
 
-export function steerRowBuild(plan: SteerRowPlan, solved: RackSolved): SteerRow {
+export function steerRowBuild(plan: SteerRowPlan, solved: InputSolved): SteerRow {
   const { state } = solved;
   const { left, right } = plan.linkage;
   const leftSteer = steerAngle(state, left);
@@ -126,7 +129,7 @@ export function steerRowBuild(plan: SteerRowPlan, solved: RackSolved): SteerRow 
     if (patch) radius = turningRadius(patch, io.sense > 0 ? rightSteer : leftSteer, plan.rearX);
   }
   return {
-    rack: solved.rack,
+    ...steerInputField(plan.linkage.input, solved.at),
     leftSteer: cleanZero(leftSteer),
     rightSteer: cleanZero(rightSteer),
     ackermann: ackermann === null ? null : cleanZero(ackermann),

@@ -1,9 +1,10 @@
 /**
- * The steer sweep (docs/sketch-format.md, "The steer sweep"): the rack marched from centre out to
- * `sweep.steer.rack` each way by `step`, the body at ride height, then the lock each way as an event
- * and the bump-steer map out to lock. Run by `sweepSketch` after the heave and roll sweeps, on their
- * solver; the rack's points are put back where the sketch has them before it returns. A sketch that
- * does not steer gets an empty result whose `problem` names the field, never an exception.
+ * The steer sweep (docs/sketch-format.md, "The steer sweep"): the steering input (a rack, `sweep.steer.rack` mm
+ * each way; or a pitman arm, `sweep.steer.pitman` degrees each way) marched from centre by `step`, the body at
+ * ride height, then the lock each way as an event and the bump-steer map out to lock. Run by `sweepSketch` after
+ * the heave and roll sweeps, on their solver; the input's points are put back where the sketch has them before
+ * it returns. A sketch that does not steer gets an empty result whose `problem` names the field, never an
+ * exception.
  */
 import type { Sketch } from '../../schema/sketch';
 import { marchPlan } from '../grid';
@@ -13,8 +14,8 @@ import type { LinkageModel } from '../model';
 import type { SteerResult, SteerRow } from '../types';
 import { bumpSteerMap, mapRackPositions } from './bumpSteerMap';
 import { lockEvent } from './events';
-import { rackSet, type SteerLinkage } from './linkage';
-import { marchRack, rackContextBuild, rackStart, type RackContext, type RackSolved } from './march';
+import { steerInputSet, type SteerLinkage } from './linkage';
+import { marchInput, inputContextBuild, inputStart, type InputContext, type InputSolved } from './march';
 import { steerRowBuild, steerRowPlanBuild } from './rows';
 
 /** The steering a layout reader finds in the model; a sentence naming the problem when nothing can steer. */
@@ -28,13 +29,13 @@ export function steeringOf(model: LinkageModel): SteerLinkage | string {
   return (
     problem ??
     `sweep.steer: the ${model.sketch.layout} layout does not steer (a steer sweep needs knuckles with tie rods ` +
-      'from a rack), so there is no steer sweep; the heave and roll sweeps are not affected.'
+      'from a rack or a pitman arm), so there is no steer sweep; the heave and roll sweeps are not affected.'
   );
 }
 
-function noSteer(problem: string): SteerResult {
+function noSteer(problem: string, input: SteerResult['input'] = 'rack'): SteerResult {
   return {
-    input: 'rack',
+    input,
     rows: [],
     rackDirection: null,
     rackPoints: [],
@@ -46,42 +47,43 @@ function noSteer(problem: string): SteerResult {
   };
 }
 
-export interface RackSweep {
-  rc: RackContext;
-  /** solved rows, −rack → +rack */
-  solved: RackSolved[];
+export interface SteerInputSweep {
+  rc: InputContext;
+  /** solved rows, −travel → +travel */
+  solved: InputSolved[];
   rows: SteerRow[];
   events: SteerResult['events'];
 }
 
 /**
- * The rows of the rack march both ways from the solved ride state, and the lock events; the rack is left
+ * The rows of the input's march both ways from the solved ride state, and the lock events; the input is left
  * centred. The steer sweep without its bump-steer map (the benchmark times this against the heave march).
+ * `travel` and `step` in the input's unit (mm of rack, degrees of pitman arm).
  */
-export function rackSweep(
+export function steerInputSweep(
   ctx: MarchContext,
   linkage: SteerLinkage,
   rideState: Float64Array,
-  rack: number,
+  travel: number,
   step: number,
-): RackSweep {
-  const rc = rackContextBuild(ctx, linkage);
-  const start = rackStart(rc, rideState);
-  const plan = marchPlan(-rack, rack, step);
-  const left = marchRack(rc, start, plan.up);
-  const right = marchRack(rc, start, plan.down);
+): SteerInputSweep {
+  const rc = inputContextBuild(ctx, linkage);
+  const start = inputStart(rc, rideState);
+  const plan = marchPlan(-travel, travel, step);
+  const left = marchInput(rc, start, plan.up);
+  const right = marchInput(rc, start, plan.down);
   const solved = [...right.rows.slice().reverse(), start, ...left.rows];
   const events = [
-    lockEvent(ctx.model, linkage, rack, left.rows.at(-1) ?? start, left.limit),
-    lockEvent(ctx.model, linkage, -rack, right.rows.at(-1) ?? start, right.limit),
+    lockEvent(ctx.model, linkage, travel, left.rows.at(-1) ?? start, left.limit),
+    lockEvent(ctx.model, linkage, -travel, right.rows.at(-1) ?? start, right.limit),
   ];
   const rowPlan = steerRowPlanBuild(ctx.model, linkage);
   const rows = solved.map((s) => {
-    // A row reads the rack's points (the tie rods' inner ends) where the rack is at that row.
-    rackSet(linkage.input, s.rack);
+    // A row reads the input's points (the tie rods' inner ends, the pitman ball) where the input is at that row.
+    steerInputSet(linkage.input, s.at);
     return steerRowBuild(rowPlan, s);
   });
-  rackSet(linkage.input, 0);
+  steerInputSet(linkage.input, 0);
   return { rc, solved, rows, events };
 }
 
@@ -90,24 +92,53 @@ export function steerSweep(sketch: Sketch, ctx: MarchContext, rideState: Float64
   const settings = sketch.sweep.steer;
   if (!settings) return noSteer('sweep.steer: not set, so there is no steer sweep.');
   const linkage = steeringOf(ctx.model);
-  if (typeof linkage === 'string') return noSteer(linkage);
+  if (typeof linkage === 'string') return noSteer(linkage, settings.pitman !== undefined ? 'pitman' : 'rack');
+  const kind = linkage.input.kind;
+  const travel = settings[kind];
+  if (travel === undefined)
+    return noSteer(
+      `sweep.steer.${kind}: this sketch steers by a ${kind === 'rack' ? 'rack (mm each way)' : 'pitman arm (degrees each way)'}, ` +
+        'and sweep.steer does not give its travel, so there is no steer sweep; the heave and roll sweeps are not affected.',
+      kind,
+    );
   try {
-    const { rc, solved, rows, events } = rackSweep(ctx, linkage, rideState, settings.rack, settings.step);
+    const { rc, solved, rows, events } = steerInputSweep(ctx, linkage, rideState, travel, settings.step);
     const sw = sketch.sweep;
     const bumpSteer = bumpSteerMap(rc, mapRackPositions(solved), sw.droop, sw.bump, sw.step);
-    const u = linkage.input.direction;
+    const first = solved[0].at;
+    const last = solved[solved.length - 1].at;
+    const input = linkage.input;
+    if (input.kind === 'pitman') {
+      const v = (p: { x: number; y: number; z: number }) => ({ x: p.x, y: p.y, z: p.z });
+      return {
+        ...noSteer('', 'pitman'),
+        rows,
+        pitmanArm: {
+          ball: input.ball.point.id,
+          pivot: v(input.pivot),
+          axis: v(input.axis),
+          length: input.length,
+          min: first,
+          max: last,
+        },
+        events,
+        bumpSteer,
+        problem: null,
+      };
+    }
+    const u = input.direction;
     return {
       input: 'rack',
       rows,
       rackDirection: { x: u.x, y: u.y, z: u.z },
-      rackPoints: linkage.input.points.map((p) => p.point.id),
-      rackMin: rows[0].rack,
-      rackMax: rows[rows.length - 1].rack,
+      rackPoints: input.points.map((p) => p.point.id),
+      rackMin: first,
+      rackMax: last,
       events,
       bumpSteer,
       problem: null,
     };
   } finally {
-    rackSet(linkage.input, 0);
+    steerInputSet(linkage.input, 0);
   }
 }

@@ -115,6 +115,23 @@ describe('sweep command: the steer sweep', () => {
     expect(result.steer.problem).toMatch(/^sweep\.steer: /);
   });
 
+  it('prints the steered front axle starter, sweeps its pitman arm, and names a missing box pivot', () => {
+    const starter = sweepCommand(['--starter', 'steered-front-axle'], dir);
+    expect(starter.code).toBe(0);
+    const doc = JSON.parse(starter.stdout!);
+    const steered = JSON.parse(sweepCommand([write('front-axle.json', starter.stdout!)], dir).stdout!);
+    expect(steered.steer.input).toBe('pitman');
+    expect(steered.steer.rows.map((r: { pitman: number }) => r.pitman).slice(0, 2)).toEqual([-35, -32.5]);
+    const noPivot = write('no-pivot.json', JSON.stringify({ ...doc, pitmanArm: { axis: 'SB.a', ball: 'PM.b' } }));
+    const out = sweepCommand([noPivot], dir);
+    expect(out.code).toBe(0);
+    const result = JSON.parse(out.stdout!);
+    expect(result.heave).toEqual(steered.heave);
+    expect(result.roll).toEqual(steered.roll);
+    expect(result.steer.problem).toMatch(/^pitmanArm\.pivot: /);
+    expect(result.warnings).toContain(result.steer.problem);
+  });
+
   it('refuses a bad rack step with exit 2 and the field named', () => {
     const bad = write(
       'bad-steer.json',

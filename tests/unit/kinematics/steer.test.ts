@@ -73,7 +73,7 @@ describe('the steer sweep of the double-wishbone starter', () => {
 
   it('turns the mirror-image linkage the mirror-image way: left at −r is minus right at +r', () => {
     for (const r of steer.rows) {
-      const m = steer.rows.find((x) => x.rack === -r.rack)!;
+      const m = steer.rows.find((x) => x.rack === -r.rack!)!;
       // Mirror symmetry about y = 0 (the starter is built mirrored); tolerance: the solver's convergence.
       expect(r.leftSteer).toBeCloseTo(-m.rightSteer, 8);
     }

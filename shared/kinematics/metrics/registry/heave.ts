@@ -5,7 +5,7 @@
 import type { HeaveEntry, RollEntry } from './types';
 import type { HalfShaftReading, HeaveRow, SweepEvent } from '../../types';
 import type { Layout } from '../../../schema/sketchVocabulary';
-import { ALL_LAYOUTS, INDEPENDENT, LINKED_AXLE, SOLID_AXLE, WISHBONE } from './layouts';
+import { ALL_LAYOUTS, INDEPENDENT, KINGPIN, LINKED_AXLE, SOLID_AXLE, STEERED_AXLE, WISHBONE } from './layouts';
 import { ROLL_STEER_AXLE_SENSE } from './rollSteerSense';
 
 /** Layouts whose side view has an instant centre (the leaf spring's from its three-link equivalent). */
@@ -16,6 +16,7 @@ const SIDE_VIEW_IC: readonly Layout[] = [
   'trailing-arm',
   'double-wishbone',
   'leaf-spring',
+  'steered-front-axle',
 ];
 
 const POSE_AXES = [
@@ -415,6 +416,25 @@ export const heaveEntries: HeaveEntry[] = [
     group: 'axle',
     plotEmpty: '',
   },
+  ...(['left', 'right'] as const).map((side): HeaveEntry => ({
+    key: `wheelSteer.${side}`,
+    id: `wheel-steer-${side}`,
+    label: `${side === 'left' ? 'Left' : 'Right'} wheel bump steer`,
+    quantity: 'angle',
+    sweep: 'heave',
+    read: (r) => r.wheelSteer?.[side] ?? null,
+    given: given('wheelSteer'),
+    signed: true,
+    digits: 3,
+    sign: "positive when the wheel turns toward the vehicle's left (as yaw)",
+    definition:
+      `Change from ride of the ${side} wheel's heading in top view, its knuckle turned on the kingpin by the drag link ` +
+      'and tie rod as the axle moves: the bump steer.',
+    layouts: STEERED_AXLE,
+    csv: `wheelSteer.${side}`,
+    group: 'axle',
+    plotEmpty: '',
+  })),
   {
     key: 'contactTrackChange',
     id: 'contact-track',
@@ -463,7 +483,7 @@ export const heaveEntries: HeaveEntry[] = [
     signed: true,
     sign: 'positive when the top of the kingpin axis moves rearward',
     definition: "Change from ride of the left kingpin axis' side-view angle from the vertical, in the body's axes.",
-    layouts: WISHBONE,
+    layouts: KINGPIN,
     csv: 'casterChange',
     group: 'axle',
   },
@@ -603,7 +623,7 @@ export const heaveEntries: HeaveEntry[] = [
     signed: false,
     sign,
     definition,
-    layouts: WISHBONE,
+    layouts: KINGPIN,
     csv: `kingpin.${field}`,
     group: 'geometry',
     missing: 'ball joints level: no kingpin axis',

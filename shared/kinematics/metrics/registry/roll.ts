@@ -4,7 +4,7 @@
  */
 import type { LimitsEntry, RollEntry } from './types';
 import { drivelineEntries, halfShaftEntries } from './heave';
-import { ALL_LAYOUTS, INDEPENDENT, LINKED_AXLE, SOLID_AXLE } from './layouts';
+import { ALL_LAYOUTS, INDEPENDENT, LINKED_AXLE, SOLID_AXLE, STEERED_AXLE } from './layouts';
 
 import { ROLL_STEER_AXLE_SENSE } from './rollSteerSense';
 
@@ -182,6 +182,24 @@ export const rollEntries: RollEntry[] = [
       group: 'axle',
     })),
   ),
+  ...(['left', 'right'] as const).map((side): RollEntry => ({
+    key: `wheelSteer.${side}`,
+    // Apart from the heave rows' bump steer, which the same list of plots shows.
+    id: `roll-wheel-steer-${side}`,
+    label: `${side === 'left' ? 'Left' : 'Right'} wheel steer in roll`,
+    quantity: 'angle',
+    sweep: 'roll',
+    read: (r) => r.wheelSteer?.[side] ?? null,
+    given: (r) => r.wheelSteer !== undefined,
+    signed: true,
+    digits: 2,
+    sign: "positive when the wheel turns toward the vehicle's left (as yaw)",
+    definition:
+      `Change from ride, in the roll sweep, of the ${side} wheel's heading in top view: the axle's roll steer and its ` +
+      'knuckle turned by the drag link.',
+    layouts: STEERED_AXLE,
+    group: 'axle',
+  })),
   {
     key: 'rollCenterAboveGround',
     id: 'rc',

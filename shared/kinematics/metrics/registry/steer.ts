@@ -1,9 +1,10 @@
 /**
- * The quantities of the steer sweep (the rack moved, the body at ride height; steer/sweep.ts) and the
- * worst value of its bump-steer map. Signs and units as shared/kinematics/types.ts documents SteerRow.
+ * The quantities of the steer sweep (the rack moved, or the pitman arm turned, the body at ride height;
+ * steer/sweep.ts) and the worst value of its bump-steer map. Signs and units as shared/kinematics/types.ts
+ * documents SteerRow. The input's entry is keyed by the rows' field that holds it (`SteerResult.input`).
  */
 import type { BumpSteerEntry, SteerEntry } from './types';
-import { STEERED } from './layouts';
+import { RACK_STEERED, STEERED, STEERED_AXLE } from './layouts';
 
 export const steerEntries: SteerEntry[] = [
   {
@@ -16,7 +17,21 @@ export const steerEntries: SteerEntry[] = [
     signed: true,
     sign: "positive toward the vehicle's left, along the line through the tie rods' inner ends",
     definition: "The rack's travel from centre along the line through the two tie rods' inner ends, at ride height.",
-    layouts: STEERED,
+    layouts: RACK_STEERED,
+  },
+  {
+    key: 'pitman',
+    id: 'pitman',
+    label: 'Pitman arm angle',
+    quantity: 'angle',
+    sweep: 'steer',
+    read: (r) => r.pitman,
+    signed: true,
+    digits: 1,
+    sign: "positive when the pitman arm's ball swings toward the vehicle's left",
+    definition:
+      "The pitman arm's turn from straight ahead about the steering box's output axis (the box pivot to its axis point), at ride height.",
+    layouts: STEERED_AXLE,
   },
   {
     key: 'leftSteer',
@@ -89,7 +104,8 @@ export const bumpSteerEntries: BumpSteerEntry[] = [
     digits: 3,
     sign: 'positive toe-in, of the wheel and place where its size is largest',
     definition:
-      'The largest toe change over the travel of either wheel, at straight ahead and at rack positions out to lock.',
+      'The largest toe change over the travel of either wheel, at straight ahead and at steering positions ' +
+      '(rack or pitman arm) out to lock.',
     layouts: STEERED,
   },
 ];

@@ -37,6 +37,8 @@ export const readoutHeaveView: ViewItem<'*position' | '*leaf' | '*loads' | '*mem
     'bind',
     'camberChange',
     'toeChange',
+    'wheelSteer.left',
+    'wheelSteer.right',
     'contactTrackChange',
     'trackChange',
     'casterChange',
@@ -59,6 +61,8 @@ export const readoutRollView: ViewItem<'*position' | '*leaf' | '*loads' | '*memb
     'leftTravel',
     'rightTravel',
     'rollSteer',
+    'wheelSteer.left',
+    'wheelSteer.right',
     'bind',
     'contactTrackChange.left',
     'contactTrackChange.right',
@@ -91,12 +95,15 @@ export const plotsAxleView: ViewItem<'*shocks'>[] = [
     'instantCenterAboveGround',
     'camberChange',
     'toeChange',
+    'wheelSteer.left',
+    'wheelSteer.right',
     'contactTrackChange',
     'trackChange',
     'antiDive',
+    'casterChange',
   ].map(heave),
   '*shocks',
-  ...['bind', 'rollSteer'].map(roll),
+  ...['bind', 'rollSteer', 'wheelSteer.left', 'wheelSteer.right'].map(roll),
   heave('rollSteerInTravel'),
 ];
 
@@ -118,11 +125,11 @@ export const plotsIndependentView: ViewItem<'*shocks'>[] = [
 ];
 
 /**
- * The readout of a steer row (a layout that steers, at the steer slider): the rack, both wheels, Ackermann and
+ * The readout of a steer row (a layout that steers, at the steer slider): the rack or the pitman arm, both wheels, Ackermann and
  * the turning radius there, then the worst bump steer of the map out to lock.
  */
 export const readoutSteerView: MetricRef[] = [
-  ...['rack', 'leftSteer', 'rightSteer', 'ackermann', 'turningRadius'].map(steer),
+  ...['rack', 'pitman', 'leftSteer', 'rightSteer', 'ackermann', 'turningRadius'].map(steer),
   { sweep: 'bumpSteer', key: 'worst' },
 ];
 
@@ -176,6 +183,8 @@ export const csvView: ViewItem<'*members' | '*linkLoads'>[] = [
   ...[
     'camberChange',
     'toeChange',
+    'wheelSteer.left',
+    'wheelSteer.right',
     'contactTrackChange',
     'trackChange',
     'casterChange',
