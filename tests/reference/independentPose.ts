@@ -15,44 +15,29 @@
  * - A trailing arm: one angle about its hinge axis (Rodrigues' rotation formula), set so the wheel centre
  *   reaches the travel.
  */
-import { Matrix, QR } from 'ml-matrix';
 import type { Sketch, SketchPoint } from '../../shared/schema/sketch';
+import {
+  add,
+  DEG,
+  gaussNewton as solveLeastSquares,
+  rodrigues as turnBy,
+  rotateIso,
+  scale,
+  sub,
+  type V3,
+} from './rigidPose';
 
-export type V3 = [number, number, number];
+export type { V3 };
+export { DEG };
 
-export const DEG = Math.PI / 180;
-
-const sub = (a: V3, b: V3): V3 => [a[0] - b[0], a[1] - b[1], a[2] - b[2]];
-const add = (a: V3, b: V3): V3 => [a[0] + b[0], a[1] + b[1], a[2] + b[2]];
 export const dist = (a: V3, b: V3) => Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]);
 export const xyzOf = (p: SketchPoint): V3 => [p.x, p.y, p.z];
 
 /** v turned by R = Rz(yaw)·Ry(pitch)·Rx(roll) (rad). */
-export function rotate(roll: number, pitch: number, yaw: number, v: V3): V3 {
-  const [cr, sr, cp, sp, cy, sy] = [
-    Math.cos(roll),
-    Math.sin(roll),
-    Math.cos(pitch),
-    Math.sin(pitch),
-    Math.cos(yaw),
-    Math.sin(yaw),
-  ];
-  const x1 = v[0],
-    y1 = cr * v[1] - sr * v[2],
-    z1 = sr * v[1] + cr * v[2];
-  const x2 = cp * x1 + sp * z1,
-    z2 = -sp * x1 + cp * z1;
-  return [cy * x2 - sy * y1, sy * x2 + cy * y1, z2];
-}
+export const rotate = rotateIso;
 
 /** Rodrigues' rotation of v by θ (rad) about the unit axis u: v·cosθ + (u × v)·sinθ + u·(u·v)·(1 − cosθ). */
-export function rodrigues(u: V3, v: V3, theta: number): V3 {
-  const c = Math.cos(theta),
-    s = Math.sin(theta);
-  const cross: V3 = [u[1] * v[2] - u[2] * v[1], u[2] * v[0] - u[0] * v[2], u[0] * v[1] - u[1] * v[0]];
-  const d = u[0] * v[0] + u[1] * v[1] + u[2] * v[2];
-  return [0, 1, 2].map((i) => v[i] * c + cross[i] * s + u[i] * d * (1 - c)) as V3;
-}
+export const rodrigues = (u: V3, v: V3, theta: number): V3 => turnBy(scale(u, theta), v);
 
 export interface LeastSquares {
   q: number[];
@@ -63,32 +48,15 @@ export interface LeastSquares {
 }
 
 /**
- * Gauss–Newton least squares: q ← q + δ with J·δ = −r solved by QR (the least-squares step when there are more
- * residuals than unknowns), J by central differences. Stops when the step is below `stepTol` or after `iterations`.
+ * Gauss–Newton least squares (rigidPose.ts) with the residuals left at the answer: stops when the step is below
+ * `stepTol` or after `iterations`.
  */
 export function gaussNewton(
   residuals: (q: number[]) => number[],
   start: number[],
   { iterations = 200, stepTol = 1e-12 } = {},
 ): LeastSquares {
-  const q = [...start];
-  const h = 1e-6;
-  for (let it = 0; it < iterations; it++) {
-    const r = residuals(q);
-    const J = new Matrix(r.length, q.length);
-    for (let k = 0; k < q.length; k++) {
-      const up = [...q],
-        dn = [...q];
-      up[k] += h;
-      dn[k] -= h;
-      const ru = residuals(up),
-        rd = residuals(dn);
-      for (let i = 0; i < r.length; i++) J.set(i, k, (ru[i] - rd[i]) / (2 * h));
-    }
-    const step = new QR(J).solve(Matrix.columnVector(r.map((v) => -v))).to1DArray();
-    for (let k = 0; k < q.length; k++) q[k] += step[k];
-    if (Math.max(...step.map(Math.abs)) < stepTol) break;
-  }
+  const q = solveLeastSquares(residuals, start, { h: 1e-6, stepTolerance: stepTol, maxIterations: iterations });
   const r = residuals(q);
   return { q, residuals: r, worst: Math.max(...r.map(Math.abs)) };
 }

@@ -2,7 +2,8 @@
  * The pieces the reference tests solve poses with, independently of the sweep's solver: plain 3-vectors,
  * Rodrigues' rotation formula, the ISO 8855 yaw–pitch–roll rotation R = Rz(yaw)·Ry(pitch)·Rx(roll) (ISO 8855,
  * from memory, unverified), Gauss–Newton least squares with a central-difference Jacobian and ml-matrix's QR,
- * and a wheel's heading from its spin axis. Shared by the steer, roll-steer and steered-axle reference tests.
+ * and a wheel's heading from its spin axis. Shared by every reference test that solves a pose (independentPose.ts builds
+ * its axle, knuckle and arm rigs on them).
  */
 import { Matrix, QR } from 'ml-matrix';
 
