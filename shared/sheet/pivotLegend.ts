@@ -1,6 +1,7 @@
 /**
  * The legend of the pivot codes on the build sheet's drawings: for each pivot id, the body it is on
- * and what it joins (the members that end at it, the wheel it centres, the driveline joint it places),
+ * and what it joins (the members that end at it, the wheel it centres, the driveline joint or steering box part
+ * it places),
  * so a fabricator can read a code without the board. Pure.
  */
 import type { Sketch } from '../schema/sketch';
@@ -14,6 +15,7 @@ export interface PivotLegendEntry {
   joins: string;
 }
 
+/** What the driveline, half-shaft and pitman-arm blocks name each of their points. */
 function drivelineRoles(sketch: Sketch): Map<string, string> {
   const roles = new Map<string, string>();
   const d = sketch.driveline;
@@ -31,6 +33,10 @@ function drivelineRoles(sketch: Sketch): Map<string, string> {
     roles.set(h.outer, `${side} half-shaft outer joint (reference point)`);
     roles.set(h.outerAxis, `point on the ${side} wheel's spin axis (reference point)`);
   }
+  const pitman = sketch.pitmanArm;
+  if (pitman?.pivot) roles.set(pitman.pivot, 'steering box output shaft, where the pitman arm turns');
+  if (pitman?.axis) roles.set(pitman.axis, "point on the steering box's output axis");
+  if (pitman?.ball) roles.set(pitman.ball, "pitman arm's ball");
   return roles;
 }
 
