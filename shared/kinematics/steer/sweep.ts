@@ -85,8 +85,11 @@ export function rackSweep(
   return { rc, solved, rows, events };
 }
 
-/** The steer sweep of a validated sketch whose `sweep.steer` is set, on the heave sweep's solver. */
-export function steerSweep(sketch: Sketch, ctx: MarchContext, rideState: Float64Array): SteerResult {
+/**
+ * The steer sweep of a validated sketch whose `sweep.steer` is set, on the heave sweep's solver; `withMap`
+ * false leaves the bump-steer map out (null), for a quick preview.
+ */
+export function steerSweep(sketch: Sketch, ctx: MarchContext, rideState: Float64Array, withMap = true): SteerResult {
   const settings = sketch.sweep.steer;
   if (!settings) return noSteer('sweep.steer: not set, so there is no steer sweep.');
   const linkage = steeringOf(ctx.model);
@@ -94,7 +97,7 @@ export function steerSweep(sketch: Sketch, ctx: MarchContext, rideState: Float64
   try {
     const { rc, solved, rows, events } = rackSweep(ctx, linkage, rideState, settings.rack, settings.step);
     const sw = sketch.sweep;
-    const bumpSteer = bumpSteerMap(rc, mapRackPositions(solved), sw.droop, sw.bump, sw.step);
+    const bumpSteer = withMap ? bumpSteerMap(rc, mapRackPositions(solved), sw.droop, sw.bump, sw.step) : null;
     const u = linkage.input.direction;
     return {
       input: 'rack',
