@@ -92,7 +92,7 @@ describe('the steer slider', () => {
     expect(sweep.cursor).toMatchObject({ sweep: 'steer', steer: rows.at(-1)!.rack });
     expect(wrapper.get('[data-test="slider-steer-value"]').text()).toBe('+60.0 mm rack');
     // The starter's rack turns the wheels right for positive travel (tie rods behind the wheel centres).
-    const end = (r: (typeof rows)[number]) => (r.leftSteer + r.rightSteer > 0 ? 'left lock' : 'right lock');
+    const end = (r: (typeof rows)[number]) => (r.leftSteer + r.rightSteer > 0 ? 'left' : 'right');
     expect(wrapper.get('[data-test="slider-steer-max"]').text()).toBe(end(rows.at(-1)!));
     expect(wrapper.get('[data-test="slider-steer-min"]').text()).toBe(end(rows[0]));
     expect(end(rows[0])).not.toBe(end(rows.at(-1)!));
