@@ -318,8 +318,8 @@ function steerFlag(e: SteerEvent, i: number, input: SteerInput | null, u: Length
       severity: 'warning',
       title: 'Tie rod in line with its steering arm',
       detail:
-        `The ${e.side ?? ''} tie rod and steering arm come into line at ${where} (${wheelAngles(e)}): the steering ` +
-        'locks there, short of the travel asked for in sweep.steer.rack, and would go over centre past it.',
+        `The ${e.side ? `${e.side} ` : ''}tie rod and steering arm come into line at ${where} (${wheelAngles(e)}): the steering ` +
+        `locks there, short of the travel asked for in sweep.steer.${input?.key ?? 'rack'}, and would go over centre past it.`,
     };
   return {
     ...base,
