@@ -22,7 +22,7 @@ import {
 } from '../../shared/kinematics/metrics/registry';
 import { quantityUnit, toDisplay } from './format';
 import type { SweepContext } from './readout';
-import type { BumpSteerCurve, SteerRow } from '../../shared/kinematics/types';
+import type { BumpSteerCurve, BumpSteerMap, SteerRow } from '../../shared/kinematics/types';
 import { showSteerPosition, steerAt, steerInputOf, type SteerInput } from './steerInput';
 
 export interface PlotPoint {
@@ -286,6 +286,20 @@ function bumpSteerMapPlot(
 }
 
 /**
+ * The map's two plots, made once per map and unit: a drag's previews keep the last map, and the same specs then
+ * leave those charts alone (a chart redraws when its spec changes).
+ */
+const mapPlotCache = new WeakMap<BumpSteerMap, { key: string; plots: PlotSpec[] }>();
+function mapPlots(map: BumpSteerMap, input: SteerInput, u: LengthUnit): PlotSpec[] {
+  const key = `${input.key}|${u}`;
+  const hit = mapPlotCache.get(map);
+  if (hit?.key === key) return hit.plots;
+  const plots = [bumpSteerMapPlot(map.curves, 'left', input, u), bumpSteerMapPlot(map.curves, 'right', input, u)];
+  mapPlotCache.set(map, { key, plots });
+  return plots;
+}
+
+/**
  * The steer sweep's plots, in the order of the registry's steer view: each quantity against the steer input,
  * then the bump-steer map (each wheel's toe change against travel, one curve per steer position). None when
  * the result has no steer rows; the map's plots are left out while it is not swept (a drag).
@@ -301,8 +315,7 @@ export function buildSteerPlots(result: SweepResult | null, u: LengthUnit): Plot
       if (steer.rows.some((r) => (def.read as (r: SteerRow) => unknown)(r) !== undefined))
         out.push(steerCurvePlot(def, steer.rows, input, u));
     } else if (steer.bumpSteer) {
-      out.push(bumpSteerMapPlot(steer.bumpSteer.curves, 'left', input, u));
-      out.push(bumpSteerMapPlot(steer.bumpSteer.curves, 'right', input, u));
+      out.push(...mapPlots(steer.bumpSteer, input, u));
     }
   }
   return out;

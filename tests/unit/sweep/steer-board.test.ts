@@ -260,6 +260,20 @@ describe('steer plots', () => {
     expect(compared).toBeGreaterThan(3);
   });
 
+  it('keeps the map’s plots while a drag’s previews keep the map, and makes new ones for a new map or unit', async () => {
+    const { sweep } = await onBoard(wishbone());
+    const r = sweep.result!;
+    const preview = { ...r, steer: { ...r.steer!, rows: r.steer!.rows.slice() } };
+    const key = (p: { key: string }) => p.key.startsWith('bump-steer-map');
+    const first = buildSteerPlots(r, 'mm').filter(key);
+    const again = buildSteerPlots(preview, 'mm').filter(key);
+    expect(again[0]).toBe(first[0]);
+    expect(again[1]).toBe(first[1]);
+    expect(buildSteerPlots(r, 'in').filter(key)[0]).not.toBe(first[0]);
+    const newMap = { ...r, steer: { ...r.steer!, bumpSteer: { ...r.steer!.bumpSteer! } } };
+    expect(buildSteerPlots(newMap, 'mm').filter(key)[0]).not.toBe(first[0]);
+  });
+
   it('has none without steer rows', async () => {
     const { sweep } = await onBoard(fourLink());
     expect(buildSteerPlots(sweep.result, 'mm')).toEqual([]);
