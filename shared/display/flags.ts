@@ -6,6 +6,8 @@
  * assumptions) are not flags: the readout shows them beside the numbers they qualify.
  */
 import type { HeaveRow, RollRow, SweepEvent, SweepResult } from '../kinematics';
+import type { SteerEvent } from '../kinematics/types';
+import { showSteerPosition, steerInputOf, type SteerInput } from './steerInput';
 import type { SketchMember } from '../schema/sketch';
 import type { LengthUnit } from '../units';
 import type { TargetCheck } from './targets';
@@ -22,7 +24,7 @@ import {
   toDisplay,
 } from './format';
 
-export type FlagKind = SweepEvent['kind'] | 'target';
+export type FlagKind = SweepEvent['kind'] | SteerEvent['kind'] | 'steer-problem' | 'target';
 
 export interface Flag {
   /** stable within one result (for v-for keys and tests) */
@@ -32,8 +34,8 @@ export interface Flag {
   severity: 'negative' | 'warning' | 'info';
   title: string;
   detail: string;
-  /** where it starts */
-  sweep?: 'heave' | 'roll';
+  /** where it starts (`at` in mm of travel, deg of roll, or the steer input's unit: mm of rack) */
+  sweep?: 'heave' | 'roll' | 'steer';
   at?: number;
   where?: string;
   /** member to select on click */
@@ -290,6 +292,44 @@ function targetFlag(check: TargetCheck, u: LengthUnit): Flag | null {
   };
 }
 
+/** Both wheels' angles at a steer event, in words. */
+function wheelAngles(e: SteerEvent): string {
+  const a = (v: number) => showAngle(v, undefined, true, 1).text;
+  return `left wheel ${a(e.leftSteer)}, right wheel ${a(e.rightSteer)}`;
+}
+
+/**
+ * A steer event as a flag, its position worded as the steering input's travel (rack travel), never as
+ * heave travel: the lock at the end of the travel asked for is a note; a tie rod coming into line with its
+ * steering arm, or a linkage that cannot follow, asks for a look.
+ */
+function steerFlag(e: SteerEvent, i: number, input: SteerInput | null, u: LengthUnit): Flag {
+  const where = input ? showSteerPosition(e.at, input, u) : `${fixed(e.at, 1, true)}`;
+  const base = { key: `steer-${i}-${e.kind}`, kind: e.kind, sweep: 'steer', at: e.at, where } as const;
+  if (e.kind === 'steer-lock')
+    return {
+      ...base,
+      severity: 'info',
+      title: 'Steering lock',
+      detail: `The steering reaches the end of its travel at ${where}: ${wheelAngles(e)}.`,
+    };
+  if (e.kind === 'steer-toggle')
+    return {
+      ...base,
+      severity: 'warning',
+      title: 'Tie rod in line with its steering arm',
+      detail:
+        `The ${e.side ? `${e.side} ` : ''}tie rod and steering arm come into line at ${where} (${wheelAngles(e)}): the steering ` +
+        `locks there, short of the travel asked for in sweep.steer.${input?.key ?? 'rack'}, and would go over centre past it.`,
+    };
+  return {
+    ...base,
+    severity: 'warning',
+    title: 'Steering stops short',
+    detail: `The linkage cannot follow the steering past ${where} (${wheelAngles(e)}). ${e.message}`,
+  };
+}
+
 const SEVERITY_ORDER = { negative: 0, warning: 1, info: 2 } as const;
 
 /** Every flag of a result, the design-stopping ones first, then by distance from ride. */
@@ -301,6 +341,19 @@ export function buildFlags(
 ): Flag[] {
   if (!result) return [];
   const flags: Flag[] = result.limits.events.map((e, i) => eventFlag(result, members, e, i, u));
+  const steer = result.steer;
+  if (steer) {
+    const input = steerInputOf(steer);
+    steer.events.forEach((e, i) => flags.push(steerFlag(e, i, input, u)));
+    if (steer.problem)
+      flags.push({
+        key: 'steer-problem',
+        kind: 'steer-problem',
+        severity: 'warning',
+        title: 'No steer sweep',
+        detail: steer.problem,
+      });
+  }
   for (const c of checks) {
     const f = targetFlag(c, u);
     if (f) flags.push(f);

@@ -75,6 +75,11 @@ function lockUpEvent(kind: 'heave' | 'roll', at: number, reached: number): Sweep
 
 export interface SweepSketchOptions {
   heaveOnly?: boolean;
+  /**
+   * false leaves the steer sweep's bump-steer map out (`steer.bumpSteer: null`): the board's preview while a
+   * pivot is dragged, where the map would take most of the sweep's time; it is swept when the drag ends
+   */
+  bumpSteerMap?: boolean;
 }
 
 /** Sweeps a validated sketch (settings from `sketch.sweep`). Never throws for a valid sketch. */
@@ -146,7 +151,8 @@ export function sweepSketch(sketch: Sketch, options: SweepSketchOptions = {}): S
   }
 
   // Last, on the same solver: the steer sweep moves the rack's frame points and puts them back.
-  const steer = sw.steer && !options.heaveOnly ? steerSweep(sketch, ctx, ride.state) : undefined;
+  const steer =
+    sw.steer && !options.heaveOnly ? steerSweep(sketch, ctx, ride.state, options.bumpSteerMap !== false) : undefined;
   if (steer?.problem) warnings.push(steer.problem);
 
   return {

@@ -436,7 +436,10 @@ export interface SteerResult {
   };
   /** lock and toggle, one event each way */
   events: SteerEvent[];
-  /** toe change over heave at straight ahead and at steering positions out to lock; null when the sketch does not steer */
+  /**
+   * toe change over heave at straight ahead and at steering positions out to lock; null when the sketch does not steer,
+   * or when the sweep was asked to leave it out (sweepSketch's `bumpSteerMap: false`, the board's drag preview)
+   */
   bumpSteer: BumpSteerMap | null;
   /** why there is no steer sweep, naming the field (the sentence is in `warnings` too); null when there is one */
   problem: string | null;

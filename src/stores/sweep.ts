@@ -1,14 +1,16 @@
 /**
  * The live sweep of the open sketch. Every change of the board's sketch (each pointer move
  * of a drag included) asks for a new sweep; the runner keeps it latest-wins in a Web Worker.
- * The store holds the last result, the problems of an invalid sketch, the travel and roll
- * slider positions, the row and body poses at the slider (for the readout and the ghost),
+ * The store holds the last result, the problems of an invalid sketch, the travel, roll and
+ * steer slider positions, the row and body poses at the slider (for the readout and the ghost),
  * the targets and the flags. It applies no sketch edits itself: targets go through the
  * board store, the one place that edits the document.
  */
 import { defineStore } from 'pinia';
 import { computed, ref, shallowRef, watch } from 'vue';
 import type { BodyPoses, HeaveRow, RollRow, SweepResult } from '../../shared/kinematics';
+import type { SteerRow } from '../../shared/kinematics/types';
+import type { Vec3 } from '../../shared/vec3';
 import type { Sketch } from '../../shared/schema/sketch';
 import type { Deg, Mm } from '../../shared/units';
 import { axleEndOf } from '../../shared/kinematics/metrics/registry/help';
@@ -18,6 +20,8 @@ import { checkTargets, readTargets, type Targets } from '../../shared/display/ta
 import { buildFlags } from '../../shared/display/flags';
 import { EMPTY_CONTEXT, type CursorRow, type SweepContext } from '../sweep/readout';
 import { sweepRange } from '../sweep/range';
+import { steerAt, steerInputOf } from '../../shared/display/steerInput';
+import { steerRowPoints } from '../canvas/planView';
 import { useBoardStore, type EditResult } from './board';
 import { usePrefsStore } from './prefs';
 import { useFrameBatch } from '../composables/useFrameBatch';
@@ -84,10 +88,14 @@ export const useSweepStore = defineStore('sweep', () => {
   const travel = ref<Mm>(0);
   /** Slider position in roll, deg (0 = no roll). */
   const roll = ref<Deg>(0);
+  /** Slider position in steer, in the steer input's unit (mm of rack; 0 = straight ahead). */
+  const steer = ref(0);
   /** Which slider the user moved last: the readout and the ghost follow it. */
-  const cursorSweep = ref<'heave' | 'roll'>('heave');
+  const cursorSweep = ref<'heave' | 'roll' | 'steer'>('heave');
 
   let asked = 0;
+  /** True when the result shown is a drag's preview (its bump-steer map, if any, is an earlier one). */
+  let previewShown = false;
   let answered = 0;
   let runner: SweepRunner | null = null;
   /** An answer waiting for the next animation frame; a newer one replaces it. */
@@ -111,7 +119,15 @@ export const useSweepStore = defineStore('sweep', () => {
     pending.value = answered < asked;
     lastMs.value = a.ms;
     if (a.ok) {
-      result.value = Object.freeze(a.result);
+      // A drag's preview leaves the bump-steer map out: the last one is kept until the drag's end sweeps it again.
+      const map = result.value?.steer?.bumpSteer;
+      const steer = a.result.steer;
+      const kept =
+        a.preview && steer && steer.rows.length && !steer.bumpSteer && map
+          ? { ...a.result, steer: { ...steer, bumpSteer: map } }
+          : a.result;
+      result.value = Object.freeze(kept);
+      previewShown = !!a.preview;
       error.value = null;
     } else {
       error.value = a.problems;
@@ -126,7 +142,10 @@ export const useSweepStore = defineStore('sweep', () => {
     return runner;
   }
 
-  /** Asks for a sweep of this document (latest wins). */
+  /**
+   * Asks for a sweep of this document (latest wins). While a pivot is dragged of a sketch with a steer sweep,
+   * the sweep is a preview without the bump-steer map (most of a steered sketch's sweep time).
+   */
   function run(doc: unknown) {
     if (doc === null || doc === undefined) {
       result.value = null;
@@ -135,7 +154,8 @@ export const useSweepStore = defineStore('sweep', () => {
     }
     asked++;
     pending.value = true;
-    ensureRunner().request(doc);
+    const preview = board.dragging && !!(doc as { sweep?: { steer?: unknown } }).sweep?.steer;
+    ensureRunner().request(doc, preview);
   }
 
   /** Resolves when the sweep of the latest document is shown. */
@@ -168,6 +188,13 @@ export const useSweepStore = defineStore('sweep', () => {
     () => run(sketch.value),
     { immediate: true },
   );
+  // The drag's end fills in the bump-steer map its previews left out, even if the last move changed nothing.
+  watch(
+    () => board.dragging,
+    (now) => {
+      if (!now && (previewShown || pending.value) && sketch.value?.sweep?.steer) run(sketch.value);
+    },
+  );
 
   const heaveRow = computed<HeaveRow | null>(() =>
     result.value ? nearest(result.value.heave, (r) => r.travel, travel.value) : null,
@@ -176,27 +203,62 @@ export const useSweepStore = defineStore('sweep', () => {
     result.value ? nearest(result.value.roll, (r) => r.roll, roll.value) : null,
   );
 
-  /** The row the readout shows and the ghost draws: of the slider moved last. */
+  /** What moves the wheels in the steer sweep (rack, …); null when the result has no steer rows. */
+  const steerInput = computed(() => steerInputOf(result.value?.steer));
+  /** The steer row nearest the steer slider; null without steer rows. */
+  const steerRow = computed<SteerRow | null>(() => {
+    const input = steerInput.value;
+    const rows = result.value?.steer?.rows;
+    return input && rows ? nearest(rows, (r) => steerAt(r, input), steer.value) : null;
+  });
+  /** True while the steer slider is the one moved last (and the result steers). */
+  const steering = computed(() => cursorSweep.value === 'steer' && steerRow.value !== null);
+
+  /** The heave or roll row the readout shows and the ghost draws: of the slider moved last; null while steering. */
   const rowAtCursor = computed<CursorRow | null>(() => {
+    if (cursorSweep.value === 'steer')
+      return steerRow.value ? null : heaveRow.value && { sweep: 'heave', row: heaveRow.value };
     if (cursorSweep.value === 'roll' && rollRow.value) return { sweep: 'roll', row: rollRow.value };
     return heaveRow.value ? { sweep: 'heave', row: heaveRow.value } : null;
   });
 
   /** Poses of every moving body at the cursor, for the ghost drawing. */
-  const bodiesAtCursor = computed<BodyPoses>(() => rowAtCursor.value?.row.bodies ?? {});
+  const bodiesAtCursor = computed<BodyPoses>(() =>
+    steering.value ? (steerRow.value?.bodies ?? {}) : (rowAtCursor.value?.row.bodies ?? {}),
+  );
+
+  /**
+   * Every point of the sketch at the steer slider: bodies placed by the steer row's poses, and the steering
+   * input's frame points (the rack's tie-rod ends) moved by the row's travel along its direction. null when
+   * the steer slider is not the cursor.
+   */
+  const steerPoints = computed<Record<string, Vec3> | null>(() => {
+    const s = sketch.value;
+    const row = steerRow.value;
+    const st = result.value?.steer;
+    if (!s || !row || !st || !steering.value) return null;
+    return steerRowPoints(s, st, row);
+  });
 
   /** The cursor as plots use it: heave plots at the travel, roll plots at the roll (roll sweeps run at ride). */
   const cursor = computed(() => ({
     sweep: cursorSweep.value,
-    at: cursorSweep.value === 'roll' ? roll.value : travel.value,
-    travel: cursorSweep.value === 'roll' ? 0 : travel.value,
+    at: cursorSweep.value === 'roll' ? roll.value : cursorSweep.value === 'steer' ? steer.value : travel.value,
+    travel: cursorSweep.value === 'heave' ? travel.value : 0,
     roll: cursorSweep.value === 'roll' ? roll.value : 0,
+    steer: cursorSweep.value === 'steer' ? steer.value : 0,
   }));
 
   /** True when the cursor sits past where the sweep stopped (lock-up): the row shown is the last one reached. */
   const cursorBeyondReach = computed(() => {
     const r = result.value;
     if (!r) return false;
+    if (cursorSweep.value === 'steer') {
+      const rows = r.steer?.rows ?? [];
+      const input = steerInput.value;
+      if (!input || !rows.length) return false;
+      return steer.value < steerAt(rows[0], input) - 1e-9 || steer.value > steerAt(rows[rows.length - 1], input) + 1e-9;
+    }
     if (cursorSweep.value === 'roll')
       return roll.value < r.limits.rollMin - 1e-9 || roll.value > r.limits.rollMax + 1e-9;
     return travel.value < r.limits.droop - 1e-9 || travel.value > r.limits.bump + 1e-9;
@@ -213,19 +275,30 @@ export const useSweepStore = defineStore('sweep', () => {
   function setTravel(v: Mm) {
     travel.value = v;
     roll.value = 0;
+    steer.value = 0;
     cursorSweep.value = 'heave';
   }
 
   function setRoll(v: Deg) {
     roll.value = v;
     travel.value = 0;
+    steer.value = 0;
     cursorSweep.value = 'roll';
   }
 
-  /** Back to ride height, no roll. */
+  /** The steer slider (the steer input's unit: mm of rack); travel and roll go back to ride, where the steer sweep runs. */
+  function setSteer(v: number) {
+    steer.value = v;
+    travel.value = 0;
+    roll.value = 0;
+    cursorSweep.value = 'steer';
+  }
+
+  /** Back to ride height, no roll, straight ahead. */
   function toRide() {
     travel.value = 0;
     roll.value = 0;
+    steer.value = 0;
     cursorSweep.value = 'heave';
   }
 
@@ -255,6 +328,7 @@ export const useSweepStore = defineStore('sweep', () => {
     lastMs,
     travel,
     roll,
+    steer,
     cursorSweep,
     cursor,
     cursorBeyondReach,
@@ -262,6 +336,10 @@ export const useSweepStore = defineStore('sweep', () => {
     rollRow,
     rowAtCursor,
     bodiesAtCursor,
+    steerInput,
+    steerRow,
+    steering,
+    steerPoints,
     context,
     range,
     targets,
@@ -271,6 +349,7 @@ export const useSweepStore = defineStore('sweep', () => {
     whenIdle,
     setTravel,
     setRoll,
+    setSteer,
     toRide,
     setTargets,
     dispose,

@@ -15,12 +15,15 @@ import {
   metricHelp,
   plotsAxleView,
   plotsIndependentView,
+  plotsSteerView,
   targetEntries,
   type AxleEnd,
   type MetricEntry,
 } from '../../shared/kinematics/metrics/registry';
 import { quantityUnit, toDisplay } from '../../shared/display/format';
 import type { SweepContext } from './readout';
+import type { BumpSteerCurve, BumpSteerMap, SteerRow } from '../../shared/kinematics/types';
+import { showSteerPosition, steerAt, steerInputOf, type SteerInput } from '../../shared/display/steerInput';
 
 export interface PlotPoint {
   x: number;
@@ -50,7 +53,8 @@ export interface PlotSpec {
   title: string;
   /** what the plotted quantity is and its sign convention, from the registry (the title's tooltip) */
   help: string;
-  sweep: 'heave' | 'roll';
+  /** what x is: heave travel, roll, or the steer input's position (mm of rack) */
+  sweep: 'heave' | 'roll' | 'steer';
   /** axis titles with units */
   xTitle: string;
   yTitle: string;
@@ -214,6 +218,106 @@ export function buildPlots(
     // it should exist.
     if (spec.series.length === 0 && (def.given !== undefined || !ctx.hasAxle)) continue;
     out.push(spec);
+  }
+  return out;
+}
+
+/** A steer quantity against the steer input's position (rack travel), from the steer sweep's rows. */
+function steerCurvePlot(
+  def: MetricEntry<'steer'>,
+  rows: readonly SteerRow[],
+  input: SteerInput,
+  u: LengthUnit,
+): PlotSpec {
+  const read = def.read as (r: SteerRow) => number | null | undefined;
+  const points = rows.map((r) => {
+    const v = read(r);
+    return {
+      x: toDisplay(steerAt(r, input), input.quantity, u),
+      y: v === null || v === undefined || !Number.isFinite(v) ? null : toDisplay(v, def.quantity, u),
+    };
+  });
+  const empty = points.every((p) => p.y === null);
+  return {
+    key: def.id,
+    title: def.label,
+    help: metricHelp(def),
+    sweep: 'steer',
+    xTitle: `${input.label.toLowerCase()} (${quantityUnit(input.quantity, u)})`,
+    yTitle: quantityUnit(def.quantity, u),
+    series: empty ? [] : [{ label: def.label, points, color: PLOT_COLORS[3] }],
+    bands: [],
+    emptyReason: empty ? (def.missing ?? 'not defined in this sweep') : undefined,
+    signed: def.signed,
+  };
+}
+
+/**
+ * The bump-steer map of one wheel: toe change against heave travel, one curve per steer position (straight
+ * ahead first, then out to each lock), in the order the map gives them.
+ */
+function bumpSteerMapPlot(
+  curves: readonly BumpSteerCurve[],
+  side: 'left' | 'right',
+  input: SteerInput,
+  u: LengthUnit,
+): PlotSpec {
+  const at = (c: BumpSteerCurve) => steerAt(c, input);
+  const ordered = [...curves].sort((a, b) => Math.abs(at(a)) - Math.abs(at(b)) || at(a) - at(b));
+  const series = ordered.map((c, i) => ({
+    label: showSteerPosition(at(c), input, u),
+    points: c.points.map((p) => ({ x: mmToUnit(p.travel, u), y: p[side] })),
+    color: PLOT_COLORS[i % PLOT_COLORS.length],
+  }));
+  const worst = metricEntry({ sweep: 'bumpSteer', key: 'worst' });
+  return {
+    key: `bump-steer-map-${side}`,
+    title: `Bump steer to lock, ${side} wheel`,
+    help:
+      `Toe change of the ${side} wheel over heave travel (positive toe-in), straight ahead and at steer positions ` +
+      `out to each lock, one curve each. ${metricHelp(worst)}`,
+    sweep: 'heave',
+    xTitle: axisTitle('heave', u),
+    yTitle: '°',
+    series: series.filter((x) => x.points.length > 0),
+    bands: [],
+    emptyReason: series.some((x) => x.points.length > 0) ? undefined : 'No rows in the bump-steer map.',
+    signed: true,
+  };
+}
+
+/**
+ * The map's two plots, made once per map and unit: a drag's previews keep the last map, and the same specs then
+ * leave those charts alone (a chart redraws when its spec changes).
+ */
+const mapPlotCache = new WeakMap<BumpSteerMap, { key: string; plots: PlotSpec[] }>();
+function mapPlots(map: BumpSteerMap, input: SteerInput, u: LengthUnit): PlotSpec[] {
+  const key = `${input.key}|${u}`;
+  const hit = mapPlotCache.get(map);
+  if (hit?.key === key) return hit.plots;
+  const plots = [bumpSteerMapPlot(map.curves, 'left', input, u), bumpSteerMapPlot(map.curves, 'right', input, u)];
+  mapPlotCache.set(map, { key, plots });
+  return plots;
+}
+
+/**
+ * The steer sweep's plots, in the order of the registry's steer view: each quantity against the steer input,
+ * then the bump-steer map (each wheel's toe change against travel, one curve per steer position). None when
+ * the result has no steer rows; the map's plots are left out while it is not swept (a drag).
+ */
+export function buildSteerPlots(result: SweepResult | null, u: LengthUnit): PlotSpec[] {
+  const steer = result?.steer;
+  const input = steerInputOf(steer);
+  if (!steer || !input) return [];
+  const out: PlotSpec[] = [];
+  for (const item of plotsSteerView) {
+    if (isMetricRef(item)) {
+      const def = metricEntry(item) as MetricEntry<'steer'>;
+      if (steer.rows.some((r) => (def.read as (r: SteerRow) => unknown)(r) !== undefined))
+        out.push(steerCurvePlot(def, steer.rows, input, u));
+    } else if (steer.bumpSteer) {
+      out.push(...mapPlots(steer.bumpSteer, input, u));
+    }
   }
   return out;
 }

@@ -3,7 +3,8 @@
  * the user's units. A number the sweep does not define shows "—" with the reason.
  */
 import type { HeaveRow, RollRow } from '../../shared/kinematics';
-import type { LinkLoadSummary, WindUpReading } from '../../shared/kinematics/types';
+import type { LinkLoadSummary, SteerResult, SteerRow, WindUpReading } from '../../shared/kinematics/types';
+import { innerOuter } from '../../shared/kinematics/steer/readings';
 import type { SketchMember } from '../../shared/schema/sketch';
 import type { LengthUnit } from '../../shared/units';
 import {
@@ -12,6 +13,7 @@ import {
   readoutHeaveView,
   readoutLeafMetric,
   readoutRollView,
+  readoutSteerView,
   linkLoadEntry,
   memberEntry,
   metricHelp,
@@ -32,11 +34,12 @@ import {
   showTorque,
   type Shown,
 } from '../../shared/display/format';
+import { showSteerPosition, steerAt, type SteerInput } from '../../shared/display/steerInput';
 
 export interface ReadoutLine extends Shown {
   key: string;
   label: string;
-  group: 'position' | 'axle' | 'geometry' | 'members' | 'leaf' | 'loads' | 'driveline';
+  group: 'position' | 'steer' | 'axle' | 'geometry' | 'members' | 'leaf' | 'loads' | 'driveline';
   /** member to select on click, for member lines */
   member?: string;
   /** 'negative' when a shock sits at or past a limit, or a link load reverses or passes its limit */
@@ -352,6 +355,46 @@ export function readoutLines(
         lines.push(...loadLines(ctx, extras.loads, heave?.linkLoads, cursor.sweep, u, !!extras.torqueIsDefault));
       }
     } else lines.push(...memberLines(ctx, r.members, cursor.sweep, u, extras.windUp));
+  }
+  return lines;
+}
+
+/**
+ * The readout lines at the steer slider, in the order of the registry's steer view: the input's position,
+ * each wheel's steer angle named inner or outer for the way the wheels turn, Ackermann %, the turning radius
+ * and the worst bump steer of the map out to lock. A view item the rows do not carry (another layout's
+ * input) is left out.
+ */
+export function steerReadoutLines(steer: SteerResult, row: SteerRow, input: SteerInput, u: LengthUnit): ReadoutLine[] {
+  const io = innerOuter(row.leftSteer, row.rightSteer);
+  const inner = io ? (io.sense > 0 ? 'leftSteer' : 'rightSteer') : null;
+  const lines: ReadoutLine[] = [
+    { key: 'position', label: 'Position', group: 'position', text: showSteerPosition(steerAt(row, input), input, u) },
+  ];
+  for (const ref of readoutSteerView) {
+    if (ref.sweep === 'bumpSteer') {
+      const entry = metricEntry(ref);
+      const map = steer.bumpSteer;
+      lines.push({
+        key: entry.id,
+        label: entry.label,
+        group: 'steer',
+        help: metricHelp(entry),
+        ...showMetric(entry, map ? entry.read(map) : null, u, map ? entry.missing : 'not swept yet'),
+      });
+      continue;
+    }
+    const entry = metricEntry(ref as MetricRef & { sweep: 'steer' });
+    const v = (entry.read as (r: SteerRow) => number | null | undefined)(row);
+    if (v === undefined) continue;
+    const role = entry.key === inner ? ' (inner)' : io && /Steer$/.test(entry.key) ? ' (outer)' : '';
+    lines.push({
+      key: entry.id,
+      label: `${entry.shortLabel ?? entry.label}${role}`,
+      group: 'steer',
+      help: metricHelp(entry),
+      ...showMetric(entry, v, u, entry.missing),
+    });
   }
   return lines;
 }

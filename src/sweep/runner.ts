@@ -27,8 +27,11 @@ async function loadCompute(): Promise<Compute> {
 export type RunnerMode = 'worker' | 'main-thread';
 
 export interface SweepRunner {
-  /** Ask for a sweep of this document (validated and copied now; later edits to it do not leak in). */
-  request(doc: unknown): void;
+  /**
+   * Ask for a sweep of this document (validated and copied now; later edits to it do not leak in); a
+   * `preview` leaves the steer sweep's bump-steer map out (while a pivot is dragged).
+   */
+  request(doc: unknown, preview?: boolean): void;
   /** Resolves once nothing is running or waiting (for tests and benchmarks). */
   whenIdle(): Promise<void>;
   readonly mode: RunnerMode;
@@ -62,10 +65,10 @@ function snapshot(doc: unknown): unknown {
 }
 
 /** The request for a valid document, or the answer (its problems) for an invalid one. */
-function prepare(id: number, doc: unknown): { request: SweepRequest } | { answer: SweepAnswer } {
+function prepare(id: number, doc: unknown, preview: boolean): { request: SweepRequest } | { answer: SweepAnswer } {
   const t0 = performance.now();
   const check = checkSketch(snapshot(doc));
-  if (check.ok) return { request: { id, sketch: check.sketch } };
+  if (check.ok) return { request: { id, sketch: check.sketch, ...(preview ? { preview } : {}) } };
   return { answer: { id, ok: false, problems: check.problems, ms: performance.now() - t0 } };
 }
 
@@ -165,9 +168,9 @@ export function createSweepRunner(onAnswer: (answer: SweepAnswer) => void, optio
   }
 
   return {
-    request(doc: unknown) {
+    request(doc: unknown, preview = false) {
       if (disposed) return;
-      const prepared = prepare(++nextId, doc);
+      const prepared = prepare(++nextId, doc, preview);
       if (waiting) dropped++;
       if ('answer' in prepared) {
         // Nothing to sweep: the problems replace whatever was waiting, and an older sweep

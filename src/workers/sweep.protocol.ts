@@ -16,18 +16,28 @@ export interface SweepRequest {
   id: number;
   /** the sketch as checkSketch parsed it (defaults filled in): a plain, structured-cloneable copy */
   sketch: Sketch;
+  /** a quick preview while a pivot is dragged: the steer sweep's bump-steer map is left out */
+  preview?: boolean;
 }
 
 export type SweepAnswer =
-  | { id: number; ok: true; result: SweepResult; /** ms spent sweeping */ ms: number }
+  | {
+      id: number;
+      ok: true;
+      result: SweepResult;
+      /** ms spent sweeping */
+      ms: number;
+      /** true when the request was a preview (no bump-steer map) */
+      preview?: boolean;
+    }
   | { id: number; ok: false; /** one line each, naming the field */ problems: string[]; ms: number };
 
 /** Sweeps a validated sketch; a failure inside the solver becomes a problem line, never a crash. */
 export function computeSweep(req: SweepRequest): SweepAnswer {
   const t0 = performance.now();
   try {
-    const result = sweepSketch(req.sketch);
-    return { id: req.id, ok: true, result, ms: performance.now() - t0 };
+    const result = sweepSketch(req.sketch, { bumpSteerMap: !req.preview });
+    return { id: req.id, ok: true, result, ms: performance.now() - t0, ...(req.preview ? { preview: true } : {}) };
   } catch (err) {
     const problems = [`The sweep could not run: ${err instanceof Error ? err.message : String(err)}`];
     return { id: req.id, ok: false, problems, ms: performance.now() - t0 };

@@ -11,6 +11,8 @@
  *    from dist/ (target ≤ 350 KB gzip in total).
  *
  * Run with `npm run bench:board` (builds first). `--out FILE` also writes the figures as Markdown.
+ * `--steered` drags the double-wishbone starter instead, whose sweep includes the steer sweep (its bump-steer
+ * map is left out while dragging and swept when the drag ends).
  * `--without-sweep` answers the sweep worker's script with one that never replies, so the drag
  * measures the canvas and tables alone (a diagnostic: where the frame time goes).
  * `--profile` records the page's main thread during the drag with Chromium's sampling profiler
@@ -47,8 +49,15 @@ const BUNDLE_TARGET_KB = 350;
 /** Pointer moves in the scripted drag and the pause between them (ms): about four seconds of dragging. */
 const DRAG_STEPS = 240;
 const DRAG_STEP_MS = 16;
-/** The pivot dragged: the four-link starter's left upper link, frame end. */
-const DRAG_PIVOT = 'UL.fl';
+/**
+ * What is dragged: the four-link starter's left upper link, frame end; with `--steered` the double-wishbone
+ * starter's left upper wishbone, front frame pivot (a sketch with a steer sweep and its bump-steer map).
+ */
+const STEERED = process.argv.includes('--steered');
+const DRAG = STEERED
+  ? { layout: 'double-wishbone', name: 'double-wishbone', pivot: 'UW.f.l', readout: 'rc', plot: 'camber' }
+  : { layout: 'four-link-lateral-rod', name: 'four-link', pivot: 'UL.fl', readout: 'antisquat', plot: 'pinion' };
+const DRAG_PIVOT = DRAG.pivot;
 
 function arg(name: string): string | undefined {
   const i = process.argv.indexOf(name);
@@ -94,9 +103,9 @@ async function newStarterSketch(context: BrowserContext, base: string): Promise<
     headers: { 'X-CSRF-Token': await csrf() },
   });
   if (!login.ok()) throw new Error(`sign-in failed: ${login.status()} ${await login.text()}`);
-  const spec = starters['four-link-lateral-rod'];
-  if (!spec) throw new Error('the four-link starter is missing');
-  const document = { ...spec.build(), name: 'Bench: four-link drag' };
+  const spec = starters[DRAG.layout as keyof typeof starters];
+  if (!spec) throw new Error(`the ${DRAG.name} starter is missing`);
+  const document = { ...spec.build(), name: `Bench: ${DRAG.name} drag` };
   const made = await context.request.post(`${base}/api/sketches`, {
     data: { name: document.name, document },
     headers: { 'X-CSRF-Token': await csrf() },
@@ -110,7 +119,7 @@ async function openBoard(page: Page, base: string, id: number): Promise<void> {
   await page.waitForFunction((pivot) => !!window.arcwrightBoard?.side?.pivotAt(pivot), DRAG_PIVOT, { timeout: 30_000 });
   // The plots are loaded lazily: wait until they have drawn, so the drag measures the whole board.
   if (!process.argv.includes('--without-sweep'))
-    await page.locator('[data-test="plot-pinion"] canvas').waitFor({ state: 'visible', timeout: 30_000 });
+    await page.locator(`[data-test="plot-${DRAG.plot}"] canvas`).waitFor({ state: 'visible', timeout: 30_000 });
   await page.waitForTimeout(500);
 }
 
@@ -156,7 +165,7 @@ async function measureDrag(page: Page): Promise<FrameFigures> {
 
   const start = await page.evaluate((pivot) => window.arcwrightBoard!.side!.pivotAt(pivot), DRAG_PIVOT);
   if (!start) throw new Error(`pivot ${DRAG_PIVOT} is not on the side view`);
-  const readout = page.locator('[data-test="readout-antisquat"]');
+  const readout = page.locator(`[data-test="readout-${DRAG.readout}"]`);
   const readoutBefore = (await readout.count()) ? await readout.innerText() : '';
 
   await page.mouse.move(start.x, start.y);
@@ -318,14 +327,14 @@ async function main() {
       .join(' / ');
     const lines = [
       `Machine: ${cpus().length} cores, load average ${load} (1 / 5 / 15 min; other work on the machine skews frame times)`,
-      `Board frame time while dragging ${DRAG_PIVOT} of the four-link starter ` +
+      `Board frame time while dragging ${DRAG_PIVOT} of the ${DRAG.name} starter ` +
         `(${DRAG_STEPS} pointer moves, ${frames.frames} frames sampled)` +
         `${withoutSweep ? ' WITHOUT the sweep (diagnostic)' : ''}:`,
       `  p95 ${ms2(frames.p95)} (target <= ${ms(FRAME_TARGET_MS)}, read to the clock's ${CLOCK_STEP_MS} ms step; ` +
         `an idle page: ${ms2(frames.idleP95)}) ${frameVerdict(frames)}`,
       `  median ${ms2(frames.p50)}, worst ${ms(frames.max)}; dropped frames (over 25 ms): ` +
         `${frames.over} of ${frames.frames} (${((100 * frames.over) / frames.frames).toFixed(1)} %)`,
-      `  pivot moved: ${frames.moved ? 'yes' : 'NO'}; readout anti-squat changed: ${frames.readoutChanged ? 'yes' : 'NO'}`,
+      `  pivot moved: ${frames.moved ? 'yes' : 'NO'}; readout ${DRAG.readout} changed: ${frames.readoutChanged ? 'yes' : 'NO'}`,
       `Board route JavaScript (every script fetched to open the board, plots and worker included), gzip -9 from dist/:`,
       `  total ${kb(bundle.totalGzipKb)} gzip (${kb(bundle.totalRawKb)} raw) (target <= ${BUNDLE_TARGET_KB} KB) ` +
         (bundle.totalGzipKb <= BUNDLE_TARGET_KB ? 'MET' : 'NOT MET'),

@@ -87,8 +87,11 @@ export function steerInputSweep(
   return { rc, solved, rows, events };
 }
 
-/** The steer sweep of a validated sketch whose `sweep.steer` is set, on the heave sweep's solver. */
-export function steerSweep(sketch: Sketch, ctx: MarchContext, rideState: Float64Array): SteerResult {
+/**
+ * The steer sweep of a validated sketch whose `sweep.steer` is set, on the heave sweep's solver; `withMap`
+ * false leaves the bump-steer map out (null), for a quick preview.
+ */
+export function steerSweep(sketch: Sketch, ctx: MarchContext, rideState: Float64Array, withMap = true): SteerResult {
   const settings = sketch.sweep.steer;
   if (!settings) return noSteer('sweep.steer: not set, so there is no steer sweep.');
   const linkage = steeringOf(ctx.model);
@@ -104,7 +107,7 @@ export function steerSweep(sketch: Sketch, ctx: MarchContext, rideState: Float64
   try {
     const { rc, solved, rows, events } = steerInputSweep(ctx, linkage, rideState, travel, settings.step);
     const sw = sketch.sweep;
-    const bumpSteer = bumpSteerMap(rc, mapRackPositions(solved), sw.droop, sw.bump, sw.step);
+    const bumpSteer = withMap ? bumpSteerMap(rc, mapRackPositions(solved), sw.droop, sw.bump, sw.step) : null;
     const first = solved[0].at;
     const last = solved[solved.length - 1].at;
     const input = linkage.input;
