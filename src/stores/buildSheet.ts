@@ -4,7 +4,8 @@
  */
 import { defineStore } from 'pinia';
 import { ref, shallowRef } from 'vue';
-import { api, errorMessage } from '../api/http';
+import { ApiError, api, errorMessage } from '../api/http';
+import { SHARED_LINK_GONE } from './board';
 import type { SketchDetail } from '../api/types';
 import type { SweepResult } from '../../shared/kinematics/types';
 import { sweepOnce } from '../../shared/sheet/sweepOnce';
@@ -29,7 +30,9 @@ export const useBuildSheetStore = defineStore('buildSheet', () => {
       const url = 'token' in which ? `/api/shared/${encodeURIComponent(which.token)}` : `/api/sketches/${which.id}`;
       detail.value = await api.get<SketchDetail>(url);
     } catch (err) {
-      error.value = `The build sheet could not open: ${errorMessage(err)}.`;
+      // A read-only link that was revoked is worded as on the board.
+      const gone = 'token' in which && err instanceof ApiError && err.status === 404;
+      error.value = gone ? SHARED_LINK_GONE : `The build sheet could not open: ${errorMessage(err)}.`;
       return;
     } finally {
       loading.value = false;
