@@ -52,8 +52,9 @@ const JOINT_NAMES: Record<string, string> = driveJointNames;
 /** A link load smaller than this share of the tractive force is round-off of a zero, as the sweep judges it. */
 const LOAD_SIGN_RELATIVE = 1e-9;
 
-function nearestRow<T>(rows: T[], pos: (r: T) => number, at: number): T | undefined {
-  let best: T | undefined;
+/** The row whose position (travel, roll, steer) is nearest `at`; null when there are no rows. */
+export function nearestRow<T>(rows: readonly T[], pos: (r: T) => number, at: number): T | null {
+  let best: T | null = null;
   let bestD = Infinity;
   for (const r of rows) {
     const d = Math.abs(pos(r) - at);
@@ -87,9 +88,9 @@ export function mostStrainedMember(
 }
 
 function eventRow(result: SweepResult, e: SweepEvent): HeaveRow | RollRow | undefined {
-  return e.sweep === 'roll'
-    ? nearestRow(result.roll, (r) => r.roll, e.at)
-    : nearestRow(result.heave, (r) => r.travel, e.at);
+  const row =
+    e.sweep === 'roll' ? nearestRow(result.roll, (r) => r.roll, e.at) : nearestRow(result.heave, (r) => r.travel, e.at);
+  return row ?? undefined;
 }
 
 /**

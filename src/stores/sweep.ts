@@ -17,7 +17,7 @@ import { axleEndOf } from '../../shared/kinematics/metrics/registry/help';
 import { createSweepRunner, type SweepRunner, type RunnerOptions } from '../sweep/runner';
 import type { SweepAnswer } from '../workers/sweep.protocol';
 import { checkTargets, readTargets, type Targets } from '../../shared/display/targets';
-import { buildFlags } from '../../shared/display/flags';
+import { buildFlags, nearestRow } from '../../shared/display/flags';
 import { EMPTY_CONTEXT, type CursorRow, type SweepContext } from '../sweep/readout';
 import { sweepRange } from '../sweep/range';
 import { steerAt, steerInputOf } from '../../shared/display/steerInput';
@@ -31,19 +31,6 @@ const SWEPT_FIELDS = ['layout', 'vehicle', 'points', 'members', 'wheels', 'drive
 
 /** How long a sweep may be pending before the board says it is still sweeping (ms). */
 const SLOW_SWEEP_MS = 300;
-
-function nearest<T>(rows: readonly T[], pos: (r: T) => number, at: number): T | null {
-  let best: T | null = null;
-  let bestD = Infinity;
-  for (const r of rows) {
-    const d = Math.abs(pos(r) - at);
-    if (d < bestD) {
-      bestD = d;
-      best = r;
-    }
-  }
-  return best;
-}
 
 let runnerOptions: RunnerOptions = {};
 /** Tests choose the main-thread path (or a fake worker) before the store is first used. */
@@ -197,10 +184,10 @@ export const useSweepStore = defineStore('sweep', () => {
   );
 
   const heaveRow = computed<HeaveRow | null>(() =>
-    result.value ? nearest(result.value.heave, (r) => r.travel, travel.value) : null,
+    result.value ? nearestRow(result.value.heave, (r) => r.travel, travel.value) : null,
   );
   const rollRow = computed<RollRow | null>(() =>
-    result.value ? nearest(result.value.roll, (r) => r.roll, roll.value) : null,
+    result.value ? nearestRow(result.value.roll, (r) => r.roll, roll.value) : null,
   );
 
   /** What moves the wheels in the steer sweep (rack, …); null when the result has no steer rows. */
@@ -209,7 +196,7 @@ export const useSweepStore = defineStore('sweep', () => {
   const steerRow = computed<SteerRow | null>(() => {
     const input = steerInput.value;
     const rows = result.value?.steer?.rows;
-    return input && rows ? nearest(rows, (r) => steerAt(r, input), steer.value) : null;
+    return input && rows ? nearestRow(rows, (r) => steerAt(r, input), steer.value) : null;
   });
   /** True while the steer slider is the one moved last (and the result steers). */
   const steering = computed(() => cursorSweep.value === 'steer' && steerRow.value !== null);
