@@ -11,11 +11,12 @@
  */
 import { describe, expect, it } from 'vitest';
 import { runSweep, starters } from '../../../shared/kinematics';
+import { KINGPIN_Y, trapezoid, trapezoidAngle as trapezoidDeg } from '../../reference/steerTrapezoid';
 import { checkSketch, type Sketch, type SketchInput } from '../../../shared/schema/sketch';
 import { axleLineToRear, steerPlanGeometry } from '../../../src/canvas/steerPlan';
 import { arcPoints, planScene, rearAxleX } from '../../../src/canvas/planView';
 import { tyreOutline } from '../../../src/canvas/steerWheels';
-import { wishboneSketch, type WishboneRig } from '../../reference/wishboneRigs';
+import { wishboneSketch } from '../../reference/wishboneRigs';
 
 const DEG = Math.PI / 180;
 
@@ -102,35 +103,11 @@ describe('the plan construction on an Ackermann layout given by its angles', () 
   });
 });
 
-/**
- * A planar trapezoid (as tests/reference/steer.test.ts): vertical kingpins at y = ±700 through the ball joints,
- * wheel centres 100 mm outboard of them, steering arms level to (−150, ±660), tie rods 360 mm to the rack ends at
- * (−150, ±300). Each knuckle's angle is the closed-form root of a·cos θ + b·sin θ = c (the tie rod's length).
- */
-const trapezoid: WishboneRig = {
-  wheel: [800, 350],
-  lowerInner: [400, 150],
-  lowerJoint: [700, 150],
-  upperInner: [450, 550],
-  upperJoint: [700, 550],
-  tieRodX: -150,
-  tieRodInner: [300, 300],
-  tieRodOuter: [660, 300],
-};
-const KINGPIN_Y = 700;
+/** mm, the trapezoid's wheel centres outboard of its kingpins (steerTrapezoid.ts). */
 const SCRUB = 100;
 
-function trapezoidAngle(side: 1 | -1, rack: number): number {
-  const e = [150, side * (KINGPIN_Y - 300) - rack];
-  const d = [-150, side * (660 - KINGPIN_Y)];
-  const a = e[0] * d[0] + e[1] * d[1];
-  const b = e[1] * d[0] - e[0] * d[1];
-  const c = (360 * 360 - (e[0] ** 2 + e[1] ** 2) - (d[0] ** 2 + d[1] ** 2)) / 2;
-  const phi = Math.atan2(b, a);
-  const spread = Math.acos(c / Math.hypot(a, b));
-  const roots = [phi + spread, phi - spread].map((x) => Math.atan2(Math.sin(x), Math.cos(x)));
-  return roots.reduce((x, y) => (Math.abs(y) < Math.abs(x) ? y : x));
-}
+/** rad, the trapezoid's knuckle angle solved by hand (steerTrapezoid.ts gives degrees). */
+const trapezoidAngle = (side: 1 | -1, rack: number) => (trapezoidDeg(side, rack) * Math.PI) / 180;
 
 describe('the plan view of a swept trapezoid against its hand solution', () => {
   const doc = wishboneSketch(trapezoid, {
