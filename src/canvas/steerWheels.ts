@@ -5,7 +5,8 @@
  * metrics/ground.ts). And a tyre's outline in any view: the convex hull of its two sidewall
  * circles projected, so one function draws a turned tyre from the side, the front and above.
  */
-import type { Sketch } from '../../shared/schema/sketch';
+import type { MovingBodyId, Sketch } from '../../shared/schema/sketch';
+import { sketchBodyReferences } from '../../shared/kinematics/model';
 import type { Pose, SteerRow } from '../../shared/kinematics/types';
 import { poseApply } from '../../shared/kinematics/pose';
 import { contactPoint } from '../../shared/kinematics/metrics/ground';
@@ -39,16 +40,21 @@ function turn(pose: Pose | undefined, v: Vec3): Vec3 {
 export function turnedWheels(sketch: Sketch, row: SteerRow, points: Record<string, Vec3>): TurnedWheel[] {
   const out: TurnedWheel[] = [];
   const r = sketch.vehicle.tireRadius;
+  const refs = sketchBodyReferences(sketch);
   for (const side of ['left', 'right'] as const) {
     const id = sketch.wheels[side];
     const ride = sketch.points.find((p) => p.id === id);
-    const centre = points[id];
-    if (!ride || !centre) continue;
-    const axis = turn((row.bodies as Partial<Record<string, Pose>>)[ride.body], {
-      x: 0,
-      y: side === 'left' ? 1 : -1,
-      z: 0,
-    });
+    if (!ride) continue;
+    // The wheel turns with its knuckle. A steered solid axle keeps its wheel centres on the axle body and turns
+    // the knuckle on its kingpin: the sweep reads the wheel as carried by the knuckle, and so is it drawn here.
+    const poses = row.bodies as Partial<Record<string, Pose>>;
+    const knuckle = `knuckle-${side}`;
+    const carrier = poses[knuckle] && refs.has(knuckle as MovingBodyId) ? knuckle : ride.body;
+    const pose = poses[carrier];
+    const ref = refs.get(carrier as MovingBodyId);
+    const centre = carrier === ride.body ? points[id] : pose && ref ? poseApply(pose, ref, ride) : points[id];
+    if (!centre) continue;
+    const axis = turn(pose, { x: 0, y: side === 'left' ? 1 : -1, z: 0 });
     const patch = contactPoint({ centre, axis }, { x: 0, y: 0, z: 1 }, r);
     out.push({
       side,

@@ -212,3 +212,20 @@ describe('the plan view of the double-wishbone starter', () => {
     }
   });
 });
+
+describe('the plan view of each steered starter against the turning radius its readout gives', () => {
+  for (const layout of ['double-wishbone', 'steered-front-axle'] as const) {
+    it(`draws the ${layout} starter's turning circle through the outer patch at the readout's radius, at every turned row`, () => {
+      const sketch = parsed(starters[layout]!.build());
+      const steer = runSweep(sketch).steer!;
+      const turned = steer.rows.filter((r) => r.turningRadius !== null);
+      expect(turned.length).toBeGreaterThan(4);
+      for (const row of turned) {
+        const scene = planScene(sketch, steer, row)!;
+        expect(scene.geometry.radius!).toBeCloseTo(row.turningRadius!, 6);
+        // The drawn tyres carry the row's steer angles.
+        for (const w of scene.wheels) expect(w.steer).toBe(w.side === 'left' ? row.leftSteer : row.rightSteer);
+      }
+    });
+  }
+});
