@@ -36,3 +36,22 @@ anonymous('an admin sees the admin pages in the drawer and the user list', async
   await expect(page.getByTestId('users-table')).toContainText('student@demo.test');
   await snap(page, 'admin-users');
 });
+
+test('on a phone the library keeps each row’s shared state and menu on screen', async ({ page }) => {
+  await page.setViewportSize({ width: 390, height: 800 });
+  await page.goto('/library');
+  await inputOf(page, 'search').fill('Kettle Creek');
+  const table = page.getByTestId('library-table');
+  await expect(table).toContainText('Kettle Creek shop truck, rear four-link');
+  const row = table.locator('tbody tr', { hasText: 'Kettle Creek shop truck, rear four-link' });
+  const actions = row.getByRole('button', { name: 'Actions' });
+  const share = row.locator('[data-test^="share-"]');
+  for (const control of [actions, share]) {
+    const box = (await control.boundingBox())!;
+    expect(box.x + box.width).toBeLessThanOrEqual(390);
+  }
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+  await actions.click();
+  await expect(page.getByTestId('menu-share')).toBeVisible();
+  await snap(page, 'library-phone');
+});
