@@ -40,3 +40,15 @@ export function kingpinReading(
   };
   return Object.values(out).every(Number.isFinite) ? out : null;
 }
+
+/** A kingpin reading for a result row: each value through the row's round-off cleaner (null stays null). */
+export function kingpinForRow(kp: KingpinReading | null, clean: (v: number) => number): KingpinReading | null {
+  return kp
+    ? {
+        inclination: clean(kp.inclination),
+        caster: clean(kp.caster),
+        scrubRadius: clean(kp.scrubRadius),
+        trail: clean(kp.trail),
+      }
+    : null;
+}

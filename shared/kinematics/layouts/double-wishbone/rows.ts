@@ -9,7 +9,7 @@
  */
 import { degToRad } from '../../../units';
 import { antiDivePercent } from '../../metrics/antiDive';
-import { kingpinReading } from '../../metrics/kingpin';
+import { kingpinForRow, kingpinReading } from '../../metrics/kingpin';
 import { wheelAttitude } from '../../metrics/wheel';
 import {
   linesCrossing,
@@ -91,14 +91,7 @@ export function wishboneHeaveFields(
     instantCenter: side(sv.ic),
     antiSquat: null,
     antiDive: orNull(antiDive),
-    kingpin: kp
-      ? {
-          inclination: clean(kp.inclination),
-          caster: clean(kp.caster),
-          scrubRadius: clean(kp.scrubRadius),
-          trail: clean(kp.trail),
-        }
-      : null,
+    kingpin: kingpinForRow(kp, clean),
   };
 }
 

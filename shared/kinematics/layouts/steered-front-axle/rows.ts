@@ -7,7 +7,7 @@
  *   ride, so the ride row's value is 0;
  * - the left kingpin axis (the knuckle's hinge on the axle) and its caster change (metrics/kingpin.ts).
  */
-import { kingpinReading } from '../../metrics/kingpin';
+import { kingpinForRow, kingpinReading } from '../../metrics/kingpin';
 import type { SolvedRow } from '../../march';
 import { steerAngle } from '../../steer/rows';
 import type { HeaveRow, RollRow } from '../../types';
@@ -33,14 +33,7 @@ export function steeredAxleHeaveFields(
   return {
     wheelSteer: wheelSteer(plan, solved.state, clean),
     casterChange: kp && plan.rideKingpin ? clean(kp.caster - plan.rideKingpin.caster) : null,
-    kingpin: kp
-      ? {
-          inclination: clean(kp.inclination),
-          caster: clean(kp.caster),
-          scrubRadius: clean(kp.scrubRadius),
-          trail: clean(kp.trail),
-        }
-      : null,
+    kingpin: kingpinForRow(kp, clean),
   };
 }
 
