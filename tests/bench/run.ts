@@ -6,7 +6,9 @@
  *
  * Then the steer sweep of the double-wishbone starter: 25 rack rows (±60 mm by 5) beside 25 heave rows
  * (±60 mm by 5), each marched and read on one solver from the solved ride row, and the starter's full sweep
- * with and without its steer block (the difference is the steer sweep with its bump-steer map).
+ * with and without its steer block (the difference is the steer sweep with its bump-steer map). The two
+ * sweeps are timed in turn in one loop (heave, steer, heave, steer…), so that other work on the machine
+ * falls on both alike, and their ratio is printed with the Newton iterations each took and the load average.
  * `npm run bench -- --steer` prints that comparison alone.
  */
 import os from 'node:os';
@@ -41,6 +43,39 @@ function time(f: () => unknown, n: number, warm = Math.max(20, n >> 2)): { media
   t.sort((a, b) => a - b);
   return { median: median(t), p90: t[Math.floor(t.length * 0.9)] };
 }
+
+/** Times `a` and `b` in turn, `n` runs each after a warm-up; the median and 95th percentile of each (ms). */
+function timePair(
+  a: () => unknown,
+  b: () => unknown,
+  n: number,
+): { a: { median: number; p95: number }; b: { median: number; p95: number } } {
+  for (let i = 0; i < Math.max(20, n >> 2); i++) {
+    a();
+    b();
+  }
+  const ta: number[] = [];
+  const tb: number[] = [];
+  for (let i = 0; i < n; i++) {
+    let t0 = performance.now();
+    a();
+    ta.push(performance.now() - t0);
+    t0 = performance.now();
+    b();
+    tb.push(performance.now() - t0);
+  }
+  const figures = (t: number[]) => {
+    t.sort((x, y) => x - y);
+    return { median: median(t), p95: t[Math.floor(t.length * 0.95)] };
+  };
+  return { a: figures(ta), b: figures(tb) };
+}
+
+const loadAverage = () =>
+  os
+    .loadavg()
+    .map((v) => v.toFixed(2))
+    .join(' / ');
 
 function startersTable(): void {
   const rows: string[][] = [];
@@ -105,18 +140,38 @@ function steerTable(): void {
   const linkage = steeringOf(model);
   if (typeof linkage === 'string') throw new Error(linkage);
   const steer = () => steerInputSweep(ctx, linkage, ride.state, 60, 5).rows;
-  const heaveRows = heave().length;
-  const steerRows = steer().length;
-  const h = time(heave, 400);
-  const st = time(steer, 400);
+  // Newton iterations of one run of each (the solver's count, summed over the rows' solves).
+  let iterations = 0;
+  const solve = solver.solve.bind(solver);
+  solver.solve = (state) => {
+    const outcome = solve(state);
+    iterations += outcome.iterations;
+    return outcome;
+  };
+  const counted = (f: () => unknown[]) => {
+    iterations = 0;
+    const rows = f().length;
+    return { rows, iterations };
+  };
+  const heaveCount = counted(heave);
+  const steerCount = counted(steer);
+  solver.solve = solve;
+  const loadBefore = loadAverage();
+  const { a: h, b: st } = timePair(heave, steer, 1000);
+  const loadAfter = loadAverage();
   const { steer: _, ...plainSweep } = sketch.sweep;
   const plainDoc = { ...doc, sweep: plainSweep };
   const full = time(() => runSweep(doc), 200);
   const plain = time(() => runSweep(plainDoc), 200);
   console.log(`Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}`);
-  console.log('double-wishbone starter, ms (median / p90):');
-  console.log(`  heave sweep, ${heaveRows} rows:  ${h.median.toFixed(3)} / ${h.p90.toFixed(3)}`);
-  console.log(`  steer sweep, ${steerRows} rows:  ${st.median.toFixed(3)} / ${st.p90.toFixed(3)}`);
+  console.log(`load average ${loadBefore} before, ${loadAfter} after the paired runs (1 / 5 / 15 min)`);
+  console.log('double-wishbone starter, 1000 runs of each in turn, ms (median / p95):');
+  const it = (c: { rows: number; iterations: number }) => `${c.rows} rows, ${c.iterations} Newton iterations`;
+  console.log(`  heave sweep, ${it(heaveCount)}:  ${h.median.toFixed(3)} / ${h.p95.toFixed(3)}`);
+  console.log(`  steer sweep, ${it(steerCount)}:  ${st.median.toFixed(3)} / ${st.p95.toFixed(3)}`);
+  console.log(
+    `  steer / heave: ${(st.median / h.median).toFixed(2)}× at the median, ${(st.p95 / h.p95).toFixed(2)}× at the p95`,
+  );
   console.log(
     `  full sweep with sweep.steer (steer rows + bump-steer map): ${full.median.toFixed(3)} / ${full.p90.toFixed(3)}`,
   );
