@@ -143,8 +143,8 @@ function steerTable(): void {
   // Newton iterations of one run of each (the solver's count, summed over the rows' solves).
   let iterations = 0;
   const solve = solver.solve.bind(solver);
-  solver.solve = (state) => {
-    const outcome = solve(state);
+  solver.solve = (state, chordStepMm) => {
+    const outcome = solve(state, chordStepMm);
     iterations += outcome.iterations;
     return outcome;
   };

@@ -14,6 +14,15 @@ import { BodyRotations, pointPlace, residualsEvaluate, residualWorkCreate, type 
 import { ROTATION_SCALE_MM } from '../solve';
 import { steerInputPoints, steerInputSet, steerInputVelocity, type SteerInput, type SteerLinkage } from './linkage';
 
+/**
+ * mm (a radian counted as ROTATION_SCALE_MM): the steer march's chord limit (solve.ts, CHORD_STEP_MM). Toward
+ * lock the predictor's error grows to about a millimetre while each row's first step leaves the pose within
+ * micrometres; a step of this size changes the Jacobian by about (step / link length), under 1 %, so the
+ * following steps on the first factorisation still gain orders of magnitude each and stop on the solver's
+ * own tolerance, without a second factorisation.
+ */
+export const STEER_CHORD_STEP_MM = 1;
+
 /** Bisection steps that close in on the limit: a 5 mm (or 5°) step ends within 5 µm (or 0.005°) of it. */
 export const LIMIT_BISECTION_STEPS = 10;
 
@@ -147,7 +156,7 @@ function stepInput(
   if (correct || process.env.CC) chordCorrect(rc, state);
   const predicted = rc.predicted;
   predicted.set(state);
-  const outcome = solver.solve(state);
+  const outcome = solver.solve(state, STEER_CHORD_STEP_MM);
   if (!outcome.converged) return null;
   const limit = redundancy === 0 ? LOCKUP_RESIDUAL_TOLERANCE_MM : LOCKUP_BIND_LIMIT_MM;
   if (!(outcome.maxResidual <= limit)) return null;
