@@ -44,31 +44,45 @@ function time(f: () => unknown, n: number, warm = Math.max(20, n >> 2)): { media
   return { median: median(t), p90: t[Math.floor(t.length * 0.9)] };
 }
 
-/** Times `a` and `b` in turn, `n` runs each after a warm-up; the median and 95th percentile of each (ms). */
+/**
+ * Times `a` and `b` in turn, `n` runs each after a warm-up: the median and 95th percentile of each (wall ms),
+ * and each one's mean CPU time (ms of this process's user + system time per run), which a busy machine
+ * does not inflate by the time the process waits for a core.
+ */
 function timePair(
   a: () => unknown,
   b: () => unknown,
   n: number,
-): { a: { median: number; p95: number }; b: { median: number; p95: number } } {
+): Record<'a' | 'b', { median: number; p95: number; cpu: number }> {
   for (let i = 0; i < Math.max(20, n >> 2); i++) {
     a();
     b();
   }
   const ta: number[] = [];
   const tb: number[] = [];
+  let ca = 0;
+  let cb = 0;
+  const cpu = () => {
+    const u = process.cpuUsage();
+    return (u.user + u.system) / 1000;
+  };
   for (let i = 0; i < n; i++) {
+    let c0 = cpu();
     let t0 = performance.now();
     a();
     ta.push(performance.now() - t0);
+    ca += cpu() - c0;
+    c0 = cpu();
     t0 = performance.now();
     b();
     tb.push(performance.now() - t0);
+    cb += cpu() - c0;
   }
-  const figures = (t: number[]) => {
+  const figures = (t: number[], c: number) => {
     t.sort((x, y) => x - y);
-    return { median: median(t), p95: t[Math.floor(t.length * 0.95)] };
+    return { median: median(t), p95: t[Math.floor(t.length * 0.95)], cpu: c / n };
   };
-  return { a: figures(ta), b: figures(tb) };
+  return { a: figures(ta, ca), b: figures(tb, cb) };
 }
 
 const loadAverage = () =>
@@ -165,12 +179,15 @@ function steerTable(): void {
   const plain = time(() => runSweep(plainDoc), 200);
   console.log(`Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}`);
   console.log(`load average ${loadBefore} before, ${loadAfter} after the paired runs (1 / 5 / 15 min)`);
-  console.log('double-wishbone starter, 1000 runs of each in turn, ms (median / p95):');
+  console.log('double-wishbone starter, 1000 runs of each in turn, ms (median / p95 wall; mean CPU):');
   const it = (c: { rows: number; iterations: number }) => `${c.rows} rows, ${c.iterations} Newton iterations`;
-  console.log(`  heave sweep, ${it(heaveCount)}:  ${h.median.toFixed(3)} / ${h.p95.toFixed(3)}`);
-  console.log(`  steer sweep, ${it(steerCount)}:  ${st.median.toFixed(3)} / ${st.p95.toFixed(3)}`);
+  const fig = (f: { median: number; p95: number; cpu: number }) =>
+    `${f.median.toFixed(3)} / ${f.p95.toFixed(3)}; CPU ${f.cpu.toFixed(3)}`;
+  console.log(`  heave sweep, ${it(heaveCount)}:  ${fig(h)}`);
+  console.log(`  steer sweep, ${it(steerCount)}:  ${fig(st)}`);
+  const ratio = (k: 'median' | 'p95' | 'cpu') => `${(st[k] / h[k]).toFixed(2)}×`;
   console.log(
-    `  steer / heave: ${(st.median / h.median).toFixed(2)}× at the median, ${(st.p95 / h.p95).toFixed(2)}× at the p95`,
+    `  steer / heave: ${ratio('median')} at the median, ${ratio('p95')} at the p95, ${ratio('cpu')} in CPU time`,
   );
   console.log(
     `  full sweep with sweep.steer (steer rows + bump-steer map): ${full.median.toFixed(3)} / ${full.p90.toFixed(3)}`,
