@@ -152,9 +152,11 @@ export class PoseSolver {
 
   /**
    * Moves the free coordinates of `state` (in place; imposed coordinates already set) to the
-   * least-squares pose. The starting free coordinates are the initial guess.
+   * least-squares pose. The starting free coordinates are the initial guess. `chordStepMm`: after
+   * an undamped step shorter than this the next reuses the factorisation (CHORD_STEP_MM unless a
+   * march whose first steps are longer, but whose Jacobian changes slowly over them, says otherwise).
    */
-  solve(state: Float64Array): SolveOutcome {
+  solve(state: Float64Array, chordStepMm = CHORD_STEP_MM): SolveOutcome {
     const { model, free, n, work, step } = this;
     residualsEvaluate(model, state, work, this.r, this.J);
     if (n === 0 || this.m === 0) {
@@ -182,7 +184,7 @@ export class PoseSolver {
         if (!Number.isFinite(s)) return { converged: false, iterations: it, maxResidual: this.maxAbs(this.r) };
         if (s > size) size = s;
       }
-      chord = damping === 0 && size < CHORD_STEP_MM;
+      chord = damping === 0 && size < chordStepMm;
       if (size < SOLVE_STEP_TOLERANCE_MM) {
         // A damped step is short by construction; only an undamped short step means a minimum.
         if (damping > 0) {

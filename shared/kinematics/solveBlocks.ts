@@ -4,33 +4,13 @@
  * layout) give a block-diagonal Jacobian; each block is factored and solved on its own, which
  * is the same answer as the whole system (the blocks do not share a row or a column) at a
  * fraction of the cost (QR is cubic in the block size). A linkage that is one block (a solid
- * axle) is solved exactly as before, as one matrix.
+ * axle) is solved exactly as before, as one matrix. The factorisation is householderQr.ts (ml-matrix's
+ * arithmetic, without its per-entry and per-call allocation costs).
  */
-import { Matrix, QrDecomposition } from 'ml-matrix';
+import { HouseholderQr } from './householderQr';
 import type { LinkageModel } from './model';
 import { constraintRows, constraintSlots } from './model';
 import { POSE_SIZE } from './pose';
-
-/**
- * A Matrix whose clone copies row arrays directly into one copy it keeps. ml-matrix's
- * decompositions clone their input (QR its matrix, solve its right-hand side) through a
- * generator over every entry into a fresh matrix, which dominates the time of the small
- * systems solved here; the algebra stays ml-matrix's. The kept copy is overwritten by the
- * next clone, which is safe here: a block's factorisation of a matrix is dropped before that
- * matrix is factored again, and a solve's copy of its right-hand side is read (its first n
- * rows taken) before the next solve.
- */
-export class WorkMatrix extends Matrix {
-  private twin: WorkMatrix | null = null;
-
-  override clone(): this {
-    const out = (this.twin ??= new WorkMatrix(this.rows, this.columns)) as this;
-    const from = (this as unknown as { data: Float64Array[] }).data;
-    const to = (out as unknown as { data: Float64Array[] }).data;
-    for (let i = 0; i < this.rows; i++) to[i].set(from[i]);
-    return out;
-  }
-}
 
 /** Residual rows and free columns (indices into the solver's free list) that only meet each other. */
 export interface SolveBlock {
@@ -71,12 +51,10 @@ export function solveBlocksBuild(model: LinkageModel, free: Int32Array): SolveBl
 }
 
 interface BlockWork extends SolveBlock {
-  aug: WorkMatrix;
-  augRhs: WorkMatrix;
-  plain: WorkMatrix;
-  plainRhs: WorkMatrix;
+  /** the factorisation, with room for the damping rows */
+  qr: HouseholderQr;
   colNorm: Float64Array;
-  qr: QrDecomposition | null;
+  factored: boolean;
   /** rows of the factored matrix in use (with or without the damping rows) */
   used: number;
   /** the block's columns are all zero (nothing constrains its bodies): its step is zero */
@@ -93,12 +71,9 @@ export class BlockedLeastSquares {
         n = b.cols.length;
       return {
         ...b,
-        aug: new WorkMatrix(m + n, n),
-        augRhs: new WorkMatrix(m + n, 1),
-        plain: new WorkMatrix(Math.max(m, 1), n),
-        plainRhs: new WorkMatrix(Math.max(m, 1), 1),
+        qr: new HouseholderQr(m + n, n),
         colNorm: new Float64Array(n),
-        qr: null,
+        factored: false,
         used: 0,
         empty: true,
       };
@@ -125,11 +100,11 @@ export class BlockedLeastSquares {
   ): boolean {
     let any = false;
     for (const b of this.blocks) {
-      b.qr = null;
+      b.factored = false;
       const m = b.rows.length,
         n = b.cols.length;
       const augmented = damping > 0 || regularize || m < n;
-      const A = augmented ? b.aug : b.plain;
+      const A = b.qr.a;
       b.used = augmented ? m + n : m;
       let maxNorm = 0;
       for (let j = 0; j < n; j++) {
@@ -137,7 +112,7 @@ export class BlockedLeastSquares {
         let s = 0;
         for (let i = 0; i < m; i++) {
           const v = J[b.rows[i] * stateSize + c];
-          A.set(i, j, v);
+          A[i * n + j] = v;
           s += v * v;
         }
         b.colNorm[j] = s;
@@ -148,15 +123,12 @@ export class BlockedLeastSquares {
       if (augmented) {
         const mu = regularize || m < n ? regularizationRelative * maxNorm : 0;
         for (let j = 0; j < n; j++) {
-          for (let k = 0; k < n; k++) A.set(m + j, k, 0);
-          A.set(m + j, j, Math.sqrt(damping * b.colNorm[j] + mu));
+          for (let k = 0; k < n; k++) A[(m + j) * n + k] = 0;
+          A[(m + j) * n + j] = Math.sqrt(damping * b.colNorm[j] + mu);
         }
       }
-      b.qr = new QrDecomposition(A);
-      if (!b.qr.isFullRank()) {
-        b.qr = null;
-        return false;
-      }
+      if (!b.qr.factor(b.used)) return false;
+      b.factored = true;
       any = true;
     }
     return any;
@@ -165,16 +137,16 @@ export class BlockedLeastSquares {
   /** Solves the factored blocks for the right-hand side [sign·rhs; 0]; writes the step of every free column into `out`. */
   solve(rhs: Float64Array, sign: number, out: Float64Array): void {
     for (const b of this.blocks) {
-      if (b.empty || !b.qr) {
+      if (b.empty || !b.factored) {
         for (const j of b.cols) out[j] = 0;
         continue;
       }
       const m = b.rows.length;
-      const B = b.used > m ? b.augRhs : b.plainRhs;
-      for (let i = 0; i < m; i++) B.set(i, 0, sign * rhs[b.rows[i]]);
-      for (let i = m; i < b.used; i++) B.set(i, 0, 0);
-      const x = b.qr.solve(B);
-      for (let j = 0; j < b.cols.length; j++) out[b.cols[j]] = x.get(j, 0);
+      const x = b.qr.x;
+      for (let i = 0; i < m; i++) x[i] = sign * rhs[b.rows[i]];
+      for (let i = m; i < b.used; i++) x[i] = 0;
+      b.qr.solve();
+      for (let j = 0; j < b.cols.length; j++) out[b.cols[j]] = x[j];
     }
   }
 }

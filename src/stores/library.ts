@@ -4,7 +4,6 @@ import { api } from '../api/http';
 import type { Page, SketchDetail, SketchSummary } from '../api/types';
 import type { Layout } from '../../shared/schema/sketch';
 import type { LibraryQuery, ShareMode } from '../../shared/schema/sketchRequests';
-import { starters } from '../../shared/kinematics';
 
 /** Longest sketch name the server takes. */
 const MAX_SKETCH_NAME = 200;
@@ -40,12 +39,14 @@ export const useLibraryStore = defineStore('library', () => {
   /**
    * Creates a sketch from a starter layout (the one way a new sketch begins): `params` are the
    * starter's sizes in its own units (mm, degrees), missing ones at their defaults; without a
-   * name it is called after the starter. Resolves to the new sketch.
+   * name it is called after the starter. Resolves to the new sketch. The starters are fetched
+   * here, when one is used: the board and the library list do not need them to paint.
    */
   async function createFromStarter(
     layout: Layout,
     opts: { name?: string; params?: Partial<Record<string, number>> } = {},
   ): Promise<SketchDetail> {
+    const { starters } = await import('../../shared/kinematics/starters');
     const spec = starters[layout];
     if (!spec) throw new Error(`There is no starter '${layout}'.`);
     const name = opts.name ?? `New ${spec.label.toLowerCase()}`.slice(0, MAX_SKETCH_NAME);

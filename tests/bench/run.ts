@@ -6,7 +6,9 @@
  *
  * Then the steer sweep of the double-wishbone starter: 25 rack rows (±60 mm by 5) beside 25 heave rows
  * (±60 mm by 5), each marched and read on one solver from the solved ride row, and the starter's full sweep
- * with and without its steer block (the difference is the steer sweep with its bump-steer map).
+ * with and without its steer block (the difference is the steer sweep with its bump-steer map). The two
+ * sweeps are timed in turn in one loop (heave, steer, heave, steer…), so that other work on the machine
+ * falls on both alike, and their ratio is printed with the Newton iterations each took and the load average.
  * `npm run bench -- --steer` prints that comparison alone.
  */
 import os from 'node:os';
@@ -41,6 +43,53 @@ function time(f: () => unknown, n: number, warm = Math.max(20, n >> 2)): { media
   t.sort((a, b) => a - b);
   return { median: median(t), p90: t[Math.floor(t.length * 0.9)] };
 }
+
+/**
+ * Times `a` and `b` in turn, `n` runs each after a warm-up: the median and 95th percentile of each (wall ms),
+ * and each one's mean CPU time (ms of this process's user + system time per run), which a busy machine
+ * does not inflate by the time the process waits for a core.
+ */
+function timePair(
+  a: () => unknown,
+  b: () => unknown,
+  n: number,
+): Record<'a' | 'b', { median: number; p95: number; cpu: number }> {
+  for (let i = 0; i < Math.max(20, n >> 2); i++) {
+    a();
+    b();
+  }
+  const ta: number[] = [];
+  const tb: number[] = [];
+  let ca = 0;
+  let cb = 0;
+  const cpu = () => {
+    const u = process.cpuUsage();
+    return (u.user + u.system) / 1000;
+  };
+  for (let i = 0; i < n; i++) {
+    let c0 = cpu();
+    let t0 = performance.now();
+    a();
+    ta.push(performance.now() - t0);
+    ca += cpu() - c0;
+    c0 = cpu();
+    t0 = performance.now();
+    b();
+    tb.push(performance.now() - t0);
+    cb += cpu() - c0;
+  }
+  const figures = (t: number[], c: number) => {
+    t.sort((x, y) => x - y);
+    return { median: median(t), p95: t[Math.floor(t.length * 0.95)], cpu: c / n };
+  };
+  return { a: figures(ta, ca), b: figures(tb, cb) };
+}
+
+const loadAverage = () =>
+  os
+    .loadavg()
+    .map((v) => v.toFixed(2))
+    .join(' / ');
 
 function startersTable(): void {
   const rows: string[][] = [];
@@ -105,18 +154,41 @@ function steerTable(): void {
   const linkage = steeringOf(model);
   if (typeof linkage === 'string') throw new Error(linkage);
   const steer = () => steerInputSweep(ctx, linkage, ride.state, 60, 5).rows;
-  const heaveRows = heave().length;
-  const steerRows = steer().length;
-  const h = time(heave, 400);
-  const st = time(steer, 400);
+  // Newton iterations of one run of each (the solver's count, summed over the rows' solves).
+  let iterations = 0;
+  const solve = solver.solve.bind(solver);
+  solver.solve = (state, chordStepMm) => {
+    const outcome = solve(state, chordStepMm);
+    iterations += outcome.iterations;
+    return outcome;
+  };
+  const counted = (f: () => unknown[]) => {
+    iterations = 0;
+    const rows = f().length;
+    return { rows, iterations };
+  };
+  const heaveCount = counted(heave);
+  const steerCount = counted(steer);
+  solver.solve = solve;
+  const loadBefore = loadAverage();
+  const { a: h, b: st } = timePair(heave, steer, 1000);
+  const loadAfter = loadAverage();
   const { steer: _, ...plainSweep } = sketch.sweep;
   const plainDoc = { ...doc, sweep: plainSweep };
   const full = time(() => runSweep(doc), 200);
   const plain = time(() => runSweep(plainDoc), 200);
   console.log(`Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}`);
-  console.log('double-wishbone starter, ms (median / p90):');
-  console.log(`  heave sweep, ${heaveRows} rows:  ${h.median.toFixed(3)} / ${h.p90.toFixed(3)}`);
-  console.log(`  steer sweep, ${steerRows} rows:  ${st.median.toFixed(3)} / ${st.p90.toFixed(3)}`);
+  console.log(`load average ${loadBefore} before, ${loadAfter} after the paired runs (1 / 5 / 15 min)`);
+  console.log('double-wishbone starter, 1000 runs of each in turn, ms (median / p95 wall; mean CPU):');
+  const it = (c: { rows: number; iterations: number }) => `${c.rows} rows, ${c.iterations} Newton iterations`;
+  const fig = (f: { median: number; p95: number; cpu: number }) =>
+    `${f.median.toFixed(3)} / ${f.p95.toFixed(3)}; CPU ${f.cpu.toFixed(3)}`;
+  console.log(`  heave sweep, ${it(heaveCount)}:  ${fig(h)}`);
+  console.log(`  steer sweep, ${it(steerCount)}:  ${fig(st)}`);
+  const ratio = (k: 'median' | 'p95' | 'cpu') => `${(st[k] / h[k]).toFixed(2)}×`;
+  console.log(
+    `  steer / heave: ${ratio('median')} at the median, ${ratio('p95')} at the p95, ${ratio('cpu')} in CPU time`,
+  );
   console.log(
     `  full sweep with sweep.steer (steer rows + bump-steer map): ${full.median.toFixed(3)} / ${full.p90.toFixed(3)}`,
   );

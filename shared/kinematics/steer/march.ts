@@ -10,9 +10,18 @@ import { BRANCH_JUMP_LIMIT_MM, LOCKUP_BIND_LIMIT_MM, LOCKUP_RESIDUAL_TOLERANCE_M
 import type { MarchContext } from '../march';
 import { constraintRows, type PointModel } from '../model';
 import { POSE_ROLL, POSE_SIZE } from '../pose';
-import { BodyRotations, pointPlace } from '../residuals';
+import { BodyRotations, pointPlace, residualsEvaluate, residualWorkCreate, type ResidualWork } from '../residuals';
 import { ROTATION_SCALE_MM } from '../solve';
 import { steerInputPoints, steerInputSet, steerInputVelocity, type SteerInput, type SteerLinkage } from './linkage';
+
+/**
+ * mm (a radian counted as ROTATION_SCALE_MM): the steer march's chord limit (solve.ts, CHORD_STEP_MM). Toward
+ * lock the predictor's error grows to about a millimetre while each row's first step leaves the pose within
+ * micrometres; a step of this size changes the Jacobian by about (step / link length), under 1 %, so the
+ * following steps on the first factorisation still gain orders of magnitude each and stop on the solver's
+ * own tolerance, without a second factorisation.
+ */
+export const STEER_CHORD_STEP_MM = 1;
 
 /** Bisection steps that close in on the limit: a 5 mm (or 5°) step ends within 5 µm (or 0.005°) of it. */
 export const LIMIT_BISECTION_STEPS = 10;
@@ -46,6 +55,12 @@ export interface InputContext {
   rot: BodyRotations;
   dr: Float64Array;
   place: Float64Array;
+  /** the predicted state of the row being solved (scratch) */
+  predicted: Float64Array;
+  /** scratch of the first row's corrected predictor: residual work, residuals (mm) and the correction */
+  work: ResidualWork;
+  r: Float64Array;
+  correction: Float64Array;
 }
 
 export function inputContextBuild(ctx: MarchContext, linkage: SteerLinkage): InputContext {
@@ -66,6 +81,10 @@ export function inputContextBuild(ctx: MarchContext, linkage: SteerLinkage): Inp
     rot: new BodyRotations(ctx.model.bodies.length),
     dr: new Float64Array(ctx.model.residualCount),
     place: new Float64Array(6),
+    predicted: new Float64Array(ctx.model.stateSize),
+    work: residualWorkCreate(ctx.model),
+    r: new Float64Array(ctx.model.residualCount),
+    correction: new Float64Array(ctx.model.stateSize),
   };
 }
 
@@ -101,12 +120,17 @@ function scaledDistance(rc: InputContext, a: Float64Array, b: Float64Array): num
   return d;
 }
 
-/** Solves the row at input `to` from a solved row (cubic predictor with `before`); null if it fails. */
+/**
+ * Solves the row at input `to` from a solved row (cubic predictor with `before`); null if it fails. `correct`:
+ * the solver's factorisation is `from`'s (inputStart leaves it so), and the first-order predictor gets one
+ * chord step with it (below).
+ */
 function stepInput(
   rc: InputContext,
   from: InputSolved,
   to: number,
   before: InputSolved | null = null,
+  correct = false,
 ): InputSolved | null {
   const { model, drive, solver, redundancy } = rc.ctx;
   const delta = to - from.at;
@@ -129,8 +153,10 @@ function stepInput(
   }
   driveApply(model, state, 0, 0);
   steerInputSet(rc.input, to);
-  const predicted = new Float64Array(state);
-  const outcome = solver.solve(state);
+  if (correct || process.env.CC) chordCorrect(rc, state);
+  const predicted = rc.predicted;
+  predicted.set(state);
+  const outcome = solver.solve(state, STEER_CHORD_STEP_MM);
   if (!outcome.converged) return null;
   const limit = redundancy === 0 ? LOCKUP_RESIDUAL_TOLERANCE_MM : LOCKUP_BIND_LIMIT_MM;
   if (!(outcome.maxResidual <= limit)) return null;
@@ -141,12 +167,24 @@ function stepInput(
   return { at: to, state, rate, bind: outcome.maxResidual };
 }
 
+/**
+ * One chord (simplified Newton) step on a first-order prediction, with the factorisation the solver holds (the
+ * row it was predicted from): a residual evaluation and a back substitution, where a prediction whose error is
+ * above the solver's chord limit costs an extra factorisation inside the solve. The solve still decides the
+ * row, to its own tolerance; this only moves its starting guess.
+ */
+function chordCorrect(rc: InputContext, state: Float64Array): void {
+  const { ctx, work, r, correction } = rc;
+  residualsEvaluate(ctx.model, state, work, r, null);
+  ctx.solver.sensitivityToResiduals(r, correction);
+  for (const c of ctx.drive.free) state[c] += correction[c];
+}
+
 /** The centred row (input 0) from the solved ride row's state, with its rate to the input. */
 export function inputStart(rc: InputContext, rideState: Float64Array): InputSolved {
   steerInputSet(rc.input, 0);
   const state = new Float64Array(rideState);
   const outcome = rc.ctx.solver.solve(state);
-  rc.ctx.solver.refactor();
   const rate = new Float64Array(rc.ctx.model.stateSize);
   inputRate(rc, state, 0, rate);
   return { at: 0, state, rate, bind: outcome.maxResidual };
@@ -160,13 +198,22 @@ export interface InputMarchOutcome {
   failedAt: number | null;
 }
 
-/** Marches from `start` through `values` (ordered away from centre), stopping at the steering's limit. */
-export function marchInput(rc: InputContext, start: InputSolved, values: readonly number[]): InputMarchOutcome {
+/**
+ * Marches from `start` through `values` (ordered away from centre), stopping at the steering's limit. `before`:
+ * a solved row on the other side of `start` (the first row of the march the other way), so that the first row
+ * too gets the cubic predictor; without it, the first row's linear prediction gets a chord step (chordCorrect),
+ * which needs the solver to hold `start`'s factorisation (as inputStart leaves it).
+ */
+export function marchInput(
+  rc: InputContext,
+  start: InputSolved,
+  values: readonly number[],
+  before: InputSolved | null = null,
+): InputMarchOutcome {
   const rows: InputSolved[] = [];
   let prev = start;
-  let before: InputSolved | null = null;
   for (const v of values) {
-    const next = stepInput(rc, prev, v, before) ?? subSteps(rc, prev, v);
+    const next = stepInput(rc, prev, v, before, prev === start) ?? subSteps(rc, prev, v);
     if (!next) return { rows, limit: bisectLimit(rc, prev, v), failedAt: v };
     rows.push(next);
     before = prev;

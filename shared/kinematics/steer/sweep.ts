@@ -71,7 +71,8 @@ export function steerInputSweep(
   const start = inputStart(rc, rideState);
   const plan = marchPlan(-travel, travel, step);
   const left = marchInput(rc, start, plan.up);
-  const right = marchInput(rc, start, plan.down);
+  // The first row to the left is the row before centre for the march to the right (a cubic predictor there too).
+  const right = marchInput(rc, start, plan.down, left.rows[0] ?? null);
   const solved = [...right.rows.slice().reverse(), start, ...left.rows];
   const events = [
     lockEvent(ctx.model, linkage, travel, left.rows.at(-1) ?? start, left.limit),
