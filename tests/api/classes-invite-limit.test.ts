@@ -31,7 +31,10 @@ describe('invitation mails per class per hour', () => {
     expect(await limited.mailTo('h3@example.test')).toHaveLength(0);
     expect(await ClassInvite.count({ where: { classId: klass.id } })).toBe(2);
     // Within the bound it goes on; a resend counts too.
-    await teacher.post(`/api/classes/${klass.id}/invites`).send({ emails: ['h3@example.test'] }).expect(200);
+    await teacher
+      .post(`/api/classes/${klass.id}/invites`)
+      .send({ emails: ['h3@example.test'] })
+      .expect(200);
     const resend = await teacher.post(`/api/classes/${klass.id}/invites/${res.body.sent[0].id}/resend`);
     expect(resend.status).toBe(429);
   });
