@@ -61,12 +61,14 @@ describe('SQLite connection settings', () => {
 });
 
 describe('demo seed', () => {
-  it('creates the four demo accounts with their roles, and running it again adds nothing', async () => {
+  it('creates the demo accounts, the two further students of the class too, with their roles, and running it again adds nothing', async () => {
     await seedDemoData(server.sequelize);
     const users = await User.findAll({ order: [['email', 'ASC']] });
     expect(users.map((u) => [u.email, u.role])).toEqual([
       ['admin@demo.test', 'admin'],
       ['instructor@demo.test', 'instructor'],
+      ['jo.marlowe@demo.test', 'member'],
+      ['kit.ambery@demo.test', 'member'],
       ['maker@demo.test', 'member'],
       ['student@demo.test', 'member'],
     ]);
