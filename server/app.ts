@@ -15,6 +15,9 @@ import { sharedRoutes } from './routes/shared';
 import { uploadRoutes } from './routes/uploads';
 import { adminRoutes } from './routes/admin';
 import { sweepRoutes } from './routes/sweep';
+import { classRoutes } from './routes/classes';
+import { inviteRoutes } from './routes/invites';
+import { assignmentRoutes } from './routes/assignments';
 import { JSON_BODY_MAX_BYTES } from '../shared/schema/requestLimits';
 
 /** What the app needs from outside: the open (migrated) database, the settings and the mailer. */
@@ -51,6 +54,9 @@ export function createApp(ctx: AppContext): Express {
   api.use('/shared', sharedRoutes(config));
   api.use('/admin', adminRoutes());
   api.use(sweepRoutes(config));
+  api.use('/classes', classRoutes(config, mailer));
+  api.use('/invites', inviteRoutes());
+  api.use(assignmentRoutes(config, mailer));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -40,6 +40,8 @@ export interface ServerConfig {
   sweepMaxPerMinute: number;
   /** Share links sent by e-mail per account per hour. */
   shareMailMaxPerHour: number;
+  /** Class invitation mails per class per hour (a class of 250 is invited in one go). */
+  classInviteMaxPerHour: number;
   /** Folder of the built client; served when it exists. */
   distDir: string;
 }
@@ -95,6 +97,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     signupMaxPerAddress: intFrom(env.SIGNUP_MAX_PER_ADDRESS, 30, 'SIGNUP_MAX_PER_ADDRESS'),
     sweepMaxPerMinute: intFrom(env.SWEEP_MAX_PER_MINUTE, 120, 'SWEEP_MAX_PER_MINUTE'),
     shareMailMaxPerHour: intFrom(env.SHARE_MAIL_MAX_PER_HOUR, 20, 'SHARE_MAIL_MAX_PER_HOUR'),
+    classInviteMaxPerHour: intFrom(env.CLASS_INVITE_MAX_PER_HOUR, 1000, 'CLASS_INVITE_MAX_PER_HOUR'),
     distDir: path.resolve(root, env.DIST_DIR || 'dist'),
   };
 }

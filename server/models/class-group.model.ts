@@ -4,8 +4,10 @@ import {
   type CreationOptional,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from 'sequelize';
+import type { User } from './user.model';
 
 /** A Class: an instructor's group of students (table `classes`; `Class` would shadow the keyword's meaning). */
 export class ClassGroup extends Model<InferAttributes<ClassGroup>, InferCreationAttributes<ClassGroup>> {
@@ -13,8 +15,15 @@ export class ClassGroup extends Model<InferAttributes<ClassGroup>, InferCreation
   declare name: string;
   declare term: string | null;
   declare instructorId: number;
+  /** What a student types to join without an invitation (letters and digits, upper case). */
+  declare joinCode: string;
+  /** Set while the class is closed: read-only, still listed. */
+  declare closedAt: CreationOptional<Date | null>;
+  /** Soft delete by hand, as for sketches: the instructor can restore it. */
+  declare deletedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+  declare instructor?: NonAttribute<User>;
 
   static initModel(sequelize: Sequelize): void {
     ClassGroup.init(
@@ -23,6 +32,9 @@ export class ClassGroup extends Model<InferAttributes<ClassGroup>, InferCreation
         name: { type: DataTypes.STRING(120), allowNull: false },
         term: { type: DataTypes.STRING(60), allowNull: true },
         instructorId: { type: DataTypes.INTEGER, allowNull: false },
+        joinCode: { type: DataTypes.STRING(16), allowNull: false, unique: true },
+        closedAt: { type: DataTypes.DATE, allowNull: true },
+        deletedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

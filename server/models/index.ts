@@ -10,6 +10,11 @@ import { Upload } from './upload.model';
 import { OutboxMessage } from './outbox-message.model';
 import { PasswordReset } from './password-reset.model';
 import { ShareRecipient } from './share-recipient.model';
+import { ClassInvite } from './class-invite.model';
+import { Assignment } from './assignment.model';
+import { AssignmentCopy } from './assignment-copy.model';
+import { HandIn } from './hand-in.model';
+import { Feedback } from './feedback.model';
 
 export {
   User,
@@ -23,6 +28,11 @@ export {
   OutboxMessage,
   PasswordReset,
   ShareRecipient,
+  ClassInvite,
+  Assignment,
+  AssignmentCopy,
+  HandIn,
+  Feedback,
 };
 export { shareModes, type ShareMode } from './sketch.model';
 export { roles, toPublicUser, type Role, type PublicUser } from './user.model';
@@ -41,6 +51,11 @@ export function initModels(sequelize: Sequelize): void {
     OutboxMessage,
     PasswordReset,
     ShareRecipient,
+    ClassInvite,
+    Assignment,
+    AssignmentCopy,
+    HandIn,
+    Feedback,
   ])
     model.initModel(sequelize);
 
@@ -61,6 +76,13 @@ export function initModels(sequelize: Sequelize): void {
 
   Sketch.hasMany(ShareRecipient, { foreignKey: 'sketchId', as: 'recipients' });
   ShareRecipient.belongsTo(Sketch, { foreignKey: 'sketchId' });
+
+  ClassGroup.hasMany(ClassInvite, { foreignKey: 'classId', as: 'invites' });
+  ClassGroup.hasMany(Assignment, { foreignKey: 'classId', as: 'assignments' });
+  Assignment.belongsTo(ClassGroup, { foreignKey: 'classId', as: 'class' });
+  HandIn.belongsTo(User, { foreignKey: 'studentId', as: 'student' });
+  HandIn.hasOne(Feedback, { foreignKey: 'handInId', as: 'feedback' });
+  Feedback.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
 
   User.hasMany(PasswordReset, { foreignKey: 'userId' });
   PasswordReset.belongsTo(User, { foreignKey: 'userId' });

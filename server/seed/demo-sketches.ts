@@ -1,4 +1,5 @@
 import type { Layout } from '../../shared/schema/sketch';
+import { startingTargets, type Targets } from '../../shared/display/targets';
 
 /**
  * Demo sketches built from the starters, with invented vehicle names. `owner` is a demo
@@ -9,6 +10,8 @@ export interface DemoSketch {
   layout: Layout;
   name: string;
   params?: Record<string, number>;
+  /** target bands the sketch carries (file units) */
+  targets?: Targets;
 }
 
 export const demoSketches: DemoSketch[] = [
@@ -48,6 +51,7 @@ export const demoSketches: DemoSketch[] = [
     owner: 'instructor@demo.test',
     layout: 'four-link-lateral-rod',
     name: 'Chassis 210 starter: four-link with lateral rod',
+    targets: startingTargets,
   },
   { owner: 'instructor@demo.test', layout: 'three-link-lateral-rod', name: 'Chassis 210 starter: three-link' },
   {

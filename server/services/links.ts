@@ -14,3 +14,13 @@ export function sharedSketchUrl(config: ServerConfig, token: string): string {
 export function passwordResetUrl(config: ServerConfig, token: string): string {
   return `${config.publicUrl}/reset?token=${encodeURIComponent(token)}`;
 }
+
+/** The page that previews and accepts a class invitation. */
+export function classInviteUrl(config: ServerConfig, token: string): string {
+  return `${config.publicUrl}/invites/${encodeURIComponent(token)}`;
+}
+
+/** An assignment's page (instructions, copy, hand-ins and feedback). */
+export function assignmentUrl(config: ServerConfig, assignmentId: number): string {
+  return `${config.publicUrl}/assignments/${assignmentId}`;
+}

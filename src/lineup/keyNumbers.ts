@@ -16,7 +16,7 @@ import {
   type MetricEntry,
 } from '../../shared/kinematics/metrics/registry';
 import { showMetric, type Shown } from '../../shared/display/format';
-import { buildFlags } from '../../shared/display/flags';
+import { comparedFlags } from '../../shared/display/comparedFlags';
 import { checkTargets, readTargets } from '../../shared/display/targets';
 import { layoutLabel } from '../../shared/suspensions';
 
@@ -74,11 +74,7 @@ export function keyNumbers(variants: readonly KeyVariant[], u: LengthUnit): KeyR
         cells: variants.map((v) => {
           if (!v.result) return notSwept(v);
           const checks = checkTargets(v.result, readTargets(v.document));
-          // The steering lock at the end of the rack travel asked for is where the steer sweep ends by design: the
-          // board lists it as a note, but it is nothing to compare between variants.
-          const titles = buildFlags(v.result, v.document.members, checks, u)
-            .filter((f) => f.kind !== 'steer-lock')
-            .map((f) => f.title);
+          const titles = comparedFlags(v.result, v.document.members, checks, u).map((f) => f.title);
           // One line per kind of flag, with how many times it is raised ("4 × Joint angle too small").
           const flags = [...new Set(titles)].map((t) => {
             const n = titles.filter((x) => x === t).length;

@@ -1,8 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Caller, demo, startTestServer, type TestServer } from './helpers';
-import { ClassGroup, ClassMember, Shop, Sketch, User } from '../../server/models';
+import { Assignment, ClassGroup, ClassMember, Feedback, HandIn, Shop, Sketch, User } from '../../server/models';
 import { seedDemoData } from '../../server/seed';
 import { demoSketches } from '../../server/seed/demo-sketches';
+import { demoAccounts, demoAssignment } from '../../server/seed/demo-data';
+import { assignmentDetailSchema, classListSchema } from '../../shared/schema/classes';
 import { starters } from '../../shared/kinematics';
 
 let server: TestServer;
@@ -28,7 +30,8 @@ describe('demo data', () => {
   it('has a demo sketch for every entry whose starter exists, valid and listed for its owner', async () => {
     const expected = demoSketches.filter((d) => starters[d.layout]);
     expect(expected.length).toBeGreaterThan(0);
-    expect(await Sketch.count()).toBe(expected.length);
+    // The demo entries, and the copies of the students who handed in the demo assignment.
+    expect(await Sketch.count()).toBe(expected.length + demoAssignment.handIns.length);
     const maker = await new Caller(server.app).signIn(demo.maker.email, demo.maker.password);
     const list = await maker.get('/api/sketches?sort=name&order=asc');
     const mine = expected
@@ -40,11 +43,52 @@ describe('demo data', () => {
     ).toEqual(mine);
   });
 
-  it('adds nothing when run again', async () => {
-    const before = { users: await User.count(), sketches: await Sketch.count(), members: await ClassMember.count() };
-    await seedDemoData(server.sequelize);
-    expect({ users: await User.count(), sketches: await Sketch.count(), members: await ClassMember.count() }).toEqual(
-      before,
+  it('has the class of three students, one assignment, two hand-ins (one late) and one piece of feedback', async () => {
+    const teacher = await new Caller(server.app).signIn(demo.instructor.email, demo.instructor.password);
+    const [klass] = classListSchema.parse((await teacher.get('/api/classes').expect(200)).body).items;
+    expect(klass).toMatchObject({ role: 'instructor', studentCount: 3, assignmentCount: 1 });
+    const detail = (await teacher.get(`/api/classes/${klass.id}`).expect(200)).body;
+    expect(detail.members.map((m: { email: string }) => m.email).sort()).toEqual(
+      demoAccounts
+        .filter((a) => a.inClass)
+        .map((a) => a.email)
+        .sort(),
     );
+    for (const m of detail.members) expect(m.email).toMatch(/@(demo|example)\.test$/);
+    const assignment = assignmentDetailSchema.parse(
+      (await teacher.get(`/api/assignments/${detail.assignments[0].id}`).expect(200)).body,
+    );
+    expect(assignment.title).toBe(demoAssignment.title);
+    expect(assignment.handIns.map((h) => h.late).sort()).toEqual([false, true]);
+    expect(assignment.handIns.filter((h) => h.feedback)).toHaveLength(1);
+    for (const h of assignment.handIns) {
+      expect(h.problem).toBeNull();
+      expect(h.keyNumbers.map((k) => k.key)).toEqual([
+        'antiSquat',
+        'pinionAngleChange',
+        'lateralShift',
+        'articulation',
+      ]);
+    }
+
+    // The demo student sees their own hand-in and its feedback.
+    const student = await new Caller(server.app).signIn(demo.student.email, demo.student.password);
+    const theirs = assignmentDetailSchema.parse((await student.get(`/api/assignments/${assignment.id}`)).body);
+    expect(theirs.handIns).toHaveLength(1);
+    expect(theirs.handIns[0].feedback?.text).toBe(demoAssignment.handIns[0].feedback);
+  });
+
+  it('adds nothing when run again', async () => {
+    const counts = async () => ({
+      users: await User.count(),
+      sketches: await Sketch.count(),
+      members: await ClassMember.count(),
+      assignments: await Assignment.count(),
+      handIns: await HandIn.count(),
+      feedback: await Feedback.count(),
+    });
+    const before = await counts();
+    await seedDemoData(server.sequelize);
+    expect(await counts()).toEqual(before);
   });
 });

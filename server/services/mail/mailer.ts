@@ -47,6 +47,24 @@ export class Mailer {
     this.pending.add(job);
   }
 
+  /**
+   * Sends `message` now, once, and resolves true when the mail server took it (false when it refused or
+   * could not be reached; the failure is logged). For a record that must say "sent" only of a mail that went.
+   */
+  send(message: MailMessage): Promise<boolean> {
+    const job = this.attempt(message).then(
+      () => true,
+      (err: unknown) => {
+        console.error(`[arcwright] mail to ${message.to} ("${message.subject}") failed:`, (err as Error).message);
+        return false;
+      },
+    );
+    const tracked = job.then(() => undefined);
+    this.pending.add(tracked);
+    void tracked.finally(() => this.pending.delete(tracked));
+    return job;
+  }
+
   /** Resolves when every queued message has been sent or given up on. */
   async idle(): Promise<void> {
     while (this.pending.size) await Promise.all([...this.pending]);
@@ -56,18 +74,23 @@ export class Mailer {
     this.transport.close();
   }
 
+  /** One try at sending `message`, recorded in the outbox when this mailer records its own. Throws on failure. */
+  private async attempt(message: MailMessage): Promise<void> {
+    const info = await this.transport.sendMail({ from: this.options.from, ...message });
+    if (this.options.recordSent) {
+      await OutboxMessage.create({
+        ...message,
+        from: this.options.from,
+        messageId: info.messageId ?? null,
+        via: 'smtp',
+      });
+    }
+  }
+
   private async deliver(message: MailMessage): Promise<void> {
     for (let attempt = 1; attempt <= this.attempts; attempt++) {
       try {
-        const info = await this.transport.sendMail({ from: this.options.from, ...message });
-        if (this.options.recordSent) {
-          await OutboxMessage.create({
-            ...message,
-            from: this.options.from,
-            messageId: info.messageId ?? null,
-            via: 'smtp',
-          });
-        }
+        await this.attempt(message);
         return;
       } catch (err) {
         const last = attempt === this.attempts;

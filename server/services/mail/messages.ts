@@ -1,7 +1,7 @@
 import type { ServerConfig } from '../../config';
 import type { PublicUser } from '../../models';
 import type { MailMessage } from './mailer';
-import { passwordResetUrl } from '../links';
+import { assignmentUrl, classInviteUrl, passwordResetUrl } from '../links';
 
 /** The link drawn as a button; mail clients ignore style sheets, so the style is inline. */
 const BUTTON_STYLE =
@@ -93,6 +93,74 @@ export function shareNoticeMail(
         `${escapeHtml(args.from.name)} shared the ${PRODUCT} sketch <strong>${escapeHtml(args.sketchName)}</strong> with you.`,
       ],
       { label: 'Open the sketch', url: args.url },
+      escapeHtml(footer),
+    ),
+  };
+}
+
+/** An invitation to join a class: a single-use link that works until `expiresAt`. */
+export function classInviteMail(
+  config: ServerConfig,
+  args: { to: string; instructor: string; className: string; token: string; expiresAt: Date },
+): MailMessage {
+  const url = classInviteUrl(config, args.token);
+  const until = args.expiresAt.toISOString().slice(0, 10);
+  const footer =
+    `You get this mail because ${args.instructor} entered your address in ${PRODUCT}. ` +
+    `The link works once, until ${until}. Sign in or make an account after opening it; ignore this mail to decline.`;
+  return {
+    to: args.to,
+    subject: oneLine(`${args.instructor} invites you to the class "${args.className}"`),
+    text: [
+      'Hello,',
+      '',
+      `${args.instructor} invites you to join the class "${args.className}" in ${PRODUCT}.`,
+      'Open this link to join:',
+      '',
+      url,
+      '',
+      footer,
+    ].join('\n'),
+    html: layout(
+      [
+        'Hello,',
+        `${escapeHtml(args.instructor)} invites you to join the class <strong>${escapeHtml(args.className)}</strong> ` +
+          `in ${PRODUCT}.`,
+      ],
+      { label: 'Join the class', url },
+      escapeHtml(footer),
+    ),
+  };
+}
+
+/** Feedback on a hand-in, written by the instructor, with a link to the assignment's page. */
+export function feedbackMail(
+  config: ServerConfig,
+  args: { to: { email: string; name: string }; instructor: string; assignmentId: number; title: string; text: string },
+): MailMessage {
+  const url = assignmentUrl(config, args.assignmentId);
+  const footer = `You get this mail because you handed in work for "${args.title}" in ${PRODUCT}.`;
+  return {
+    to: args.to.email,
+    subject: oneLine(`Feedback on "${args.title}" from ${args.instructor}`),
+    text: [
+      `Hello ${args.to.name},`,
+      '',
+      `${args.instructor} wrote feedback on your hand-in for "${args.title}":`,
+      '',
+      args.text,
+      '',
+      url,
+      '',
+      footer,
+    ].join('\n'),
+    html: layout(
+      [
+        `Hello ${escapeHtml(args.to.name)},`,
+        `${escapeHtml(args.instructor)} wrote feedback on your hand-in for <strong>${escapeHtml(args.title)}</strong>:`,
+        escapeHtml(args.text).replace(/\r?\n/g, '<br>'),
+      ],
+      { label: 'Open the assignment', url },
       escapeHtml(footer),
     ),
   };
