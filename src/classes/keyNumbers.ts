@@ -38,6 +38,11 @@ export function showKeyNumber(k: KeyNumber, u: LengthUnit): Shown {
   return { text: `${fixed(k.value, 2)}${k.unit ? ` ${k.unit}` : ''}` };
 }
 
+/** A key number's name with where it was read: "Anti-squat at ride", "Articulation". */
+export function keyNumberLabel(k: Pick<KeyNumber, 'label' | 'at'>): string {
+  return [k.label, KEY_NUMBER_AT[k.at]].filter(Boolean).join(' ');
+}
+
 /** A key-number column of the hand-ins table: one quantity at one point of the travel. */
 export interface KeyColumn {
   /** `${key}@${at}`: the same quantity at the same point in every row */
@@ -53,7 +58,7 @@ export function keyColumns(rows: readonly { keyNumbers: readonly KeyNumber[] }[]
   for (const row of rows)
     for (const k of row.keyNumbers) {
       const id = keyColumnId(k);
-      if (!seen.has(id)) seen.set(id, { id, label: [k.label, KEY_NUMBER_AT[k.at]].filter(Boolean).join(' ') });
+      if (!seen.has(id)) seen.set(id, { id, label: keyNumberLabel(k) });
     }
   return [...seen.values()];
 }
