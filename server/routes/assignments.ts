@@ -3,6 +3,7 @@ import type { ServerConfig } from '../config';
 import { requireUser, currentUser } from '../middleware/require-user';
 import { idParam } from '../middleware/params';
 import { parseOr400 } from '../middleware/validate';
+import { sweepLimiter } from '../middleware/rate-limit';
 import { feedbackBody, updateAssignmentBody } from '../../shared/schema/classes';
 import * as assignments from '../services/classes/assignments';
 import type { Mailer } from '../services/mail/mailer';
@@ -27,7 +28,8 @@ export function assignmentRoutes(config: ServerConfig, mailer: Mailer): Router {
     res.status(created ? 201 : 200).json(copy);
   });
 
-  router.post('/assignments/:id/hand-ins', async (req, res) => {
+  // Each hand-in sweeps the sketch on the one event loop, so hand-ins count as sweeps (per address per minute).
+  router.post('/assignments/:id/hand-ins', sweepLimiter(config), async (req, res) => {
     res.status(201).json(await assignments.handIn(currentUser(req), idParam(req, 'id')));
   });
 

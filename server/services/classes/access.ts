@@ -22,7 +22,7 @@ export async function isMember(classId: number, userId: number, t?: Transaction)
 /**
  * The class and the caller's role in it, or 404 for anyone who is neither its instructor, an admin nor one
  * of its students: a class one may not see looks exactly like a missing one (as sketches do). A deleted
- * class is seen by its instructor (to restore it) only when `deleted` allows it.
+ * class is seen by its instructor (to restore it) only when `deleted` allows it ('only' is taughtClass's).
  */
 export async function classFor(
   user: PublicUser,
@@ -40,7 +40,6 @@ export async function classFor(
   if (!role) throw noSuchClass();
   const deleted = opts.deleted ?? 'exclude';
   if (klass.deletedAt && (role !== 'instructor' || deleted === 'exclude')) throw noSuchClass();
-  if (!klass.deletedAt && deleted === 'only') throw notFound('this class is not deleted');
   return { klass, role };
 }
 
@@ -52,6 +51,7 @@ export async function taughtClass(
 ): Promise<ClassGroup> {
   const { klass, role } = await classFor(user, classId, opts);
   if (role !== 'instructor') throw forbidden('only the instructor of this class may do that');
+  if (!klass.deletedAt && opts.deleted === 'only') throw conflict('this class is not deleted');
   return klass;
 }
 
