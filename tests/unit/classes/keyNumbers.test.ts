@@ -4,7 +4,7 @@
  * carries its sign, a reading at ride does not).
  */
 import { describe, expect, it } from 'vitest';
-import { keyColumns, showKeyNumber } from '../../../src/classes/keyNumbers';
+import { keyColumns, keyNumberLabel, showKeyNumber } from '../../../src/classes/keyNumbers';
 import type { KeyNumber } from '../../../shared/schema/classes';
 import { handInRow, solidAxleKeys } from './fixtures';
 
@@ -53,6 +53,13 @@ describe('showKeyNumber', () => {
     expect(showKeyNumber(key({ key: 'newRatio', label: 'New ratio', value: 0.5, unit: 'x' }), 'mm').text).toBe(
       '0.50 x',
     );
+  });
+});
+
+describe('keyNumberLabel', () => {
+  it('says where along the travel, and nothing more for a whole-sweep reading', () => {
+    expect(keyNumberLabel({ label: 'Toe change', at: 'bump' })).toBe('Toe change at full bump');
+    expect(keyNumberLabel({ label: 'Articulation', at: 'articulation' })).toBe('Articulation');
   });
 });
 
