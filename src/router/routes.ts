@@ -13,7 +13,7 @@ declare module 'vue-router' {
   }
 }
 
-/** One loader for the board's three addresses, so moving between them keeps the page. */
+/** One loader for the board's four addresses, so moving between them keeps the page. */
 const BoardPage = () => import('../pages/BoardPage.vue');
 
 export const routes: RouteRecordRaw[] = [
@@ -37,6 +37,26 @@ export const routes: RouteRecordRaw[] = [
         path: 'shared/:token/sheet',
         name: 'build-sheet-shared',
         component: () => import('../pages/BuildSheetPage.vue'),
+      },
+      // A hand-in, read-only: for its class's instructor and for the student who handed it in.
+      {
+        path: 'hand-ins/:id(\\d+)',
+        name: 'board-hand-in',
+        component: BoardPage,
+        meta: { auth: true, fullWidth: true },
+      },
+      { path: 'classes', name: 'classes', component: () => import('../pages/ClassesPage.vue'), meta: { auth: true } },
+      {
+        path: 'classes/:id(\\d+)',
+        name: 'class',
+        component: () => import('../pages/ClassPage.vue'),
+        meta: { auth: true },
+      },
+      {
+        path: 'assignments/:id(\\d+)',
+        name: 'assignment',
+        component: () => import('../pages/AssignmentPage.vue'),
+        meta: { auth: true },
       },
       { path: 'lineup', name: 'lineup', component: () => import('../pages/LineupPage.vue'), meta: { auth: true } },
       { path: 'admin', redirect: '/admin/users' },
@@ -67,6 +87,8 @@ export const routes: RouteRecordRaw[] = [
         meta: { guest: true },
       },
       { path: 'reset', name: 'reset', component: () => import('../pages/ResetPasswordPage.vue') },
+      // An invitation's link works signed out too: it says what it is for, then asks to sign in or sign up.
+      { path: 'invites/:token', name: 'invite', component: () => import('../pages/InvitePage.vue') },
     ],
   },
   // Always last: anything else is a page we do not have.

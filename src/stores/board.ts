@@ -11,6 +11,8 @@ import * as edits from './board/edits';
 import { snapTo, type PlanePoint, type ViewKind } from '../canvas/transform';
 import { usePrefsStore } from './prefs';
 import type { EditResult } from './editResult';
+import { useClassesStore } from './classes';
+import { handInAsSketch, handInOnBoard, type HandInOnBoard } from '../classes/handInSketch';
 
 export type { EditResult } from './editResult';
 
@@ -71,6 +73,8 @@ export const useBoardStore = defineStore('board', () => {
   const meta = ref<SketchMeta | null>(null);
   /** Set when the sketch came through a read-only link. */
   const sharedToken = ref<string | null>(null);
+  /** Set when the board shows a hand-in (read-only, the version the student handed in). */
+  const handIn = ref<HandInOnBoard | null>(null);
   /** The working document. */
   const document = shallowRef<Sketch | null>(null);
   /** A revision opened read-only, shown instead of the working document. */
@@ -383,6 +387,7 @@ export const useBoardStore = defineStore('board', () => {
     historyTick.value++;
     meta.value = stripDocument(detail);
     sharedToken.value = token;
+    handIn.value = null;
     document.value = detail.document;
     viewing.value = null;
     loadError.value = null;
@@ -412,6 +417,25 @@ export const useBoardStore = defineStore('board', () => {
 
   const loadSketch = (id: number) => load(`/api/sketches/${id}`, null);
   const loadShared = (token: string) => load(`/api/shared/${encodeURIComponent(token)}`, token);
+
+  /** Opens a hand-in read-only: the frozen version, under the student's name and the assignment's title. */
+  async function loadHandIn(id: number) {
+    loading.value = true;
+    loadError.value = null;
+    try {
+      const h = await useClassesStore().fetchHandIn(id);
+      setLoaded(handInAsSketch(h));
+      handIn.value = handInOnBoard(h);
+    } catch (err) {
+      document.value = null;
+      meta.value = null;
+      handIn.value = null;
+      const missing = err instanceof ApiError && (err.status === 404 || err.status === 403);
+      loadError.value = missing ? 'This hand-in does not exist, or is not yours to see.' : errorMessage(err);
+    } finally {
+      loading.value = false;
+    }
+  }
 
   // ---- what the server answers while the sketch is open -----------------------------------
   /** Takes the server's record of the sketch (its version after a save) without touching the document. */
@@ -448,6 +472,7 @@ export const useBoardStore = defineStore('board', () => {
     // state
     meta,
     sharedToken,
+    handIn,
     document,
     viewing,
     loading,
@@ -500,6 +525,7 @@ export const useBoardStore = defineStore('board', () => {
     setLoaded,
     loadSketch,
     loadShared,
+    loadHandIn,
     setMeta,
     adoptServerDocument,
     showRevision,

@@ -154,6 +154,11 @@ export const useBoardSaveStore = defineStore('boardSave', () => {
   /** Copies a sketch the user may only read into their library; resolves to the new sketch. */
   async function copyToLibrary(): Promise<SketchDetail> {
     if (board.sharedToken) return api.post<SketchDetail>(`/api/shared/${encodeURIComponent(board.sharedToken)}/copy`);
+    // A hand-in is a frozen document, not a sketch the viewer may read: its copy is a new sketch of theirs.
+    if (board.handIn && board.document) {
+      const name = `${board.document.name} (${board.handIn.studentName}'s hand-in)`.slice(0, 200);
+      return api.post<SketchDetail>('/api/sketches', { name, document: { ...board.document, name } });
+    }
     if (!board.meta) throw new Error('No sketch is open.');
     return api.post<SketchDetail>(`/api/sketches/${board.meta.id}/copy`);
   }

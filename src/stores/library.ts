@@ -3,7 +3,7 @@ import { ref } from 'vue';
 import { api } from '../api/http';
 import type { Page, SketchDetail, SketchSummary } from '../api/types';
 import type { Layout } from '../../shared/schema/sketch';
-import type { LibraryQuery, ShareMode } from '../../shared/schema/sketchRequests';
+import { PAGE_SIZE_MAX, type LibraryQuery, type ShareMode } from '../../shared/schema/sketchRequests';
 
 /** Longest sketch name the server takes. */
 const MAX_SKETCH_NAME = 200;
@@ -86,6 +86,16 @@ export const useLibraryStore = defineStore('library', () => {
     await load();
   }
 
+  /**
+   * The user's own sketches, newest first (up to one page of the largest size), for a picker such as the
+   * starter of an assignment. Leaves the library page's list and query as they are.
+   */
+  async function listMine(): Promise<SketchSummary[]> {
+    const p = new URLSearchParams({ sort: 'updatedAt', order: 'desc', page: '1', pageSize: String(PAGE_SIZE_MAX) });
+    const page = await api.get<Page<SketchSummary>>(`/api/sketches?${p.toString()}`);
+    return page.items.filter((s) => s.mine && s.deletedAt === null);
+  }
+
   /** The sketch's read-only link was turned on or revoked (the share dialog): its row says so at once. */
   function noteShare(id: number, share: ShareMode) {
     const row = items.value.find((s) => s.id === id);
@@ -98,6 +108,7 @@ export const useLibraryStore = defineStore('library', () => {
     total,
     loading,
     load,
+    listMine,
     noteShare,
     createFromStarter,
     importFile,

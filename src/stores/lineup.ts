@@ -1,5 +1,5 @@
 /**
- * The line-up: two to four sketches side by side, read-only. It loads them from the API,
+ * The line-up: two to four sketches (or hand-ins of one assignment) side by side, read-only. It loads them from the API,
  * sweeps each with runSweep (the very result the board shows for it), and matches their frame
  * pivots by position into brackets. It edits no sketch: a variant is changed on its own board; what
  * it holds of its own is how the line-up is looked at (the tolerance, which variants are drawn,
@@ -14,20 +14,32 @@ import type { SweepResult } from '../../shared/kinematics/types';
 import { DEFAULT_BRACKET_TOLERANCE_MM, matchBrackets, type BracketMatch } from '../../shared/lineup/brackets';
 import { framePivots } from '../../shared/lineup/framePivots';
 import { matchGroups, suspensionEnd, type MatchGroup } from '../../shared/lineup/ends';
-import { parseLineupIds } from './lineup/ids';
+import { HAND_IN_WORDS, parseLineupIds } from './lineup/ids';
+import { useClassesStore } from './classes';
+import { handInAsSketch } from '../classes/handInSketch';
+import { whenText } from '../classes/due';
+
+/** What a line-up compares: the user's sketches (`?ids=`) or an assignment's hand-ins (`?handIns=`). */
+export type LineupSource = 'sketches' | 'handIns';
 
 export interface LineupVariant {
   detail: SketchDetail;
+  /** the board address that opens it (a sketch, or a hand-in read-only) */
+  open: string;
   /** the sweep, or null with the reason when the sketch cannot be swept */
   result: SweepResult | null;
   problem: string | null;
 }
+
+const LIBRARY = { to: '/library', label: 'Back to the library' };
 
 export const useLineupStore = defineStore('lineup', () => {
   const variants = shallowRef<LineupVariant[]>([]);
   const loading = ref(false);
   /** why the line-up could not open (a missing sketch, a bad address) */
   const error = ref<string | null>(null);
+  /** where the user came from: the library, or the assignment whose hand-ins are lined up */
+  const back = ref<{ to: string; label: string }>(LIBRARY);
 
   /** mm: frame pivots at most this far apart share a bracket */
   const tolerance = ref(DEFAULT_BRACKET_TOLERANCE_MM);
@@ -63,9 +75,10 @@ export const useLineupStore = defineStore('lineup', () => {
     hidden.value = hidden.value.includes(place) ? hidden.value.filter((i) => i !== place) : [...hidden.value, place];
   }
 
-  async function load(raw: unknown): Promise<void> {
+  async function load(raw: unknown, source: LineupSource = 'sketches'): Promise<void> {
     error.value = null;
-    const parsed = parseLineupIds(raw);
+    back.value = LIBRARY;
+    const parsed = source === 'handIns' ? parseLineupIds(raw, HAND_IN_WORDS) : parseLineupIds(raw);
     if (!parsed.ok) {
       variants.value = [];
       error.value = parsed.error;
@@ -73,8 +86,8 @@ export const useLineupStore = defineStore('lineup', () => {
     }
     loading.value = true;
     try {
-      const details = await Promise.all(parsed.ids.map((id) => api.get<SketchDetail>(`/api/sketches/${id}`)));
-      variants.value = details.map((detail) => ({ detail, ...sweepOnce(detail.document) }));
+      const opened = source === 'handIns' ? await openHandIns(parsed.ids) : await openSketches(parsed.ids);
+      variants.value = opened.map(({ detail, open }) => ({ detail, open, ...sweepOnce(detail.document) }));
       hidden.value = [];
     } catch (err) {
       variants.value = [];
@@ -84,10 +97,30 @@ export const useLineupStore = defineStore('lineup', () => {
     }
   }
 
+  async function openSketches(ids: number[]) {
+    const details = await Promise.all(ids.map((id) => api.get<SketchDetail>(`/api/sketches/${id}`)));
+    return details.map((detail) => ({ detail, open: `/sketches/${detail.id}` }));
+  }
+
+  /** Hand-ins are named by their student (and the time, for two of one student's). */
+  async function openHandIns(ids: number[]) {
+    const classes = useClassesStore();
+    const handIns = await Promise.all(ids.map((id) => classes.fetchHandIn(id)));
+    const students = handIns.map((h) => h.student.id);
+    back.value = { to: `/assignments/${handIns[0].assignmentId}`, label: 'Back to the assignment' };
+    return handIns.map((h) => {
+      const twice = students.filter((s) => s === h.student.id).length > 1;
+      const name = twice ? `${h.student.name} (${whenText(h.handedInAt)})` : h.student.name;
+      const detail = handInAsSketch(h);
+      return { detail: { ...detail, name, document: { ...detail.document, name } }, open: `/hand-ins/${h.id}` };
+    });
+  }
+
   return {
     variants,
     loading,
     error,
+    back,
     tolerance,
     acrossEnds,
     hidden,

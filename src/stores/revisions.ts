@@ -28,7 +28,7 @@ export const useRevisionsStore = defineStore('revisions', () => {
   );
 
   async function load(): Promise<void> {
-    if (!board.meta || board.sharedToken) return;
+    if (!board.meta || board.sharedToken || board.handIn) return;
     loading.value = true;
     try {
       const { items: list } = await api.get<{ items: Revision[] }>(`/api/sketches/${board.meta.id}/revisions`);
