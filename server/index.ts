@@ -1,7 +1,7 @@
 import { loadConfig } from './config';
-import { openDatabase } from './db';
+import { describeLocation, openDatabase } from './database';
 import { migrate } from './migrations/umzug';
-import { seedDemoData } from './seed';
+import { seedDemoData, shouldSeedDemo } from './seed';
 import { setUpMail } from './services/mail';
 import { purgeDeleted } from './services/uploads';
 import { createApp } from './app';
@@ -12,10 +12,13 @@ const PURGE_EVERY_MS = 6 * 3600_000;
 /** Opens the database, migrates, seeds, starts the mail catcher (unless SMTP_URL), and listens on PORT (0: any free port). */
 async function main(): Promise<void> {
   const config = loadConfig();
-  const sequelize = await openDatabase(config.databasePath);
+  const sequelize = await openDatabase(config);
   const applied = await migrate(sequelize);
   if (applied.length) console.log(`[arcwright] migrations applied: ${applied.join(', ')}`);
-  await seedDemoData(sequelize);
+  if (shouldSeedDemo(config.seedDemo, applied)) {
+    await seedDemoData(sequelize);
+    console.log('[arcwright] demo shop, class, accounts and sketches are in place');
+  }
   const mail = await setUpMail(config);
   console.log(
     mail.catcher
@@ -30,7 +33,7 @@ async function main(): Promise<void> {
   const app = createApp({ sequelize, config, mailer: mail.mailer });
   const server = await listenOn(app, config);
   console.log(
-    `[arcwright] listening on http://localhost:${config.port}, links to ${config.publicUrl} (database ${config.databasePath})`,
+    `[arcwright] listening on http://localhost:${config.port}, links to ${config.publicUrl} (database ${describeLocation(config)})`,
   );
 
   let closing = false;
