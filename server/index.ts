@@ -1,7 +1,6 @@
 import { loadConfig } from './config';
 import { describeLocation, openDatabase } from './database';
-import { migrate } from './migrations/umzug';
-import { seedDemoData, shouldSeedDemo } from './seed';
+import { prepareDatabase } from './prepare-database';
 import { setUpMail } from './services/mail';
 import { purgeDeleted } from './services/uploads';
 import { createApp } from './app';
@@ -13,12 +12,9 @@ const PURGE_EVERY_MS = 6 * 3600_000;
 async function main(): Promise<void> {
   const config = loadConfig();
   const sequelize = await openDatabase(config);
-  const applied = await migrate(sequelize);
+  const { applied, seeded } = await prepareDatabase(sequelize, config);
   if (applied.length) console.log(`[arcwright] migrations applied: ${applied.join(', ')}`);
-  if (shouldSeedDemo(config.seedDemo, applied)) {
-    await seedDemoData(sequelize);
-    console.log('[arcwright] demo shop, class, accounts and sketches are in place');
-  }
+  if (seeded) console.log('[arcwright] demo shop, class, accounts and sketches are in place');
   const mail = await setUpMail(config);
   console.log(
     mail.catcher

@@ -28,4 +28,6 @@ export interface DatabaseDialect {
   withExclusiveLock<T>(sequelize: Sequelize, name: string, work: () => Promise<T>): Promise<T>;
   /** Writes a consistent copy of the live database to `file` (a new file), safe while the server runs. */
   backup(sequelize: Sequelize, location: DatabaseLocation, file: string): Promise<void>;
+  /** Loads a copy made by `backup` into the location, which must be new or empty (never overwrites data). */
+  restore(location: DatabaseLocation, file: string): Promise<void>;
 }

@@ -57,23 +57,44 @@ function libpqEnvironment(url: string): NodeJS.ProcessEnv {
   return Object.fromEntries(Object.entries(env).filter(([, v]) => v !== undefined));
 }
 
-/** pg_dump (on PATH) in its custom format, one consistent snapshot; restore with pg_restore. */
-async function backup(_sequelize: Sequelize, location: DatabaseLocation, file: string): Promise<void> {
+/** Runs one of PostgreSQL's client programs (on PATH) against the location's database; rejects with its stderr. */
+function runClientProgram(program: string, args: string[], location: DatabaseLocation): Promise<void> {
   const env = { ...process.env, ...libpqEnvironment(location.databaseUrl!) };
-  await new Promise<void>((resolve, reject) => {
-    const child = spawn('pg_dump', ['--format=custom', '--no-owner', '--no-privileges', `--file=${file}`], {
-      env,
-      stdio: ['ignore', 'ignore', 'pipe'],
-    });
+  return new Promise<void>((resolve, reject) => {
+    const child = spawn(program, args, { env, stdio: ['ignore', 'ignore', 'pipe'] });
     let stderr = '';
     child.stderr.on('data', (chunk: Buffer) => (stderr += chunk.toString()));
     child.on('error', (err) =>
-      reject(new Error(`could not run pg_dump (install PostgreSQL's client programs): ${err.message}`)),
+      reject(new Error(`could not run ${program} (install PostgreSQL's client programs): ${err.message}`)),
     );
     child.on('exit', (code) =>
-      code === 0 ? resolve() : reject(new Error(`pg_dump failed (exit ${code}): ${stderr.trim()}`)),
+      code === 0 ? resolve() : reject(new Error(`${program} failed (exit ${code}): ${stderr.trim()}`)),
     );
   });
+}
+
+/** pg_dump in its custom format: one consistent snapshot, taken while the server runs. */
+function backup(_sequelize: Sequelize, location: DatabaseLocation, file: string): Promise<void> {
+  return runClientProgram('pg_dump', ['--format=custom', '--no-owner', '--no-privileges', `--file=${file}`], location);
+}
+
+/** pg_restore into the (existing, empty) database of DATABASE_URL, all or nothing. */
+async function restore(location: DatabaseLocation, file: string): Promise<void> {
+  const sequelize = await open(location);
+  try {
+    const tables = await sequelize.getQueryInterface().showAllTables();
+    if (tables.length) {
+      throw new Error('the database of DATABASE_URL already has tables: restore into a new, empty database');
+    }
+  } finally {
+    await sequelize.close();
+  }
+  const database = decodeURIComponent(new URL(location.databaseUrl!).pathname.replace(/^\//, ''));
+  await runClientProgram(
+    'pg_restore',
+    ['--no-owner', '--no-privileges', '--exit-on-error', '--single-transaction', `--dbname=${database}`, file],
+    location,
+  );
 }
 
 export const postgresDialect: DatabaseDialect = {
@@ -82,4 +103,5 @@ export const postgresDialect: DatabaseDialect = {
   caseInsensitiveContains,
   withExclusiveLock,
   backup,
+  restore,
 };

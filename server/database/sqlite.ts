@@ -178,6 +178,16 @@ async function backup(sequelize: Sequelize, _location: DatabaseLocation, file: s
   await sequelize.query(`VACUUM INTO ${sequelize.escape(file)}`);
 }
 
+/** The copy is a complete SQLite file: it becomes the database file, which must not exist yet. */
+async function restore(location: DatabaseLocation, file: string): Promise<void> {
+  const target = location.databasePath;
+  if (fs.existsSync(target)) {
+    throw new Error(`${target} already exists: restore into a new DATABASE_PATH, or move the old file away first`);
+  }
+  fs.mkdirSync(path.dirname(target), { recursive: true });
+  fs.copyFileSync(file, target, fs.constants.COPYFILE_EXCL);
+}
+
 /** instr() rather than LIKE, so that % and _ in the search text are plain characters. */
 function caseInsensitiveContains(column: string, text: string): WhereOptions {
   return where(fn('instr', fn('lower', col(column)), text.toLowerCase()), Op.gt, 0);
@@ -189,4 +199,5 @@ export const sqliteDialect: DatabaseDialect = {
   caseInsensitiveContains,
   withExclusiveLock,
   backup,
+  restore,
 };
