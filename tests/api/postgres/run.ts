@@ -24,7 +24,10 @@ async function main(): Promise<number> {
   process.once('SIGTERM', () => (stop(), process.exit(143)));
   try {
     const args = process.argv.slice(2);
-    const vitest = spawn('npx', ['vitest', 'run', ...(args.length ? args : ['tests/api'])], {
+    // Every query crosses a socket to another process here, so setting up a file's server (migrate, seed) and
+    // the longest tests take a few times longer than on SQLite in-process: the time limits are wider (no check is).
+    const limits = ['--hookTimeout=120000', '--testTimeout=60000'];
+    const vitest = spawn('npx', ['vitest', 'run', ...limits, ...(args.length ? args : ['tests/api'])], {
       stdio: 'inherit',
       env: { ...process.env, ARCWRIGHT_TEST_PG_URL: cluster.adminUrl },
     });
