@@ -1,7 +1,6 @@
 import { loadConfig } from './config';
-import { openDatabase } from './db';
-import { migrate } from './migrations/umzug';
-import { seedDemoData } from './seed';
+import { describeLocation, openDatabase } from './database';
+import { prepareDatabase } from './prepare-database';
 import { setUpMail } from './services/mail';
 import { purgeDeleted } from './services/uploads';
 import { createApp } from './app';
@@ -12,10 +11,10 @@ const PURGE_EVERY_MS = 6 * 3600_000;
 /** Opens the database, migrates, seeds, starts the mail catcher (unless SMTP_URL), and listens on PORT (0: any free port). */
 async function main(): Promise<void> {
   const config = loadConfig();
-  const sequelize = await openDatabase(config.databasePath);
-  const applied = await migrate(sequelize);
+  const sequelize = await openDatabase(config);
+  const { applied, seeded } = await prepareDatabase(sequelize, config);
   if (applied.length) console.log(`[arcwright] migrations applied: ${applied.join(', ')}`);
-  await seedDemoData(sequelize);
+  if (seeded) console.log('[arcwright] demo shop, class, accounts and sketches are in place');
   const mail = await setUpMail(config);
   console.log(
     mail.catcher
@@ -30,7 +29,7 @@ async function main(): Promise<void> {
   const app = createApp({ sequelize, config, mailer: mail.mailer });
   const server = await listenOn(app, config);
   console.log(
-    `[arcwright] listening on http://localhost:${config.port}, links to ${config.publicUrl} (database ${config.databasePath})`,
+    `[arcwright] listening on http://localhost:${config.port}, links to ${config.publicUrl} (database ${describeLocation(config)})`,
   );
 
   let closing = false;

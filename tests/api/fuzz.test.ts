@@ -29,11 +29,14 @@ let sketchId: number;
 let targetUserId: number;
 
 async function snapshot(): Promise<string> {
-  const parts: unknown[] = [];
-  for (const table of TABLES) {
-    const [rows] = await server.sequelize.query(`SELECT * FROM ${table} ORDER BY rowid`);
-    parts.push(rows);
-  }
+  // The tables are read side by side (a server database answers them on several connections), each one's rows in
+  // a fixed order whatever order the database returns them in (not every table has an id column).
+  const parts = await Promise.all(
+    TABLES.map(async (table) => {
+      const rows = await server.sequelize.getQueryInterface().select(null, table, {});
+      return rows.map((row) => JSON.stringify(row)).sort();
+    }),
+  );
   return JSON.stringify(parts);
 }
 

@@ -1,16 +1,15 @@
-import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import type { Express } from 'express';
 import request from 'supertest';
 import type { Sequelize } from 'sequelize';
 import { loadConfig, type ServerConfig } from '../../server/config';
-import { openDatabase } from '../../server/db';
+import { openDatabase } from '../../server/database';
 import { migrate } from '../../server/migrations/umzug';
 import { seedDemoData } from '../../server/seed';
 import { createApp } from '../../server/app';
 import { setUpMail, type MailSetup } from '../../server/services/mail';
 import { OutboxMessage } from '../../server/models';
+import { createTestDatabase } from './test-database';
 
 export interface TestServer {
   app: Express;
@@ -24,19 +23,20 @@ export interface TestServer {
 }
 
 /**
- * A fresh app on its own temporary database FILE (not :memory:, which would hide the
- * per-transaction connections), migrated and seeded with the demo accounts.
+ * A fresh app on a database of its own, migrated and seeded with the demo accounts: a temporary SQLite
+ * FILE (not :memory:, which would hide the per-transaction connections), or in the PostgreSQL pass a new
+ * database in the pass's cluster (tests/api/test-database.ts).
  */
 export async function startTestServer(env: Record<string, string> = {}): Promise<TestServer> {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'arcwright-api-'));
+  const database = await createTestDatabase();
+  const dir = database.dir;
   const config = loadConfig({
-    DATABASE_PATH: path.join(dir, 'test.sqlite'),
-    UPLOADS_DIR: path.join(dir, 'uploads'),
+    ...database.env,
     PUBLIC_URL: 'http://arcwright.example.test',
     DIST_DIR: path.join(dir, 'no-dist'),
     ...env,
   });
-  const sequelize = await openDatabase(config.databasePath);
+  const sequelize = await openDatabase(config);
   await migrate(sequelize);
   await seedDemoData(sequelize);
   const mail = await setUpMail(config, { retryDelayMs: 20 });
@@ -54,7 +54,7 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
     async close() {
       await mail.close();
       await sequelize.close();
-      fs.rmSync(dir, { recursive: true, force: true });
+      await database.drop();
     },
   };
 }

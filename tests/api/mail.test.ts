@@ -57,6 +57,33 @@ describe('password reset through the outbox', () => {
     ).toBe(200);
   });
 
+  it('lets exactly one of several concurrent uses of one reset link through', async () => {
+    const user = await newMember(server.app, 'hurried');
+    const anon = new Caller(server.app);
+    await anon.refreshToken();
+    expect((await anon.post('/api/auth/reset-request').send({ email: user.email })).status).toBe(202);
+    const [mail] = await server.mailTo(user.email);
+    const token = tokenFrom(mail.text);
+
+    const passwords = [1, 2, 3].map((n) => `raced-new-password-${n}`);
+    const results = await Promise.all(
+      passwords.map((password) => anon.post('/api/auth/reset').send({ token, password })),
+    );
+    expect(results.map((r) => r.status).sort()).toEqual([204, 400, 400]);
+    // The password that works is the winner's; a refused one does not.
+    const winner = results.findIndex((r) => r.status === 204);
+    const loser = (winner + 1) % passwords.length;
+    for (const [index, status] of [
+      [winner, 200],
+      [loser, 401],
+    ]) {
+      const fresh = new Caller(server.app);
+      await fresh.refreshToken();
+      const login = await fresh.post('/api/auth/login').send({ email: user.email, password: passwords[index] });
+      expect(login.status).toBe(status);
+    }
+  }, 60_000); // each use hashes a password (scrypt): several at once take a while on a busy machine
+
   it('answers 202 for an unknown e-mail and sends nothing', async () => {
     const anon = new Caller(server.app);
     await anon.refreshToken();

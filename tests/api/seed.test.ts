@@ -6,6 +6,10 @@ import { demoSketches } from '../../server/seed/demo-sketches';
 import { demoAccounts, demoAssignment } from '../../server/seed/demo-data';
 import { assignmentDetailSchema, classListSchema } from '../../shared/schema/classes';
 import { starters } from '../../shared/kinematics';
+import { loadConfig } from '../../server/config';
+import { openDatabase } from '../../server/database';
+import { prepareDatabase } from '../../server/prepare-database';
+import { createTestDatabase } from './test-database';
 
 let server: TestServer;
 beforeAll(async () => {
@@ -91,4 +95,32 @@ describe('demo data', () => {
     await seedDemoData(server.sequelize);
     expect(await counts()).toEqual(before);
   });
+});
+
+describe('when the demo data is added at start', () => {
+  it('into a database the start created, again only with SEED_DEMO=1, never into one in use', async () => {
+    const database = await createTestDatabase();
+    const sequelize = await openDatabase(loadConfig(database.env));
+    try {
+      const first = await prepareDatabase(sequelize, loadConfig({ ...database.env }));
+      expect(first).toMatchObject({ seeded: true });
+      expect(first.applied.length).toBeGreaterThan(0);
+      expect(await User.count({ where: { email: demo.maker.email } })).toBe(1);
+
+      // A database in use: an admin removed a demo account; a plain restart leaves that as it is.
+      await User.destroy({ where: { email: demo.maker.email } });
+      expect(await prepareDatabase(sequelize, loadConfig({ ...database.env }))).toEqual({ applied: [], seeded: false });
+      expect(await User.count({ where: { email: demo.maker.email } })).toBe(0);
+
+      // Asked for, the demo data is put back (and nothing else changes: the seed only adds what is missing).
+      const usersBefore = await User.count();
+      const asked = await prepareDatabase(sequelize, loadConfig({ ...database.env, SEED_DEMO: '1' }));
+      expect(asked).toEqual({ applied: [], seeded: true });
+      expect(await User.count({ where: { email: demo.maker.email } })).toBe(1);
+      expect(await User.count()).toBe(usersBefore + 1);
+    } finally {
+      await sequelize.close();
+      await database.drop();
+    }
+  }, 60_000);
 });

@@ -1,7 +1,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { Sequelize, Transaction } from 'sequelize';
-import { initModels } from './models';
+import { Op, Sequelize, Transaction, col, fn, where, type WhereOptions } from 'sequelize';
+import { initModels } from '../models';
+import type { DatabaseDialect, DatabaseLocation } from './dialect';
 
 /** How long a connection waits for another's write lock before giving up (ms). */
 export const BUSY_TIMEOUT_MS = 10_000;
@@ -123,7 +124,8 @@ function reuseTransactionConnection(sequelize: Sequelize): void {
 }
 
 /** Opens (creating when missing) the SQLite file and binds the models to it. Run migrations next. */
-export async function openDatabase(databasePath: string): Promise<Sequelize> {
+async function open(location: DatabaseLocation): Promise<Sequelize> {
+  const databasePath = location.databasePath;
   fs.mkdirSync(path.dirname(databasePath), { recursive: true });
   const sequelize = new Sequelize({
     dialect: 'sqlite',
@@ -141,3 +143,61 @@ export async function openDatabase(databasePath: string): Promise<Sequelize> {
   await sequelize.authenticate();
   return sequelize;
 }
+
+/**
+ * SQLite's own write lock is the shared lock: `work` runs inside BEGIN IMMEDIATE on the default
+ * connection (the one every statement outside a managed transaction uses), so another process's
+ * `work` waits at its BEGIN until this one commits, and a failure rolls all of `work` back.
+ * `work` must not start a managed transaction: that one would wait for this lock.
+ */
+async function withExclusiveLock<T>(sequelize: Sequelize, _name: string, work: () => Promise<T>): Promise<T> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      await sequelize.query('BEGIN IMMEDIATE');
+      break;
+    } catch (err) {
+      // busy_timeout has passed while another process held the lock: keep waiting for it a while longer.
+      if (attempt >= LOCK_ATTEMPTS || !/SQLITE_BUSY/.test(String(err))) throw err;
+    }
+  }
+  try {
+    const result = await work();
+    await sequelize.query('COMMIT');
+    return result;
+  } catch (err) {
+    await sequelize.query('ROLLBACK').catch(() => undefined);
+    throw err;
+  }
+}
+
+/** How many times BEGIN IMMEDIATE waits busy_timeout for another process's lock before giving up. */
+const LOCK_ATTEMPTS = 6;
+
+/** VACUUM INTO writes a consistent, compacted copy from one read transaction; writers go on meanwhile (WAL). */
+async function backup(sequelize: Sequelize, _location: DatabaseLocation, file: string): Promise<void> {
+  await sequelize.query(`VACUUM INTO ${sequelize.escape(file)}`);
+}
+
+/** The copy is a complete SQLite file: it becomes the database file, which must not exist yet. */
+async function restore(location: DatabaseLocation, file: string): Promise<void> {
+  const target = location.databasePath;
+  if (fs.existsSync(target)) {
+    throw new Error(`${target} already exists: restore into a new DATABASE_PATH, or move the old file away first`);
+  }
+  fs.mkdirSync(path.dirname(target), { recursive: true });
+  fs.copyFileSync(file, target, fs.constants.COPYFILE_EXCL);
+}
+
+/** instr() rather than LIKE, so that % and _ in the search text are plain characters. */
+function caseInsensitiveContains(column: string, text: string): WhereOptions {
+  return where(fn('instr', fn('lower', col(column)), text.toLowerCase()), Op.gt, 0);
+}
+
+export const sqliteDialect: DatabaseDialect = {
+  name: 'sqlite',
+  open,
+  caseInsensitiveContains,
+  withExclusiveLock,
+  backup,
+  restore,
+};
