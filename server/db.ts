@@ -1,6 +1,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { Sequelize, Transaction } from 'sequelize';
+import sqlite3 from 'sqlite3';
+import { RateLimiterPostgres, RateLimiterSQLite, type RateLimiterStoreAbstract } from 'rate-limiter-flexible';
 import { initModels } from './models';
 
 /** How long a connection waits for another's write lock before giving up (ms). */
@@ -140,4 +142,59 @@ export async function openDatabase(databasePath: string): Promise<Sequelize> {
   initModels(sequelize);
   await sequelize.authenticate();
   return sequelize;
+}
+
+/** The table rate-limit counters live in (made by migration 0006-shared-state). */
+export const RATE_LIMIT_TABLE = 'rate_limits';
+
+/** What a rate limiter counts: `points` per `durationS` seconds, under keys starting with `keyPrefix`. */
+export interface RateCounterOptions {
+  keyPrefix: string;
+  points: number;
+  durationS: number;
+}
+
+/**
+ * The one SQLite connection the rate counters of a database use, opened on first need and closed with the
+ * database. rate-limiter-flexible's SQLite store wants a plain sqlite3 connection, and a connection of its
+ * own keeps its short write (one upsert) out of Sequelize's transactions.
+ */
+const counterConnections = new WeakMap<Sequelize, sqlite3.Database>();
+
+function counterConnection(sequelize: Sequelize): sqlite3.Database {
+  let connection = counterConnections.get(sequelize);
+  if (connection) return connection;
+  const storage = (sequelize as unknown as { options: { storage?: string } }).options.storage;
+  if (!storage) throw new Error('the SQLite database has no file');
+  const opened = new sqlite3.Database(storage);
+  opened.configure('busyTimeout', BUSY_TIMEOUT_MS);
+  counterConnections.set(sequelize, opened);
+  const close = sequelize.close.bind(sequelize);
+  sequelize.close = async () => {
+    counterConnections.delete(sequelize);
+    await new Promise<void>((resolve) => opened.close(() => resolve()));
+    return close();
+  };
+  connection = opened;
+  return connection;
+}
+
+/**
+ * A rate counter kept in the database (table rate_limits), so every app instance on it counts together:
+ * rate-limiter-flexible's PostgreSQL store through Sequelize's own connections, or its SQLite store.
+ */
+export function databaseRateCounter(sequelize: Sequelize, options: RateCounterOptions): RateLimiterStoreAbstract {
+  const common = {
+    keyPrefix: options.keyPrefix,
+    points: options.points,
+    duration: options.durationS,
+    tableName: RATE_LIMIT_TABLE,
+    // The migration made the table; expired rows are deleted by the housekeeping timer, not per limiter.
+    tableCreated: true,
+    clearExpiredByTimeout: false,
+  };
+  if (sequelize.getDialect() === 'postgres') {
+    return new RateLimiterPostgres({ ...common, storeClient: sequelize, storeType: 'sequelize' });
+  }
+  return new RateLimiterSQLite({ ...common, storeClient: counterConnection(sequelize), storeType: 'sqlite3' });
 }

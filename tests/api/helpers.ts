@@ -32,6 +32,7 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
   const config = loadConfig({
     DATABASE_PATH: path.join(dir, 'test.sqlite'),
     UPLOADS_DIR: path.join(dir, 'uploads'),
+    UPLOAD_SPOOL_DIR: path.join(dir, 'spool'),
     PUBLIC_URL: 'http://arcwright.example.test',
     DIST_DIR: path.join(dir, 'no-dist'),
     ...env,
