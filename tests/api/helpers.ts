@@ -23,12 +23,24 @@ export interface TestServer {
   close(): Promise<void>;
 }
 
+/** Where a test server keeps its database, and how soon it retries mail. */
+export interface TestServerOptions {
+  /** A folder the caller made and removes: the database in it is shared by every server started on it. */
+  dir?: string;
+  /** Pause before the first mail retry (ms). */
+  retryDelayMs?: number;
+}
+
 /**
  * A fresh app on its own temporary database FILE (not :memory:, which would hide the
- * per-transaction connections), migrated and seeded with the demo accounts.
+ * per-transaction connections), migrated and seeded with the demo accounts. With `options.dir`, an app on
+ * the database in that folder (a restart, or a second instance), which close() leaves in place.
  */
-export async function startTestServer(env: Record<string, string> = {}): Promise<TestServer> {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'arcwright-api-'));
+export async function startTestServer(
+  env: Record<string, string> = {},
+  options: TestServerOptions = {},
+): Promise<TestServer> {
+  const dir = options.dir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'arcwright-api-'));
   const config = loadConfig({
     DATABASE_PATH: path.join(dir, 'test.sqlite'),
     UPLOADS_DIR: path.join(dir, 'uploads'),
@@ -40,7 +52,7 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
   const sequelize = await openDatabase(config.databasePath);
   await migrate(sequelize);
   await seedDemoData(sequelize);
-  const mail = await setUpMail(config, { retryDelayMs: 20 });
+  const mail = await setUpMail(config, { retryDelayMs: options.retryDelayMs ?? 20 });
   const app = createApp({ sequelize, config, mailer: mail.mailer });
   return {
     app,
@@ -55,7 +67,7 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
     async close() {
       await mail.close();
       await sequelize.close();
-      fs.rmSync(dir, { recursive: true, force: true });
+      if (!options.dir) fs.rmSync(dir, { recursive: true, force: true });
     },
   };
 }
