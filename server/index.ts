@@ -1,7 +1,7 @@
 import { loadConfig } from './config';
-import { openDatabase } from './db';
+import { describeLocation, openDatabase } from './database';
 import { migrate } from './migrations/umzug';
-import { seedDemoData } from './seed';
+import { seedDemoData, shouldSeedDemo } from './seed';
 import { setUpMail } from './services/mail';
 import { startHousekeeping } from './services/housekeeping';
 import { importFolderUploads } from './services/upload-store';
@@ -11,10 +11,13 @@ import { listenOn } from './listen';
 /** Opens the database, migrates, seeds, starts the mail catcher (unless SMTP_URL), and listens on PORT (0: any free port). */
 async function main(): Promise<void> {
   const config = loadConfig();
-  const sequelize = await openDatabase(config.databasePath);
+  const sequelize = await openDatabase(config);
   const applied = await migrate(sequelize);
   if (applied.length) console.log(`[arcwright] migrations applied: ${applied.join(', ')}`);
-  await seedDemoData(sequelize);
+  if (shouldSeedDemo(config.seedDemo, applied)) {
+    await seedDemoData(sequelize);
+    console.log('[arcwright] demo shop, class, accounts and sketches are in place');
+  }
   const mail = await setUpMail(config);
   console.log(
     mail.catcher
@@ -29,7 +32,7 @@ async function main(): Promise<void> {
   const app = createApp({ sequelize, config, mailer: mail.mailer });
   const server = await listenOn(app, config);
   console.log(
-    `[arcwright] listening on http://localhost:${config.port}, links to ${config.publicUrl} (database ${config.databasePath})`,
+    `[arcwright] listening on http://localhost:${config.port}, links to ${config.publicUrl} (database ${describeLocation(config)})`,
   );
 
   let closing = false;

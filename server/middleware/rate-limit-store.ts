@@ -1,6 +1,6 @@
 import type { ClientRateLimitInfo, IncrementResponse, Options, Store } from 'express-rate-limit';
 import type { RateLimiterStoreAbstract } from 'rate-limiter-flexible';
-import { databaseRateCounter } from '../db';
+import { databaseRateCounter } from '../database';
 import { boundDatabase } from '../models';
 
 /**

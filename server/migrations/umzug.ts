@@ -1,5 +1,6 @@
 import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug, type MigrationParams } from 'umzug';
+import { withExclusiveLock } from '../database';
 import * as accounts from './0001-accounts';
 import * as sketches from './0002-sketches';
 import * as mail from './0003-mail';
@@ -32,8 +33,15 @@ export function createMigrator(sequelize: Sequelize): Umzug<QueryInterface> {
   });
 }
 
-/** Applies every pending migration; returns the names applied. */
+/** The migration that creates the schema: applying it means the database was empty. */
+export const FIRST_MIGRATION = steps[0][0];
+
+/**
+ * Applies every pending migration under the database's migration lock; returns the names applied.
+ * Of several instances starting together, the first applies them and the others, once they get
+ * the lock, find nothing pending.
+ */
 export async function migrate(sequelize: Sequelize): Promise<string[]> {
-  const applied = await createMigrator(sequelize).up();
+  const applied = await withExclusiveLock(sequelize, 'migrations', () => createMigrator(sequelize).up());
   return applied.map((m) => m.name);
 }

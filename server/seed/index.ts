@@ -6,6 +6,17 @@ import { hashPassword } from '../services/passwords';
 import { createSketch } from '../services/sketches';
 import { demoAccounts, demoClass, demoShop } from './demo-data';
 import { demoSketches } from './demo-sketches';
+import { FIRST_MIGRATION } from '../migrations/umzug';
+
+/**
+ * The rule for the demo data: it is created when asked (SEED_DEMO=1) or when this start created the
+ * database (applied its first migration), and never otherwise, so a live database is left as it is.
+ * Deciding by "this start created the schema" (settled under the migration lock) rather than by
+ * "no accounts yet" means that of several instances starting on one new database only one seeds.
+ */
+export function shouldSeedDemo(seedDemo: boolean, appliedMigrations: readonly string[]): boolean {
+  return seedDemo || appliedMigrations.includes(FIRST_MIGRATION);
+}
 
 /**
  * Creates the demo shop, class and accounts when missing. Safe to run on every start:

@@ -1,6 +1,6 @@
 import { Op } from 'sequelize';
 import { MailQueueItem, boundDatabase } from '../models';
-import { RATE_LIMIT_TABLE } from '../db';
+import { clearEndedRateCounts } from '../database';
 import { purgeDeleted } from './uploads';
 import { removeUnusedUploads } from './tracing-uploads';
 
@@ -17,7 +17,7 @@ const MAIL_KEPT_MS = 30 * 24 * 3600_000;
 export async function runHousekeeping(now = Date.now()): Promise<void> {
   await purgeDeleted();
   await removeUnusedUploads(now);
-  await boundDatabase().query(`DELETE FROM ${RATE_LIMIT_TABLE} WHERE expire < :now`, { replacements: { now } });
+  await clearEndedRateCounts(boundDatabase(), now);
   await MailQueueItem.destroy({
     where: { state: { [Op.in]: ['sent', 'failed'] }, updatedAt: { [Op.lt]: new Date(now - MAIL_KEPT_MS) } },
   });

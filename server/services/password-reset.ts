@@ -44,7 +44,13 @@ export async function resetPassword(token: string, password: string): Promise<vo
     const reset = await PasswordReset.findOne({ where: { tokenHash, usedAt: null }, transaction });
     if (!reset || reset.expiresAt.getTime() < Date.now()) throw refused();
     const now = new Date();
-    await reset.update({ usedAt: now }, { transaction });
+    // Marked used only if still unused: where two uses read the row at once (a server database's
+    // transactions run side by side), the second update changes nothing and that use is refused.
+    const [claimed] = await PasswordReset.update(
+      { usedAt: now },
+      { where: { id: reset.id, usedAt: null }, transaction },
+    );
+    if (claimed !== 1) throw refused();
     // Other links still in someone's mailbox stop working too.
     await PasswordReset.update(
       { usedAt: now },

@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto';
-import { Op, fn, col, where as sqlWhere, type Transaction, type WhereOptions } from 'sequelize';
+import { Op, fn, col, type Transaction, type WhereOptions } from 'sequelize';
+import { caseInsensitiveContains } from '../database';
 import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/sketch';
 import { downloadBaseName } from '../../shared/downloadName';
 import { ShareRecipient, Shop, Sketch, SketchRevision, User, type PublicUser } from '../models';
@@ -82,6 +83,9 @@ async function ownSketch(
     where: { id, ownerId: user.id, deletedAt: opts.deleted ? { [Op.ne]: null } : null },
     include: [withOwner],
     transaction: t,
+    // On a server database the row stays locked to the end of `t`, so two saves of one version cannot both
+    // pass the version check; SQLite's IMMEDIATE transactions already run one writer at a time.
+    lock: t ? { level: t.LOCK.UPDATE, of: Sketch } : undefined,
   });
   if (!row) throw notFound('no such sketch');
   return row;
@@ -127,8 +131,7 @@ export async function listSketches(user: PublicUser, query: ListQuery): Promise<
   if (query.deleted) conditions.push({ deletedAt: { [Op.gt]: new Date(Date.now() - RESTORE_WINDOW_MS) } });
   else conditions.push({ deletedAt: null });
   if (query.layout) conditions.push({ layout: query.layout });
-  // instr() rather than LIKE, so that % and _ in the search text are plain characters.
-  if (query.q) conditions.push(sqlWhere(fn('instr', fn('lower', col('Sketch.name')), query.q.toLowerCase()), Op.gt, 0));
+  if (query.q) conditions.push(caseInsensitiveContains(Sketch.sequelize!, 'Sketch.name', query.q));
   const sortColumn = query.sort === 'name' ? fn('lower', col('Sketch.name')) : col(`Sketch.${query.sort}`);
   const direction = query.order.toUpperCase();
   const { rows, count } = await Sketch.findAndCountAll({

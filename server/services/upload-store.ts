@@ -83,9 +83,15 @@ export async function importFolderUploads(dir: string, store: UploadStore = data
   for (const upload of await Upload.findAll({ attributes: ['id', 'storedName'] })) {
     const file = path.join(dir, upload.storedName);
     if (!fs.existsSync(file) || (await store.has(upload.id))) continue;
-    await Upload.sequelize!.transaction((t) =>
-      store.write(upload.id, fs.createReadStream(file, { highWaterMark: UPLOAD_CHUNK_BYTES }), t),
-    );
+    try {
+      await Upload.sequelize!.transaction((t) =>
+        store.write(upload.id, fs.createReadStream(file, { highWaterMark: UPLOAD_CHUNK_BYTES }), t),
+      );
+    } catch (err) {
+      // Another instance starting at the same moment moved it first (its pieces are in), or the file is unreadable.
+      if (await store.has(upload.id)) continue;
+      throw err;
+    }
     await fs.promises.rm(file, { force: true });
     moved += 1;
   }

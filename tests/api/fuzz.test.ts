@@ -31,8 +31,11 @@ let targetUserId: number;
 async function snapshot(): Promise<string> {
   const parts: unknown[] = [];
   for (const table of TABLES) {
-    const [rows] = await server.sequelize.query(`SELECT * FROM ${table} ORDER BY rowid`);
-    parts.push(rows);
+    // Rows in a fixed order whatever the database returns them in (not every table has an id column).
+    const [rows] = await server.sequelize.query(
+      `SELECT * FROM ${server.sequelize.getQueryInterface().quoteTable(table)}`,
+    );
+    parts.push(rows.map((row) => JSON.stringify(row)).sort());
   }
   return JSON.stringify(parts);
 }

@@ -1,16 +1,15 @@
-import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import type { Express } from 'express';
 import request from 'supertest';
 import type { Sequelize } from 'sequelize';
 import { loadConfig, type ServerConfig } from '../../server/config';
-import { openDatabase } from '../../server/db';
+import { openDatabase } from '../../server/database';
 import { migrate } from '../../server/migrations/umzug';
 import { seedDemoData } from '../../server/seed';
 import { createApp } from '../../server/app';
 import { setUpMail, type MailSetup } from '../../server/services/mail';
 import { OutboxMessage } from '../../server/models';
+import { createTestDatabase, type TestDatabase } from './test-database';
 
 export interface TestServer {
   app: Express;
@@ -23,33 +22,34 @@ export interface TestServer {
   close(): Promise<void>;
 }
 
-/** Where a test server keeps its database, and how soon it retries mail. */
+/** Which database a test server uses, and how soon it retries mail. */
 export interface TestServerOptions {
-  /** A folder the caller made and removes: the database in it is shared by every server started on it. */
-  dir?: string;
+  /** A database the caller made (createTestDatabase) and drops: shared by every server started on it. */
+  database?: TestDatabase;
   /** Pause before the first mail retry (ms). */
   retryDelayMs?: number;
 }
 
 /**
- * A fresh app on its own temporary database FILE (not :memory:, which would hide the
- * per-transaction connections), migrated and seeded with the demo accounts. With `options.dir`, an app on
- * the database in that folder (a restart, or a second instance), which close() leaves in place.
+ * A fresh app on a database of its own, migrated and seeded with the demo accounts: a temporary SQLite
+ * FILE (not :memory:, which would hide the per-transaction connections), or in the PostgreSQL pass a new
+ * database in the pass's cluster (tests/api/test-database.ts). With `options.database`, an app on that
+ * database (a restart, or a second instance), which close() leaves in place.
  */
 export async function startTestServer(
   env: Record<string, string> = {},
   options: TestServerOptions = {},
 ): Promise<TestServer> {
-  const dir = options.dir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'arcwright-api-'));
+  const database = options.database ?? (await createTestDatabase());
+  const dir = database.dir;
   const config = loadConfig({
-    DATABASE_PATH: path.join(dir, 'test.sqlite'),
-    UPLOADS_DIR: path.join(dir, 'uploads'),
+    ...database.env,
     UPLOAD_SPOOL_DIR: path.join(dir, 'spool'),
     PUBLIC_URL: 'http://arcwright.example.test',
     DIST_DIR: path.join(dir, 'no-dist'),
     ...env,
   });
-  const sequelize = await openDatabase(config.databasePath);
+  const sequelize = await openDatabase(config);
   await migrate(sequelize);
   await seedDemoData(sequelize);
   const mail = await setUpMail(config, { retryDelayMs: options.retryDelayMs ?? 20 });
@@ -67,7 +67,7 @@ export async function startTestServer(
     async close() {
       await mail.close();
       await sequelize.close();
-      if (!options.dir) fs.rmSync(dir, { recursive: true, force: true });
+      if (!options.database) await database.drop();
     },
   };
 }

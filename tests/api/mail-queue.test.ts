@@ -1,12 +1,10 @@
-import fs from 'node:fs';
 import net from 'node:net';
-import os from 'node:os';
-import path from 'node:path';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { SMTPServer } from 'smtp-server';
 import { simpleParser } from 'mailparser';
 import { Caller, demo, startTestServer, type TestServer } from './helpers';
 import { MailQueueItem } from '../../server/models';
+import { createTestDatabase, type TestDatabase } from './test-database';
 
 // The outgoing mail queue lives in the database: it outlives a restart, and instances sharing it send each message once.
 
@@ -44,7 +42,7 @@ async function smtpServer(port: number) {
   return { received, close: () => new Promise<void>((resolve) => server.close(() => resolve())) };
 }
 
-let dir: string;
+let database: TestDatabase;
 let smtpPort: number;
 const open: TestServer[] = [];
 const logged: unknown[][] = [];
@@ -52,20 +50,20 @@ const originalError = console.error;
 
 beforeAll(async () => {
   console.error = (...args: unknown[]) => void logged.push(args);
-  dir = fs.mkdtempSync(path.join(os.tmpdir(), 'arcwright-mail-queue-'));
+  database = await createTestDatabase();
   smtpPort = await freePort();
 });
 afterEach(async () => {
   while (open.length) await open.pop()!.close();
 });
-afterAll(() => {
+afterAll(async () => {
   console.error = originalError;
-  fs.rmSync(dir, { recursive: true, force: true });
+  await database.drop();
 });
 
-/** An app on the test's one database file, sending to the test's SMTP port. */
+/** An app on the test's one database, sending to the test's SMTP port. */
 async function instance(): Promise<TestServer> {
-  const server = await startTestServer({ SMTP_URL: `smtp://127.0.0.1:${smtpPort}` }, { dir, retryDelayMs: 100 });
+  const server = await startTestServer({ SMTP_URL: `smtp://127.0.0.1:${smtpPort}` }, { database, retryDelayMs: 100 });
   open.push(server);
   return server;
 }

@@ -1,9 +1,11 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { Sequelize, Transaction } from 'sequelize';
+import { Op, Sequelize, Transaction, col, fn, where, type WhereOptions } from 'sequelize';
 import sqlite3 from 'sqlite3';
-import { RateLimiterPostgres, RateLimiterSQLite, type RateLimiterStoreAbstract } from 'rate-limiter-flexible';
-import { initModels } from './models';
+import { RateLimiterSQLite, type RateLimiterStoreAbstract } from 'rate-limiter-flexible';
+import { initModels } from '../models';
+import type { DatabaseDialect, DatabaseLocation } from './dialect';
+import { rateCounterOptions, type RateCounterOptions } from './rate-counters';
 
 /** How long a connection waits for another's write lock before giving up (ms). */
 export const BUSY_TIMEOUT_MS = 10_000;
@@ -125,7 +127,8 @@ function reuseTransactionConnection(sequelize: Sequelize): void {
 }
 
 /** Opens (creating when missing) the SQLite file and binds the models to it. Run migrations next. */
-export async function openDatabase(databasePath: string): Promise<Sequelize> {
+async function open(location: DatabaseLocation): Promise<Sequelize> {
+  const databasePath = location.databasePath;
   fs.mkdirSync(path.dirname(databasePath), { recursive: true });
   const sequelize = new Sequelize({
     dialect: 'sqlite',
@@ -144,14 +147,43 @@ export async function openDatabase(databasePath: string): Promise<Sequelize> {
   return sequelize;
 }
 
-/** The table rate-limit counters live in (made by migration 0006-shared-state). */
-export const RATE_LIMIT_TABLE = 'rate_limits';
+/**
+ * SQLite's own write lock is the shared lock: `work` runs inside BEGIN IMMEDIATE on the default
+ * connection (the one every statement outside a managed transaction uses), so another process's
+ * `work` waits at its BEGIN until this one commits, and a failure rolls all of `work` back.
+ * `work` must not start a managed transaction: that one would wait for this lock.
+ */
+async function withExclusiveLock<T>(sequelize: Sequelize, _name: string, work: () => Promise<T>): Promise<T> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      await sequelize.query('BEGIN IMMEDIATE');
+      break;
+    } catch (err) {
+      // busy_timeout has passed while another process held the lock: keep waiting for it a while longer.
+      if (attempt >= LOCK_ATTEMPTS || !/SQLITE_BUSY/.test(String(err))) throw err;
+    }
+  }
+  try {
+    const result = await work();
+    await sequelize.query('COMMIT');
+    return result;
+  } catch (err) {
+    await sequelize.query('ROLLBACK').catch(() => undefined);
+    throw err;
+  }
+}
 
-/** What a rate limiter counts: `points` per `durationS` seconds, under keys starting with `keyPrefix`. */
-export interface RateCounterOptions {
-  keyPrefix: string;
-  points: number;
-  durationS: number;
+/** How many times BEGIN IMMEDIATE waits busy_timeout for another process's lock before giving up. */
+const LOCK_ATTEMPTS = 6;
+
+/** VACUUM INTO writes a consistent, compacted copy from one read transaction; writers go on meanwhile (WAL). */
+async function backup(sequelize: Sequelize, _location: DatabaseLocation, file: string): Promise<void> {
+  await sequelize.query(`VACUUM INTO ${sequelize.escape(file)}`);
+}
+
+/** instr() rather than LIKE, so that % and _ in the search text are plain characters. */
+function caseInsensitiveContains(column: string, text: string): WhereOptions {
+  return where(fn('instr', fn('lower', col(column)), text.toLowerCase()), Op.gt, 0);
 }
 
 /**
@@ -162,39 +194,36 @@ export interface RateCounterOptions {
 const counterConnections = new WeakMap<Sequelize, sqlite3.Database>();
 
 function counterConnection(sequelize: Sequelize): sqlite3.Database {
-  let connection = counterConnections.get(sequelize);
-  if (connection) return connection;
+  const known = counterConnections.get(sequelize);
+  if (known) return known;
   const storage = (sequelize as unknown as { options: { storage?: string } }).options.storage;
   if (!storage) throw new Error('the SQLite database has no file');
-  const opened = new sqlite3.Database(storage);
-  opened.configure('busyTimeout', BUSY_TIMEOUT_MS);
-  counterConnections.set(sequelize, opened);
+  const connection = new sqlite3.Database(storage);
+  connection.configure('busyTimeout', BUSY_TIMEOUT_MS);
+  counterConnections.set(sequelize, connection);
   const close = sequelize.close.bind(sequelize);
   sequelize.close = async () => {
     counterConnections.delete(sequelize);
-    await new Promise<void>((resolve) => opened.close(() => resolve()));
+    await new Promise<void>((resolve) => connection.close(() => resolve()));
     return close();
   };
-  connection = opened;
   return connection;
 }
 
-/**
- * A rate counter kept in the database (table rate_limits), so every app instance on it counts together:
- * rate-limiter-flexible's PostgreSQL store through Sequelize's own connections, or its SQLite store.
- */
-export function databaseRateCounter(sequelize: Sequelize, options: RateCounterOptions): RateLimiterStoreAbstract {
-  const common = {
-    keyPrefix: options.keyPrefix,
-    points: options.points,
-    duration: options.durationS,
-    tableName: RATE_LIMIT_TABLE,
-    // The migration made the table; expired rows are deleted by the housekeeping timer, not per limiter.
-    tableCreated: true,
-    clearExpiredByTimeout: false,
-  };
-  if (sequelize.getDialect() === 'postgres') {
-    return new RateLimiterPostgres({ ...common, storeClient: sequelize, storeType: 'sequelize' });
-  }
-  return new RateLimiterSQLite({ ...common, storeClient: counterConnection(sequelize), storeType: 'sqlite3' });
+/** rate-limiter-flexible's SQLite store on the database file (table rate_limits). */
+function rateCounter(sequelize: Sequelize, options: RateCounterOptions): RateLimiterStoreAbstract {
+  return new RateLimiterSQLite({
+    ...rateCounterOptions(options),
+    storeClient: counterConnection(sequelize),
+    storeType: 'sqlite3',
+  });
 }
+
+export const sqliteDialect: DatabaseDialect = {
+  name: 'sqlite',
+  open,
+  caseInsensitiveContains,
+  withExclusiveLock,
+  backup,
+  rateCounter,
+};
