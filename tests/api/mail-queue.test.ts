@@ -1,46 +1,10 @@
-import net from 'node:net';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import { SMTPServer } from 'smtp-server';
-import { simpleParser } from 'mailparser';
 import { Caller, demo, startTestServer, type TestServer } from './helpers';
 import { MailQueueItem } from '../../server/models';
 import { createTestDatabase, type TestDatabase } from './test-database';
+import { freePort, smtpServer } from './fixtures/smtp';
 
 // The outgoing mail queue lives in the database: it outlives a restart, and instances sharing it send each message once.
-
-/** A port nothing listens on yet: bound and released again. */
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = net.createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as net.AddressInfo;
-      probe.close(() => resolve(port));
-    });
-  });
-}
-
-/** An SMTP server on `port` that records who each message it receives went to, and its subject. */
-async function smtpServer(port: number) {
-  const received: { to: string; subject: string }[] = [];
-  const server = new SMTPServer({
-    authOptional: true,
-    disabledCommands: ['STARTTLS', 'AUTH'],
-    logger: false,
-    onData(stream, _session, callback) {
-      simpleParser(stream).then(
-        (mail) => {
-          const to = Array.isArray(mail.to) ? mail.to.map((a) => a.text).join(', ') : (mail.to?.text ?? '');
-          received.push({ to, subject: mail.subject ?? '' });
-          callback();
-        },
-        (err: Error) => callback(err),
-      );
-    },
-  });
-  await new Promise<void>((resolve) => server.listen(port, '127.0.0.1', resolve));
-  return { received, close: () => new Promise<void>((resolve) => server.close(() => resolve())) };
-}
 
 let database: TestDatabase;
 let smtpPort: number;
