@@ -210,9 +210,29 @@ function counterConnection(sequelize: Sequelize): sqlite3.Database {
   return connection;
 }
 
+/**
+ * rate-limiter-flexible's SQLite store, made safe after a failed write: the store wraps its upsert in a
+ * SAVEPOINT and on an error (SQLITE_BUSY under heavy load, say) only rolls back TO it, which leaves the
+ * transaction the SAVEPOINT opened in place, so the connection would keep its lock and every later count
+ * would pile into an uncommitted transaction. A plain ROLLBACK after the error ends it.
+ */
+class SQLiteRateCounter extends RateLimiterSQLite {
+  async _upsert(...args: unknown[]): Promise<unknown> {
+    const upsert = RateLimiterSQLite.prototype as unknown as { _upsert(...a: unknown[]): Promise<unknown> };
+    try {
+      return await upsert._upsert.apply(this, args);
+    } catch (err) {
+      const connection = (this as unknown as { client: sqlite3.Database }).client;
+      // No transaction open (the SAVEPOINT itself failed): SQLite answers an error, which changes nothing.
+      await new Promise<void>((resolve) => connection.run('ROLLBACK', () => resolve()));
+      throw err;
+    }
+  }
+}
+
 /** rate-limiter-flexible's SQLite store on the database file (table rate_limits). */
 function rateCounter(sequelize: Sequelize, options: RateCounterOptions): RateLimiterStoreAbstract {
-  return new RateLimiterSQLite({
+  return new SQLiteRateCounter({
     ...rateCounterOptions(options),
     storeClient: counterConnection(sequelize),
     storeType: 'sqlite3',

@@ -21,18 +21,19 @@ export class DatabaseRateStore implements Store {
     this.prefix = name;
   }
 
+  /** Called as the app is built, when the models are bound to the app's database: the counter uses that one. */
   init(options: Options): void {
     this.windowS = Math.max(1, Math.ceil(options.windowMs / 1000));
     this.points = typeof options.limit === 'number' ? options.limit : 1;
-  }
-
-  /** Opened on first use: the app is built before anything is counted, and the models are bound by then. */
-  private get store(): RateLimiterStoreAbstract {
-    this.counter ??= databaseRateCounter(boundDatabase(), {
+    this.counter = databaseRateCounter(boundDatabase(), {
       keyPrefix: this.prefix,
       points: this.points,
       durationS: this.windowS,
     });
+  }
+
+  private get store(): RateLimiterStoreAbstract {
+    if (!this.counter) throw new Error(`rate limiter ${this.prefix} used before express-rate-limit set it up`);
     return this.counter;
   }
 
