@@ -1,3 +1,4 @@
+import os from 'node:os';
 import path from 'node:path';
 
 /** Server settings, read once from the environment. Every field has a working default for local use. */
@@ -10,7 +11,10 @@ export interface ServerConfig {
   databasePath: string;
   /** Create the demo shop, class, accounts and sketches on every start, not only into an empty database. */
   seedDemo: boolean;
-  /** Folder for uploaded files (tracing photos); never served statically. */
+  /**
+   * Folder uploaded files were kept in before their bytes went into the database: files found there for
+   * known uploads are moved into the database at start (server/index.ts).
+   */
   uploadsDir: string;
   /**
    * Origin of every link the app hands out (in e-mails and API answers), without a trailing slash.
@@ -46,6 +50,12 @@ export interface ServerConfig {
   shareMailMaxPerHour: number;
   /** Class invitation mails per class per hour (a class of 250 is invited in one go). */
   classInviteMaxPerHour: number;
+  /** Upload requests per account per hour. */
+  uploadMaxPerHour: number;
+  /** Bytes of uploaded files one account may keep (UPLOAD_QUOTA_MB). */
+  uploadQuotaBytes: number;
+  /** Folder an incoming upload is spooled to before it goes into the database (the system's temporary folder). */
+  uploadSpoolDir: string;
   /** Folder of the built client; served when it exists. */
   distDir: string;
 }
@@ -127,6 +137,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     sweepMaxPerMinute: intFrom(env.SWEEP_MAX_PER_MINUTE, 120, 'SWEEP_MAX_PER_MINUTE'),
     shareMailMaxPerHour: intFrom(env.SHARE_MAIL_MAX_PER_HOUR, 20, 'SHARE_MAIL_MAX_PER_HOUR'),
     classInviteMaxPerHour: intFrom(env.CLASS_INVITE_MAX_PER_HOUR, 1000, 'CLASS_INVITE_MAX_PER_HOUR'),
+    uploadMaxPerHour: intFrom(env.UPLOAD_MAX_PER_HOUR, 60, 'UPLOAD_MAX_PER_HOUR'),
+    uploadQuotaBytes: intFrom(env.UPLOAD_QUOTA_MB, 200, 'UPLOAD_QUOTA_MB') * 1024 * 1024,
+    uploadSpoolDir: path.resolve(root, env.UPLOAD_SPOOL_DIR || os.tmpdir()),
     distDir: path.resolve(root, env.DIST_DIR || 'dist'),
   };
 }

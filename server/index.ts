@@ -2,11 +2,10 @@ import { loadConfig } from './config';
 import { describeLocation, openDatabase } from './database';
 import { prepareDatabase } from './prepare-database';
 import { setUpMail } from './services/mail';
-import { purgeDeleted } from './services/uploads';
+import { startHousekeeping } from './services/housekeeping';
+import { importFolderUploads } from './services/upload-store';
 import { createApp } from './app';
 import { listenOn } from './listen';
-
-const PURGE_EVERY_MS = 6 * 3600_000;
 
 /** Opens the database, migrates, seeds, starts the mail catcher (unless SMTP_URL), and listens on PORT (0: any free port). */
 async function main(): Promise<void> {
@@ -22,9 +21,9 @@ async function main(): Promise<void> {
       : '[arcwright] mail via SMTP_URL',
   );
 
-  const purge = () => purgeDeleted(config.uploadsDir).catch((err) => console.error('[arcwright] purge failed:', err));
-  await purge();
-  setInterval(purge, PURGE_EVERY_MS).unref();
+  const moved = await importFolderUploads(config.uploadsDir);
+  if (moved) console.log(`[arcwright] ${moved} uploaded files moved from ${config.uploadsDir} into the database`);
+  const stopHousekeeping = startHousekeeping((message, err) => console.error(message, err));
 
   const app = createApp({ sequelize, config, mailer: mail.mailer });
   const server = await listenOn(app, config);
@@ -38,6 +37,7 @@ async function main(): Promise<void> {
     closing = true;
     console.log(`[arcwright] ${signal}: closing`);
     setTimeout(() => process.exit(0), 5000).unref();
+    stopHousekeeping();
     server.close(() => {
       void mail
         .close()

@@ -1,4 +1,6 @@
 import type { Sequelize, WhereOptions } from 'sequelize';
+import type { RateLimiterStoreAbstract } from 'rate-limiter-flexible';
+import type { RateCounterOptions } from './rate-counters';
 
 /** Where the database lives: a PostgreSQL URL when DATABASE_URL is set, else the SQLite file. */
 export interface DatabaseLocation {
@@ -30,4 +32,6 @@ export interface DatabaseDialect {
   backup(sequelize: Sequelize, location: DatabaseLocation, file: string): Promise<void>;
   /** Loads a copy made by `backup` into the location, which must be new or empty (never overwrites data). */
   restore(location: DatabaseLocation, file: string): Promise<void>;
+  /** A rate-limiter-flexible store counting in the table rate_limits, shared by every instance on the database. */
+  rateCounter(sequelize: Sequelize, options: RateCounterOptions): RateLimiterStoreAbstract;
 }

@@ -1,9 +1,12 @@
 import type { Sequelize, WhereOptions } from 'sequelize';
+import type { RateLimiterStoreAbstract } from 'rate-limiter-flexible';
+import type { RateCounterOptions } from './rate-counters';
 import type { DatabaseDialect, DatabaseLocation } from './dialect';
 import { postgresDialect } from './postgres';
 import { sqliteDialect } from './sqlite';
 
 export type { DatabaseDialect, DatabaseLocation } from './dialect';
+export { clearEndedRateCounts, type RateCounterOptions } from './rate-counters';
 
 /** The dialect for a location: PostgreSQL when it has a URL, else the SQLite file. */
 export function dialectFor(location: DatabaseLocation): DatabaseDialect {
@@ -28,6 +31,11 @@ export function caseInsensitiveContains(sequelize: Sequelize, column: string, te
 /** See DatabaseDialect.withExclusiveLock. */
 export function withExclusiveLock<T>(sequelize: Sequelize, name: string, work: () => Promise<T>): Promise<T> {
   return dialectOf(sequelize).withExclusiveLock(sequelize, name, work);
+}
+
+/** See DatabaseDialect.rateCounter. */
+export function databaseRateCounter(sequelize: Sequelize, options: RateCounterOptions): RateLimiterStoreAbstract {
+  return dialectOf(sequelize).rateCounter(sequelize, options);
 }
 
 /** Where a location is, for logs: the SQLite file, or the PostgreSQL URL without its password. */

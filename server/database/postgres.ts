@@ -1,8 +1,10 @@
 import { spawn } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { Op, Sequelize, col, fn, where, type WhereOptions } from 'sequelize';
+import { RateLimiterPostgres, type RateLimiterStoreAbstract } from 'rate-limiter-flexible';
 import { initModels } from '../models';
 import type { DatabaseDialect, DatabaseLocation } from './dialect';
+import { rateCounterOptions, type RateCounterOptions } from './rate-counters';
 
 /** Connections one instance keeps to PostgreSQL at most; several instances share the server's max_connections. */
 const POOL_MAX = 10;
@@ -97,6 +99,11 @@ async function restore(location: DatabaseLocation, file: string): Promise<void> 
   );
 }
 
+/** rate-limiter-flexible's PostgreSQL store (table rate_limits), on Sequelize's own pool of connections. */
+function rateCounter(sequelize: Sequelize, options: RateCounterOptions): RateLimiterStoreAbstract {
+  return new RateLimiterPostgres({ ...rateCounterOptions(options), storeClient: sequelize, storeType: 'sequelize' });
+}
+
 export const postgresDialect: DatabaseDialect = {
   name: 'postgres',
   open,
@@ -104,4 +111,5 @@ export const postgresDialect: DatabaseDialect = {
   withExclusiveLock,
   backup,
   restore,
+  rateCounter,
 };

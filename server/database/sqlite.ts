@@ -1,8 +1,11 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { Op, Sequelize, Transaction, col, fn, where, type WhereOptions } from 'sequelize';
+import sqlite3 from 'sqlite3';
+import { RateLimiterSQLite, type RateLimiterStoreAbstract } from 'rate-limiter-flexible';
 import { initModels } from '../models';
 import type { DatabaseDialect, DatabaseLocation } from './dialect';
+import { rateCounterOptions, type RateCounterOptions } from './rate-counters';
 
 /** How long a connection waits for another's write lock before giving up (ms). */
 export const BUSY_TIMEOUT_MS = 10_000;
@@ -193,6 +196,59 @@ function caseInsensitiveContains(column: string, text: string): WhereOptions {
   return where(fn('instr', fn('lower', col(column)), text.toLowerCase()), Op.gt, 0);
 }
 
+/**
+ * The one SQLite connection the rate counters of a database use, opened on first need and closed with the
+ * database. rate-limiter-flexible's SQLite store wants a plain sqlite3 connection, and a connection of its
+ * own keeps its short write (one upsert) out of Sequelize's transactions.
+ */
+const counterConnections = new WeakMap<Sequelize, sqlite3.Database>();
+
+function counterConnection(sequelize: Sequelize): sqlite3.Database {
+  const known = counterConnections.get(sequelize);
+  if (known) return known;
+  const storage = (sequelize as unknown as { options: { storage?: string } }).options.storage;
+  if (!storage) throw new Error('the SQLite database has no file');
+  const connection = new sqlite3.Database(storage);
+  connection.configure('busyTimeout', BUSY_TIMEOUT_MS);
+  counterConnections.set(sequelize, connection);
+  const close = sequelize.close.bind(sequelize);
+  sequelize.close = async () => {
+    counterConnections.delete(sequelize);
+    await new Promise<void>((resolve) => connection.close(() => resolve()));
+    return close();
+  };
+  return connection;
+}
+
+/**
+ * rate-limiter-flexible's SQLite store, made safe after a failed write: the store wraps its upsert in a
+ * SAVEPOINT and on an error (SQLITE_BUSY under heavy load, say) only rolls back TO it, which leaves the
+ * transaction the SAVEPOINT opened in place, so the connection would keep its lock and every later count
+ * would pile into an uncommitted transaction. A plain ROLLBACK after the error ends it.
+ */
+class SQLiteRateCounter extends RateLimiterSQLite {
+  async _upsert(...args: unknown[]): Promise<unknown> {
+    const upsert = RateLimiterSQLite.prototype as unknown as { _upsert(...a: unknown[]): Promise<unknown> };
+    try {
+      return await upsert._upsert.apply(this, args);
+    } catch (err) {
+      const connection = (this as unknown as { client: sqlite3.Database }).client;
+      // No transaction open (the SAVEPOINT itself failed): SQLite answers an error, which changes nothing.
+      await new Promise<void>((resolve) => connection.run('ROLLBACK', () => resolve()));
+      throw err;
+    }
+  }
+}
+
+/** rate-limiter-flexible's SQLite store on the database file (table rate_limits). */
+function rateCounter(sequelize: Sequelize, options: RateCounterOptions): RateLimiterStoreAbstract {
+  return new SQLiteRateCounter({
+    ...rateCounterOptions(options),
+    storeClient: counterConnection(sequelize),
+    storeType: 'sqlite3',
+  });
+}
+
 export const sqliteDialect: DatabaseDialect = {
   name: 'sqlite',
   open,
@@ -200,4 +256,5 @@ export const sqliteDialect: DatabaseDialect = {
   withExclusiveLock,
   backup,
   restore,
+  rateCounter,
 };

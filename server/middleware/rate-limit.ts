@@ -1,6 +1,7 @@
 import { ipKeyGenerator, rateLimit, type Options } from 'express-rate-limit';
 import type { Request, RequestHandler } from 'express';
 import type { ServerConfig } from '../config';
+import { DatabaseRateStore } from './rate-limit-store';
 
 const HOUR_MS = 60 * 60_000;
 
@@ -18,6 +19,11 @@ function emailKey(req: Request): string {
   return typeof email === 'string' ? email.trim().toLowerCase() : '(none)';
 }
 
+/*
+ * Every limiter counts in the database (DatabaseRateStore), under its own name, so that the app instances on
+ * one database share their counts and a restart forgets none.
+ */
+
 /**
  * Failed sign-ins per address, then per account; successful ones do not count. Mount the
  * account limiter after body validation, so that it keys on a real e-mail.
@@ -31,8 +37,18 @@ export function loginLimiters(config: ServerConfig): { perAddress: RequestHandle
     handler: tooMany('too many sign-in attempts'),
   };
   return {
-    perAddress: rateLimit({ ...common, limit: config.loginMaxPerAddress, keyGenerator: addressKey }),
-    perAccount: rateLimit({ ...common, limit: config.loginMaxPerAccount, keyGenerator: emailKey }),
+    perAddress: rateLimit({
+      ...common,
+      limit: config.loginMaxPerAddress,
+      keyGenerator: addressKey,
+      store: new DatabaseRateStore('login-address'),
+    }),
+    perAccount: rateLimit({
+      ...common,
+      limit: config.loginMaxPerAccount,
+      keyGenerator: emailKey,
+      store: new DatabaseRateStore('login-account'),
+    }),
   };
 }
 
@@ -42,6 +58,7 @@ export function signupLimiter(config: ServerConfig): RequestHandler {
     windowMs: HOUR_MS,
     limit: config.signupMaxPerAddress,
     keyGenerator: addressKey,
+    store: new DatabaseRateStore('signup'),
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     handler: tooMany('too many requests from this address'),
@@ -58,12 +75,14 @@ export function resetRequestLimiters(config: ServerConfig): { perAddress: Reques
       ...common,
       limit: config.signupMaxPerAddress,
       keyGenerator: addressKey,
+      store: new DatabaseRateStore('reset-address'),
       handler: tooMany('too many reset requests'),
     }),
     perAccount: rateLimit({
       ...common,
       limit: RESETS_PER_ACCOUNT,
       keyGenerator: emailKey,
+      store: new DatabaseRateStore('reset-account'),
       handler: tooMany('too many reset requests for this account'),
     }),
   };
@@ -71,13 +90,14 @@ export function resetRequestLimiters(config: ServerConfig): { perAddress: Reques
 
 /**
  * Sweeps per address per minute (POST /api/sweep, the sweep CSV): each is CPU on the one event loop (tens
- * of ms for a typical sketch), so they are capped.
+ * of ms for a typical sketch), so they are capped. `name` keeps the counts of each route apart.
  */
-export function sweepLimiter(config: ServerConfig): RequestHandler {
+export function sweepLimiter(config: ServerConfig, name: 'sweep' | 'sweep-csv'): RequestHandler {
   return rateLimit({
     windowMs: 60_000,
     limit: config.sweepMaxPerMinute,
     keyGenerator: addressKey,
+    store: new DatabaseRateStore(name),
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     handler: (_req, res) => {
@@ -95,10 +115,24 @@ export function shareMailLimiter(config: ServerConfig): RequestHandler {
     windowMs: HOUR_MS,
     limit: config.shareMailMaxPerHour,
     keyGenerator: (req) => `user:${req.user?.id ?? 'none'}`,
+    store: new DatabaseRateStore('share-mail'),
     skip: (req) => (req.body as { email?: unknown } | undefined)?.email === undefined,
     skipFailedRequests: true,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     handler: tooMany('too many share mails from this account'),
+  });
+}
+
+/** Upload requests per account per hour (POST /api/sketches/:id/uploads), refused ones too. Mount after `requireUser`. */
+export function uploadLimiter(config: ServerConfig): RequestHandler {
+  return rateLimit({
+    windowMs: HOUR_MS,
+    limit: config.uploadMaxPerHour,
+    keyGenerator: (req) => `user:${req.user?.id ?? 'none'}`,
+    store: new DatabaseRateStore('upload'),
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: tooMany('too many uploads from this account'),
   });
 }

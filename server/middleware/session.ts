@@ -48,7 +48,8 @@ export function sessionMiddleware(sequelize: Sequelize, config: ServerConfig): R
       userId: sess.passport?.user ?? null,
     }),
   });
-  // The store's own timer would keep a finished test process alive; run our own, unref'd.
+  // The store's own timer would keep a finished test process alive; run our own, unref'd. Every instance runs it:
+  // it deletes rows past their expiry, so runs at the same moment delete each row once and none fails.
   store.stopExpiringSessions();
   const sweepable = store as unknown as { clearExpiredSessions(): Promise<unknown> };
   setInterval(() => void sweepable.clearExpiredSessions(), SESSION_SWEEP_MS).unref();

@@ -6,6 +6,7 @@ import * as sketches from './0002-sketches';
 import * as mail from './0003-mail';
 import * as shareRecipients from './0004-share-recipients';
 import * as classes from './0005-classes';
+import * as sharedState from './0006-shared-state';
 
 /** A migration step: receives the query interface, never the models (they change, migrations do not). */
 export type Migration = (params: MigrationParams<QueryInterface>) => Promise<void>;
@@ -22,6 +23,7 @@ const steps: [name: string, module: MigrationModule][] = [
   ['0003-mail', mail],
   ['0004-share-recipients', shareRecipients],
   ['0005-classes', classes],
+  ['0006-shared-state', sharedState],
 ];
 
 export function createMigrator(sequelize: Sequelize): Umzug<QueryInterface> {

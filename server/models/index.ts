@@ -7,6 +7,8 @@ import { Session } from './session.model';
 import { Sketch } from './sketch.model';
 import { SketchRevision } from './sketch-revision.model';
 import { Upload } from './upload.model';
+import { UploadChunk } from './upload-chunk.model';
+import { MailQueueItem } from './mail-queue-item.model';
 import { OutboxMessage } from './outbox-message.model';
 import { PasswordReset } from './password-reset.model';
 import { ShareRecipient } from './share-recipient.model';
@@ -25,6 +27,8 @@ export {
   Sketch,
   SketchRevision,
   Upload,
+  UploadChunk,
+  MailQueueItem,
   OutboxMessage,
   PasswordReset,
   ShareRecipient,
@@ -35,7 +39,15 @@ export {
   Feedback,
 };
 export { shareModes, type ShareMode } from './sketch.model';
+export { mailStates, type MailState } from './mail-queue-item.model';
 export { roles, toPublicUser, type Role, type PublicUser } from './user.model';
+
+/** The database the models are bound to (by initModels): the one every table of the app lives in. */
+export function boundDatabase(): Sequelize {
+  const sequelize = User.sequelize;
+  if (!sequelize) throw new Error('the models are not bound to a database yet (initModels)');
+  return sequelize;
+}
 
 /** Binds every model to `sequelize` and declares the associations, in one place. Tables come from migrations. */
 export function initModels(sequelize: Sequelize): void {
@@ -48,6 +60,8 @@ export function initModels(sequelize: Sequelize): void {
     Sketch,
     SketchRevision,
     Upload,
+    UploadChunk,
+    MailQueueItem,
     OutboxMessage,
     PasswordReset,
     ShareRecipient,

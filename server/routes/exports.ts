@@ -17,7 +17,7 @@ function sendCsv(res: Response, file: CsvFile) {
  */
 export function exportRoutes(config: ServerConfig, find: (req: Request) => Promise<StoredDocument>): Router {
   const router = Router({ mergeParams: true });
-  const limiter = sweepLimiter(config);
+  const limiter = sweepLimiter(config, 'sweep-csv');
 
   router.get('/sweep.csv', limiter, async (req, res) => {
     const { units } = parseOr400(exportQuery, req.query, 'invalid query');

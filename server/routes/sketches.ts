@@ -100,8 +100,9 @@ export function sketchRoutes(config: ServerConfig, mailer: Mailer): Router {
     const body = parseOr400(shareBody, req.body);
     const { name, ...state } = await sketches.setShare(user, id, body, config);
     if (body.email && state.url) {
-      // Queued, not awaited: a failed send is retried and logged, and never undoes the share.
-      mailer.queue(shareNoticeMail(config, { to: body.email, from: user, sketchName: name, url: state.url }));
+      // Queued in the database before the answer, sent in the background: a failed send is retried and
+      // logged, and never undoes the share.
+      await mailer.queue(shareNoticeMail(config, { to: body.email, from: user, sketchName: name, url: state.url }));
     }
     res.json(state);
   });

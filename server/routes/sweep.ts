@@ -8,7 +8,7 @@ import { sweepLimiter } from '../middleware/rate-limit';
 /** POST /api/sweep: the body is a sketch file; the answer is the sweep result, as the command line prints it. */
 export function sweepRoutes(config: ServerConfig): Router {
   const router = Router();
-  const limiter = sweepLimiter(config);
+  const limiter = sweepLimiter(config, 'sweep');
 
   router.post('/sweep', limiter, (req, res) => {
     try {

@@ -27,7 +27,7 @@ export async function requestPasswordReset(email: string, config: ServerConfig, 
     tokenHash: sha256(token),
     expiresAt: new Date(Date.now() + RESET_VALID_MINUTES * 60_000),
   });
-  mailer.queue(passwordResetMail(config, user, token, RESET_VALID_MINUTES));
+  await mailer.queue(passwordResetMail(config, user, token, RESET_VALID_MINUTES));
 }
 
 const refused = () =>

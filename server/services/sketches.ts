@@ -17,6 +17,7 @@ import type {
 } from '../../shared/schema/apiResponses';
 import type { ServerConfig } from '../config';
 import { sharedSketchUrl } from './links';
+import { removeReplacedUploads } from './tracing-uploads';
 
 /** A soft-deleted sketch can be restored for this long (ms); then it is purged. */
 export const RESTORE_WINDOW_MS = 30 * 24 * 3600_000;
@@ -168,9 +169,11 @@ export function updateSketch(
     if (row.version !== version) {
       throw conflict(`the sketch was saved elsewhere since version ${version}`, { version: row.version });
     }
+    const before = row.document;
     row.set({ name: doc.name, layout: doc.layout, document: JSON.stringify(doc), version: row.version + 1 });
     await row.save({ transaction: t });
     await addRevision(row, user.id, t);
+    await removeReplacedUploads(row.id, before, row.document, t);
   });
 }
 
@@ -228,9 +231,11 @@ export function restoreRevision(user: PublicUser, id: number, rev: number): Prom
   return changeOwn(user, id, async (row, t) => {
     const r = await revisionOf(id, rev, t);
     const doc = JSON.parse(r.document) as SketchDocument;
+    const before = row.document;
     row.set({ name: r.name, layout: doc.layout, document: r.document, version: row.version + 1 });
     await row.save({ transaction: t });
     await addRevision(row, user.id, t);
+    await removeReplacedUploads(row.id, before, row.document, t);
   });
 }
 

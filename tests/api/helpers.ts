@@ -9,7 +9,7 @@ import { seedDemoData } from '../../server/seed';
 import { createApp } from '../../server/app';
 import { setUpMail, type MailSetup } from '../../server/services/mail';
 import { OutboxMessage } from '../../server/models';
-import { createTestDatabase } from './test-database';
+import { createTestDatabase, type TestDatabase } from './test-database';
 
 export interface TestServer {
   app: Express;
@@ -22,16 +22,29 @@ export interface TestServer {
   close(): Promise<void>;
 }
 
+/** Which database a test server uses, and how soon it retries mail. */
+export interface TestServerOptions {
+  /** A database the caller made (createTestDatabase) and drops: shared by every server started on it. */
+  database?: TestDatabase;
+  /** Pause before the first mail retry (ms). */
+  retryDelayMs?: number;
+}
+
 /**
  * A fresh app on a database of its own, migrated and seeded with the demo accounts: a temporary SQLite
  * FILE (not :memory:, which would hide the per-transaction connections), or in the PostgreSQL pass a new
- * database in the pass's cluster (tests/api/test-database.ts).
+ * database in the pass's cluster (tests/api/test-database.ts). With `options.database`, an app on that
+ * database (a restart, or a second instance), which close() leaves in place.
  */
-export async function startTestServer(env: Record<string, string> = {}): Promise<TestServer> {
-  const database = await createTestDatabase();
+export async function startTestServer(
+  env: Record<string, string> = {},
+  options: TestServerOptions = {},
+): Promise<TestServer> {
+  const database = options.database ?? (await createTestDatabase());
   const dir = database.dir;
   const config = loadConfig({
     ...database.env,
+    UPLOAD_SPOOL_DIR: path.join(dir, 'spool'),
     PUBLIC_URL: 'http://arcwright.example.test',
     DIST_DIR: path.join(dir, 'no-dist'),
     ...env,
@@ -39,7 +52,7 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
   const sequelize = await openDatabase(config);
   await migrate(sequelize);
   await seedDemoData(sequelize);
-  const mail = await setUpMail(config, { retryDelayMs: 20 });
+  const mail = await setUpMail(config, { retryDelayMs: options.retryDelayMs ?? 20 });
   const app = createApp({ sequelize, config, mailer: mail.mailer });
   return {
     app,
@@ -54,7 +67,7 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
     async close() {
       await mail.close();
       await sequelize.close();
-      await database.drop();
+      if (!options.database) await database.drop();
     },
   };
 }

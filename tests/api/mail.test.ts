@@ -157,6 +157,7 @@ describe('a failing mail server', () => {
       expect(() => mailer.queue({ to: 'x@example.test', subject: 's', text: 't', html: '<p>t</p>' })).not.toThrow();
       await mailer.idle();
     } finally {
+      await mailer.close();
       console.error = original;
     }
     expect(calls).toBe(3);

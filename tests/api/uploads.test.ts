@@ -1,56 +1,16 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import fs from 'node:fs';
 import path from 'node:path';
-import zlib from 'node:zlib';
 import request from 'supertest';
 import { newMember, startTestServer, type Caller, type TestServer } from './helpers';
 import { sketchFile } from './fixtures';
-import { Upload } from '../../server/models';
+import { jpegBytes, tinyPng } from './fixtures/images';
+import { Upload, UploadChunk } from '../../server/models';
 
 let server: TestServer;
 let alice: Caller;
 let bob: Caller;
 let sketchId: number;
-
-/** A real 1×1 PNG (signature, IHDR, IDAT, IEND), built here so the test needs no binary fixture. */
-function tinyPng(): Buffer {
-  const crcTable = Array.from({ length: 256 }, (_, n) => {
-    let c = n;
-    for (let k = 0; k < 8; k++) c = c & 1 ? 0xedb88320 ^ (c >>> 1) : c >>> 1;
-    return c >>> 0;
-  });
-  const crc = (buf: Buffer) => {
-    let c = 0xffffffff;
-    for (const b of buf) c = crcTable[(c ^ b) & 0xff] ^ (c >>> 8);
-    return (c ^ 0xffffffff) >>> 0;
-  };
-  const chunk = (type: string, data: Buffer) => {
-    const len = Buffer.alloc(4);
-    len.writeUInt32BE(data.length);
-    const td = Buffer.concat([Buffer.from(type, 'ascii'), data]);
-    const c = Buffer.alloc(4);
-    c.writeUInt32BE(crc(td));
-    return Buffer.concat([len, td, c]);
-  };
-  const ihdr = Buffer.from([0, 0, 0, 1, 0, 0, 0, 1, 8, 2, 0, 0, 0]);
-  const idat = zlib.deflateSync(Buffer.from([0, 255, 0, 0]));
-  return Buffer.concat([
-    Buffer.from([137, 80, 78, 71, 13, 10, 26, 10]),
-    chunk('IHDR', ihdr),
-    chunk('IDAT', idat),
-    chunk('IEND', Buffer.alloc(0)),
-  ]);
-}
-
-/** The first bytes of a JPEG (SOI + JFIF APP0): enough for detection from the bytes. */
-const jpegBytes = Buffer.concat([
-  Buffer.from([
-    0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01, 0x01, 0x00, 0x00, 0x01, 0x00, 0x01, 0x00,
-    0x00,
-  ]),
-  Buffer.alloc(64),
-  Buffer.from([0xff, 0xd9]),
-]);
 
 beforeAll(async () => {
   server = await startTestServer();
@@ -73,7 +33,11 @@ describe('uploads', () => {
     expect(res.body.url).toBe(`/api/uploads/${res.body.id}`);
     const row = await Upload.findByPk(res.body.id);
     expect(row!.storedName).toBe(`${res.body.id}.png`);
-    expect(fs.existsSync(path.join(server.config.uploadsDir, row!.storedName))).toBe(true);
+    // The bytes are in the database, where every instance reads them; no file is left on this machine.
+    const chunks = await UploadChunk.findAll({ where: { uploadId: res.body.id }, order: [['seq', 'ASC']] });
+    expect(Buffer.compare(Buffer.concat(chunks.map((c) => c.data)), png)).toBe(0);
+    expect(fs.existsSync(path.join(server.config.uploadsDir, row!.storedName))).toBe(false);
+    expect(fs.readdirSync(server.config.uploadSpoolDir)).toEqual([]);
 
     const got = await alice.get(res.body.url);
     expect(got.status).toBe(200);

@@ -9,24 +9,29 @@ export interface MailSetup {
   close(): Promise<void>;
 }
 
-/** SMTP_URL when set; otherwise the in-process catcher that files every message in the outbox. */
+/**
+ * SMTP_URL when set; otherwise the in-process catcher that files every message in the outbox. The mailer
+ * starts sending from the queue at once, mail left queued before a restart included.
+ */
 export async function setUpMail(
   config: ServerConfig,
-  retry: Partial<Pick<MailerOptions, 'attempts' | 'retryDelayMs'>> = {},
+  retry: Partial<Pick<MailerOptions, 'attempts' | 'retryDelayMs' | 'pollMs'>> = {},
 ): Promise<MailSetup> {
   const options = { from: config.mailFrom, ...retry };
   if (config.smtpUrl) {
     const mailer = smtpMailer(config.smtpUrl, options);
-    return { mailer, catcher: null, close: async () => mailer.close() };
+    mailer.start();
+    return { mailer, catcher: null, close: () => mailer.close() };
   }
   const catcher = await startMailCatcher();
   const mailer = catcherMailer(catcher.port, options);
+  mailer.start();
   return {
     mailer,
     catcher,
     async close() {
       await mailer.idle();
-      mailer.close();
+      await mailer.close();
       await catcher.close();
     },
   };
