@@ -28,8 +28,8 @@ export function assignmentRoutes(config: ServerConfig, mailer: Mailer): Router {
     res.status(created ? 201 : 200).json(copy);
   });
 
-  // Each hand-in sweeps the sketch on the one event loop, so hand-ins count as sweeps (per address per minute).
-  router.post('/assignments/:id/hand-ins', sweepLimiter(config), async (req, res) => {
+  // Each hand-in sweeps the sketch on the one event loop, so hand-ins count as sweeps, in the sweep's own count.
+  router.post('/assignments/:id/hand-ins', sweepLimiter(config, 'sweep'), async (req, res) => {
     res.status(201).json(await assignments.handIn(currentUser(req), idParam(req, 'id')));
   });
 
