@@ -40,6 +40,8 @@ export interface ServerConfig {
   sweepMaxPerMinute: number;
   /** Share links sent by e-mail per account per hour. */
   shareMailMaxPerHour: number;
+  /** Share links sent by e-mail to one address per hour, from all accounts together. */
+  shareMailMaxPerRecipient: number;
   /** Folder of the built client; served when it exists. */
   distDir: string;
 }
@@ -87,14 +89,15 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     sessionSecret: sessionSecret || 'arcwright-development-secret-change-me',
     cookieSecure: env.COOKIE_SECURE === '1' || env.COOKIE_SECURE === 'true',
     trustProxy: trustProxyFrom(env.TRUST_PROXY),
-    sessionIdleMs: intFrom(env.SESSION_IDLE_MINUTES, 120, 'SESSION_IDLE_MINUTES') * MINUTE_MS,
-    sessionAbsoluteMs: intFrom(env.SESSION_ABSOLUTE_HOURS, 24, 'SESSION_ABSOLUTE_HOURS') * HOUR_MS,
+    sessionIdleMs: intFrom(env.SESSION_IDLE_MINUTES, 30, 'SESSION_IDLE_MINUTES') * MINUTE_MS,
+    sessionAbsoluteMs: intFrom(env.SESSION_ABSOLUTE_HOURS, 12, 'SESSION_ABSOLUTE_HOURS') * HOUR_MS,
     loginMaxPerAccount: intFrom(env.LOGIN_MAX_PER_ACCOUNT, 5, 'LOGIN_MAX_PER_ACCOUNT'),
     loginMaxPerAddress: intFrom(env.LOGIN_MAX_PER_ADDRESS, 50, 'LOGIN_MAX_PER_ADDRESS'),
     loginWindowMs: 15 * MINUTE_MS,
     signupMaxPerAddress: intFrom(env.SIGNUP_MAX_PER_ADDRESS, 30, 'SIGNUP_MAX_PER_ADDRESS'),
     sweepMaxPerMinute: intFrom(env.SWEEP_MAX_PER_MINUTE, 120, 'SWEEP_MAX_PER_MINUTE'),
     shareMailMaxPerHour: intFrom(env.SHARE_MAIL_MAX_PER_HOUR, 20, 'SHARE_MAIL_MAX_PER_HOUR'),
+    shareMailMaxPerRecipient: intFrom(env.SHARE_MAIL_MAX_PER_RECIPIENT, 10, 'SHARE_MAIL_MAX_PER_RECIPIENT'),
     distDir: path.resolve(root, env.DIST_DIR || 'dist'),
   };
 }

@@ -87,18 +87,30 @@ export function sweepLimiter(config: ServerConfig): RequestHandler {
 }
 
 /**
- * Share links mailed per account per hour (POST /api/sketches/:id/share with an `email`). Requests without
- * an address and refused ones (400, 404) do not count. Mount after `requireUser`.
+ * Share links mailed per account per hour, and per recipient per hour from all accounts together (POST
+ * /api/sketches/:id/share with an `email`), so that neither one account nor many can flood an address.
+ * Requests without an address and refused ones (400, 404, 429) do not count. Mount after `requireUser`.
  */
-export function shareMailLimiter(config: ServerConfig): RequestHandler {
-  return rateLimit({
+export function shareMailLimiters(config: ServerConfig): { perAccount: RequestHandler; perRecipient: RequestHandler } {
+  const common = {
     windowMs: HOUR_MS,
-    limit: config.shareMailMaxPerHour,
-    keyGenerator: (req) => `user:${req.user?.id ?? 'none'}`,
-    skip: (req) => (req.body as { email?: unknown } | undefined)?.email === undefined,
+    skip: (req: Request) => (req.body as { email?: unknown } | undefined)?.email === undefined,
     skipFailedRequests: true,
-    standardHeaders: 'draft-8',
+    standardHeaders: 'draft-8' as const,
     legacyHeaders: false,
-    handler: tooMany('too many share mails from this account'),
-  });
+  };
+  return {
+    perAccount: rateLimit({
+      ...common,
+      limit: config.shareMailMaxPerHour,
+      keyGenerator: (req) => `user:${req.user?.id ?? 'none'}`,
+      handler: tooMany('too many share mails from this account'),
+    }),
+    perRecipient: rateLimit({
+      ...common,
+      limit: config.shareMailMaxPerRecipient,
+      keyGenerator: (req) => `recipient:${emailKey(req)}`,
+      handler: tooMany('too many share mails to this address'),
+    }),
+  };
 }

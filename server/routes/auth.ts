@@ -1,8 +1,8 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import type { ServerConfig } from '../config';
 import type { PublicUser } from '../models';
-import { csrf } from '../middleware/csrf';
-import { unauthorized } from '../middleware/http-error';
+import type { Csrf } from '../middleware/csrf';
+import { forbidden, unauthorized } from '../middleware/http-error';
 import { parseOr400, validBody } from '../middleware/validate';
 import { loginLimiters, resetRequestLimiters, signupLimiter } from '../middleware/rate-limit';
 import { passport, SESSION_COOKIE } from '../middleware/session';
@@ -22,20 +22,30 @@ function signIn(req: Request, user: PublicUser): Promise<void> {
   );
 }
 
-function authenticateLocal(req: Request, res: Response, next: NextFunction): Promise<PublicUser | false> {
+/** The account for the posted credentials, or the reason there is none (see `checkCredentials`). */
+function authenticateLocal(
+  req: Request,
+  res: Response,
+  next: NextFunction,
+): Promise<PublicUser | 'wrong' | 'disabled'> {
   return new Promise((resolve, reject) =>
-    passport.authenticate('local', { session: false }, (err: unknown, user: PublicUser | false) =>
-      err ? reject(err) : resolve(user),
+    passport.authenticate(
+      'local',
+      { session: false },
+      (err: unknown, user: PublicUser | false, info?: { message?: string }) => {
+        if (err) return reject(err);
+        resolve(user || (info?.message === 'disabled' ? 'disabled' : 'wrong'));
+      },
     )(req, res, next),
   );
 }
 
 /** /api/auth: sign-up, sign-in, sign-out, who am I, and the CSRF token. */
-export function authRoutes(config: ServerConfig, mailer: Mailer): Router {
+export function authRoutes(config: ServerConfig, mailer: Mailer, csrf: Csrf): Router {
   const router = Router();
 
   router.get('/csrf', (req, res) => {
-    res.json({ token: csrf.generateToken(req) });
+    res.json({ token: csrf.token(req, res) });
   });
 
   router.get('/me', (req, res) => {
@@ -53,7 +63,9 @@ export function authRoutes(config: ServerConfig, mailer: Mailer): Router {
   const login = loginLimiters(config);
   router.post('/login', login.perAddress, validBody(loginBody), login.perAccount, async (req, res, next) => {
     const user = await authenticateLocal(req, res, next);
-    if (!user) throw unauthorized('wrong e-mail or password');
+    if (user === 'wrong') throw unauthorized('wrong e-mail or password');
+    if (user === 'disabled')
+      throw forbidden('this account is disabled; ask an administrator of this site to enable it');
     await signIn(req, user);
     res.json({ user });
   });

@@ -16,18 +16,22 @@ export async function createAccount(input: { email: string; password: string; na
   return toPublicUser(user);
 }
 
+/** What a sign-in attempt found: the account, or why there is none. */
+export type CredentialCheck = { user: PublicUser } | { refused: 'wrong' | 'disabled' };
+
 /**
- * The account for these credentials, or null. Unknown e-mails are checked against a decoy
- * hash so the answer takes as long as for a real one; disabled accounts never sign in.
+ * The account for these credentials. Unknown e-mails are checked against a decoy hash so the answer
+ * takes as long as for a real one. A disabled account is named as such only after its right password:
+ * a wrong one gets the same answer as any wrong password, so being disabled tells a guesser nothing.
  */
-export async function checkCredentials(email: string, password: string): Promise<PublicUser | null> {
+export async function checkCredentials(email: string, password: string): Promise<CredentialCheck> {
   const user = await User.findOne({ where: { email } });
   if (!user) {
     await verifyPassword(password, await decoyHash());
-    return null;
+    return { refused: 'wrong' };
   }
-  const ok = await verifyPassword(password, user.passwordHash);
-  return ok && !user.disabled ? toPublicUser(user) : null;
+  if (!(await verifyPassword(password, user.passwordHash))) return { refused: 'wrong' };
+  return user.disabled ? { refused: 'disabled' } : { user: toPublicUser(user) };
 }
 
 /** The account a session points at, or null when it is gone or disabled. */

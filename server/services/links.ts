@@ -14,3 +14,15 @@ export function sharedSketchUrl(config: ServerConfig, token: string): string {
 export function passwordResetUrl(config: ServerConfig, token: string): string {
   return `${config.publicUrl}/reset?token=${encodeURIComponent(token)}`;
 }
+
+/** What stands in a logged mail for the token of a password-reset link. */
+export const REMOVED_TOKEN = '(removed from the mail log)';
+
+/**
+ * `text` with the token of every password-reset link replaced by REMOVED_TOKEN: a mail kept for reading later
+ * (the admin's mail log) must not hand anyone a working reset link. The token is base64url (see
+ * services/password-reset.ts), so it ends at the first character outside that alphabet.
+ */
+export function withoutResetTokens(text: string): string {
+  return text.replace(/(\/reset\?token=)[A-Za-z0-9_%-]+/g, `$1${REMOVED_TOKEN}`);
+}

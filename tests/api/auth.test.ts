@@ -74,12 +74,18 @@ describe('sign-in and sign-out', () => {
   it('signs in a demo account, changing the session id, with an HttpOnly SameSite=Lax cookie', async () => {
     const caller = new Caller(server.app);
     const csrfRes = await caller.agent.get('/api/auth/csrf');
-    const before = sessionCookie(csrfRes)!;
+    // A signed-out visitor has no session at all (the CSRF token rides on its own cookie).
+    expect(sessionCookie(csrfRes)).toBeUndefined();
     caller.token = csrfRes.body.token;
     const res = await caller.post('/api/auth/login').send(demo.maker);
     expect(res.status).toBe(200);
     expect(res.body.user).toMatchObject({ email: 'maker@demo.test', role: 'member' });
-    const after = sessionCookie(res)!;
+    const before = sessionCookie(res)!;
+    // Signing in again from a signed-in browser starts another session id.
+    await caller.refreshToken();
+    const again = await caller.post('/api/auth/login').send(demo.maker);
+    expect(again.status).toBe(200);
+    const after = sessionCookie(again)!;
     expect(after).toBeDefined();
     expect(after.split(';')[0]).not.toBe(before.split(';')[0]);
     expect(after).toMatch(/HttpOnly/i);
@@ -99,6 +105,24 @@ describe('sign-in and sign-out', () => {
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body.error).toBe(unknown.body.error);
+  });
+
+  it('tells a disabled account it is disabled after the right password, and only then', async () => {
+    const user = await newMember(server.app, 'switched-off');
+    const id = (await user.get('/api/auth/me')).body.user.id;
+    const admin = await new Caller(server.app).signIn(demo.admin.email, demo.admin.password);
+    await admin.patch(`/api/admin/users/${id}`).send({ disabled: true }).expect(200);
+
+    const caller = new Caller(server.app);
+    await caller.refreshToken();
+    const unknown = await caller.post('/api/auth/login').send({ email: 'nobody@demo.test', password: 'wrong-guess-1' });
+    const wrong = await caller.post('/api/auth/login').send({ email: user.email, password: 'wrong-guess-1' });
+    expect(wrong.status).toBe(401);
+    expect(wrong.body).toEqual(unknown.body);
+    const right = await caller.post('/api/auth/login').send({ email: user.email, password: user.password });
+    expect(right.status).toBe(403);
+    expect(right.body.error).toMatch(/this account is disabled/);
+    expect((await caller.get('/api/auth/me')).status).toBe(401);
   });
 
   it('destroys the session at sign-out', async () => {

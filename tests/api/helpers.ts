@@ -10,7 +10,11 @@ import { migrate } from '../../server/migrations/umzug';
 import { seedDemoData } from '../../server/seed';
 import { createApp } from '../../server/app';
 import { setUpMail, type MailSetup } from '../../server/services/mail';
+import type { CaughtMail } from '../../server/services/mail/catcher';
 import { OutboxMessage } from '../../server/models';
+
+/** Every message the test servers' mail catchers delivered, oldest first (the mail as sent, links intact). */
+const delivered: CaughtMail[] = [];
 
 export interface TestServer {
   app: Express;
@@ -18,8 +22,10 @@ export interface TestServer {
   config: ServerConfig;
   mail: MailSetup;
   dir: string;
-  /** Messages in the outbox to `to`, newest first, once every queued mail has gone out. */
+  /** Messages in the outbox (the admin's mail log) to `to`, newest first, once every queued mail has gone out. */
   mailTo(to: string): Promise<OutboxMessage[]>;
+  /** Messages as the mail catcher received them (what the recipient reads), newest first, once the queue is empty. */
+  deliveredTo(to: string): Promise<CaughtMail[]>;
   close(): Promise<void>;
 }
 
@@ -39,7 +45,7 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
   const sequelize = await openDatabase(config.databasePath);
   await migrate(sequelize);
   await seedDemoData(sequelize);
-  const mail = await setUpMail(config, { retryDelayMs: 20 });
+  const mail = await setUpMail(config, { retryDelayMs: 20 }, { onDelivered: (m) => delivered.push(m) });
   const app = createApp({ sequelize, config, mailer: mail.mailer });
   return {
     app,
@@ -50,6 +56,10 @@ export async function startTestServer(env: Record<string, string> = {}): Promise
     async mailTo(to: string) {
       await mail.mailer.idle();
       return OutboxMessage.findAll({ where: { to }, order: [['id', 'DESC']] });
+    },
+    async deliveredTo(to: string) {
+      await mail.mailer.idle();
+      return delivered.filter((m) => m.to === to).reverse();
     },
     async close() {
       await mail.close();

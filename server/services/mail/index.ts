@@ -1,5 +1,5 @@
 import type { ServerConfig } from '../../config';
-import { startMailCatcher, type MailCatcher } from './catcher';
+import { startMailCatcher, type MailCatcher, type MailCatcherOptions } from './catcher';
 import { catcherMailer, smtpMailer, type Mailer, type MailerOptions } from './mailer';
 
 export interface MailSetup {
@@ -13,13 +13,14 @@ export interface MailSetup {
 export async function setUpMail(
   config: ServerConfig,
   retry: Partial<Pick<MailerOptions, 'attempts' | 'retryDelayMs'>> = {},
+  catcherOptions: MailCatcherOptions = {},
 ): Promise<MailSetup> {
   const options = { from: config.mailFrom, ...retry };
   if (config.smtpUrl) {
     const mailer = smtpMailer(config.smtpUrl, options);
     return { mailer, catcher: null, close: async () => mailer.close() };
   }
-  const catcher = await startMailCatcher();
+  const catcher = await startMailCatcher(catcherOptions);
   const mailer = catcherMailer(catcher.port, options);
   return {
     mailer,
