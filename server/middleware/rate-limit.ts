@@ -36,16 +36,29 @@ export function loginLimiters(config: ServerConfig): { perAddress: RequestHandle
   };
 }
 
-/** Sign-ups and reset e-mails per address (and reset e-mails per account), to stop mail floods. */
-export function signupLimiter(config: ServerConfig): RequestHandler {
-  return rateLimit({
-    windowMs: HOUR_MS,
-    limit: config.signupMaxPerAddress,
-    keyGenerator: addressKey,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: tooMany('too many requests from this address'),
-  });
+/** Sign-up mails to one e-mail address per hour, whether it has an account or not. */
+const SIGNUPS_PER_EMAIL = 5;
+
+/**
+ * Sign-ups per address (to stop mail floods), and per e-mail address they mail. Mount the e-mail limiter after
+ * body validation, so that it keys on the real address.
+ */
+export function signupLimiters(config: ServerConfig): { perAddress: RequestHandler; perAccount: RequestHandler } {
+  const common = { windowMs: HOUR_MS, standardHeaders: 'draft-8' as const, legacyHeaders: false };
+  return {
+    perAddress: rateLimit({
+      ...common,
+      limit: config.signupMaxPerAddress,
+      keyGenerator: addressKey,
+      handler: tooMany('too many requests from this address'),
+    }),
+    perAccount: rateLimit({
+      ...common,
+      limit: SIGNUPS_PER_EMAIL,
+      keyGenerator: emailKey,
+      handler: tooMany('too many sign-ups with this e-mail address'),
+    }),
+  };
 }
 
 /** Reset mails per account per hour. */

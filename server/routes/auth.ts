@@ -4,10 +4,11 @@ import type { PublicUser } from '../models';
 import type { Csrf } from '../middleware/csrf';
 import { forbidden, unauthorized } from '../middleware/http-error';
 import { parseOr400, validBody } from '../middleware/validate';
-import { loginLimiters, resetRequestLimiters, signupLimiter } from '../middleware/rate-limit';
+import { loginLimiters, resetRequestLimiters, signupLimiters } from '../middleware/rate-limit';
 import { passport, SESSION_COOKIE } from '../middleware/session';
-import { loginBody, resetBody, resetRequestBody, signupBody } from '../../shared/schema/accounts';
-import { createAccount } from '../services/accounts';
+import { loginBody, resetBody, resetRequestBody, signupBody, signupConfirmBody } from '../../shared/schema/accounts';
+import type { z } from 'zod';
+import { confirmSignup, requestSignup } from '../services/signup';
 import type { Mailer } from '../services/mail/mailer';
 import { requestPasswordReset, resetPassword } from '../services/password-reset';
 
@@ -40,6 +41,8 @@ function authenticateLocal(
   );
 }
 
+type SignupBody = z.infer<typeof signupBody>;
+
 /** /api/auth: sign-up, sign-in, sign-out, who am I, and the CSRF token. */
 export function authRoutes(config: ServerConfig, mailer: Mailer, csrf: Csrf): Router {
   const router = Router();
@@ -53,11 +56,16 @@ export function authRoutes(config: ServerConfig, mailer: Mailer, csrf: Csrf): Ro
     res.json({ user: req.user });
   });
 
-  router.post('/signup', signupLimiter(config), async (req, res) => {
-    const body = parseOr400(signupBody, req.body);
-    const user = await createAccount(body);
-    await signIn(req, user);
-    res.status(201).json({ user });
+  // The same answer whether or not the address has an account; see services/signup.ts.
+  const signups = signupLimiters(config);
+  router.post('/signup', signups.perAddress, validBody(signupBody), signups.perAccount, async (req, res) => {
+    await requestSignup(req.body as SignupBody, config, mailer);
+    res.status(202).json({ status: 'check your e-mail: the link in it finishes signing up' });
+  });
+
+  router.post('/signup/confirm', async (req, res) => {
+    const { token } = parseOr400(signupConfirmBody, req.body);
+    res.status(201).json({ user: await confirmSignup(token, config) });
   });
 
   const login = loginLimiters(config);

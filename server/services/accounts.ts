@@ -1,9 +1,9 @@
 import { Session, User, toPublicUser, type PublicUser } from '../models';
 import { conflict } from '../middleware/http-error';
-import { decoyHash, hashPassword, verifyPassword } from './passwords';
+import { decoyHash, verifyPassword } from './passwords';
 
-/** Creates a member account. 409 when the e-mail is taken. */
-export async function createAccount(input: { email: string; password: string; name: string }): Promise<PublicUser> {
+/** Creates a member account from a password already hashed. 409 when the e-mail is taken. */
+export async function createAccount(input: { email: string; passwordHash: string; name: string }): Promise<PublicUser> {
   if (await User.findOne({ where: { email: input.email } })) {
     throw conflict('an account with this e-mail already exists');
   }
@@ -11,7 +11,7 @@ export async function createAccount(input: { email: string; password: string; na
     email: input.email,
     name: input.name,
     role: 'member',
-    passwordHash: await hashPassword(input.password),
+    passwordHash: input.passwordHash,
   });
   return toPublicUser(user);
 }

@@ -15,6 +15,21 @@ export function passwordResetUrl(config: ServerConfig, token: string): string {
   return `${config.publicUrl}/reset?token=${encodeURIComponent(token)}`;
 }
 
+/** The page that finishes a sign-up with the token mailed to the new address. */
+export function signupConfirmUrl(config: ServerConfig, token: string): string {
+  return `${config.publicUrl}/signup/confirm?token=${encodeURIComponent(token)}`;
+}
+
+/** The sign-in page. */
+export function signInUrl(config: ServerConfig): string {
+  return `${config.publicUrl}/signin`;
+}
+
+/** The page that asks for a password-reset mail. */
+export function forgotPasswordUrl(config: ServerConfig): string {
+  return `${config.publicUrl}/forgot`;
+}
+
 /** What stands in a logged mail for the token of a password-reset link. */
 export const REMOVED_TOKEN = '(removed from the mail log)';
 

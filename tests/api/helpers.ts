@@ -95,11 +95,13 @@ export class Caller {
     return this;
   }
 
+  /** Signs up as a person would: asks for the account, follows the link mailed to `email`, then signs in. */
   async signUp(email: string, password: string, name: string): Promise<this> {
     await this.refreshToken();
-    await this.post('/api/auth/signup').send({ email, password, name }).expect(201);
-    await this.refreshToken();
-    return this;
+    await this.post('/api/auth/signup').send({ email, password, name }).expect(202);
+    const token = await signupTokenMailedTo(email.trim().toLowerCase());
+    await this.post('/api/auth/signup/confirm').send({ token }).expect(201);
+    return this.signIn(email, password);
   }
 
   get(url: string) {
@@ -116,6 +118,19 @@ export class Caller {
   }
   delete(url: string) {
     return this.agent.delete(url).set('X-CSRF-Token', this.token);
+  }
+}
+
+/** The token of the newest sign-up link delivered to `to`, waiting (up to 10 s) for the mail to arrive. */
+export async function signupTokenMailedTo(to: string): Promise<string> {
+  const deadline = Date.now() + 10_000;
+  for (;;) {
+    for (let i = delivered.length - 1; i >= 0; i--) {
+      const m = delivered[i].to === to ? /\/signup\/confirm\?token=([A-Za-z0-9_-]+)/.exec(delivered[i].text) : null;
+      if (m) return m[1];
+    }
+    if (Date.now() > deadline) throw new Error(`no sign-up link was mailed to ${to}`);
+    await new Promise((resolve) => setTimeout(resolve, 10));
   }
 }
 
