@@ -6,8 +6,9 @@ import type { Mailer } from './services/mail/mailer';
 import { securityHeaders } from './middleware/security';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { clientApp } from './middleware/client-app';
+import { jsonDepthLimit } from './middleware/json-depth';
 import { absoluteTimeout, configurePassport, passport, sessionMiddleware } from './middleware/session';
-import { csrf } from './middleware/csrf';
+import { csrfProtection } from './middleware/csrf';
 import { healthRoutes } from './routes/health';
 import { authRoutes } from './routes/auth';
 import { sketchRoutes } from './routes/sketches';
@@ -40,15 +41,17 @@ export function createApp(ctx: AppContext): Express {
 
   const api = express.Router();
   api.use(express.json({ limit: JSON_BODY_MAX_BYTES }));
+  api.use(jsonDepthLimit);
   api.use(healthRoutes(ctx.sequelize));
   configurePassport();
   api.use(sessionMiddleware(ctx.sequelize, config));
   api.use(passport.initialize());
   api.use(passport.session());
   api.use(absoluteTimeout(config));
-  // Every state-changing call below (uploads included) needs the session's X-CSRF-Token.
-  api.use(csrf.csrfSynchronisedProtection);
-  api.use('/auth', authRoutes(config, mailer));
+  // Every state-changing call below (uploads included) needs the X-CSRF-Token of GET /api/auth/csrf.
+  const csrf = csrfProtection(config);
+  api.use(csrf.protection);
+  api.use('/auth', authRoutes(config, mailer, csrf));
   api.use(uploadRoutes(config));
   api.use('/sketches', sketchRoutes(config, mailer));
   api.use('/shared', sharedRoutes(config));

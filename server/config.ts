@@ -56,6 +56,8 @@ export interface ServerConfig {
   uploadQuotaBytes: number;
   /** Folder an incoming upload is spooled to before it goes into the database (the system's temporary folder). */
   uploadSpoolDir: string;
+  /** Share links sent by e-mail to one address per hour, from all accounts together. */
+  shareMailMaxPerRecipient: number;
   /** Folder of the built client; served when it exists. */
   distDir: string;
 }
@@ -128,8 +130,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     sessionSecret: sessionSecret || 'arcwright-development-secret-change-me',
     cookieSecure: env.COOKIE_SECURE === '1' || env.COOKIE_SECURE === 'true',
     trustProxy: trustProxyFrom(env.TRUST_PROXY),
-    sessionIdleMs: intFrom(env.SESSION_IDLE_MINUTES, 120, 'SESSION_IDLE_MINUTES') * MINUTE_MS,
-    sessionAbsoluteMs: intFrom(env.SESSION_ABSOLUTE_HOURS, 24, 'SESSION_ABSOLUTE_HOURS') * HOUR_MS,
+    sessionIdleMs: intFrom(env.SESSION_IDLE_MINUTES, 30, 'SESSION_IDLE_MINUTES') * MINUTE_MS,
+    sessionAbsoluteMs: intFrom(env.SESSION_ABSOLUTE_HOURS, 12, 'SESSION_ABSOLUTE_HOURS') * HOUR_MS,
     loginMaxPerAccount: intFrom(env.LOGIN_MAX_PER_ACCOUNT, 5, 'LOGIN_MAX_PER_ACCOUNT'),
     loginMaxPerAddress: intFrom(env.LOGIN_MAX_PER_ADDRESS, 50, 'LOGIN_MAX_PER_ADDRESS'),
     loginWindowMs: 15 * MINUTE_MS,
@@ -140,6 +142,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     uploadMaxPerHour: intFrom(env.UPLOAD_MAX_PER_HOUR, 60, 'UPLOAD_MAX_PER_HOUR'),
     uploadQuotaBytes: intFrom(env.UPLOAD_QUOTA_MB, 200, 'UPLOAD_QUOTA_MB') * 1024 * 1024,
     uploadSpoolDir: path.resolve(root, env.UPLOAD_SPOOL_DIR || os.tmpdir()),
+    shareMailMaxPerRecipient: intFrom(env.SHARE_MAIL_MAX_PER_RECIPIENT, 10, 'SHARE_MAIL_MAX_PER_RECIPIENT'),
     distDir: path.resolve(root, env.DIST_DIR || 'dist'),
   };
 }

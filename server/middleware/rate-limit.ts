@@ -52,17 +52,31 @@ export function loginLimiters(config: ServerConfig): { perAddress: RequestHandle
   };
 }
 
-/** Sign-ups and reset e-mails per address (and reset e-mails per account), to stop mail floods. */
-export function signupLimiter(config: ServerConfig): RequestHandler {
-  return rateLimit({
-    windowMs: HOUR_MS,
-    limit: config.signupMaxPerAddress,
-    keyGenerator: addressKey,
-    store: new DatabaseRateStore('signup'),
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: tooMany('too many requests from this address'),
-  });
+/** Sign-up mails to one e-mail address per hour, whether it has an account or not. */
+const SIGNUPS_PER_EMAIL = 5;
+
+/**
+ * Sign-ups per address (to stop mail floods), and per e-mail address they mail. Mount the e-mail limiter after
+ * body validation, so that it keys on the real address.
+ */
+export function signupLimiters(config: ServerConfig): { perAddress: RequestHandler; perAccount: RequestHandler } {
+  const common = { windowMs: HOUR_MS, standardHeaders: 'draft-8' as const, legacyHeaders: false };
+  return {
+    perAddress: rateLimit({
+      ...common,
+      limit: config.signupMaxPerAddress,
+      keyGenerator: addressKey,
+      store: new DatabaseRateStore('signup'),
+      handler: tooMany('too many requests from this address'),
+    }),
+    perAccount: rateLimit({
+      ...common,
+      limit: SIGNUPS_PER_EMAIL,
+      keyGenerator: emailKey,
+      store: new DatabaseRateStore('signup-email'),
+      handler: tooMany('too many sign-ups with this e-mail address'),
+    }),
+  };
 }
 
 /** Reset mails per account per hour. */
@@ -107,21 +121,34 @@ export function sweepLimiter(config: ServerConfig, name: 'sweep' | 'sweep-csv'):
 }
 
 /**
- * Share links mailed per account per hour (POST /api/sketches/:id/share with an `email`). Requests without
- * an address and refused ones (400, 404) do not count. Mount after `requireUser`.
+ * Share links mailed per account per hour, and per recipient per hour from all accounts together (POST
+ * /api/sketches/:id/share with an `email`), so that neither one account nor many can flood an address.
+ * Requests without an address and refused ones (400, 404, 429) do not count. Mount after `requireUser`.
  */
-export function shareMailLimiter(config: ServerConfig): RequestHandler {
-  return rateLimit({
+export function shareMailLimiters(config: ServerConfig): { perAccount: RequestHandler; perRecipient: RequestHandler } {
+  const common = {
     windowMs: HOUR_MS,
-    limit: config.shareMailMaxPerHour,
-    keyGenerator: (req) => `user:${req.user?.id ?? 'none'}`,
-    store: new DatabaseRateStore('share-mail'),
-    skip: (req) => (req.body as { email?: unknown } | undefined)?.email === undefined,
+    skip: (req: Request) => (req.body as { email?: unknown } | undefined)?.email === undefined,
     skipFailedRequests: true,
-    standardHeaders: 'draft-8',
+    standardHeaders: 'draft-8' as const,
     legacyHeaders: false,
-    handler: tooMany('too many share mails from this account'),
-  });
+  };
+  return {
+    perAccount: rateLimit({
+      ...common,
+      limit: config.shareMailMaxPerHour,
+      keyGenerator: (req) => `user:${req.user?.id ?? 'none'}`,
+      store: new DatabaseRateStore('share-mail'),
+      handler: tooMany('too many share mails from this account'),
+    }),
+    perRecipient: rateLimit({
+      ...common,
+      limit: config.shareMailMaxPerRecipient,
+      keyGenerator: (req) => `recipient:${emailKey(req)}`,
+      store: new DatabaseRateStore('share-mail-recipient'),
+      handler: tooMany('too many share mails to this address'),
+    }),
+  };
 }
 
 /** Upload requests per account per hour (POST /api/sketches/:id/uploads), refused ones too. Mount after `requireUser`. */

@@ -28,8 +28,14 @@ const SESSION_COOKIE = 'arcwright.sid';
 /** How often expired session rows are deleted (ms). */
 const SESSION_SWEEP_MS = 15 * 60_000;
 
-/** A session's expiry is pushed forward in the database at most this often (ms). */
+/** A session's expiry is pushed forward in the database at most this often (ms)... */
 const TOUCH_EVERY_MS = 60_000;
+/**
+ * ...and at most once per this fraction of the idle limit: a session touched T ms ago expires in idle − T ms,
+ * so the pause between writes must stay well below the idle limit, or steady activity would still be
+ * signed out when the idle limit is short.
+ */
+const TOUCHES_PER_IDLE_LIMIT = 4;
 /** Sessions remembered for touch throttling before the memory is cleared. */
 const TOUCH_MEMORY = 10_000;
 
@@ -61,13 +67,14 @@ export function sessionMiddleware(sequelize: Sequelize, config: ServerConfig): R
     );
   };
 
-  // express-session touches the row on every request (rolling expiry). Once a minute per
-  // session is precise enough for an idle timeout of an hour or more, and saves a write per call.
+  // express-session touches the row on every request (rolling expiry). Once a minute per session (less
+  // with a short idle limit) keeps an active session alive and saves a write per call.
+  const touchEveryMs = Math.min(TOUCH_EVERY_MS, config.sessionIdleMs / TOUCHES_PER_IDLE_LIMIT);
   const lastTouch = new Map<string, number>();
   const touch = store.touch.bind(store);
   store.touch = (sid: string, data: session.SessionData, cb?: (err?: unknown) => void) => {
     const now = Date.now();
-    if (now - (lastTouch.get(sid) ?? 0) < TOUCH_EVERY_MS) return cb?.();
+    if (now - (lastTouch.get(sid) ?? 0) < touchEveryMs) return cb?.();
     if (lastTouch.size > TOUCH_MEMORY) lastTouch.clear();
     lastTouch.set(sid, now);
     return touch(sid, data, cb);
@@ -94,7 +101,10 @@ export function sessionMiddleware(sequelize: Sequelize, config: ServerConfig): R
 export function configurePassport(): void {
   passport.use(
     new LocalStrategy({ usernameField: 'email', passwordField: 'password', session: true }, (email, password, done) => {
-      checkCredentials(email, password).then((user) => done(null, user ?? false), done);
+      checkCredentials(email, password).then(
+        (found) => ('user' in found ? done(null, found.user) : done(null, false, { message: found.refused })),
+        done,
+      );
     }),
   );
   passport.serializeUser((user, done) => done(null, user.id));

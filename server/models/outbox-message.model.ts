@@ -6,8 +6,12 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
+import { withoutResetTokens } from '../services/links';
 
-/** One outgoing e-mail as it left (or, with the local catcher, as it arrived), for the admin's mail log. */
+/**
+ * One outgoing e-mail as it left (or, with the local catcher, as it arrived), for the admin's mail log; the
+ * tokens of password-reset links are removed before it is stored.
+ */
 export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCreationAttributes<OutboxMessage>> {
   declare id: CreationOptional<number>;
   declare to: string;
@@ -32,7 +36,18 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
         via: { type: DataTypes.STRING(16), allowNull: false },
         sentAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
       },
-      { sequelize, tableName: 'outbox', timestamps: false },
+      {
+        sequelize,
+        tableName: 'outbox',
+        timestamps: false,
+        hooks: {
+          // Whoever writes the log (the local catcher, the SMTP mailer), reset links never reach it whole.
+          beforeSave(row) {
+            row.text = withoutResetTokens(row.text);
+            row.html = withoutResetTokens(row.html);
+          },
+        },
+      },
     );
   }
 }

@@ -3,7 +3,7 @@ import type { ServerConfig } from '../config';
 import { requireUser, currentUser } from '../middleware/require-user';
 import { idParam } from '../middleware/params';
 import { parseOr400 } from '../middleware/validate';
-import { shareMailLimiter } from '../middleware/rate-limit';
+import { shareMailLimiters } from '../middleware/rate-limit';
 import {
   buildSheetQuery,
   createSketchBody,
@@ -93,8 +93,9 @@ export function sketchRoutes(config: ServerConfig, mailer: Mailer): Router {
     res.json(await sketches.getShareState(currentUser(req), idParam(req, 'id'), config));
   });
 
-  // One message per send, to one address; sends are counted per account (shareMailLimiter).
-  router.post('/:id/share', shareMailLimiter(config), async (req, res) => {
+  // One message per send, to one address; sends are counted per account and per recipient (shareMailLimiters).
+  const shareMail = shareMailLimiters(config);
+  router.post('/:id/share', shareMail.perAccount, shareMail.perRecipient, async (req, res) => {
     const user = currentUser(req);
     const id = idParam(req, 'id');
     const body = parseOr400(shareBody, req.body);

@@ -24,3 +24,30 @@ export function classInviteUrl(config: ServerConfig, token: string): string {
 export function assignmentUrl(config: ServerConfig, assignmentId: number): string {
   return `${config.publicUrl}/assignments/${assignmentId}`;
 }
+
+/** The page that finishes a sign-up with the token mailed to the new address. */
+export function signupConfirmUrl(config: ServerConfig, token: string): string {
+  return `${config.publicUrl}/signup/confirm?token=${encodeURIComponent(token)}`;
+}
+
+/** The sign-in page. */
+export function signInUrl(config: ServerConfig): string {
+  return `${config.publicUrl}/signin`;
+}
+
+/** The page that asks for a password-reset mail. */
+export function forgotPasswordUrl(config: ServerConfig): string {
+  return `${config.publicUrl}/forgot`;
+}
+
+/** What stands in a logged mail for the token of a password-reset link. */
+export const REMOVED_TOKEN = '(removed from the mail log)';
+
+/**
+ * `text` with the token of every password-reset link replaced by REMOVED_TOKEN: a mail kept for reading later
+ * (the admin's mail log) must not hand anyone a working reset link. The token is base64url (see
+ * services/password-reset.ts), so it ends at the first character outside that alphabet.
+ */
+export function withoutResetTokens(text: string): string {
+  return text.replace(/(\/reset\?token=)[A-Za-z0-9_%-]+/g, `$1${REMOVED_TOKEN}`);
+}

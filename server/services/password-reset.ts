@@ -7,6 +7,7 @@ import type { Mailer } from './mail/mailer';
 import { passwordResetMail } from './mail/messages';
 import { hashPassword } from './passwords';
 import { endSessionsOf } from './accounts';
+import { refuseWeakPassword } from './password-strength';
 
 /** A reset link works this long (minutes). */
 export const RESET_VALID_MINUTES = 60;
@@ -38,6 +39,10 @@ export async function resetPassword(token: string, password: string): Promise<vo
   const tokenHash = sha256(token);
   const found = await PasswordReset.findOne({ where: { tokenHash } });
   if (!found || found.usedAt || found.expiresAt.getTime() < Date.now()) throw refused();
+  const holder = await User.findByPk(found.userId);
+  if (!holder) throw refused();
+  // Refused before the link is used up, so the person can try another password with the same link.
+  await refuseWeakPassword(password, holder.email, holder.name);
   const passwordHash = await hashPassword(password);
   await PasswordReset.sequelize!.transaction(async (transaction) => {
     // Re-read under the write lock: of two concurrent uses of one token, only one wins.

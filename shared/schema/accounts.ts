@@ -27,6 +27,9 @@ export const signupBody = z.strictObject({
   name: z.string().trim().min(1, 'must not be empty').max(120),
 });
 
+/** The token of a sign-up link (a sealed pending account, a few hundred characters). */
+export const signupConfirmBody = z.strictObject({ token: z.string().min(1).max(4000) });
+
 export const loginBody = z.strictObject({
   email: emailField,
   // Any length is checked against the hash, but an absurd one is refused before hashing.

@@ -7,6 +7,13 @@
 /** Largest JSON request body (bytes); a sketch file is a few tens of KB. */
 export const JSON_BODY_MAX_BYTES = 256 * 1024;
 
+/**
+ * Deepest nesting of arrays and objects a JSON request body may have. A sketch file inside a request is
+ * under ten levels deep; the margin leaves room for the format to grow, and anything deeper is refused
+ * before any code walks it recursively.
+ */
+export const JSON_MAX_DEPTH = 32;
+
 /** Largest uploaded file (bytes): a tracing photo. */
 export const UPLOAD_MAX_BYTES = 10 * 1024 * 1024;
 

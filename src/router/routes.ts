@@ -81,6 +81,11 @@ export const routes: RouteRecordRaw[] = [
       { path: 'signin', name: 'signin', component: () => import('../pages/SignInPage.vue'), meta: { guest: true } },
       { path: 'signup', name: 'signup', component: () => import('../pages/SignUpPage.vue'), meta: { guest: true } },
       {
+        path: 'signup/confirm',
+        name: 'signup-confirm',
+        component: () => import('../pages/SignUpConfirmPage.vue'),
+      },
+      {
         path: 'forgot',
         name: 'forgot',
         component: () => import('../pages/ForgotPasswordPage.vue'),

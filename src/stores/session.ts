@@ -37,11 +37,12 @@ export const useSessionStore = defineStore('session', () => {
     checked.value = true;
   }
 
-  async function signup(name: string, email: string, password: string) {
-    const answer = await api.post<{ user: User }>('/api/auth/signup', { name, email, password });
-    resetCsrfToken();
-    user.value = answer.user;
-    checked.value = true;
+  /**
+   * Asks for an account. Nobody is signed in: the server mails a link that finishes the sign-up (or, when the
+   * address has an account already, a note to its owner) and answers both alike.
+   */
+  async function signup(name: string, email: string, password: string): Promise<void> {
+    await api.post<{ status: string }>('/api/auth/signup', { name, email, password });
   }
 
   async function logout() {

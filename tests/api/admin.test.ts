@@ -64,7 +64,10 @@ describe('admin routes', () => {
     expect((await user.get('/api/auth/me')).status).toBe(401);
     const again = new Caller(server.app);
     await again.refreshToken();
-    expect((await again.post('/api/auth/login').send({ email: user.email, password: user.password })).status).toBe(401);
+    // The right password of a disabled account is told the account is disabled (a wrong one gets the usual 401).
+    const refused = await again.post('/api/auth/login').send({ email: user.email, password: user.password });
+    expect(refused.status).toBe(403);
+    expect(refused.body.error).toMatch(/disabled/);
     await admin.patch(`/api/admin/users/${id}`).send({ disabled: false }).expect(200);
     expect((await again.post('/api/auth/login').send({ email: user.email, password: user.password })).status).toBe(200);
   });

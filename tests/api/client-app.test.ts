@@ -38,6 +38,17 @@ describe('serving the built client', () => {
     expect(missing.status).toBe(404);
   });
 
+  it('answers a missing file with a JSON 404 that names no folder of the server', async () => {
+    for (const url of ['/assets/gone.js', '/assets/deep/er/gone.css', '/favicon-nope.png', '/fonts/none.woff2']) {
+      const res = await request(server.app).get(url);
+      expect(res.status, url).toBe(404);
+      expect(res.headers['content-type'], url).toMatch(/json/);
+      expect(res.body.error, url).toBe(`no such file: ${url}`);
+      expect(res.text, url).not.toContain(dist);
+      expect(res.text, url).not.toContain(os.tmpdir());
+    }
+  });
+
   it('keeps JSON 404 for unknown /api paths', async () => {
     const res = await request(server.app).get('/api/library');
     expect(res.status).toBe(404);

@@ -47,6 +47,7 @@ beforeAll(async () => {
     SIGNUP_MAX_PER_ADDRESS: '100000',
     SWEEP_MAX_PER_MINUTE: '100000',
     SHARE_MAIL_MAX_PER_HOUR: '100000',
+    SHARE_MAIL_MAX_PER_RECIPIENT: '100000',
   });
   member = await newMember(server.app, 'fuzzed');
   admin = await new Caller(server.app).signIn(demo.admin.email, demo.admin.password);

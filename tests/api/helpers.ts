@@ -8,8 +8,12 @@ import { migrate } from '../../server/migrations/umzug';
 import { seedDemoData } from '../../server/seed';
 import { createApp } from '../../server/app';
 import { setUpMail, type MailSetup } from '../../server/services/mail';
+import type { CaughtMail } from '../../server/services/mail/catcher';
 import { OutboxMessage } from '../../server/models';
 import { createTestDatabase, type TestDatabase } from './test-database';
+
+/** Every message the test servers' mail catchers delivered, oldest first (the mail as sent, links intact). */
+const delivered: CaughtMail[] = [];
 
 export interface TestServer {
   app: Express;
@@ -17,8 +21,10 @@ export interface TestServer {
   config: ServerConfig;
   mail: MailSetup;
   dir: string;
-  /** Messages in the outbox to `to`, newest first, once every queued mail has gone out. */
+  /** Messages in the outbox (the admin's mail log) to `to`, newest first, once every queued mail has gone out. */
   mailTo(to: string): Promise<OutboxMessage[]>;
+  /** Messages as the mail catcher received them (what the recipient reads), newest first, once the queue is empty. */
+  deliveredTo(to: string): Promise<CaughtMail[]>;
   close(): Promise<void>;
 }
 
@@ -52,7 +58,11 @@ export async function startTestServer(
   const sequelize = await openDatabase(config);
   await migrate(sequelize);
   await seedDemoData(sequelize);
-  const mail = await setUpMail(config, { retryDelayMs: options.retryDelayMs ?? 20 });
+  const mail = await setUpMail(
+    config,
+    { retryDelayMs: options.retryDelayMs ?? 20 },
+    { onDelivered: (m) => delivered.push(m) },
+  );
   const app = createApp({ sequelize, config, mailer: mail.mailer });
   return {
     app,
@@ -63,6 +73,10 @@ export async function startTestServer(
     async mailTo(to: string) {
       await mail.mailer.idle();
       return OutboxMessage.findAll({ where: { to }, order: [['id', 'DESC']] });
+    },
+    async deliveredTo(to: string) {
+      await mail.mailer.idle();
+      return delivered.filter((m) => m.to === to).reverse();
     },
     async close() {
       await mail.close();
@@ -98,11 +112,13 @@ export class Caller {
     return this;
   }
 
+  /** Signs up as a person would: asks for the account, follows the link mailed to `email`, then signs in. */
   async signUp(email: string, password: string, name: string): Promise<this> {
     await this.refreshToken();
-    await this.post('/api/auth/signup').send({ email, password, name }).expect(201);
-    await this.refreshToken();
-    return this;
+    await this.post('/api/auth/signup').send({ email, password, name }).expect(202);
+    const token = await signupTokenMailedTo(email.trim().toLowerCase());
+    await this.post('/api/auth/signup/confirm').send({ token }).expect(201);
+    return this.signIn(email, password);
   }
 
   get(url: string) {
@@ -119,6 +135,19 @@ export class Caller {
   }
   delete(url: string) {
     return this.agent.delete(url).set('X-CSRF-Token', this.token);
+  }
+}
+
+/** The token of the newest sign-up link delivered to `to`, waiting (up to 10 s) for the mail to arrive. */
+export async function signupTokenMailedTo(to: string): Promise<string> {
+  const deadline = Date.now() + 10_000;
+  for (;;) {
+    for (let i = delivered.length - 1; i >= 0; i--) {
+      const m = delivered[i].to === to ? /\/signup\/confirm\?token=([A-Za-z0-9_-]+)/.exec(delivered[i].text) : null;
+      if (m) return m[1];
+    }
+    if (Date.now() > deadline) throw new Error(`no sign-up link was mailed to ${to}`);
+    await new Promise((resolve) => setTimeout(resolve, 10));
   }
 }
 

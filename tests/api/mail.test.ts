@@ -29,7 +29,7 @@ describe('password reset through the outbox', () => {
     const req = await anon.post('/api/auth/reset-request').send({ email: user.email.toUpperCase() });
     expect(req.status).toBe(202);
 
-    const [mail] = await server.mailTo(user.email);
+    const [mail] = await server.deliveredTo(user.email);
     expect(mail.subject).toBe('Arcwright: reset your password');
     expect(mail.text).toContain('http://arcwright.example.test/reset?token=');
     expect(mail.html).toContain('Choose a new password');
@@ -62,7 +62,7 @@ describe('password reset through the outbox', () => {
     const anon = new Caller(server.app);
     await anon.refreshToken();
     expect((await anon.post('/api/auth/reset-request').send({ email: user.email })).status).toBe(202);
-    const [mail] = await server.mailTo(user.email);
+    const [mail] = await server.deliveredTo(user.email);
     const token = tokenFrom(mail.text);
 
     const passwords = [1, 2, 3].map((n) => `raced-new-password-${n}`);
@@ -84,6 +84,29 @@ describe('password reset through the outbox', () => {
     }
   }, 60_000); // each use hashes a password (scrypt): several at once take a while on a busy machine
 
+  it('keeps the reset mail in the outbox with its link removed, while the mail sent has a working one', async () => {
+    const user = await newMember(server.app, 'logged');
+    const anon = new Caller(server.app);
+    await anon.refreshToken();
+    await anon.post('/api/auth/reset-request').send({ email: user.email }).expect(202);
+    const [sent] = await server.deliveredTo(user.email);
+    const token = tokenFrom(sent.text);
+    expect(sent.html).toContain(token);
+
+    const [logged] = await server.mailTo(user.email);
+    expect(logged.subject).toBe('Arcwright: reset your password');
+    for (const part of [logged.text, logged.html]) {
+      expect(part).not.toContain(token);
+      expect(part).toContain('/reset?token=(removed from the mail log)');
+    }
+    const admin = await new Caller(server.app).signIn(demo.admin.email, demo.admin.password);
+    const outbox = await admin.get('/api/admin/outbox');
+    expect(JSON.stringify(outbox.body)).not.toContain(token);
+
+    // The link that was sent still works.
+    expect((await anon.post('/api/auth/reset').send({ token, password: 'copper-lathe-harbour-91' })).status).toBe(204);
+  });
+
   it('answers 202 for an unknown e-mail and sends nothing', async () => {
     const anon = new Caller(server.app);
     await anon.refreshToken();
@@ -97,7 +120,7 @@ describe('password reset through the outbox', () => {
     const anon = new Caller(server.app);
     await anon.refreshToken();
     await anon.post('/api/auth/reset-request').send({ email: user.email }).expect(202);
-    const [mail] = await server.mailTo(user.email);
+    const [mail] = await server.deliveredTo(user.email);
     await PasswordReset.update(
       { expiresAt: new Date(Date.now() - 1000) },
       { where: { userId: (await User.findOne({ where: { email: user.email } }))!.id } },

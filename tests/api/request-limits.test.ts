@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { startTestServer, type TestServer } from './helpers';
+import { Caller, demo, startTestServer, type TestServer } from './helpers';
+import { sketchFile } from './fixtures';
 import { JSON_BODY_MAX_BYTES } from '../../shared/schema/requestLimits';
 
 let server: TestServer;
@@ -35,5 +36,34 @@ describe('the JSON body limit', () => {
     expect(over.status).toBe(413);
     // The limit as the API documentation writes it: 256 KB = 262144 bytes.
     expect(over.body).toEqual({ error: 'request body is larger than 256 KB' });
+  });
+});
+
+/** `depth` arrays inside one another around a number, e.g. depth 2 → [[1]]. */
+const nestedArrays = (depth: number) => '['.repeat(depth) + '1' + ']'.repeat(depth);
+
+describe('JSON nested deeper than any request needs', () => {
+  it('answers 400 naming the nesting on every JSON route, never 500', async () => {
+    const caller = new Caller(server.app);
+    await caller.signIn(demo.maker.email, demo.maker.password);
+    // 50 000 levels is 100 KB: well inside the size limit, so only the depth can refuse it.
+    const deep = nestedArrays(50_000);
+    const document = `{"name":"Deep","document":{"format":"arcwright-sketch","members":${deep}}}`;
+    for (const [url, body] of [
+      ['/api/sketches', document],
+      ['/api/sweep', `{"document":${deep}}`],
+      ['/api/auth/logout', deep],
+    ] as const) {
+      const res = await caller.post(url).set('Content-Type', 'application/json').send(body);
+      expect(res.status, url).toBe(400);
+      expect(res.body.error, url).toMatch(/nested more than \d+ levels deep/);
+    }
+  });
+
+  it('takes a real sketch file, whose nesting is far inside the limit', async () => {
+    const caller = new Caller(server.app);
+    await caller.signIn(demo.maker.email, demo.maker.password);
+    const res = await caller.post('/api/sketches').send({ name: 'Within depth', document: sketchFile() });
+    expect(res.status).toBe(201);
   });
 });

@@ -54,14 +54,15 @@ interface ApiAnswer {
   version: number;
 }
 
-/** A client with its own cookie jar (one session cookie) and CSRF token. */
+/** A client with its own cookie jar (the session cookie, and the CSRF cookie while signed out) and CSRF token. */
 class Client {
-  cookie = '';
+  cookies = new Map<string, string>();
   token = '';
   constructor(readonly base: string) {}
 
   async call(method: string, url: string, body?: unknown): Promise<{ status: number; json: ApiAnswer }> {
-    const headers: Record<string, string> = { cookie: this.cookie };
+    const cookie = [...this.cookies].map(([name, value]) => `${name}=${value}`).join('; ');
+    const headers: Record<string, string> = { cookie };
     if (body !== undefined) headers['content-type'] = 'application/json';
     if (method !== 'GET') headers['x-csrf-token'] = this.token;
     const res = await fetch(this.base + url, {
@@ -69,8 +70,11 @@ class Client {
       headers,
       body: body === undefined ? undefined : JSON.stringify(body),
     });
-    const set = res.headers.getSetCookie().find((c) => c.startsWith('arcwright.sid='));
-    if (set) this.cookie = set.split(';')[0];
+    for (const set of res.headers.getSetCookie()) {
+      const [pair] = set.split(';');
+      const eq = pair.indexOf('=');
+      this.cookies.set(pair.slice(0, eq), pair.slice(eq + 1));
+    }
     const text = await res.text();
     return { status: res.status, json: (text ? JSON.parse(text) : {}) as ApiAnswer };
   }
@@ -85,8 +89,26 @@ function percentile(sorted: number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
 }
 
-function queryAll<T>(db: sqlite3.Database, sql: string): Promise<T[]> {
-  return new Promise((resolve, reject) => db.all(sql, (err, rows) => (err ? reject(err) : resolve(rows as T[]))));
+function queryAll<T>(db: sqlite3.Database, sql: string, params: unknown[] = []): Promise<T[]> {
+  return new Promise((resolve, reject) =>
+    db.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as T[]))),
+  );
+}
+
+/** The token of the sign-up link the server's mail catcher filed for `to` (the bench owns this database). */
+async function signupToken(dbPath: string, to: string): Promise<string> {
+  const db = new sqlite3.Database(dbPath, sqlite3.OPEN_READONLY);
+  try {
+    for (let tries = 0; tries < 100; tries++) {
+      const rows = await queryAll<{ text: string }>(db, 'SELECT text FROM outbox WHERE "to" = ?', [to]);
+      const m = rows.map((r) => /\/signup\/confirm\?token=([A-Za-z0-9_-]+)/.exec(r.text)).find(Boolean);
+      if (m) return m[1];
+      await new Promise((r) => setTimeout(r, 100));
+    }
+    throw new Error(`no sign-up mail to ${to}`);
+  } finally {
+    db.close();
+  }
 }
 
 async function main() {
@@ -122,13 +144,17 @@ async function main() {
     for (let i = 0; i < CLIENTS; i++) {
       const c = new Client(base);
       await c.refreshToken();
-      const signup = await c.call('POST', '/api/auth/signup', {
-        email: `load-${i}@example.test`,
-        password: `load-password-${i}`,
-        name: `Load ${i}`,
-      });
-      if (signup.status !== 201)
+      const account = { email: `load-${i}@example.test`, password: `load-password-${i}` };
+      const signup = await c.call('POST', '/api/auth/signup', { ...account, name: `Load ${i}` });
+      if (signup.status !== 202)
         throw new Error(`sign-up ${i} answered ${signup.status}: ${JSON.stringify(signup.json)}`);
+      // Sign-up finishes through the link mailed to the address, then the account signs in.
+      const confirmed = await c.call('POST', '/api/auth/signup/confirm', {
+        token: await signupToken(dbPath, account.email),
+      });
+      if (confirmed.status !== 201) throw new Error(`sign-up link ${i} answered ${confirmed.status}`);
+      const login = await c.call('POST', '/api/auth/login', account);
+      if (login.status !== 200) throw new Error(`sign-in ${i} answered ${login.status}`);
       await c.refreshToken();
       const created = await c.call('POST', '/api/sketches', { name: `Load ${i} v1`, document });
       if (created.status !== 201) throw new Error(`create ${i} answered ${created.status}`);

@@ -8,6 +8,19 @@ export interface MailCatcher {
   close(): Promise<void>;
 }
 
+/** A message as the catcher received it, before anything is removed from it for the outbox. */
+export interface CaughtMail {
+  to: string;
+  subject: string;
+  text: string;
+  html: string;
+}
+
+export interface MailCatcherOptions {
+  /** Called with each message as delivered (tests follow the links in it; nothing keeps it otherwise). */
+  onDelivered?: (mail: CaughtMail) => void;
+}
+
 function addresses(field: AddressObject | AddressObject[] | undefined): string {
   if (!field) return '';
   return (Array.isArray(field) ? field : [field]).map((a) => a.text).join(', ');
@@ -17,7 +30,7 @@ function addresses(field: AddressObject | AddressObject[] | undefined): string {
  * A local SMTP server on 127.0.0.1 (a free port) that keeps every message it receives in the
  * outbox table, so local use and tests need no real mail server. No auth, no STARTTLS.
  */
-export function startMailCatcher(): Promise<MailCatcher> {
+export function startMailCatcher(options: MailCatcherOptions = {}): Promise<MailCatcher> {
   const server = new SMTPServer({
     authOptional: true,
     disabledCommands: ['STARTTLS', 'AUTH'],
@@ -26,17 +39,21 @@ export function startMailCatcher(): Promise<MailCatcher> {
     size: 5 * 1024 * 1024,
     onData(stream, _session, callback) {
       simpleParser(stream)
-        .then((mail) =>
-          OutboxMessage.create({
+        .then((mail) => {
+          const caught: CaughtMail = {
             to: addresses(mail.to),
-            from: addresses(mail.from),
             subject: mail.subject ?? '',
             text: mail.text ?? '',
             html: typeof mail.html === 'string' ? mail.html : '',
+          };
+          options.onDelivered?.(caught);
+          return OutboxMessage.create({
+            ...caught,
+            from: addresses(mail.from),
             messageId: mail.messageId ?? null,
             via: 'catcher',
-          }),
-        )
+          });
+        })
         // Answer the client only once the row is written, so a resolved sendMail means "in the outbox".
         .then(
           () => callback(),

@@ -1,5 +1,5 @@
 import type { ServerConfig } from '../../config';
-import { startMailCatcher, type MailCatcher } from './catcher';
+import { startMailCatcher, type MailCatcher, type MailCatcherOptions } from './catcher';
 import { catcherMailer, smtpMailer, type Mailer, type MailerOptions } from './mailer';
 
 export interface MailSetup {
@@ -16,6 +16,7 @@ export interface MailSetup {
 export async function setUpMail(
   config: ServerConfig,
   retry: Partial<Pick<MailerOptions, 'attempts' | 'retryDelayMs' | 'pollMs'>> = {},
+  catcherOptions: MailCatcherOptions = {},
 ): Promise<MailSetup> {
   const options = { from: config.mailFrom, ...retry };
   if (config.smtpUrl) {
@@ -23,7 +24,7 @@ export async function setUpMail(
     mailer.start();
     return { mailer, catcher: null, close: () => mailer.close() };
   }
-  const catcher = await startMailCatcher();
+  const catcher = await startMailCatcher(catcherOptions);
   const mailer = catcherMailer(catcher.port, options);
   mailer.start();
   return {

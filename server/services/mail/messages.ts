@@ -1,7 +1,7 @@
 import type { ServerConfig } from '../../config';
 import type { PublicUser } from '../../models';
 import type { MailMessage } from './mailer';
-import { assignmentUrl, classInviteUrl, passwordResetUrl } from '../links';
+import { assignmentUrl, classInviteUrl, forgotPasswordUrl, passwordResetUrl, signInUrl, signupConfirmUrl } from '../links';
 
 /** The link drawn as a button; mail clients ignore style sheets, so the style is inline. */
 const BUTTON_STYLE =
@@ -61,6 +61,70 @@ export function passwordResetMail(
           `Open the link within ${validMinutes} minutes to choose a new one. It works once.`,
       ],
       { label: 'Choose a new password', url },
+      footer,
+    ),
+  };
+}
+
+/** The last step of a sign-up: the link that creates the account, valid for `validHours`. */
+export function signupConfirmMail(
+  config: ServerConfig,
+  to: { email: string; name: string },
+  token: string,
+  validHours: number,
+): MailMessage {
+  const url = signupConfirmUrl(config, token);
+  const footer = 'If you did not ask for an account, ignore this mail: without the link, none is made.';
+  return {
+    to: to.email,
+    subject: `${PRODUCT}: confirm your address to finish signing up`,
+    text: [
+      `Hello ${to.name},`,
+      '',
+      `Open this link within ${validHours} hours to create your ${PRODUCT} account, then sign in with the`,
+      'password you chose.',
+      '',
+      url,
+      '',
+      footer,
+    ].join('\n'),
+    html: layout(
+      [
+        `Hello ${escapeHtml(to.name)},`,
+        `Open the link within ${validHours} hours to create your ${PRODUCT} account, then sign in with the ` +
+          'password you chose.',
+      ],
+      { label: 'Create my account', url },
+      footer,
+    ),
+  };
+}
+
+/** To the owner of an address someone tried to sign up with: it has an account already. */
+export function signupAttemptMail(config: ServerConfig, to: { email: string; name: string }): MailMessage {
+  const signIn = signInUrl(config);
+  const forgot = forgotPasswordUrl(config);
+  const footer = 'If it was not you, nothing has changed: your account and password stay as they are.';
+  return {
+    to: to.email,
+    subject: `${PRODUCT}: someone tried to sign up with your address`,
+    text: [
+      `Hello ${to.name},`,
+      '',
+      `Someone tried to create a ${PRODUCT} account with this address, which already has one.`,
+      `If it was you, sign in at ${signIn}`,
+      `or, if you have forgotten your password, ask for a new one at ${forgot}`,
+      '',
+      footer,
+    ].join('\n'),
+    html: layout(
+      [
+        `Hello ${escapeHtml(to.name)},`,
+        `Someone tried to create a ${PRODUCT} account with this address, which already has one. ` +
+          `If it was you, sign in; if you have forgotten your password, ` +
+          `<a href="${escapeHtml(forgot)}">ask for a new one</a>.`,
+      ],
+      { label: 'Sign in', url: signIn },
       footer,
     ),
   };
