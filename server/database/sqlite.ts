@@ -227,18 +227,36 @@ function counterConnection(sequelize: Sequelize): sqlite3.Database {
  * would pile into an uncommitted transaction. A plain ROLLBACK after the error ends it.
  */
 class SQLiteRateCounter extends RateLimiterSQLite {
-  async _upsert(...args: unknown[]): Promise<unknown> {
+  _upsert(...args: unknown[]): Promise<unknown> {
+    const connection = (this as unknown as { client: sqlite3.Database }).client;
+    // Counts of several limiters share the connection. Each upsert is SAVEPOINT, write, RELEASE: two at once
+    // would nest one in the other's transaction (the inner RELEASE then commits nothing, and a failure could
+    // leave the outer one open, holding the write lock). So they take turns.
+    const turn = (upsertTurns.get(connection) ?? Promise.resolve()).then(() => this.upsertOnce(connection, args));
+    upsertTurns.set(
+      connection,
+      turn.then(
+        () => undefined,
+        () => undefined,
+      ),
+    );
+    return turn;
+  }
+
+  private async upsertOnce(connection: sqlite3.Database, args: unknown[]): Promise<unknown> {
     const upsert = RateLimiterSQLite.prototype as unknown as { _upsert(...a: unknown[]): Promise<unknown> };
     try {
       return await upsert._upsert.apply(this, args);
     } catch (err) {
-      const connection = (this as unknown as { client: sqlite3.Database }).client;
       // No transaction open (the SAVEPOINT itself failed): SQLite answers an error, which changes nothing.
       await new Promise<void>((resolve) => connection.run('ROLLBACK', () => resolve()));
       throw err;
     }
   }
 }
+
+/** The last upsert queued on each counter connection (see SQLiteRateCounter). */
+const upsertTurns = new WeakMap<sqlite3.Database, Promise<void>>();
 
 /** rate-limiter-flexible's SQLite store on the database file (table rate_limits). */
 function rateCounter(sequelize: Sequelize, options: RateCounterOptions): RateLimiterStoreAbstract {

@@ -200,32 +200,3 @@ describe('links without PUBLIC_URL', () => {
     expect(reset.html).toMatch(new RegExp(`<a href="http://localhost:${port}/reset\\?token=[A-Za-z0-9_-]+"`));
   });
 });
-
-describe('share mails per recipient', () => {
-  let limited: TestServer;
-  beforeAll(async () => {
-    limited = await startTestServer({ SHARE_MAIL_MAX_PER_RECIPIENT: '2' });
-  });
-  afterAll(async () => {
-    await limited.close();
-  });
-
-  it('answers 429 once one address has had its share of mails this hour, whichever accounts send them', async () => {
-    const senders = [await newMember(limited.app, 'first'), await newMember(limited.app, 'second')];
-    const third = await newMember(limited.app, 'third');
-    for (const sender of senders) {
-      const id = await ownSketch(sender);
-      const res = await sender.post(`/api/sketches/${id}/share`).send({ mode: 'link', email: 'popular@example.test' });
-      expect(res.status).toBe(200);
-    }
-    const id = await ownSketch(third);
-    // The same address in capitals is the same recipient.
-    const refused = await third.post(`/api/sketches/${id}/share`).send({ mode: 'link', email: 'Popular@Example.test' });
-    expect(refused.status).toBe(429);
-    expect(refused.body.error).toMatch(/too many share mails to this address/);
-    expect(await limited.mailTo('popular@example.test')).toHaveLength(2);
-    // The account itself may still mail others.
-    const other = await third.post(`/api/sketches/${id}/share`).send({ mode: 'link', email: 'quiet@example.test' });
-    expect(other.status).toBe(200);
-  });
-});

@@ -129,6 +129,21 @@ test('an instructor invites by e-mail, the student joins, hands in a changed cop
     await inputOf(s, 'email').fill(studentEmail);
     await inputOf(s, 'password').fill(`Harbour-Quill-${stamp}`);
     await $(s, 'submit').click();
+    // Sign-up finishes through a mailed link; signing in then goes back to the invitation.
+    await expect($(s, 'check-mail')).toContainText(studentEmail);
+    let confirm: string | undefined;
+    await expect(async () => {
+      const mails = await mailTo(admin.page.request, studentEmail);
+      confirm = mails.map((m) => m.text.match(/https?:\/\/\S+\/signup\/confirm\?token=[\w-]+/)?.[0]).find(Boolean);
+      expect(confirm, 'the sign-up link in the mail').toBeTruthy();
+    }).toPass({ timeout: 10_000 });
+    await s.goto(confirm!);
+    await expect($(s, 'done')).toContainText(studentEmail);
+    await $(s, 'done').getByRole('link', { name: 'Sign in' }).click();
+    await expect(s).toHaveURL(/\/signin\?next=/);
+    await inputOf(s, 'email').fill(studentEmail);
+    await inputOf(s, 'password').fill(`Harbour-Quill-${stamp}`);
+    await $(s, 'submit').click();
     await expect(s).toHaveURL(/\/invites\//);
     await $(s, 'invite-join').click();
     await expect(s).toHaveURL(/\/classes\/\d+$/);

@@ -1,7 +1,14 @@
 import type { ServerConfig } from '../../config';
 import type { PublicUser } from '../../models';
 import type { MailMessage } from './mailer';
-import { assignmentUrl, classInviteUrl, forgotPasswordUrl, passwordResetUrl, signInUrl, signupConfirmUrl } from '../links';
+import {
+  assignmentUrl,
+  classInviteUrl,
+  forgotPasswordUrl,
+  passwordResetUrl,
+  signInUrl,
+  signupConfirmUrl,
+} from '../links';
 
 /** The link drawn as a button; mail clients ignore style sheets, so the style is inline. */
 const BUTTON_STYLE =
