@@ -1,0 +1,139 @@
+/**
+ * The real server for the load benchmarks: `node --import tsx server/index.ts` on a temporary database and a free
+ * loopback port, and a small client with its own session cookie and CSRF token.
+ */
+import { spawn } from 'node:child_process';
+import fs from 'node:fs';
+import net from 'node:net';
+import os from 'node:os';
+import path from 'node:path';
+
+export const root = path.resolve(import.meta.dirname, '../..');
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const srv = net.createServer();
+    srv.listen(0, '127.0.0.1', () => {
+      const { port } = srv.address() as net.AddressInfo;
+      srv.close(() => resolve(port));
+    });
+    srv.on('error', reject);
+  });
+}
+
+async function waitForHealth(base: string, timeoutMs: number): Promise<void> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    try {
+      const res = await fetch(`${base}/api/health`);
+      if (res.ok) return;
+    } catch {
+      /* not up yet */
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error('server did not answer /api/health in time');
+}
+
+export interface LoadServer {
+  base: string;
+  /** The temporary folder holding the database and uploads; removed by `remove()`. */
+  dir: string;
+  dbPath: string;
+  /** Stops the server and waits for it to exit. */
+  stop(): Promise<void>;
+  /** Removes the temporary folder (after `stop`). */
+  remove(): void;
+}
+
+/**
+ * Starts the server and waits until /api/health answers. LOAD_PROFILE=<dir> writes a V8 CPU profile of the server
+ * there when it stops. `env` adds settings (limits raised for the benchmark).
+ */
+export async function startServer(env: Record<string, string>): Promise<LoadServer> {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'arcwright-load-'));
+  const port = await freePort();
+  const base = `http://127.0.0.1:${port}`;
+  const dbPath = path.join(dir, 'load.sqlite');
+  const profile = process.env.LOAD_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.LOAD_PROFILE}`] : [];
+  // `node --import tsx` rather than the tsx command, so the server is this one process (and can be profiled).
+  const server = spawn(process.execPath, [...profile, '--import', 'tsx', 'server/index.ts'], {
+    cwd: root,
+    env: {
+      ...process.env,
+      PORT: String(port),
+      DATABASE_PATH: dbPath,
+      UPLOADS_DIR: path.join(dir, 'uploads'),
+      DIST_DIR: path.join(dir, 'no-client'),
+      NODE_ENV: 'development',
+      ...env,
+    },
+    stdio: ['ignore', 'inherit', 'inherit'],
+  });
+  const kill = () => {
+    if (server.exitCode === null) server.kill('SIGTERM');
+  };
+  process.on('exit', kill);
+  const stop = async () => {
+    if (server.exitCode !== null) return;
+    const exited = new Promise((r) => server.once('exit', r));
+    kill();
+    await exited;
+  };
+  try {
+    await waitForHealth(base, 60_000);
+  } catch (err) {
+    await stop();
+    throw err;
+  }
+  return { base, dir, dbPath, stop, remove: () => fs.rmSync(dir, { recursive: true, force: true }) };
+}
+
+/** The fields of the answers the benchmarks read. */
+export interface ApiAnswer {
+  token: string;
+  id: number;
+  version: number;
+}
+
+/** A client with its own cookie jar (one session cookie) and CSRF token. */
+export class Client {
+  cookie = '';
+  token = '';
+  constructor(readonly base: string) {}
+
+  async call(method: string, url: string, body?: unknown): Promise<{ status: number; json: ApiAnswer }> {
+    const headers: Record<string, string> = { cookie: this.cookie };
+    if (body !== undefined) headers['content-type'] = 'application/json';
+    if (method !== 'GET') headers['x-csrf-token'] = this.token;
+    const res = await fetch(this.base + url, {
+      method,
+      headers,
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+    const set = res.headers.getSetCookie().find((c) => c.startsWith('arcwright.sid='));
+    if (set) this.cookie = set.split(';')[0];
+    const text = await res.text();
+    return { status: res.status, json: (text ? JSON.parse(text) : {}) as ApiAnswer };
+  }
+
+  async refreshToken() {
+    this.token = (await this.call('GET', '/api/auth/csrf')).json.token;
+  }
+
+  /** Signs up a new account (which signs it in) and fetches the signed-in session's CSRF token. */
+  async signUp(email: string, password: string, name: string): Promise<void> {
+    await this.refreshToken();
+    const signup = await this.call('POST', '/api/auth/signup', { email, password, name });
+    if (signup.status !== 201) throw new Error(`sign-up answered ${signup.status}: ${JSON.stringify(signup.json)}`);
+    await this.refreshToken();
+  }
+}
+
+/** The sketch file the benchmarks save and sweep (the four-link fixture of the API tests). */
+export function fixtureDocument(): Record<string, unknown> {
+  return JSON.parse(fs.readFileSync(path.join(root, 'tests/api/fixtures/four-link.sketch.json'), 'utf8')) as Record<
+    string,
+    unknown
+  >;
+}
