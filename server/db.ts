@@ -1,10 +1,13 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { Sequelize, Transaction } from 'sequelize';
+import { QueryTypes, Sequelize, Transaction } from 'sequelize';
 import { initModels } from './models';
 
 /** How long a connection waits for another's write lock before giving up (ms). */
 export const BUSY_TIMEOUT_MS = 10_000;
+
+/** The key of the connection that serves reads outside transactions (readsOnTheirOwnConnection). */
+const READS_KEY = 'arcwright-reads-connection';
 
 /** Statements every SQLite connection runs before its first query. */
 const CONNECTION_PRAGMAS = [
@@ -36,22 +39,52 @@ function runOn(connection: RawSqliteConnection, sql: string): Promise<void> {
  */
 function applyPragmasOnEveryConnection(sequelize: Sequelize): void {
   const manager = sequelize.connectionManager as unknown as {
-    getConnection(options?: object): Promise<RawSqliteConnection>;
+    getConnection(options?: { uuid?: string }): Promise<RawSqliteConnection>;
   };
   const original = manager.getConnection.bind(manager);
   const configured = new WeakMap<RawSqliteConnection, Promise<void>>();
-  manager.getConnection = async (options?: object) => {
+  manager.getConnection = async (options) => {
     const connection = await original(options);
     let ready = configured.get(connection);
     if (!ready) {
+      const forReads = options?.uuid === READS_KEY;
       ready = (async () => {
         for (const sql of CONNECTION_PRAGMAS) await runOn(connection, sql);
-        connection.serialize();
+        if (forReads) await runOn(connection, 'PRAGMA query_only = ON');
+        else connection.serialize();
       })();
       configured.set(connection, ready);
     }
     await ready;
     return connection;
+  };
+}
+
+/**
+ * Every query outside a transaction used to share the one default connection, which is serialized: a query starts
+ * only after the previous one's answer came back to the event loop. Under load that hand-over, not SQLite, was the
+ * limit: a signed-in read makes three queries (session, user, sketch), and 50 of them in flight queued behind each
+ * other one round trip at a time. Reads (Sequelize's SELECT queries outside a transaction) therefore get a
+ * connection of their own in parallel mode, so they are all handed to the thread pool at once.
+ *
+ * That is safe where the default connection's serialized mode is needed: in WAL mode a reader never waits for the
+ * write lock, so a read cannot hold a pool thread that a writer needs. `query_only` makes the connection refuse
+ * any write, should one ever be sent here as a SELECT. Each read sees every write committed before it started,
+ * as on the default connection; reads inside a transaction stay on the transaction's connection.
+ */
+function readsOnTheirOwnConnection(sequelize: Sequelize): void {
+  const manager = sequelize.connectionManager as unknown as {
+    getConnection(options?: { uuid?: string; type?: string }): Promise<RawSqliteConnection>;
+  };
+  // An in-memory database is one connection whatever the key: nothing to split there.
+  if ((sequelize as unknown as { options: { storage?: string } }).options.storage === ':memory:') return;
+  const getConnection = manager.getConnection.bind(manager);
+  manager.getConnection = (options) => {
+    const outsideTransaction = !options?.uuid || options.uuid === 'default';
+    if (options?.type === QueryTypes.SELECT && outsideTransaction) {
+      return getConnection({ ...options, uuid: READS_KEY });
+    }
+    return getConnection(options);
   };
 }
 
@@ -135,6 +168,7 @@ export async function openDatabase(databasePath: string): Promise<Sequelize> {
     retry: { max: 3 },
   });
   applyPragmasOnEveryConnection(sequelize);
+  readsOnTheirOwnConnection(sequelize);
   reuseTransactionConnection(sequelize);
   queueTransactions(sequelize);
   initModels(sequelize);

@@ -22,12 +22,13 @@
  */
 import os from 'node:os';
 import autocannon, { type Request as CannonRequest } from 'autocannon';
-import { Client, fixtureDocument, startServer } from './load-server';
+import { Client, fixtureDocument, startServer, type LoadServer } from './load-server';
 
 const CONNECTIONS = Number(process.env.LOAD_CONNECTIONS ?? 50);
 const DURATION_S = Number(process.env.LOAD_SECONDS ?? 20);
 const WARMUP_S = Number(process.env.LOAD_WARMUP_SECONDS ?? 2);
-const BROWSER_ENCODINGS = 'gzip, deflate, br';
+/** What a browser accepts; LOAD_ENCODING overrides it (an empty value sends no Accept-Encoding). */
+const ENCODINGS = process.env.LOAD_ENCODING ?? 'gzip, deflate, br';
 
 interface RouteLoad {
   /** The name LOAD_ROUTES picks it by. */
@@ -45,6 +46,8 @@ interface RouteFigures {
   non2xx: number;
   socketErrors: number;
   timeouts: number;
+  /** The server's CPU time per answered request (ms): steadier than req/s on a shared machine. */
+  cpuMsPerRequest: number;
 }
 
 function percentile(sorted: number[], p: number): number {
@@ -52,11 +55,12 @@ function percentile(sorted: number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
 }
 
-function run(base: string, route: RouteLoad, seconds: number): Promise<RouteFigures> {
+function run(server: LoadServer, route: RouteLoad, seconds: number): Promise<RouteFigures> {
   return new Promise((resolve, reject) => {
     const latencies: number[] = [];
+    const cpuBefore = server.cpuMs();
     const instance = autocannon(
-      { url: base, connections: CONNECTIONS, duration: seconds, requests: route.requests },
+      { url: server.base, connections: CONNECTIONS, duration: seconds, requests: route.requests },
       (err, result) => {
         if (err) return reject(err);
         const sorted = latencies.sort((a, b) => a - b);
@@ -69,6 +73,7 @@ function run(base: string, route: RouteLoad, seconds: number): Promise<RouteFigu
           non2xx: result.non2xx,
           socketErrors: result.errors - result.timeouts,
           timeouts: result.timeouts,
+          cpuMsPerRequest: (server.cpuMs() - cpuBefore) / latencies.length,
         });
       },
     );
@@ -76,10 +81,20 @@ function run(base: string, route: RouteLoad, seconds: number): Promise<RouteFigu
   });
 }
 
+interface PooledSketch {
+  id: number;
+  version: number;
+}
+
+/** What one save carries from its request to its answer (autocannon's per-request context). */
+interface SaveContext {
+  sketch: PooledSketch;
+}
+
 /** The sketches of the save route; a connection takes one that no other connection is saving. */
 class SavePool {
-  private free: { id: number; version: number }[] = [];
-  constructor(sketches: { id: number; version: number }[]) {
+  private free: PooledSketch[] = [];
+  constructor(sketches: PooledSketch[]) {
     this.free = [...sketches];
   }
 
@@ -90,7 +105,7 @@ class SavePool {
       setupRequest: (req, context) => {
         const sketch = this.free.pop();
         if (!sketch) throw new Error('the save pool ran dry (more connections than sketches?)');
-        context.sketch = sketch;
+        (context as SaveContext).sketch = sketch;
         return {
           ...req,
           path: `/api/sketches/${sketch.id}`,
@@ -101,7 +116,7 @@ class SavePool {
         // A save makes exactly the next version; the answer itself is compressed, and autocannon hands it over
         // as text, so it is not read. After a failed save the version is unknown: that sketch is not reused.
         if (status !== 200) return;
-        const sketch = context.sketch as { id: number; version: number };
+        const { sketch } = context as SaveContext;
         sketch.version += 1;
         this.free.push(sketch);
       },
@@ -119,7 +134,7 @@ export async function runRouteComparison(): Promise<void> {
     if (created.status !== 201) throw new Error(`create answered ${created.status}`);
     const readId = created.json.id;
     // Twice the connections, so that a save lost to a timeout never leaves a connection without a sketch.
-    const saveSketches: { id: number; version: number }[] = [];
+    const saveSketches: PooledSketch[] = [];
     for (let i = 0; i < CONNECTIONS * 2; i++) {
       const res = await client.call('POST', '/api/sketches', { name: `Save ${i}`, document });
       if (res.status !== 201) throw new Error(`create answered ${res.status}`);
@@ -145,7 +160,7 @@ export async function runRouteComparison(): Promise<void> {
       await client.call('GET', '/api/health');
     };
 
-    const browser = { 'accept-encoding': BROWSER_ENCODINGS };
+    const browser: Record<string, string> = ENCODINGS ? { 'accept-encoding': ENCODINGS } : {};
     const signedIn = { ...browser, cookie: client.cookie };
     const writing = { ...signedIn, 'content-type': 'application/json', 'x-csrf-token': client.token };
     const routes: RouteLoad[] = [
@@ -180,10 +195,10 @@ export async function runRouteComparison(): Promise<void> {
     const picked = process.env.LOAD_ROUTES?.split(',');
     for (const route of routes.filter((r) => !picked || picked.includes(r.key))) {
       if (WARMUP_S > 0) {
-        await run(server.base, route, WARMUP_S);
+        await run(server, route, WARMUP_S);
         await drain();
       }
-      const f = await run(server.base, route, DURATION_S);
+      const f = await run(server, route, DURATION_S);
       await drain();
       figures.push(f);
       console.log(
@@ -198,12 +213,12 @@ export async function runRouteComparison(): Promise<void> {
         .map((l) => l.toFixed(2))
         .join(', ')}\n`,
     );
-    console.log('| route | req/s | p50 ms | p95 ms | errors | ratio to health |');
-    console.log('| --- | --- | --- | --- | --- | --- |');
+    console.log('| route | req/s | p50 ms | p95 ms | errors | ratio to health | server CPU ms/request |');
+    console.log('| --- | --- | --- | --- | --- | --- | --- |');
     for (const f of figures) {
       console.log(
         `| ${f.label} | ${f.reqPerS.toFixed(0)} | ${f.p50.toFixed(0)} | ${f.p95.toFixed(0)} | ${f.errors} | ` +
-          `${(f.reqPerS / health).toFixed(2)}× |`,
+          `${(f.reqPerS / health).toFixed(2)}× | ${f.cpuMsPerRequest.toFixed(2)} |`,
       );
     }
     await server.stop();

@@ -9,6 +9,8 @@ import os from 'node:os';
 import path from 'node:path';
 
 export const root = path.resolve(import.meta.dirname, '../..');
+/** Linux's USER_HZ, the unit of the times in /proc/<pid>/stat. */
+const CLOCK_TICKS_PER_S = 100;
 
 function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -40,6 +42,8 @@ export interface LoadServer {
   /** The temporary folder holding the database and uploads; removed by `remove()`. */
   dir: string;
   dbPath: string;
+  /** CPU time the server process has used so far (ms, user + system), or NaN where /proc is not there. */
+  cpuMs(): number;
   /** Stops the server and waits for it to exit. */
   stop(): Promise<void>;
   /** Removes the temporary folder (after `stop`). */
@@ -86,7 +90,17 @@ export async function startServer(env: Record<string, string>): Promise<LoadServ
     await stop();
     throw err;
   }
-  return { base, dir, dbPath, stop, remove: () => fs.rmSync(dir, { recursive: true, force: true }) };
+  const cpuMs = () => {
+    try {
+      // Fields 14 and 15 of /proc/<pid>/stat (after the parenthesised name): user and system time in clock ticks.
+      const stat = fs.readFileSync(`/proc/${server.pid}/stat`, 'utf8');
+      const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+      return ((Number(fields[11]) + Number(fields[12])) * 1000) / CLOCK_TICKS_PER_S;
+    } catch {
+      return NaN;
+    }
+  };
+  return { base, dir, dbPath, cpuMs, stop, remove: () => fs.rmSync(dir, { recursive: true, force: true }) };
 }
 
 /** The fields of the answers the benchmarks read. */
