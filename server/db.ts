@@ -79,12 +79,23 @@ function readsOnTheirOwnConnection(sequelize: Sequelize): void {
   // An in-memory database is one connection whatever the key: nothing to split there.
   if ((sequelize as unknown as { options: { storage?: string } }).options.storage === ':memory:') return;
   const getConnection = manager.getConnection.bind(manager);
+  // Opened once and then handed out as it is: this runs for every read, so it copies no options and awaits nothing.
+  let reads: Promise<RawSqliteConnection> | null = null;
   manager.getConnection = (options) => {
     const outsideTransaction = !options?.uuid || options.uuid === 'default';
     if (options?.type === QueryTypes.SELECT && outsideTransaction) {
-      return getConnection({ ...options, uuid: READS_KEY });
+      reads ??= getConnection({ uuid: READS_KEY }).catch((err: unknown) => {
+        reads = null;
+        throw err;
+      });
+      return reads;
     }
     return getConnection(options);
+  };
+  const close = sequelize.close.bind(sequelize);
+  sequelize.close = () => {
+    reads = null;
+    return close();
   };
 }
 
