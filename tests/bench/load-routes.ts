@@ -91,11 +91,25 @@ interface SaveContext {
   sketch: PooledSketch;
 }
 
-/** The sketches of the save route; a connection takes one that no other connection is saving. */
+/**
+ * The sketches of the save route; a connection takes one that no other connection is saving and puts it back with
+ * the next version once the save is answered. A save that times out never comes back: when the pool runs dry, the
+ * sketch longest in flight is taken again with the version last known, so a save that went through after all shows
+ * as a conflict (an error), never as a crash of the benchmark.
+ */
 class SavePool {
   private free: PooledSketch[] = [];
+  private inFlight = new Set<PooledSketch>();
   constructor(sketches: PooledSketch[]) {
     this.free = [...sketches];
+  }
+
+  private take(): PooledSketch {
+    const sketch = this.free.pop() ?? this.inFlight.values().next().value;
+    if (!sketch) throw new Error('the save pool is empty');
+    this.inFlight.delete(sketch);
+    this.inFlight.add(sketch);
+    return sketch;
   }
 
   request(headers: Record<string, string>, body: Record<string, unknown>): CannonRequest {
@@ -103,8 +117,7 @@ class SavePool {
       method: 'PUT',
       headers,
       setupRequest: (req, context) => {
-        const sketch = this.free.pop();
-        if (!sketch) throw new Error('the save pool ran dry (more connections than sketches?)');
+        const sketch = this.take();
         (context as SaveContext).sketch = sketch;
         return {
           ...req,
@@ -112,12 +125,15 @@ class SavePool {
           body: JSON.stringify({ ...body, version: sketch.version }),
         };
       },
-      onResponse: (status, _body, context) => {
-        // A save makes exactly the next version; the answer itself is compressed, and autocannon hands it over
-        // as text, so it is not read. After a failed save the version is unknown: that sketch is not reused.
-        if (status !== 200) return;
+      onResponse: (status, responseBody, context) => {
+        // A save makes exactly the next version; the answer itself may be compressed, and autocannon hands it over
+        // as text, so it is not read.
         const { sketch } = context as SaveContext;
-        sketch.version += 1;
+        this.inFlight.delete(sketch);
+        if (status === 200) sketch.version += 1;
+        // A conflict (counted as an error) names the current version in its small, uncompressed answer.
+        if (status === 409)
+          sketch.version = (JSON.parse(responseBody) as { details: { version: number } }).details.version;
         this.free.push(sketch);
       },
     };
