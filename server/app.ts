@@ -21,6 +21,14 @@ import { inviteRoutes } from './routes/invites';
 import { assignmentRoutes } from './routes/assignments';
 import { JSON_BODY_MAX_BYTES } from '../shared/schema/requestLimits';
 
+/**
+ * Answers smaller than this go uncompressed. An answer of a few KB (a sketch, a page of the library) reaches the
+ * browser in the same round trip either way, as it fits TCP's initial window (10 segments, about 14 KB, RFC 6928),
+ * while compressing it cost the server more CPU than the rest of a signed-in sketch read (a compressor is set up and
+ * torn down for every answer). Larger answers (sweeps, exports, the client's scripts) are still compressed.
+ */
+const COMPRESS_FROM_BYTES = 8 * 1024;
+
 /** What the app needs from outside: the open (migrated) database, the settings and the mailer. */
 export interface AppContext {
   sequelize: Sequelize;
@@ -37,7 +45,7 @@ export function createApp(ctx: AppContext): Express {
   app.set('query parser', 'simple');
 
   app.use(securityHeaders({ https: config.cookieSecure }));
-  app.use(compression());
+  app.use(compression({ threshold: COMPRESS_FROM_BYTES }));
 
   const api = express.Router();
   api.use(express.json({ limit: JSON_BODY_MAX_BYTES }));

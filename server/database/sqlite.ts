@@ -1,6 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { Op, Sequelize, Transaction, col, fn, where, type WhereOptions } from 'sequelize';
+import { Op, QueryTypes, Sequelize, Transaction, col, fn, where, type WhereOptions } from 'sequelize';
 import sqlite3 from 'sqlite3';
 import { RateLimiterSQLite, type RateLimiterStoreAbstract } from 'rate-limiter-flexible';
 import { initModels } from '../models';
@@ -9,6 +9,9 @@ import { rateCounterOptions, type RateCounterOptions } from './rate-counters';
 
 /** How long a connection waits for another's write lock before giving up (ms). */
 export const BUSY_TIMEOUT_MS = 10_000;
+
+/** The key of the connection that serves reads outside transactions (readsOnTheirOwnConnection). */
+const READS_KEY = 'arcwright-reads-connection';
 
 /** Statements every SQLite connection runs before its first query. */
 const CONNECTION_PRAGMAS = [
@@ -40,22 +43,63 @@ function runOn(connection: RawSqliteConnection, sql: string): Promise<void> {
  */
 function applyPragmasOnEveryConnection(sequelize: Sequelize): void {
   const manager = sequelize.connectionManager as unknown as {
-    getConnection(options?: object): Promise<RawSqliteConnection>;
+    getConnection(options?: { uuid?: string }): Promise<RawSqliteConnection>;
   };
   const original = manager.getConnection.bind(manager);
   const configured = new WeakMap<RawSqliteConnection, Promise<void>>();
-  manager.getConnection = async (options?: object) => {
+  manager.getConnection = async (options) => {
     const connection = await original(options);
     let ready = configured.get(connection);
     if (!ready) {
+      const forReads = options?.uuid === READS_KEY;
       ready = (async () => {
         for (const sql of CONNECTION_PRAGMAS) await runOn(connection, sql);
-        connection.serialize();
+        if (forReads) await runOn(connection, 'PRAGMA query_only = ON');
+        else connection.serialize();
       })();
       configured.set(connection, ready);
     }
     await ready;
     return connection;
+  };
+}
+
+/**
+ * Every query outside a transaction used to share the one default connection, which is serialized: a query starts
+ * only after the previous one's answer came back to the event loop. Under load that hand-over, not SQLite, was the
+ * limit: a signed-in read makes three queries (session, user, sketch), and 50 of them in flight queued behind each
+ * other one round trip at a time. Reads (Sequelize's SELECT queries outside a transaction) therefore get a
+ * connection of their own in parallel mode, so they are all handed to the thread pool at once.
+ *
+ * That is safe where the default connection's serialized mode is needed: in WAL mode a reader never waits for the
+ * write lock, so a read cannot hold a pool thread that a writer needs. `query_only` makes the connection refuse
+ * any write, should one ever be sent here as a SELECT. Each read sees every write committed before it started,
+ * as on the default connection; reads inside a transaction stay on the transaction's connection.
+ */
+function readsOnTheirOwnConnection(sequelize: Sequelize): void {
+  const manager = sequelize.connectionManager as unknown as {
+    getConnection(options?: { uuid?: string; type?: string }): Promise<RawSqliteConnection>;
+  };
+  // An in-memory database is one connection whatever the key: nothing to split there.
+  if ((sequelize as unknown as { options: { storage?: string } }).options.storage === ':memory:') return;
+  const getConnection = manager.getConnection.bind(manager);
+  // Opened once and then handed out as it is: this runs for every read, so it copies no options and awaits nothing.
+  let reads: Promise<RawSqliteConnection> | null = null;
+  manager.getConnection = (options) => {
+    const outsideTransaction = !options?.uuid || options.uuid === 'default';
+    if (options?.type === QueryTypes.SELECT && outsideTransaction) {
+      reads ??= getConnection({ uuid: READS_KEY }).catch((err: unknown) => {
+        reads = null;
+        throw err;
+      });
+      return reads;
+    }
+    return getConnection(options);
+  };
+  const close = sequelize.close.bind(sequelize);
+  sequelize.close = () => {
+    reads = null;
+    return close();
   };
 }
 
@@ -140,6 +184,7 @@ async function open(location: DatabaseLocation): Promise<Sequelize> {
     retry: { max: 3 },
   });
   applyPragmasOnEveryConnection(sequelize);
+  readsOnTheirOwnConnection(sequelize);
   reuseTransactionConnection(sequelize);
   queueTransactions(sequelize);
   initModels(sequelize);

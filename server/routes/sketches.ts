@@ -38,7 +38,7 @@ export function sketchRoutes(config: ServerConfig, mailer: Mailer): Router {
   });
 
   router.get('/:id', async (req, res) => {
-    res.json(await sketches.getSketch(currentUser(req), idParam(req, 'id')));
+    res.type('application/json').send(await sketches.getSketchJson(currentUser(req), idParam(req, 'id')));
   });
 
   router.put('/:id', async (req, res) => {

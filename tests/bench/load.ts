@@ -1,7 +1,7 @@
 /**
  * Loopback load test of the sketches API (npm run bench:load).
  *
- * Starts the real server (npx tsx server/index.ts) on a temporary database and a free port,
+ * Starts the real server (tests/bench/load-server.ts) on a temporary database and a free port,
  * signs up CLIENTS accounts, gives each its own sketch, then lets every client save its sketch
  * over and over for DURATION_S seconds, each save naming the version it edits. Afterwards it
  * checks that no request failed and that every acknowledged save is in the database as a
@@ -10,79 +10,15 @@
  *
  * Settings: LOAD_CLIENTS (50), LOAD_SECONDS (20), LOAD_PROFILE=<dir> to write a V8 CPU profile
  * of the server there.
+ *
+ * `npm run bench:load -- --routes` compares four routes side by side instead (tests/bench/load-routes.ts).
  */
-import { spawn } from 'node:child_process';
-import fs from 'node:fs';
-import net from 'node:net';
-import os from 'node:os';
-import path from 'node:path';
 import sqlite3 from 'sqlite3';
+import { Client, fixtureDocument, startServer } from './load-server';
+import { runRouteComparison } from './load-routes';
 
 const CLIENTS = Number(process.env.LOAD_CLIENTS ?? 50);
 const DURATION_S = Number(process.env.LOAD_SECONDS ?? 20);
-const root = path.resolve(import.meta.dirname, '../..');
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as net.AddressInfo;
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
-}
-
-async function waitForHealth(base: string, timeoutMs: number): Promise<void> {
-  const until = Date.now() + timeoutMs;
-  while (Date.now() < until) {
-    try {
-      const res = await fetch(`${base}/api/health`);
-      if (res.ok) return;
-    } catch {
-      /* not up yet */
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error('server did not answer /api/health in time');
-}
-
-/** The fields of the answers this script reads. */
-interface ApiAnswer {
-  token: string;
-  id: number;
-  version: number;
-}
-
-/** A client with its own cookie jar (the session cookie, and the CSRF cookie while signed out) and CSRF token. */
-class Client {
-  cookies = new Map<string, string>();
-  token = '';
-  constructor(readonly base: string) {}
-
-  async call(method: string, url: string, body?: unknown): Promise<{ status: number; json: ApiAnswer }> {
-    const cookie = [...this.cookies].map(([name, value]) => `${name}=${value}`).join('; ');
-    const headers: Record<string, string> = { cookie };
-    if (body !== undefined) headers['content-type'] = 'application/json';
-    if (method !== 'GET') headers['x-csrf-token'] = this.token;
-    const res = await fetch(this.base + url, {
-      method,
-      headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
-    });
-    for (const set of res.headers.getSetCookie()) {
-      const [pair] = set.split(';');
-      const eq = pair.indexOf('=');
-      this.cookies.set(pair.slice(0, eq), pair.slice(eq + 1));
-    }
-    const text = await res.text();
-    return { status: res.status, json: (text ? JSON.parse(text) : {}) as ApiAnswer };
-  }
-
-  async refreshToken() {
-    this.token = (await this.call('GET', '/api/auth/csrf')).json.token;
-  }
-}
 
 function percentile(sorted: number[], p: number): number {
   if (!sorted.length) return NaN;
@@ -95,67 +31,16 @@ function queryAll<T>(db: sqlite3.Database, sql: string, params: unknown[] = []):
   );
 }
 
-/** The token of the sign-up link the server's mail catcher filed for `to` (the bench owns this database). */
-async function signupToken(dbPath: string, to: string): Promise<string> {
-  const db = new sqlite3.Database(dbPath, sqlite3.OPEN_READONLY);
-  try {
-    for (let tries = 0; tries < 100; tries++) {
-      const rows = await queryAll<{ text: string }>(db, 'SELECT text FROM outbox WHERE "to" = ?', [to]);
-      const m = rows.map((r) => /\/signup\/confirm\?token=([A-Za-z0-9_-]+)/.exec(r.text)).find(Boolean);
-      if (m) return m[1];
-      await new Promise((r) => setTimeout(r, 100));
-    }
-    throw new Error(`no sign-up mail to ${to}`);
-  } finally {
-    db.close();
-  }
-}
-
 async function main() {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'arcwright-load-'));
-  const port = await freePort();
-  const base = `http://127.0.0.1:${port}`;
-  const dbPath = path.join(dir, 'load.sqlite');
-  const profile = process.env.LOAD_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.LOAD_PROFILE}`] : [];
-  // `node --import tsx` rather than the tsx command, so the server is this one process (and can be profiled).
-  const server = spawn(process.execPath, [...profile, '--import', 'tsx', 'server/index.ts'], {
-    cwd: root,
-    env: {
-      ...process.env,
-      PORT: String(port),
-      DATABASE_PATH: dbPath,
-      UPLOADS_DIR: path.join(dir, 'uploads'),
-      DIST_DIR: path.join(dir, 'no-client'),
-      SIGNUP_MAX_PER_ADDRESS: String(CLIENTS * 2),
-      NODE_ENV: 'development',
-    },
-    stdio: ['ignore', 'inherit', 'inherit'],
-  });
-  const stop = () => {
-    if (server.exitCode === null) server.kill('SIGTERM');
-  };
-  process.on('exit', stop);
-
+  const server = await startServer({ SIGNUP_MAX_PER_ADDRESS: String(CLIENTS * 2) });
+  const { base, dbPath } = server;
   try {
-    await waitForHealth(base, 60_000);
-    const document = JSON.parse(fs.readFileSync(path.join(root, 'tests/api/fixtures/four-link.sketch.json'), 'utf8'));
+    const document = fixtureDocument();
 
     const clients: { c: Client; id: number; version: number; acked: { version: number; name: string }[] }[] = [];
     for (let i = 0; i < CLIENTS; i++) {
       const c = new Client(base);
-      await c.refreshToken();
-      const account = { email: `load-${i}@example.test`, password: `load-password-${i}` };
-      const signup = await c.call('POST', '/api/auth/signup', { ...account, name: `Load ${i}` });
-      if (signup.status !== 202)
-        throw new Error(`sign-up ${i} answered ${signup.status}: ${JSON.stringify(signup.json)}`);
-      // Sign-up finishes through the link mailed to the address, then the account signs in.
-      const confirmed = await c.call('POST', '/api/auth/signup/confirm', {
-        token: await signupToken(dbPath, account.email),
-      });
-      if (confirmed.status !== 201) throw new Error(`sign-up link ${i} answered ${confirmed.status}`);
-      const login = await c.call('POST', '/api/auth/login', account);
-      if (login.status !== 200) throw new Error(`sign-in ${i} answered ${login.status}`);
-      await c.refreshToken();
+      await c.signUp(`load-${i}@example.test`, `copper-load-harbour-${i}`, `Load ${i}`, dbPath);
       const created = await c.call('POST', '/api/sketches', { name: `Load ${i} v1`, document });
       if (created.status !== 201) throw new Error(`create ${i} answered ${created.status}`);
       clients.push({ c, id: created.json.id, version: created.json.version, acked: [] });
@@ -190,8 +75,7 @@ async function main() {
     );
     const elapsedS = (performance.now() - started) / 1000;
 
-    stop();
-    await new Promise((r) => server.once('exit', r));
+    await server.stop();
 
     // Every acknowledged save must be a revision with that version and name.
     const db = new sqlite3.Database(dbPath, sqlite3.OPEN_READONLY);
@@ -230,13 +114,14 @@ async function main() {
       `acknowledged saves: ${acked}; missing from the database: ${missing}; failed requests: ${errors.length}`,
     );
     if (errors.length) console.log('first errors:', errors.slice(0, 5));
-    fs.rmSync(dir, { recursive: true, force: true });
+    server.remove();
     process.exit(errors.length || missing || !acked ? 1 : 0);
   } catch (err) {
     console.error('load test failed:', err);
-    stop();
+    await server.stop();
     process.exit(1);
   }
 }
 
-void main();
+if (process.argv.includes('--routes')) void runRouteComparison();
+else void main();
