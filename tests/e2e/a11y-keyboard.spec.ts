@@ -7,6 +7,9 @@ import type { Locator, Page } from '@playwright/test';
 import { starters } from '../../shared/kinematics';
 import { $, boardReady } from './board';
 
+// The board sweeps each sketch it opens; on a busy machine a test here takes longer than the default minute.
+test.describe.configure({ timeout: 150_000 });
+
 /** Tab presses allowed to reach a control: the board's tables hold a few hundred stops at most. */
 const MAX_TABS = 400;
 

@@ -61,6 +61,8 @@ async function transitionsDone(page: Page): Promise<void> {
 for (const theme of ['light', 'dark'] as const) {
   for (const screen of SCREENS) {
     test(`${screen.name}, ${theme} theme`, async ({ browser, baseURL }) => {
+      // A board sweeps its sketch and axe reads a few thousand elements: on a busy machine that takes a while.
+      test.setTimeout(150_000);
       const context = await browser.newContext({
         baseURL,
         storageState: screen.as === 'guest' ? undefined : signedIn[screen.as],
