@@ -178,7 +178,7 @@ test('the library’s dialogs from the keyboard: a new sketch, sharing, and the 
   await tabTo(page, share);
   await page.keyboard.press('Enter');
   const dialog = $(page, 'share-dialog');
-  await expect(dialog).toBeVisible();
+  await expect($(page, 'share-status')).toBeVisible();
   const create = $(page, 'share-create');
   if (await create.isVisible()) {
     await tabTo(page, create);
