@@ -32,9 +32,12 @@ async function expectFocusRing(page: Page): Promise<void> {
   expect(ring.width).toBeGreaterThanOrEqual(2);
 }
 
-/** Whether the focus is inside the dialog that holds `dialog`. */
+/** Whether the focus is inside the dialog that holds `dialog`; else where it is, for the failure message. */
 const focusInDialog = (dialog: Locator) =>
-  dialog.evaluate((el) => !!el.closest('.q-dialog')?.contains(document.activeElement));
+  dialog.evaluate((el) => {
+    const at = document.activeElement;
+    return el.closest('.q-dialog')?.contains(at) ? true : `focus on ${at?.outerHTML.slice(0, 160) ?? 'nothing'}`;
+  });
 
 /** A dialog open: Tab and Shift+Tab keep the focus inside it, Escape closes it and the focus goes back to `opener`. */
 async function expectDialogKeyboard(page: Page, dialog: Locator, opener: Locator): Promise<void> {
@@ -58,6 +61,8 @@ async function boardMenuItem(page: Page, item: Locator): Promise<void> {
   await tabTo(page, $(page, 'board-menu'));
   await page.keyboard.press('Enter');
   await expect(item).toBeVisible();
+  // The menu takes the focus once it has opened; Tab then steps through its items.
+  await expect.poll(() => item.evaluate((el) => !!el.closest('.q-menu')?.contains(document.activeElement))).toBe(true);
   await tabTo(page, item);
   await expectFocusRing(page);
   await page.keyboard.press('Enter');
