@@ -1,6 +1,8 @@
 /**
  * Colours of the board's canvases, for the light and the dark page. Arcwright's own look:
  * workshop steel blue for the frame, signal orange for what moves, a green lateral rod.
+ * Against the canvas's background (#f7f6f2 light, #161c22 dark) text reads at 4.5:1 or more and
+ * pivots and members at 3:1 or more (WCAG 2.1 AA); tests/unit/board/canvas-palette-contrast.test.ts checks it.
  */
 
 export interface CanvasPalette {
@@ -39,7 +41,7 @@ export interface CanvasPalette {
 export const LIGHT_PALETTE: CanvasPalette = {
   gridMinor: 'rgba(47, 93, 124, 0.09)',
   gridMajor: 'rgba(47, 93, 124, 0.22)',
-  gridLabel: '#6b7a86',
+  gridLabel: '#5f6e7a',
   ground: '#6f5f4a',
   groundHatch: 'rgba(111, 95, 74, 0.35)',
   tyre: '#3b4148',
@@ -47,7 +49,7 @@ export const LIGHT_PALETTE: CanvasPalette = {
   rail: 'rgba(47, 93, 124, 0.45)',
   railFill: 'rgba(47, 93, 124, 0.07)',
   framePivot: '#2f5d7c',
-  movingPivot: '#e07a1f',
+  movingPivot: '#cc6a14',
   pivotRing: '#ffffff',
   pivotLabel: '#40505c',
   farSideAlpha: 0.35,
@@ -60,7 +62,7 @@ export const LIGHT_PALETTE: CanvasPalette = {
   shockOut: '#c0392b',
   spring: '#3a87ad',
   hinge: '#5b6b78',
-  driveline: '#8896a3',
+  driveline: '#707d89',
   selection: 'rgba(224, 122, 31, 0.45)',
   ghost: 'rgba(120, 134, 148, 0.85)',
   geometry: '#a0307a',
@@ -80,6 +82,7 @@ export const DARK_PALETTE: CanvasPalette = {
   rail: 'rgba(120, 170, 205, 0.5)',
   railFill: 'rgba(120, 170, 205, 0.08)',
   framePivot: '#5d95bb',
+  movingPivot: '#e07a1f',
   pivotRing: '#12181e',
   pivotLabel: '#b8c6d1',
   link: '#c3d0db',
