@@ -87,7 +87,7 @@ function readsOnTheirOwnConnection(sequelize: Sequelize): void {
   let reads: Promise<RawSqliteConnection> | null = null;
   manager.getConnection = (options) => {
     const outsideTransaction = !options?.uuid || options.uuid === 'default';
-    if (options?.type === QueryTypes.SELECT && outsideTransaction) {
+    if (options?.type === QueryTypes.SELECT && outsideTransaction && !readsOnDefaultConnection.has(sequelize)) {
       reads ??= getConnection({ uuid: READS_KEY }).catch((err: unknown) => {
         reads = null;
         throw err;
@@ -208,6 +208,8 @@ async function withExclusiveLock<T>(sequelize: Sequelize, _name: string, work: (
       if (attempt >= LOCK_ATTEMPTS || !/SQLITE_BUSY/.test(String(err))) throw err;
     }
   }
+  // The work's reads must see its own uncommitted writes: they stay on the default connection meanwhile.
+  readsOnDefaultConnection.add(sequelize);
   try {
     const result = await work();
     await sequelize.query('COMMIT');
@@ -215,8 +217,13 @@ async function withExclusiveLock<T>(sequelize: Sequelize, _name: string, work: (
   } catch (err) {
     await sequelize.query('ROLLBACK').catch(() => undefined);
     throw err;
+  } finally {
+    readsOnDefaultConnection.delete(sequelize);
   }
 }
+
+/** Databases inside withExclusiveLock, whose reads readsOnTheirOwnConnection leaves on the default connection. */
+const readsOnDefaultConnection = new WeakSet<Sequelize>();
 
 /** How many times BEGIN IMMEDIATE waits busy_timeout for another process's lock before giving up. */
 const LOCK_ATTEMPTS = 6;

@@ -52,7 +52,7 @@ afterAll(async () => {
 });
 
 describe(`backup and restore (${testDialect})`, () => {
-  it('copies the live database and its uploads; restored elsewhere, the sketch and its photo read back', async () => {
+  it('copies the live database with its uploads; restored elsewhere, the sketch and its photo read back', async () => {
     const maker = await newMember(live.app, 'backed-up');
     const created = await maker.post('/api/sketches').send({ name: 'Kept through a restore', document: sketchFile() });
     expect(created.status).toBe(201);
@@ -64,15 +64,15 @@ describe(`backup and restore (${testDialect})`, () => {
     // The server keeps running (and its connections open) while the copy is taken.
     const file = path.join(backupDir, 'arcwright.backup');
     const backup = await npmScript('backup', live.config, file);
-    expect(backup.stdout).toContain('1 uploaded file(s) copied');
+    // Uploads live in the database: the database's copy carries them, and no folder is left to copy.
+    expect(backup.stdout).toContain('no uploaded files to copy');
     expect(fs.statSync(file).size).toBeGreaterThan(0);
-    expect(fs.readdirSync(`${file}.uploads`)).toEqual([`${upload.body.id}.png`]);
+    expect(fs.existsSync(`${file}.uploads`)).toBe(false);
     // A second backup to the same name is refused rather than overwriting the first.
     await expect(backupTo(live.sequelize, live.config, file)).rejects.toThrow(/already exists: name a new file/);
 
     const config = loadConfig({ ...target.env, PUBLIC_URL: 'http://arcwright.example.test' });
-    const restore = await npmScript('restore', config, file);
-    expect(restore.stdout).toContain('1 uploaded file(s) restored');
+    await npmScript('restore', config, file);
 
     const sequelize = await openDatabase(config);
     const mail = await setUpMail(config);
