@@ -1,13 +1,29 @@
+import { randomUUID } from 'node:crypto';
 import type { Express } from 'express';
 import { expect } from 'vitest';
 import { Caller, newMember, type TestServer } from './helpers';
 import { sketchFile } from './fixtures';
 import { User } from '../../server/models';
+import { hashPassword } from '../../server/services/passwords';
 import { classDetailSchema, inviteResultSchema, type ClassDetail } from '../../shared/schema/classes';
 
+/**
+ * A new account stored straight in the database and signed in: for a server whose mail cannot go, where
+ * signing up (which finishes through a mailed link) cannot.
+ */
+export async function storedMember(app: Express, label = 'user') {
+  const email = `${label}-${randomUUID()}@example.test`;
+  const password = `stored-${label}-password-long`;
+  await User.create({ email, name: label, passwordHash: await hashPassword(password) });
+  return Object.assign(await new Caller(app).signIn(email, password), { email, password });
+}
+
+/** How a test makes an account: signing up as a person does, unless the test says otherwise. */
+type MakeMember = (app: Express, label: string) => Promise<Caller & { email: string }>;
+
 /** A new account made an instructor (as an admin would), signed in. */
-export async function newInstructor(app: Express, label = 'teacher') {
-  const caller = await newMember(app, label);
+export async function newInstructor(app: Express, label = 'teacher', make: MakeMember = newMember) {
+  const caller = await make(app, label);
   await User.update({ role: 'instructor' }, { where: { email: caller.email } });
   return caller;
 }
@@ -44,8 +60,8 @@ export async function invite(instructor: Caller, klass: ClassDetail, emails: str
 }
 
 /** A new member who joined `klass` through its join code. */
-export async function newStudent(app: Express, klass: ClassDetail, label = 'student') {
-  const student = await newMember(app, label);
+export async function newStudent(app: Express, klass: ClassDetail, label = 'student', make: MakeMember = newMember) {
+  const student = await make(app, label);
   await student.post('/api/classes/join').send({ joinCode: klass.joinCode }).expect(200);
   return student;
 }

@@ -1,10 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startTestServer, type TestServer } from './helpers';
-import { daysFromNow, invite, newClass, newInstructor, newStudent, ownSketch } from './classHelpers';
+import { daysFromNow, invite, newClass, newInstructor, newStudent, ownSketch, storedMember } from './classHelpers';
 import { ClassInvite, Feedback } from '../../server/models';
 
 // A mail server that refuses connections (nothing listens on the discard port): no invitation is recorded as
-// sent, and the answer names each address whose mail failed.
+// sent, and the answer names each address whose mail failed. Accounts are stored directly: signing up needs mail.
 let server: TestServer;
 const logged: unknown[][] = [];
 const originalError = console.error;
@@ -21,7 +21,7 @@ afterAll(async () => {
 
 describe('when the SMTP server is down', () => {
   it('records no invitation as sent, names each failed address, and logs each failure', async () => {
-    const teacher = await newInstructor(server.app);
+    const teacher = await newInstructor(server.app, 'teacher', storedMember);
     const klass = await newClass(teacher);
     const result = await invite(teacher, klass, ['down1@example.test', 'not an address', 'down2@example.test']);
     expect(result.sent).toEqual([]);
@@ -40,7 +40,7 @@ describe('when the SMTP server is down', () => {
   });
 
   it('a resend that fails changes nothing: the invitation keeps its link and date', async () => {
-    const teacher = await newInstructor(server.app);
+    const teacher = await newInstructor(server.app, 'teacher', storedMember);
     const klass = await newClass(teacher);
     // An invitation whose mail went out while the server was up (written here as the service writes it).
     const sentAt = new Date(Date.now() - 3600_000);
@@ -63,13 +63,13 @@ describe('when the SMTP server is down', () => {
   });
 
   it('keeps the feedback when its mail cannot go, and retries that mail', async () => {
-    const teacher = await newInstructor(server.app);
+    const teacher = await newInstructor(server.app, 'teacher', storedMember);
     const klass = await newClass(teacher);
     const sketch = await ownSketch(teacher);
     const made = await teacher
       .post(`/api/classes/${klass.id}/assignments`)
       .send({ sketchId: sketch.id, title: 'Lab', dueAt: daysFromNow(2) });
-    const student = await newStudent(server.app, klass);
+    const student = await newStudent(server.app, klass, 'student', storedMember);
     await student.post(`/api/assignments/${made.body.id}/copy`).expect(201);
     const handIn = (await student.post(`/api/assignments/${made.body.id}/hand-ins`).expect(201)).body;
     const res = await teacher
