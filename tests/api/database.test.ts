@@ -50,47 +50,49 @@ describe.skipIf(testDialect !== 'sqlite')('SQLite connection settings', () => {
     });
     expect(both).toEqual({ distinct: true, pragmas: { journal: 'wal', foreignKeys: 1, busy: BUSY_TIMEOUT_MS } });
   });
+
+  it('are in force on the default connection that single writes use', async () => {
+    // A query that is not a SELECT stays on the default connection, which writes.
+    const raw = async (sql: string) => {
+      const answer = (await server.sequelize.query(sql, { type: QueryTypes.RAW })) as unknown[];
+      // Sequelize answers [rows, metadata] for a raw query, but the rows alone for PRAGMA foreign_keys.
+      const rows = (Array.isArray(answer[0]) ? answer[0] : answer) as PragmaRow[];
+      return rows[0];
+    };
+    expect({
+      journal: (await raw('PRAGMA journal_mode')).journal_mode,
+      foreignKeys: (await raw('PRAGMA foreign_keys')).foreign_keys,
+      busy: Object.values(await raw('PRAGMA busy_timeout'))[0],
+      queryOnly: (await raw('PRAGMA query_only')).query_only,
+    }).toEqual({ journal: 'wal', foreignKeys: 1, busy: BUSY_TIMEOUT_MS, queryOnly: 0 });
+  });
+
+  it('make the connection of reads outside a transaction refuse writes', async () => {
+    const [row] = await server.sequelize.query<PragmaRow>('PRAGMA query_only', { type: QueryTypes.SELECT });
+    expect(row.query_only).toBe(1);
+    await expect(
+      server.sequelize.query("UPDATE users SET name = 'never' WHERE id = 1", { type: QueryTypes.SELECT }),
+    ).rejects.toThrow(/readonly/);
+    const inside = await server.sequelize.transaction((transaction) =>
+      server.sequelize.query<PragmaRow>('PRAGMA query_only', { type: QueryTypes.SELECT, transaction }),
+    );
+    expect(inside[0].query_only).toBe(0);
+  });
 });
 
-it('are in force on the default connection that single writes use', async () => {
-  // A query that is not a SELECT stays on the default connection, which writes.
-  const raw = async (sql: string) => {
-    const answer = (await server.sequelize.query(sql, { type: QueryTypes.RAW })) as unknown[];
-    // Sequelize answers [rows, metadata] for a raw query, but the rows alone for PRAGMA foreign_keys.
-    const rows = (Array.isArray(answer[0]) ? answer[0] : answer) as PragmaRow[];
-    return rows[0];
-  };
-  expect({
-    journal: (await raw('PRAGMA journal_mode')).journal_mode,
-    foreignKeys: (await raw('PRAGMA foreign_keys')).foreign_keys,
-    busy: Object.values(await raw('PRAGMA busy_timeout'))[0],
-    queryOnly: (await raw('PRAGMA query_only')).query_only,
-  }).toEqual({ journal: 'wal', foreignKeys: 1, busy: BUSY_TIMEOUT_MS, queryOnly: 0 });
-});
-
-it('make the connection of reads outside a transaction refuse writes', async () => {
-  const [row] = await server.sequelize.query<PragmaRow>('PRAGMA query_only', { type: QueryTypes.SELECT });
-  expect(row.query_only).toBe(1);
-  await expect(
-    server.sequelize.query("UPDATE users SET name = 'never' WHERE id = 1", { type: QueryTypes.SELECT }),
-  ).rejects.toThrow(/readonly/);
-  const inside = await server.sequelize.transaction((transaction) =>
-    server.sequelize.query<PragmaRow>('PRAGMA query_only', { type: QueryTypes.SELECT, transaction }),
-  );
-  expect(inside[0].query_only).toBe(0);
-});
-
-it('let a read see a write committed just before it', async () => {
-  const user = await User.create({ email: 'reads-see-writes@example.test', name: 'Before', passwordHash: 'x' });
-  for (let i = 0; i < 20; i++) {
-    await User.update({ name: `Name ${i}` }, { where: { id: user.id } });
-    expect((await User.findByPk(user.id))?.name).toBe(`Name ${i}`);
-  }
-  await server.sequelize.transaction((transaction) => user.update({ name: 'In a transaction' }, { transaction }));
-  expect((await User.findByPk(user.id))?.name).toBe('In a transaction');
-  // The demo seed's test below counts the accounts.
-  await user.destroy();
-  expect(await User.findByPk(user.id)).toBeNull();
+describe('reads and writes', () => {
+  it('let a read see a write committed just before it', async () => {
+    const user = await User.create({ email: 'reads-see-writes@example.test', name: 'Before', passwordHash: 'x' });
+    for (let i = 0; i < 20; i++) {
+      await User.update({ name: `Name ${i}` }, { where: { id: user.id } });
+      expect((await User.findByPk(user.id))?.name).toBe(`Name ${i}`);
+    }
+    await server.sequelize.transaction((transaction) => user.update({ name: 'In a transaction' }, { transaction }));
+    expect((await User.findByPk(user.id))?.name).toBe('In a transaction');
+    // The demo seed's test below counts the accounts.
+    await user.destroy();
+    expect(await User.findByPk(user.id)).toBeNull();
+  });
 });
 
 describe('database constraints', () => {
