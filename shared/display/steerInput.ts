@@ -57,9 +57,11 @@ export function steerReach(steer: SteerResult, input: SteerInput): { min: number
     : { min: 0, max: 0 };
 }
 
-/** A steer position in words: "straight ahead", or the input's travel from centre with its sign ("+60.0 mm rack"). */
+/** A steer position in words: "straight ahead", or the input's travel from centre with its sign ("+60.0 mm rack", "−7.5° pitman arm"). */
 export function showSteerPosition(at: number, input: SteerInput, u: LengthUnit): string {
   if (Math.abs(at) < 1e-9) return 'straight ahead';
   const amount = input.quantity === 'length' ? showLength(at, u, undefined, true).text : `${fixed(at, 1, true)}°`;
-  return `${amount} ${input.key === 'rack' ? 'rack' : input.label.toLowerCase()}`;
+  // The degree sign already says it is an angle: "−7.5° pitman arm", short enough for the slider's value column.
+  const name = input.key === 'rack' ? 'rack' : input.label.toLowerCase().replace(/ angle$/, '');
+  return `${amount} ${name}`;
 }
