@@ -1,21 +1,11 @@
-import { readFileSync, writeFileSync } from 'node:fs';
+import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { test, expect, snap, ARTIFACTS } from './fixtures';
 import type { Page } from '@playwright/test';
-import { $, boardReady } from './board';
+import { $, boardReady, download, menuItem } from './board';
 
 const cell = (page: Page, id: string, axis: 'x' | 'y' | 'z') => $(page, `pivot-${id}-${axis}`);
 const num = async (page: Page, id: string, axis: 'x' | 'y' | 'z') => Number(await cell(page, id, axis).inputValue());
-
-async function menuItem(page: Page, id: string) {
-  await $(page, 'board-menu').click();
-  await $(page, id).click();
-}
-
-async function download(page: Page, id: string) {
-  const [file] = await Promise.all([page.waitForEvent('download'), menuItem(page, id)]);
-  return { name: file.suggestedFilename(), bytes: readFileSync((await file.path())!) };
-}
 
 test('import a hardpoint table: the preview lists the bad row, apply moves the pivot, undo puts it back', async ({
   page,

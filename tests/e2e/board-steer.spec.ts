@@ -1,6 +1,7 @@
 import { test, expect, snap } from './fixtures';
 import type { Page } from '@playwright/test';
 import { runSweep, starters } from '../../shared/kinematics';
+import { download } from './board';
 
 const $ = (page: Page, id: string) => page.locator(`[data-test="${id}"]`);
 
@@ -50,6 +51,14 @@ test('the steer slider turns the double-wishbone starter to lock: Ackermann, tur
   );
   await expect($(page, 'plan-note')).toContainText('axle line to the rear axle line');
   await snap(page, 'board-steer-lock-plan');
+
+  // The views' picture takes the plan view while it is shown in the front view's place: the PNG's width
+  // (IHDR, bytes 16-19) is the side and plan views at twice their size with 16 px margins, also doubled.
+  const png = await download(page, 'export-views-png');
+  const widths = await page.evaluate(() =>
+    ['side', 'plan'].map((v) => document.querySelector(`[data-test="canvas-${v}"] canvas`)!.clientWidth),
+  );
+  expect(png.bytes.readUInt32BE(16)).toBe(2 * (widths[0] + widths[1]) + 2 * 16 * 3);
 
   // A phone: one view at a time, the plan view among the tabs, the slider kept at lock.
   await page.setViewportSize({ width: 390, height: 844 });

@@ -1,4 +1,5 @@
-/** Board helpers shared by the browser tests: find things by data-test, wait for the board, read pivots. */
+/** Board helpers shared by the browser tests: find things by data-test, wait for the board, read pivots, export. */
+import { readFileSync } from 'node:fs';
 import { expect, type Page } from '@playwright/test';
 
 export const $ = (page: Page, id: string) => page.locator(`[data-test="${id}"]`);
@@ -28,4 +29,16 @@ export async function settled(page: Page) {
   await page.evaluate(
     () => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(() => requestAnimationFrame(r)))),
   );
+}
+
+/** Picks an item of the board's menu. */
+export async function menuItem(page: Page, id: string) {
+  await $(page, 'board-menu').click();
+  await $(page, id).click();
+}
+
+/** Picks an export from the board's menu and reads the file it saves. */
+export async function download(page: Page, id: string) {
+  const [file] = await Promise.all([page.waitForEvent('download'), menuItem(page, id)]);
+  return { name: file.suggestedFilename(), bytes: readFileSync((await file.path())!) };
 }
