@@ -1,27 +1,15 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startTestServer, type TestServer } from './helpers';
+import { describe, expect, it } from 'vitest';
+import { withMailDown } from './mail-down';
 import { daysFromNow, invite, newClass, newInstructor, newStudent, ownSketch, storedMember } from './classHelpers';
 import { ClassInvite, Feedback } from '../../server/models';
 
-// A mail server that refuses connections (nothing listens on the discard port): no invitation is recorded as
-// sent, and the answer names each address whose mail failed. Accounts are stored directly: signing up needs mail.
-let server: TestServer;
-const logged: unknown[][] = [];
-const originalError = console.error;
-beforeAll(async () => {
-  console.error = (...args: unknown[]) => {
-    logged.push(args);
-  };
-  server = await startTestServer({ SMTP_URL: 'smtp://127.0.0.1:9' });
-});
-afterAll(async () => {
-  await server.close();
-  console.error = originalError;
-});
+// A mail server that refuses connections: no invitation is recorded as sent, and the answer names each address
+// whose mail failed. Accounts are stored directly: signing up needs mail.
+const down = withMailDown();
 
 describe('when the SMTP server is down', () => {
   it('records no invitation as sent, names each failed address, and logs each failure', async () => {
-    const teacher = await newInstructor(server.app, 'teacher', storedMember);
+    const teacher = await newInstructor(down.server.app, 'teacher', storedMember);
     const klass = await newClass(teacher);
     const result = await invite(teacher, klass, ['down1@example.test', 'not an address', 'down2@example.test']);
     expect(result.sent).toEqual([]);
@@ -34,13 +22,13 @@ describe('when the SMTP server is down', () => {
     expect(await ClassInvite.count({ where: { classId: klass.id } })).toBe(0);
     const roster = await teacher.get(`/api/classes/${klass.id}`);
     expect(roster.body.invites).toEqual([]);
-    const lines = logged.map((args) => String(args[0])).filter((l) => l.includes('mail to down1@example.test'));
+    const lines = down.failuresTo('down1@example.test');
     expect(lines).toHaveLength(1);
-    expect(await server.mailTo('down1@example.test')).toHaveLength(0);
+    expect(await down.server.mailTo('down1@example.test')).toHaveLength(0);
   });
 
   it('a resend that fails changes nothing: the invitation keeps its link and date', async () => {
-    const teacher = await newInstructor(server.app, 'teacher', storedMember);
+    const teacher = await newInstructor(down.server.app, 'teacher', storedMember);
     const klass = await newClass(teacher);
     // An invitation whose mail went out while the server was up (written here as the service writes it).
     const sentAt = new Date(Date.now() - 3600_000);
@@ -63,13 +51,13 @@ describe('when the SMTP server is down', () => {
   });
 
   it('keeps the feedback when its mail cannot go, and retries that mail', async () => {
-    const teacher = await newInstructor(server.app, 'teacher', storedMember);
+    const teacher = await newInstructor(down.server.app, 'teacher', storedMember);
     const klass = await newClass(teacher);
     const sketch = await ownSketch(teacher);
     const made = await teacher
       .post(`/api/classes/${klass.id}/assignments`)
       .send({ sketchId: sketch.id, title: 'Lab', dueAt: daysFromNow(2) });
-    const student = await newStudent(server.app, klass, 'student', storedMember);
+    const student = await newStudent(down.server.app, klass, 'student', storedMember);
     await student.post(`/api/assignments/${made.body.id}/copy`).expect(201);
     const handIn = (await student.post(`/api/assignments/${made.body.id}/hand-ins`).expect(201)).body;
     const res = await teacher
@@ -77,8 +65,8 @@ describe('when the SMTP server is down', () => {
       .send({ text: 'Kept whatever the mail does.' });
     expect(res.status).toBe(200);
     expect(await Feedback.count({ where: { handInId: handIn.id } })).toBe(1);
-    await server.mail.mailer.idle();
-    const lines = logged.map((args) => String(args[0])).filter((l) => l.includes(`mail to ${student.email}`));
+    await down.server.mail.mailer.idle();
+    const lines = down.failuresTo(student.email);
     expect(lines).toHaveLength(4);
     expect(lines[3]).toMatch(/giving up/);
   });
