@@ -161,6 +161,9 @@ test('an instructor invites by e-mail, the student joins, hands in a changed cop
     await expect($(s, 'save-state')).toHaveAttribute('data-state', 'saved', { timeout: 30_000 });
     await s.goto(assignmentUrl);
     await expect($(s, 'open-copy')).toBeVisible();
+    // Due next week: nothing says a hand-in would be late.
+    await expect($(s, 'my-copy')).toContainText('You may hand in again before the due date.');
+    await expect($(s, 'past-due')).toHaveCount(0);
     await $(s, 'hand-in').click();
     await s.getByRole('button', { name: 'Hand in' }).last().click();
     await expect($(s, 'my-hand-ins').locator('.q-item')).toHaveCount(1);
@@ -190,5 +193,20 @@ test('an instructor invites by e-mail, the student joins, hands in a changed cop
     await student.close();
     await admin.context.close();
     await teacher.context.close();
+  }
+});
+
+test("a student's assignment past its due date says a hand-in now is marked late", async ({ browser, baseURL }) => {
+  // The demo seed's "Lab 3" fell due two days before the seed ran.
+  const { context, page } = await signedIn(browser, baseURL, DEMO.student);
+  try {
+    await page.goto('/classes');
+    await page.getByText('Chassis Design 210').click();
+    await page.getByText('Lab 3').first().click();
+    await expect($(page, 'assignment-due')).toContainText('ago');
+    await expect($(page, 'past-due')).toHaveText('The due date has passed: a hand-in now is marked late.');
+    await expect($(page, 'my-copy')).not.toContainText('before the due date');
+  } finally {
+    await context.close();
   }
 });
