@@ -153,7 +153,7 @@ function stepInput(
   }
   driveApply(model, state, 0, 0);
   steerInputSet(rc.input, to);
-  if (correct || process.env.CC) chordCorrect(rc, state);
+  if (correct) chordCorrect(rc, state);
   const predicted = rc.predicted;
   predicted.set(state);
   const outcome = solver.solve(state, STEER_CHORD_STEP_MM);
