@@ -30,7 +30,12 @@ export interface SteerRowPlan {
   place: Float64Array;
 }
 
-export function steerRowPlanBuild(model: LinkageModel, linkage: SteerLinkage): SteerRowPlan {
+/** `rot`: rotation buffers to fill for each row (the march's, once it is done), else new ones. */
+export function steerRowPlanBuild(
+  model: LinkageModel,
+  linkage: SteerLinkage,
+  rot = new BodyRotations(model.bodies.length),
+): SteerRowPlan {
   const v = model.sketch.vehicle;
   const wl = linkage.left.wheel.ride;
   const wr = linkage.right.wheel.ride;
@@ -41,7 +46,7 @@ export function steerRowPlanBuild(model: LinkageModel, linkage: SteerLinkage): S
     tireRadius: v.tireRadius,
     groundZ: (wl.z + wr.z) / 2 - v.tireRadius,
     rearX: (wl.x + wr.x) / 2 - v.wheelbase,
-    rot: new BodyRotations(model.bodies.length),
+    rot,
     place: new Float64Array(3),
   };
 }
