@@ -27,7 +27,7 @@ export const demoSketches: DemoSketch[] = [
     owner: 'maker@demo.test',
     layout: 'double-wishbone',
     name: 'Juniper Flats runabout, front double wishbone',
-    params: { track: 1560, tireRadius: 360, wheelbase: 2750, cgHeight: 560, rackHalfLength: 320 },
+    params: { track: 1560, tireRadius: 360, wheelbase: 2750, cgHeight: 560, rackHalfLength: 330 },
   },
   {
     owner: 'maker@demo.test',

@@ -93,6 +93,8 @@ export class PoseSolver {
    * shows every free coordinate is located (then plain QR of J is both right and cheaper).
    */
   regularize = true;
+  /** QR factorisations made so far (the benchmark prints them per row: the largest cost of a solve). */
+  factorisations = 0;
   private factored = false;
   private qrIsUndamped = false;
 
@@ -132,6 +134,7 @@ export class PoseSolver {
 
   /** Fills [J_free; damping rows] (or J_free alone), block by block, and factors it. False when J is all zero or singular. */
   private factor(damping: number): boolean {
+    this.factorisations++;
     this.factored = this.ls.factor(
       this.J,
       this.model.stateSize,

@@ -5,10 +5,11 @@
  * A benchmark, not a test: it prints figures and never fails on time.
  *
  * Then the steer sweep of the double-wishbone starter: 25 rack rows (±60 mm by 5) beside 25 heave rows
- * (±60 mm by 5), each marched and read on one solver from the solved ride row, and the starter's full sweep
- * with and without its steer block (the difference is the steer sweep with its bump-steer map). The two
- * sweeps are timed in turn in one loop (heave, steer, heave, steer…), so that other work on the machine
- * falls on both alike, and their ratio is printed with the Newton iterations each took and the load average.
+ * (±60 mm by 5), each with its own set-up, its first row solved and the march both ways read on one solver from
+ * the solved ride row (steerTable says what each includes), and the starter's full sweep with and without its
+ * steer block (the difference is the steer sweep with its bump-steer map). The sweeps are timed in turn in one
+ * loop (heave, heave as first timed, steer, heave…), so that other work on the machine falls on all alike, and
+ * their ratios are printed with the Newton iterations and factorisations each took and the load average.
  * `npm run bench -- --steer` prints that comparison alone.
  */
 import os from 'node:os';
@@ -16,9 +17,9 @@ import { runSweep, starters, sweepEnvelope, sweepSketch } from '../../shared/kin
 import { parseSketch } from '../../shared/schema/sketch';
 import { driveBuild } from '../../shared/kinematics/drive';
 import { marchPlan } from '../../shared/kinematics/grid';
-import { march, solveStart, type MarchContext } from '../../shared/kinematics/march';
+import { march, solveStart, type MarchContext, type SolvedRow } from '../../shared/kinematics/march';
 import { linkageModelBuild } from '../../shared/kinematics/model';
-import { heaveRowBuild, rowPlanBuild } from '../../shared/kinematics/rows';
+import { heaveRowBuild, rowPlanBuild, type RowPlan } from '../../shared/kinematics/rows';
 import { PoseSolver } from '../../shared/kinematics/solve';
 import { steerInputSweep, steeringOf } from '../../shared/kinematics/steer/sweep';
 
@@ -44,45 +45,38 @@ function time(f: () => unknown, n: number, warm = Math.max(20, n >> 2)): { media
   return { median: median(t), p90: t[Math.floor(t.length * 0.9)] };
 }
 
+interface PairFigures {
+  median: number;
+  p95: number;
+  cpu: number;
+}
+
 /**
- * Times `a` and `b` in turn, `n` runs each after a warm-up: the median and 95th percentile of each (wall ms),
- * and each one's mean CPU time (ms of this process's user + system time per run), which a busy machine
- * does not inflate by the time the process waits for a core.
+ * Times the functions in turn (one run of each, round after round), `n` runs each after a warm-up: the median and
+ * 95th percentile of each (wall ms), and each one's mean CPU time (ms of this process's user + system time per
+ * run), which a busy machine does not inflate by the time the process waits for a core.
  */
-function timePair(
-  a: () => unknown,
-  b: () => unknown,
-  n: number,
-): Record<'a' | 'b', { median: number; p95: number; cpu: number }> {
-  for (let i = 0; i < Math.max(20, n >> 2); i++) {
-    a();
-    b();
-  }
-  const ta: number[] = [];
-  const tb: number[] = [];
-  let ca = 0;
-  let cb = 0;
+function timeInTurn(fs: (() => unknown)[], n: number): PairFigures[] {
+  for (let i = 0; i < Math.max(20, n >> 2); i++) for (const f of fs) f();
+  const wall = fs.map(() => [] as number[]);
+  const cpuTotal = fs.map(() => 0);
   const cpu = () => {
     const u = process.cpuUsage();
     return (u.user + u.system) / 1000;
   };
   for (let i = 0; i < n; i++) {
-    let c0 = cpu();
-    let t0 = performance.now();
-    a();
-    ta.push(performance.now() - t0);
-    ca += cpu() - c0;
-    c0 = cpu();
-    t0 = performance.now();
-    b();
-    tb.push(performance.now() - t0);
-    cb += cpu() - c0;
+    fs.forEach((f, k) => {
+      const c0 = cpu();
+      const t0 = performance.now();
+      f();
+      wall[k].push(performance.now() - t0);
+      cpuTotal[k] += cpu() - c0;
+    });
   }
-  const figures = (t: number[], c: number) => {
+  return wall.map((t, k) => {
     t.sort((x, y) => x - y);
-    return { median: median(t), p95: t[Math.floor(t.length * 0.95)], cpu: c / n };
-  };
-  return { a: figures(ta, ca), b: figures(tb, cb) };
+    return { median: median(t), p95: t[Math.floor(t.length * 0.95)], cpu: cpuTotal[k] / n };
+  });
 }
 
 const loadAverage = () =>
@@ -132,7 +126,13 @@ function startersTable(): void {
   console.log('targets: full sweep ≤ 1 ms median, grid ≤ 40 ms median');
 }
 
-/** 25 steer rows against 25 heave rows of the double-wishbone starter, on one solver from the solved ride row. */
+/**
+ * 25 steer rows against 25 heave rows of the double-wishbone starter, on one solver from the solved ride row. Each
+ * sweep as sweepSketch runs it after the rank analysis at ride: its own set-up (heave: its row plan; steer: its
+ * input's context and row plan), its first row solved with its rate (heave: the ride row; steer: the centre row),
+ * the march both ways and the rows read (steer: and the lock events). The heave sweep is also timed as this
+ * benchmark first timed it, with the ride row and the row plan given (24 rows solved, not 25).
+ */
 function steerTable(): void {
   const doc = starters['double-wishbone']!.build();
   const sketch = parseSketch(doc);
@@ -144,51 +144,63 @@ function steerTable(): void {
   const { rank } = solver.rankAnalysis();
   ctx.redundancy = Math.max(0, solver.m - rank);
   solver.regularize = rank < solver.n;
-  const rowPlan = rowPlanBuild(model);
+  const givenPlan = rowPlanBuild(model);
   const heavePlan = marchPlan(-60, 60, 5);
-  const heave = () => {
-    const up = march(ctx, ride, 'travel', heavePlan.up).rows;
-    const down = march(ctx, ride, 'travel', heavePlan.down).rows;
-    return [...down.reverse(), ride, ...up].map((r) => heaveRowBuild(rowPlan, r));
+  const heaveFrom = (start: SolvedRow, rowPlan: RowPlan) => {
+    const up = march(ctx, start, 'travel', heavePlan.up).rows;
+    const down = march(ctx, start, 'travel', heavePlan.down).rows;
+    return [...down.reverse(), start, ...up].map((r) => heaveRowBuild(rowPlan, r));
   };
+  const heave = () => heaveFrom(solveStart(ctx, 'travel')!, rowPlanBuild(model));
+  const heaveGiven = () => heaveFrom(ride, givenPlan);
   const linkage = steeringOf(model);
   if (typeof linkage === 'string') throw new Error(linkage);
   const steer = () => steerInputSweep(ctx, linkage, ride.state, 60, 5).rows;
-  // Newton iterations of one run of each (the solver's count, summed over the rows' solves).
+  // Newton iterations and QR factorisations of one run of each (the solver's counts, over the rows' solves).
   let iterations = 0;
+  let solves = 0;
   const solve = solver.solve.bind(solver);
-  solver.solve = (state, chordStepMm) => {
-    const outcome = solve(state, chordStepMm);
+  solver.solve = (...args) => {
+    const outcome = solve(...args);
     iterations += outcome.iterations;
+    solves++;
     return outcome;
   };
   const counted = (f: () => unknown[]) => {
     iterations = 0;
+    solves = 0;
+    const factorisations = solver.factorisations;
     const rows = f().length;
-    return { rows, iterations };
+    return { rows, solves, iterations, factorisations: solver.factorisations - factorisations };
   };
-  const heaveCount = counted(heave);
-  const steerCount = counted(steer);
+  const counts = [counted(heave), counted(heaveGiven), counted(steer)];
   solver.solve = solve;
   const loadBefore = loadAverage();
-  const { a: h, b: st } = timePair(heave, steer, 1000);
+  const [h, hg, st] = timeInTurn([heave, heaveGiven, steer], 1000);
   const loadAfter = loadAverage();
   const { steer: _, ...plainSweep } = sketch.sweep;
   const plainDoc = { ...doc, sweep: plainSweep };
   const full = time(() => runSweep(doc), 200);
   const plain = time(() => runSweep(plainDoc), 200);
   console.log(`Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}`);
-  console.log(`load average ${loadBefore} before, ${loadAfter} after the paired runs (1 / 5 / 15 min)`);
+  console.log(`load average ${loadBefore} before, ${loadAfter} after the runs in turn (1 / 5 / 15 min)`);
   console.log('double-wishbone starter, 1000 runs of each in turn, ms (median / p95 wall; mean CPU):');
-  const it = (c: { rows: number; iterations: number }) => `${c.rows} rows, ${c.iterations} Newton iterations`;
-  const fig = (f: { median: number; p95: number; cpu: number }) =>
-    `${f.median.toFixed(3)} / ${f.p95.toFixed(3)}; CPU ${f.cpu.toFixed(3)}`;
-  console.log(`  heave sweep, ${it(heaveCount)}:  ${fig(h)}`);
-  console.log(`  steer sweep, ${it(steerCount)}:  ${fig(st)}`);
-  const ratio = (k: 'median' | 'p95' | 'cpu') => `${(st[k] / h[k]).toFixed(2)}×`;
-  console.log(
-    `  steer / heave: ${ratio('median')} at the median, ${ratio('p95')} at the p95, ${ratio('cpu')} in CPU time`,
-  );
+  const it = (c: (typeof counts)[number]) =>
+    `${c.rows} rows (${c.solves} solved), ${c.iterations} Newton iterations (${(c.iterations / c.solves).toFixed(2)} ` +
+    `a solve), ${c.factorisations} factorisations`;
+  const fig = (f: PairFigures) => `${f.median.toFixed(3)} / ${f.p95.toFixed(3)}; CPU ${f.cpu.toFixed(3)}`;
+  console.log(`  heave sweep, ${it(counts[0])}:  ${fig(h)}`);
+  console.log(`  heave sweep with the ride row and row plan given, ${it(counts[1])}:  ${fig(hg)}`);
+  console.log(`  steer sweep, ${it(counts[2])}:  ${fig(st)}`);
+  const ratio = (base: PairFigures, k: keyof PairFigures) => `${(st[k] / base[k]).toFixed(2)}×`;
+  for (const [base, name] of [
+    [h, 'heave'],
+    [hg, 'heave with the ride row given'],
+  ] as const)
+    console.log(
+      `  steer / ${name}: ${ratio(base, 'median')} at the median, ${ratio(base, 'p95')} at the p95, ` +
+        `${ratio(base, 'cpu')} in CPU time`,
+    );
   console.log(
     `  full sweep with sweep.steer (steer rows + bump-steer map): ${full.median.toFixed(3)} / ${full.p90.toFixed(3)}`,
   );

@@ -58,9 +58,9 @@ export function bumpSteerMap(
       for (const side of ['left', 'right'] as const)
         if (worst === null || Math.abs(p[side]) > Math.abs(worst)) {
           worst = p[side];
-          worstAt = { ...steerInputField(input, r.at), travel: p.travel, side };
+          worstAt = Object.assign(steerInputField(input, r.at), { travel: p.travel, side });
         }
-    curves.push({ ...steerInputField(input, r.at), points });
+    curves.push(Object.assign(steerInputField(input, r.at), { points }));
   }
   steerInputSet(input, 0);
   return { curves, worst, worstAt };

@@ -1,9 +1,9 @@
 /**
  * Marching the steering input (a rack, or a pitman arm) out from centre, as march.ts marches heave: each row
- * starts from the last solved one plus its sensitivity to the input times the step (a cubic with the row
- * before), then the least-squares solve corrects it, with the body held at ride height. A row that fails is
- * retried in sub-steps; if it still fails the steering has reached a limit (a tie rod and its steering arm in
- * line), found to a fraction of a millimetre (or degree) by bisection.
+ * starts from the last solved one plus its sensitivity to the input times the step (with the row before, a
+ * cubic through both: predict.ts), then the least-squares solve corrects it, with the body held at ride
+ * height. A row that fails is retried in sub-steps; if it still fails the steering has reached a limit (a tie
+ * rod and its steering arm in line), found to a fraction of a millimetre (or degree) by bisection.
  */
 import { driveApply } from '../drive';
 import { BRANCH_JUMP_LIMIT_MM, LOCKUP_BIND_LIMIT_MM, LOCKUP_RESIDUAL_TOLERANCE_MM, RETRY_SUBSTEPS } from '../march';
@@ -12,6 +12,7 @@ import { constraintRows, type PointModel } from '../model';
 import { POSE_ROLL, POSE_SIZE } from '../pose';
 import { BodyRotations, pointPlace, residualsEvaluate, residualWorkCreate, type ResidualWork } from '../residuals';
 import { ROTATION_SCALE_MM } from '../solve';
+import { predictPose } from './predict';
 import { steerInputPoints, steerInputSet, steerInputVelocity, type SteerInput, type SteerLinkage } from './linkage';
 
 /**
@@ -73,16 +74,19 @@ export function inputContextBuild(ctx: MarchContext, linkage: SteerLinkage): Inp
       rows.push({ row, a: c.a, b: c.b, sign: onRack.has(c.a) ? 1 : -1 });
     row += constraintRows(c);
   }
+  // One set of rotation buffers serves the input's rate and the corrected predictor: each fills it before use,
+  // and a sweep allocates its scratch once, so every buffer fewer is time saved on each sweep.
+  const work = residualWorkCreate(ctx.model);
   return {
     ctx,
     linkage,
     input,
     rows,
-    rot: new BodyRotations(ctx.model.bodies.length),
+    rot: work.rot,
     dr: new Float64Array(ctx.model.residualCount),
     place: new Float64Array(6),
     predicted: new Float64Array(ctx.model.stateSize),
-    work: residualWorkCreate(ctx.model),
+    work,
     r: new Float64Array(ctx.model.residualCount),
     correction: new Float64Array(ctx.model.stateSize),
   };
@@ -121,9 +125,9 @@ function scaledDistance(rc: InputContext, a: Float64Array, b: Float64Array): num
 }
 
 /**
- * Solves the row at input `to` from a solved row (cubic predictor with `before`); null if it fails. `correct`:
- * the solver's factorisation is `from`'s (inputStart leaves it so), and the first-order predictor gets one
- * chord step with it (below).
+ * Solves the row at input `to` from a solved row (the cubic predictor of predict.ts with `before`); null if it
+ * fails. `correct`: the solver's factorisation is `from`'s (inputStart leaves it so), and the first-order
+ * predictor gets one chord step with it (below).
  */
 function stepInput(
   rc: InputContext,
@@ -135,25 +139,11 @@ function stepInput(
   const { model, drive, solver, redundancy } = rc.ctx;
   const delta = to - from.at;
   const state = new Float64Array(from.state);
-  const span = before ? from.at - before.at : 0;
-  if (before && span !== 0) {
-    // Cubic Hermite extrapolation through the two rows' poses and rates: steer turns faster and faster
-    // toward lock, and the second-order predictor of march.ts leaves a Newton step more a row than this.
-    const t = (to - before.at) / span;
-    const [h00, h10, h01, h11] = [
-      2 * t ** 3 - 3 * t ** 2 + 1,
-      t ** 3 - 2 * t ** 2 + t,
-      -2 * t ** 3 + 3 * t ** 2,
-      t ** 3 - t ** 2,
-    ];
-    for (const c of drive.free)
-      state[c] = h00 * before.state[c] + h10 * span * before.rate[c] + h01 * from.state[c] + h11 * span * from.rate[c];
-  } else {
-    for (const c of drive.free) state[c] += from.rate[c] * delta;
-  }
+  if (before && from.at !== before.at) predictPose(drive.free, before, from, to, state);
+  else for (const c of drive.free) state[c] += from.rate[c] * delta;
   driveApply(model, state, 0, 0);
   steerInputSet(rc.input, to);
-  if (correct || process.env.CC) chordCorrect(rc, state);
+  if (correct) chordCorrect(rc, state);
   const predicted = rc.predicted;
   predicted.set(state);
   const outcome = solver.solve(state, STEER_CHORD_STEP_MM);

@@ -78,7 +78,7 @@ export function steerInputSweep(
     lockEvent(ctx.model, linkage, travel, left.rows.at(-1) ?? start, left.limit),
     lockEvent(ctx.model, linkage, -travel, right.rows.at(-1) ?? start, right.limit),
   ];
-  const rowPlan = steerRowPlanBuild(ctx.model, linkage);
+  const rowPlan = steerRowPlanBuild(ctx.model, linkage, rc.rot);
   const rows = solved.map((s) => {
     // A row reads the input's points (the tie rods' inner ends, the pitman ball) where the input is at that row.
     steerInputSet(linkage.input, s.at);

@@ -4,7 +4,7 @@
  * rod from the rack end to the steering arm, and a coil-over (a shock with a spring on the same two
  * eyes) from the frame to the lower arm. Geometry is invented and plausible for a mid-size pickup front: a short upper
  * and long lower arm (camber gain in bump), a low roll centre, a little caster and anti-dive,
- * and the tie rod placed on the line the wishbones ask for (next to no bump steer). The rack (700 mm between its
+ * and the tie rod placed on the line the wishbones ask for (next to no bump steer). The rack (720 mm between its
  * tie-rod pivots, 60 mm of travel each way, short of the tie rods' toggle) is a light truck's, and the sweep steers it.
  */
 import { degToRad } from '../../../units';
@@ -15,8 +15,13 @@ import type { StarterParam, StarterSpec } from '../starterTypes';
 /** Fore-aft spacing of each wishbone's two inner pivots (mm). */
 const LOWER_PIVOT_SPACING_MM = 360;
 const UPPER_PIVOT_SPACING_MM = 260;
-/** The steering arm's outer end, inboard of the wheel centre (mm). */
-const TIE_ROD_OUTER_INSET_MM = 125;
+/**
+ * The steering arm's outer end, inboard of the wheel centre (mm). Behind the axle line with the tie rods square to
+ * the car, the arm's inward slant sets the Ackermann: 110 mm gives about 67 % near centre and 92 % at the 60 mm
+ * lock (the inner wheel gains on the outer as its arm swings toward its tie rod's line), typical of a light truck;
+ * 125 mm gave 96 % near centre but 154 % at lock, the inner wheel running far ahead of the outer one.
+ */
+const TIE_ROD_OUTER_INSET_MM = 110;
 /**
  * Coil-over: the bottom eye on the lower arm at this share of the way from the inner pivots to the ball joint
  * (a trade layout puts it at 55–75 %, for a motion ratio of 0.5–0.7), the top on the frame straight above it.
@@ -89,7 +94,7 @@ const params: StarterParam[] = [
   },
   { key: 'tieRodOuterHeight', label: 'Tie rod outer end height', unit: 'mm', default: 300, min: 120, max: 600 },
   { key: 'tieRodInnerHeight', label: 'Tie rod inner end (rack) height', unit: 'mm', default: 317, min: 120, max: 650 },
-  { key: 'rackHalfLength', label: 'Rack end from the centreline', unit: 'mm', default: 350, min: 150, max: 700 },
+  { key: 'rackHalfLength', label: 'Rack end from the centreline', unit: 'mm', default: 360, min: 150, max: 700 },
   { key: 'rackTravel', label: 'Rack travel each way', unit: 'mm', default: 60, min: 10, max: 200 },
   { key: 'springRate', label: 'Coil-over spring rate', unit: 'N/mm', default: 130, min: 5, max: 300 },
 ];
