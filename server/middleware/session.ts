@@ -2,11 +2,12 @@ import session from 'express-session';
 import connectSessionSequelize from 'connect-session-sequelize';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
-import { QueryTypes, type Sequelize } from 'sequelize';
+import type { Sequelize } from 'sequelize';
 import type { Request, RequestHandler } from 'express';
 import type { ServerConfig } from '../config';
 import type { PublicUser, Role } from '../models';
 import { activeAccount, checkCredentials } from '../services/accounts';
+import { flagOf, selectRows } from '../database';
 
 declare module 'express-session' {
   interface SessionData {
@@ -65,24 +66,24 @@ interface SessionAccountRow {
  * the session and then its account (deserializeUser) one after the other; under load each Sequelize model query
  * cost more CPU than the whole health route, and the account is needed on every signed-in request anyway. It is
  * still read afresh on every request, so a disabled account or a new role takes effect at once, as before.
- * Plain SQL that SQLite and PostgreSQL both read (identifiers with capitals quoted); the date is escaped by
- * Sequelize for the dialect, as a where clause on the model would be.
+ * Plain SQL that SQLite and PostgreSQL both read, run by the database module's selectRows (see there why).
  */
 async function sessionWithAccount(
   sequelize: Sequelize,
   sid: string,
 ): Promise<{ data: string; account: SessionAccount | null } | null> {
-  const [row] = await sequelize.query<SessionAccountRow>(
+  const [row] = await selectRows<SessionAccountRow>(
+    sequelize,
     'SELECT s.data AS data, u.id AS "accountId", u.email AS email, u.name AS name, u.role AS role, ' +
       'u.disabled AS disabled FROM sessions s LEFT JOIN users u ON u.id = s."userId" ' +
       'WHERE s.sid = :sid AND s.expires > :now',
-    { replacements: { sid, now: new Date() }, type: QueryTypes.SELECT },
+    { sid, now: new Date() },
   );
   if (!row?.data) return null;
   const account =
     row.accountId === null
       ? null
-      : { id: row.accountId, email: row.email!, name: row.name!, role: row.role!, disabled: Boolean(row.disabled) };
+      : { id: row.accountId, email: row.email!, name: row.name!, role: row.role!, disabled: flagOf(row.disabled) };
   return { data: row.data, account };
 }
 

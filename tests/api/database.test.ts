@@ -3,6 +3,7 @@ import { ForeignKeyConstraintError, QueryTypes, Transaction } from 'sequelize';
 import { startTestServer, type TestServer } from './helpers';
 import { testDialect } from './test-database';
 import { BUSY_TIMEOUT_MS } from '../../server/database/sqlite';
+import { dateOf, flagOf, selectRows } from '../../server/database';
 import { ClassMember, User } from '../../server/models';
 import { seedDemoData } from '../../server/seed';
 
@@ -92,6 +93,42 @@ describe('reads and writes', () => {
     // The demo seed's test below counts the accounts.
     await user.destroy();
     expect(await User.findByPk(user.id)).toBeNull();
+  });
+});
+
+describe('selectRows (the hot reads)', () => {
+  it('binds a date so that it compares with the dates Sequelize stored, and reads them back to the millisecond', async () => {
+    const user = await User.create({ email: 'select-rows@example.test', name: 'Plain Read', passwordHash: 'x' });
+    const stored = user.createdAt.getTime();
+    const within = (from: number, to: number) =>
+      selectRows<{ id: number; createdAt: string | Date; disabled: boolean | number }>(
+        server.sequelize,
+        'SELECT id, "createdAt", disabled FROM users WHERE id = :id AND "createdAt" >= :from AND "createdAt" <= :to',
+        { id: user.id, from: new Date(from), to: new Date(to) },
+      );
+    // A bound date one millisecond either side of the stored one must fall on the right side of it: with the date
+    // written in another form than Sequelize's, the comparison (text on SQLite) would go wrong.
+    const [row] = await within(stored, stored);
+    expect(row.id).toBe(user.id);
+    expect(dateOf(row.createdAt).getTime()).toBe(stored);
+    expect(flagOf(row.disabled)).toBe(false);
+    expect(await within(stored + 1, stored + 60_000)).toEqual([]);
+    expect(await within(stored - 60_000, stored - 1)).toEqual([]);
+    await user.destroy();
+  });
+
+  it('sees a write committed just before it', async () => {
+    const user = await User.create({ email: 'select-rows-fresh@example.test', name: 'Before', passwordHash: 'x' });
+    for (let i = 0; i < 10; i++) {
+      await User.update({ name: `Name ${i}`, disabled: i % 2 === 1 }, { where: { id: user.id } });
+      const [row] = await selectRows<{ name: string; disabled: boolean | number }>(
+        server.sequelize,
+        'SELECT name, disabled FROM users WHERE id = :id',
+        { id: user.id },
+      );
+      expect({ name: row.name, disabled: flagOf(row.disabled) }).toEqual({ name: `Name ${i}`, disabled: i % 2 === 1 });
+    }
+    await user.destroy();
   });
 });
 
