@@ -1,12 +1,13 @@
 import type { Sequelize, WhereOptions } from 'sequelize';
 import type { RateLimiterStoreAbstract } from 'rate-limiter-flexible';
 import type { RateCounterOptions } from './rate-counters';
-import type { DatabaseDialect, DatabaseLocation, SqlValue } from './dialect';
+import type { DatabaseDialect, DatabaseLocation } from './dialect';
 import { postgresDialect } from './postgres';
 import { sqliteDialect } from './sqlite';
 
 export type { DatabaseDialect, DatabaseLocation, SqlValue } from './dialect';
 export { clearEndedRateCounts, type RateCounterOptions } from './rate-counters';
+export { ownLiveSketch, sessionWithAccount, type LiveSketchRecord, type SessionAccountRecord } from './hot-reads';
 
 /** The dialect for a location: PostgreSQL when it has a URL, else the SQLite file. */
 export function dialectFor(location: DatabaseLocation): DatabaseDialect {
@@ -41,25 +42,6 @@ export function withoutForeignKeyChecks<T>(sequelize: Sequelize, work: () => Pro
 /** See DatabaseDialect.rateCounter. */
 export function databaseRateCounter(sequelize: Sequelize, options: RateCounterOptions): RateLimiterStoreAbstract {
   return dialectOf(sequelize).rateCounter(sequelize, options);
-}
-
-/** See DatabaseDialect.selectRows. */
-export function selectRows<T extends object>(
-  sequelize: Sequelize,
-  sql: string,
-  params: Record<string, SqlValue>,
-): Promise<T[]> {
-  return dialectOf(sequelize).selectRows<T>(sequelize, sql, params);
-}
-
-/** A date column of a `selectRows` row: SQLite gives the text Sequelize wrote, PostgreSQL a Date. */
-export function dateOf(value: string | Date): Date {
-  return value instanceof Date ? value : new Date(value);
-}
-
-/** A boolean column of a `selectRows` row: SQLite gives 0 or 1, PostgreSQL a boolean. */
-export function flagOf(value: boolean | number | null): boolean {
-  return Boolean(value);
 }
 
 /** Where a location is, for logs: the SQLite file, or the PostgreSQL URL without its password. */

@@ -1,6 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import { Op, fn, col, type Transaction, type WhereOptions } from 'sequelize';
-import { caseInsensitiveContains, dateOf, selectRows } from '../database';
+import { caseInsensitiveContains, ownLiveSketch } from '../database';
 import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/sketch';
 import { downloadBaseName } from '../../shared/downloadName';
 import { ShareRecipient, Shop, Sketch, SketchRevision, User, type PublicUser } from '../models';
@@ -25,7 +25,7 @@ const SHARE_TOKEN_BYTES = 24;
 
 const withOwner = { model: User, as: 'owner', attributes: ['id', 'name'] };
 
-/** What a sketch's summary and detail show: a Sketch, or a row read by readOwnSketch. */
+/** What a sketch's summary and detail show: a Sketch, or the row readOwnSketch reads. */
 interface SketchFields {
   id: number;
   ownerId: number;
@@ -180,26 +180,14 @@ export async function getSketch(user: PublicUser, id: number): Promise<SketchDet
 }
 
 /** getSketch as the JSON text of its answer (GET /api/sketches/:id). */
-/** A sketches row as selectRows reads it (dates as the database driver gives them). */
-interface SketchRow extends Omit<SketchFields, 'deletedAt' | 'createdAt' | 'updatedAt' | 'owner'> {
-  deletedAt: null;
-  createdAt: string | Date;
-  updatedAt: string | Date;
-}
-
 /**
- * The caller's own live sketch, as ownSketch reads it, in one plain statement: every signed-in open of a sketch
- * comes here, and building a model instance cost more CPU than the whole health route. Read afresh every time.
+ * The caller's own live sketch, as ownSketch reads it, in one plain statement (ownLiveSketch): every signed-in open
+ * of a sketch comes here, and building a model instance cost more CPU than the whole health route.
  */
 async function readOwnSketch(user: PublicUser, id: number): Promise<SketchFields> {
-  const [row] = await selectRows<SketchRow>(
-    Sketch.sequelize!,
-    'SELECT id, "ownerId", name, layout, document, version, share, "shareToken", "deletedAt", "createdAt", ' +
-      '"updatedAt" FROM sketches WHERE id = :id AND "ownerId" = :ownerId AND "deletedAt" IS NULL',
-    { id, ownerId: user.id },
-  );
+  const row = await ownLiveSketch(Sketch.sequelize!, id, user.id);
   if (!row) throw notFound('no such sketch');
-  return { ...row, createdAt: dateOf(row.createdAt), updatedAt: dateOf(row.updatedAt) };
+  return row;
 }
 
 export async function getSketchJson(user: PublicUser, id: number): Promise<string> {
