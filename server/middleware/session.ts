@@ -69,10 +69,10 @@ export function sessionMiddleware(sequelize: Sequelize, config: ServerConfig): R
   const sweepable = store as unknown as { clearExpiredSessions(): Promise<unknown> };
   setInterval(() => void sweepable.clearExpiredSessions(), SESSION_SWEEP_MS).unref();
   // The store reads a row without looking at its expiry; an idle session must not come back.
-  // The row comes with its account, read in the same statement (see sessionWithAccount).
+  // The row comes with its account, read in the same statement (sessionWithAccount): a signed-in request used to
+  // read the session and then its account (deserializeUser) one after the other, and every signed-in request needs
+  // the account anyway. Both are read afresh on every request, so a disabled account or a new role counts at once.
   store.get = (sid: string, cb: (err: unknown, s?: session.SessionData | null) => void) => {
-    // The session and its account in one statement: a signed-in request used to read the session and then its
-    // account (deserializeUser) one after the other, and the account is needed on every signed-in request anyway.
     sessionWithAccount(sequelize, sid, new Date()).then((found) => {
       if (!found) return cb(null, null);
       const data = JSON.parse(found.data) as session.SessionData & { [ACCOUNT]?: SessionAccount | null };

@@ -179,7 +179,6 @@ export async function getSketch(user: PublicUser, id: number): Promise<SketchDet
   return detailOf(await ownSketch(user, id), user);
 }
 
-/** getSketch as the JSON text of its answer (GET /api/sketches/:id). */
 /**
  * The caller's own live sketch, as ownSketch reads it, in one plain statement (ownLiveSketch): every signed-in open
  * of a sketch comes here, and building a model instance cost more CPU than the whole health route.
@@ -190,6 +189,7 @@ async function readOwnSketch(user: PublicUser, id: number): Promise<SketchFields
   return row;
 }
 
+/** getSketch as the JSON text of its answer (GET /api/sketches/:id). */
 export async function getSketchJson(user: PublicUser, id: number): Promise<string> {
   return detailJsonOf(await readOwnSketch(user, id), user);
 }
