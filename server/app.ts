@@ -20,6 +20,7 @@ import { classRoutes } from './routes/classes';
 import { inviteRoutes } from './routes/invites';
 import { assignmentRoutes } from './routes/assignments';
 import { JSON_BODY_MAX_BYTES } from '../shared/schema/requestLimits';
+import { RequestGate } from './shutdown';
 
 /**
  * Answers smaller than this go uncompressed. An answer of a few KB (a sketch, a page of the library) reaches the
@@ -34,6 +35,8 @@ export interface AppContext {
   sequelize: Sequelize;
   config: ServerConfig;
   mailer: Mailer;
+  /** Counts the requests in flight and refuses new ones once a shutdown begins (server/shutdown.ts). */
+  gate?: RequestGate;
 }
 
 /** Builds the Express app (no listening; tests drive it with supertest). */
@@ -43,6 +46,8 @@ export function createApp(ctx: AppContext): Express {
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
   app.set('query parser', 'simple');
+  // First of all: a request that arrives while the server shuts down gets its 503 before it touches anything.
+  app.use((ctx.gate ?? new RequestGate()).admit);
 
   app.use(securityHeaders({ https: config.cookieSecure }));
   app.use(compression({ threshold: COMPRESS_FROM_BYTES }));

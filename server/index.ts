@@ -6,6 +6,7 @@ import { startHousekeeping } from './services/housekeeping';
 import { importFolderUploads } from './services/upload-store';
 import { createApp } from './app';
 import { listenOn } from './listen';
+import { RequestGate, SHUTDOWN_GRACE_MS, shutDown } from './shutdown';
 
 /** Opens the database, migrates, seeds, starts the mail catcher (unless SMTP_URL), and listens on PORT (0: any free port). */
 async function main(): Promise<void> {
@@ -25,7 +26,8 @@ async function main(): Promise<void> {
   if (moved) console.log(`[arcwright] ${moved} uploaded files moved from ${config.uploadsDir} into the database`);
   const stopHousekeeping = startHousekeeping((message, err) => console.error(message, err));
 
-  const app = createApp({ sequelize, config, mailer: mail.mailer });
+  const gate = new RequestGate();
+  const app = createApp({ sequelize, config, mailer: mail.mailer, gate });
   const server = await listenOn(app, config);
   console.log(
     `[arcwright] listening on http://localhost:${config.port}, links to ${config.publicUrl} (database ${describeLocation(config)})`,
@@ -35,15 +37,21 @@ async function main(): Promise<void> {
   const shutdown = (signal: string) => {
     if (closing) return;
     closing = true;
-    console.log(`[arcwright] ${signal}: closing`);
-    setTimeout(() => process.exit(0), 5000).unref();
-    stopHousekeeping();
-    server.close(() => {
-      void mail
-        .close()
-        .then(() => sequelize.close())
-        .finally(() => process.exit(0));
-    });
+    console.log(`[arcwright] ${signal}: closing (waiting for ${gate.inFlight} requests in flight)`);
+    // Should a step hang, the process ends anyway a little after the grace period.
+    setTimeout(() => process.exit(0), SHUTDOWN_GRACE_MS + 5000).unref();
+    shutDown({
+      server,
+      gate,
+      stopTimers: stopHousekeeping,
+      closeMail: () => mail.close(),
+      closeDatabase: () => sequelize.close(),
+    })
+      .then((drained) => {
+        if (!drained) console.warn('[arcwright] some requests were still running at the end of the grace period');
+      })
+      .catch((err: unknown) => console.error('[arcwright] shutdown failed:', err))
+      .finally(() => process.exit(0));
   };
   process.on('SIGINT', () => shutdown('SIGINT'));
   process.on('SIGTERM', () => shutdown('SIGTERM'));

@@ -5,8 +5,9 @@ import type { DatabaseDialect, DatabaseLocation } from './dialect';
 import { postgresDialect } from './postgres';
 import { sqliteDialect } from './sqlite';
 
-export type { DatabaseDialect, DatabaseLocation } from './dialect';
+export type { DatabaseDialect, DatabaseLocation, SqlValue } from './dialect';
 export { clearEndedRateCounts, type RateCounterOptions } from './rate-counters';
+export { ownLiveSketch, sessionWithAccount, type LiveSketchRecord, type SessionAccountRecord } from './hot-reads';
 
 /** The dialect for a location: PostgreSQL when it has a URL, else the SQLite file. */
 export function dialectFor(location: DatabaseLocation): DatabaseDialect {
@@ -31,6 +32,11 @@ export function caseInsensitiveContains(sequelize: Sequelize, column: string, te
 /** See DatabaseDialect.withExclusiveLock. */
 export function withExclusiveLock<T>(sequelize: Sequelize, name: string, work: () => Promise<T>): Promise<T> {
   return dialectOf(sequelize).withExclusiveLock(sequelize, name, work);
+}
+
+/** See DatabaseDialect.withoutForeignKeyChecks. */
+export function withoutForeignKeyChecks<T>(sequelize: Sequelize, work: () => Promise<T>): Promise<T> {
+  return dialectOf(sequelize).withoutForeignKeyChecks(sequelize, work);
 }
 
 /** See DatabaseDialect.rateCounter. */

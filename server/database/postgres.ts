@@ -1,9 +1,9 @@
 import { spawn } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { Op, Sequelize, col, fn, where, type WhereOptions } from 'sequelize';
+import { Op, QueryTypes, Sequelize, col, fn, where, type WhereOptions } from 'sequelize';
 import { RateLimiterPostgres, type RateLimiterStoreAbstract } from 'rate-limiter-flexible';
 import { initModels } from '../models';
-import type { DatabaseDialect, DatabaseLocation } from './dialect';
+import type { DatabaseDialect, DatabaseLocation, SqlValue } from './dialect';
 import { rateCounterOptions, type RateCounterOptions } from './rate-counters';
 
 /** Connections one instance keeps to PostgreSQL at most; several instances share the server's max_connections. */
@@ -43,6 +43,11 @@ async function withExclusiveLock<T>(sequelize: Sequelize, name: string, work: ()
     });
     return work();
   });
+}
+
+/** PostgreSQL alters a table in place: nothing to switch off. */
+function withoutForeignKeyChecks<T>(_sequelize: Sequelize, work: () => Promise<T>): Promise<T> {
+  return work();
 }
 
 /** The connection settings of `url` as libpq's environment variables, so that no password shows on a command line. */
@@ -104,12 +109,23 @@ function rateCounter(sequelize: Sequelize, options: RateCounterOptions): RateLim
   return new RateLimiterPostgres({ ...rateCounterOptions(options), storeClient: sequelize, storeType: 'sequelize' });
 }
 
+/** Sequelize's plain query: on PostgreSQL it builds no model and looks at the stack only when a query fails. */
+function selectRows<T extends object>(
+  sequelize: Sequelize,
+  sql: string,
+  params: Record<string, SqlValue>,
+): Promise<T[]> {
+  return sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
+}
+
 export const postgresDialect: DatabaseDialect = {
   name: 'postgres',
   open,
   caseInsensitiveContains,
   withExclusiveLock,
+  withoutForeignKeyChecks,
   backup,
   restore,
   rateCounter,
+  selectRows,
 };

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { HttpError } from './http-error';
+import { SHUTTING_DOWN_ERROR, shuttingDown } from '../shutdown';
 import { zodProblems } from './validate';
 import { JSON_BODY_MAX_BYTES, UPLOAD_MAX_BYTES, byteSizeText } from '../../shared/schema/requestLimits';
 
@@ -44,6 +45,13 @@ function describe(err: unknown): { status: number; error: string; details?: unkn
 /** The one error handler: answers `{ error, details? }`, never a stack trace; logs server faults. */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const { status, error, details } = describe(err);
+  // A request still running when the shutdown closed the database (past the grace period) failed for that reason:
+  // the caller is told to retry, and the log says so in one line.
+  if (status >= 500 && shuttingDown(res)) {
+    console.warn(`[arcwright] ${req.method} ${req.originalUrl} cut short by the shutdown: ${String(err)}`);
+    if (!res.headersSent) res.status(503).set('Connection', 'close').json({ error: SHUTTING_DOWN_ERROR });
+    return;
+  }
   if (status >= 500) console.error(`[arcwright] ${req.method} ${req.originalUrl} failed:`, err);
   if (res.headersSent) return;
   res.status(status).json(details === undefined ? { error } : { error, details });

@@ -2,11 +2,12 @@ import session from 'express-session';
 import connectSessionSequelize from 'connect-session-sequelize';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
-import { QueryTypes, type Sequelize } from 'sequelize';
+import type { Sequelize } from 'sequelize';
 import type { Request, RequestHandler } from 'express';
 import type { ServerConfig } from '../config';
-import type { PublicUser, Role } from '../models';
+import type { PublicUser } from '../models';
 import { activeAccount, checkCredentials } from '../services/accounts';
+import { sessionWithAccount, type SessionAccountRecord } from '../database';
 
 declare module 'express-session' {
   interface SessionData {
@@ -41,50 +42,13 @@ const TOUCH_MEMORY = 10_000;
 
 const SequelizeStore = connectSessionSequelize(session.Store);
 
-/** The account of a session row, as read with it. */
-interface SessionAccount extends PublicUser {
-  disabled: boolean;
-}
+/** The account of a session row, as read with it (sessionWithAccount). */
+type SessionAccount = SessionAccountRecord;
 
 /** Where store.get leaves a session's account on the data it hands to express-session. */
 const ACCOUNT = Symbol('account read with the session');
 /** The account read with the request's session, for deserializeUser; gone with the request. */
 const accountReadWithSession = new WeakMap<Request, SessionAccount | null>();
-
-interface SessionAccountRow {
-  data: string | null;
-  accountId: number | null;
-  email: string | null;
-  name: string | null;
-  role: Role | null;
-  disabled: boolean | number | null;
-}
-
-/**
- * A live (unexpired) session row and the account it belongs to, in one statement. A signed-in request used to read
- * the session and then its account (deserializeUser) one after the other; under load each Sequelize model query
- * cost more CPU than the whole health route, and the account is needed on every signed-in request anyway. It is
- * still read afresh on every request, so a disabled account or a new role takes effect at once, as before.
- * Plain SQL that SQLite and PostgreSQL both read (identifiers with capitals quoted); the date is escaped by
- * Sequelize for the dialect, as a where clause on the model would be.
- */
-async function sessionWithAccount(
-  sequelize: Sequelize,
-  sid: string,
-): Promise<{ data: string; account: SessionAccount | null } | null> {
-  const [row] = await sequelize.query<SessionAccountRow>(
-    'SELECT s.data AS data, u.id AS "accountId", u.email AS email, u.name AS name, u.role AS role, ' +
-      'u.disabled AS disabled FROM sessions s LEFT JOIN users u ON u.id = s."userId" ' +
-      'WHERE s.sid = :sid AND s.expires > :now',
-    { replacements: { sid, now: new Date() }, type: QueryTypes.SELECT },
-  );
-  if (!row?.data) return null;
-  const account =
-    row.accountId === null
-      ? null
-      : { id: row.accountId, email: row.email!, name: row.name!, role: row.role!, disabled: Boolean(row.disabled) };
-  return { data: row.data, account };
-}
 
 /** express-session stored in the `sessions` table, with the user id copied into its own column. */
 export function sessionMiddleware(sequelize: Sequelize, config: ServerConfig): RequestHandler {
@@ -105,9 +69,11 @@ export function sessionMiddleware(sequelize: Sequelize, config: ServerConfig): R
   const sweepable = store as unknown as { clearExpiredSessions(): Promise<unknown> };
   setInterval(() => void sweepable.clearExpiredSessions(), SESSION_SWEEP_MS).unref();
   // The store reads a row without looking at its expiry; an idle session must not come back.
-  // The row comes with its account, read in the same statement (see sessionWithAccount).
+  // The row comes with its account, read in the same statement (sessionWithAccount): a signed-in request used to
+  // read the session and then its account (deserializeUser) one after the other, and every signed-in request needs
+  // the account anyway. Both are read afresh on every request, so a disabled account or a new role counts at once.
   store.get = (sid: string, cb: (err: unknown, s?: session.SessionData | null) => void) => {
-    sessionWithAccount(sequelize, sid).then((found) => {
+    sessionWithAccount(sequelize, sid, new Date()).then((found) => {
       if (!found) return cb(null, null);
       const data = JSON.parse(found.data) as session.SessionData & { [ACCOUNT]?: SessionAccount | null };
       // A symbol key: express-session copies, hashes and saves only the string keys of the data.

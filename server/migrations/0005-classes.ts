@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { DataTypes, QueryTypes } from 'sequelize';
 import type { Migration } from './umzug';
+import { withoutForeignKeyChecks } from '../database';
 
 const timestamps = {
   createdAt: { type: DataTypes.DATE, allowNull: false },
@@ -113,13 +114,8 @@ export const down: Migration = async ({ context: qi }) => {
   }
   await qi.removeIndex('classes', ['instructorId']);
   await qi.removeIndex('classes', 'classes_join_code');
-  // SQLite drops a column by copying the table; with foreign keys on, dropping the old copy would empty
-  // class_members (ON DELETE CASCADE). The check is off for the copy only.
-  const sqlite = qi.sequelize.getDialect() === 'sqlite';
-  if (sqlite) await qi.sequelize.query('PRAGMA foreign_keys = OFF');
-  try {
+  // Dropping a column may copy the table (SQLite), which with foreign keys on would empty class_members.
+  await withoutForeignKeyChecks(qi.sequelize, async () => {
     for (const column of ['deletedAt', 'closedAt', 'joinCode']) await qi.removeColumn('classes', column);
-  } finally {
-    if (sqlite) await qi.sequelize.query('PRAGMA foreign_keys = ON');
-  }
+  });
 };

@@ -1,12 +1,12 @@
 import { randomBytes } from 'node:crypto';
 import { Op, fn, col, type Transaction, type WhereOptions } from 'sequelize';
-import { caseInsensitiveContains } from '../database';
+import { caseInsensitiveContains, ownLiveSketch } from '../database';
 import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/sketch';
 import { downloadBaseName } from '../../shared/downloadName';
 import { ShareRecipient, Shop, Sketch, SketchRevision, User, type PublicUser } from '../models';
 import type { SheetSource } from './buildSheetPdf/document';
 import { badRequest, conflict, notFound } from '../middleware/http-error';
-import type { ListQuery, ShareBody } from '../../shared/schema/sketchRequests';
+import type { ListQuery, ShareBody, ShareMode } from '../../shared/schema/sketchRequests';
 import type {
   Page,
   RevisionDetail,
@@ -25,7 +25,23 @@ const SHARE_TOKEN_BYTES = 24;
 
 const withOwner = { model: User, as: 'owner', attributes: ['id', 'name'] };
 
-function summaryOf(row: Sketch, viewer: PublicUser | null): SketchSummary {
+/** What a sketch's summary and detail show: a Sketch, or the row readOwnSketch reads. */
+interface SketchFields {
+  id: number;
+  ownerId: number;
+  name: string;
+  layout: string;
+  document: string;
+  version: number;
+  share: ShareMode;
+  shareToken: string | null;
+  deletedAt: Date | null;
+  createdAt: Date;
+  updatedAt: Date;
+  owner?: { name: string };
+}
+
+function summaryOf(row: SketchFields, viewer: PublicUser | null): SketchSummary {
   return {
     id: row.id,
     name: row.name,
@@ -42,7 +58,7 @@ function summaryOf(row: Sketch, viewer: PublicUser | null): SketchSummary {
 }
 
 /** A sketch's detail without its document. */
-function detailFieldsOf(row: Sketch, viewer: PublicUser | null): Omit<SketchDetail, 'document'> {
+function detailFieldsOf(row: SketchFields, viewer: PublicUser | null): Omit<SketchDetail, 'document'> {
   const summary = summaryOf(row, viewer);
   return { ...summary, canEdit: summary.mine && !row.deletedAt, shareToken: summary.mine ? row.shareToken : null };
 }
@@ -56,7 +72,7 @@ function detailOf(row: Sketch, viewer: PublicUser | null): SketchDetail {
  * to write it out again was the largest single cost of reading a sketch. The stored text is always the server's
  * own JSON.stringify of a checked document (every write goes through validDocument or copies a stored revision).
  */
-function detailJsonOf(row: Sketch, viewer: PublicUser | null): string {
+function detailJsonOf(row: SketchFields, viewer: PublicUser | null): string {
   const fields = JSON.stringify(detailFieldsOf(row, viewer));
   return `${fields.slice(0, -1)},"document":${row.document}}`;
 }
@@ -163,9 +179,19 @@ export async function getSketch(user: PublicUser, id: number): Promise<SketchDet
   return detailOf(await ownSketch(user, id), user);
 }
 
+/**
+ * The caller's own live sketch, as ownSketch reads it, in one plain statement (ownLiveSketch): every signed-in open
+ * of a sketch comes here, and building a model instance cost more CPU than the whole health route.
+ */
+async function readOwnSketch(user: PublicUser, id: number): Promise<SketchFields> {
+  const row = await ownLiveSketch(Sketch.sequelize!, id, user.id);
+  if (!row) throw notFound('no such sketch');
+  return row;
+}
+
 /** getSketch as the JSON text of its answer (GET /api/sketches/:id). */
 export async function getSketchJson(user: PublicUser, id: number): Promise<string> {
-  return detailJsonOf(await ownSketch(user, id), user);
+  return detailJsonOf(await readOwnSketch(user, id), user);
 }
 
 export function createSketch(user: PublicUser, doc: SketchDocument): Promise<SketchDetail> {

@@ -3,7 +3,8 @@ import { ForeignKeyConstraintError, QueryTypes, Transaction } from 'sequelize';
 import { startTestServer, type TestServer } from './helpers';
 import { testDialect } from './test-database';
 import { BUSY_TIMEOUT_MS } from '../../server/database/sqlite';
-import { ClassMember, User } from '../../server/models';
+import { dialectOf, ownLiveSketch } from '../../server/database';
+import { ClassMember, Sketch, User } from '../../server/models';
 import { seedDemoData } from '../../server/seed';
 
 let server: TestServer;
@@ -92,6 +93,51 @@ describe('reads and writes', () => {
     // The demo seed's test below counts the accounts.
     await user.destroy();
     expect(await User.findByPk(user.id)).toBeNull();
+  });
+});
+
+describe('the hot reads', () => {
+  const asDate = (value: string | Date) => (value instanceof Date ? value : new Date(value));
+
+  it('bind a date so that it compares with the dates Sequelize stored, and read them back to the millisecond', async () => {
+    const user = await User.create({ email: 'select-rows@example.test', name: 'Plain Read', passwordHash: 'x' });
+    const stored = user.createdAt.getTime();
+    const within = (from: number, to: number) =>
+      dialectOf(server.sequelize).selectRows<{ id: number; createdAt: string | Date }>(
+        server.sequelize,
+        'SELECT id, "createdAt" FROM users WHERE id = :id AND "createdAt" >= :from AND "createdAt" <= :to',
+        { id: user.id, from: new Date(from), to: new Date(to) },
+      );
+    // A bound date one millisecond either side of the stored one must fall on the right side of it: with the date
+    // written in another form than Sequelize's, the comparison (text on SQLite) would go wrong.
+    const [row] = await within(stored, stored);
+    expect(row.id).toBe(user.id);
+    expect(asDate(row.createdAt).getTime()).toBe(stored);
+    expect(await within(stored + 1, stored + 60_000)).toEqual([]);
+    expect(await within(stored - 60_000, stored - 1)).toEqual([]);
+    await user.destroy();
+  });
+
+  it("read one's own live sketch as the model does, a save at once, and nothing for a deleted or foreign one", async () => {
+    const owner = await User.create({ email: 'hot-sketch@example.test', name: 'Hot Owner', passwordHash: 'x' });
+    const other = await User.create({ email: 'hot-other@example.test', name: 'Hot Other', passwordHash: 'x' });
+    const sketch = await Sketch.create({ ownerId: owner.id, name: 'Hot', layout: 'four-link', document: '{"a":1}' });
+    const fields = (s: Sketch) => {
+      const { id, ownerId, name, layout, document, version, share, shareToken, deletedAt, createdAt, updatedAt } =
+        s.get({ plain: true });
+      return { id, ownerId, name, layout, document, version, share, shareToken, deletedAt, createdAt, updatedAt };
+    };
+    for (let version = 2; version <= 4; version++) {
+      await sketch.update({ version, name: `Hot v${version}`, document: `{"v":${version}}` });
+      await sketch.reload();
+      expect(await ownLiveSketch(server.sequelize, sketch.id, owner.id)).toEqual(fields(sketch));
+    }
+    expect(await ownLiveSketch(server.sequelize, sketch.id, other.id)).toBeNull();
+    await sketch.update({ deletedAt: new Date() });
+    expect(await ownLiveSketch(server.sequelize, sketch.id, owner.id)).toBeNull();
+    await sketch.destroy();
+    await owner.destroy();
+    await other.destroy();
   });
 });
 
