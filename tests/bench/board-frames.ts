@@ -19,8 +19,11 @@
  * `--without-sweep` answers the sweep worker's script with one that never replies, so the drag
  * measures the canvas and tables alone (a diagnostic: where the frame time goes).
  * `--profile` records the page's main thread during the drag with Chromium's sampling profiler
- * and prints where the time went, by function (a diagnostic: the profiler slows the page, so
- * its frame figures are not the benchmark's).
+ * and prints where the time went, by function, self and total (a diagnostic: the profiler slows the page, so
+ * its frame figures are not the benchmark's); the profile is written to tests/e2e/artifacts/bench-board.cpuprofile.
+ * `--trace` records a trace of the main thread during the drag (DevTools timeline events) and prints its
+ * busy time and CPU time from one pointer move to the next and where that went by event (script, style,
+ * layout, paint, commit); tracing costs the page a little, so its frame figures are not the benchmark's either.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync, existsSync, rmSync } from 'node:fs';
@@ -30,6 +33,7 @@ import { join, resolve } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { chromium, type BrowserContext, type Page } from '@playwright/test';
 import { starters } from '../../shared/kinematics';
+import { busyPerMove, startMainThreadTrace, type MainThreadSummary } from './main-thread-trace';
 
 const ROOT = resolve(import.meta.dirname, '../..');
 const DIST = join(ROOT, 'dist');
@@ -61,6 +65,8 @@ const DRAG = STEERED
   ? { layout: 'double-wishbone', name: 'double-wishbone', pivot: 'UW.f.l', readout: 'rc', plot: 'camber' }
   : { layout: 'four-link-lateral-rod', name: 'four-link', pivot: 'UL.fl', readout: 'antisquat', plot: 'pinion' };
 const DRAG_PIVOT = DRAG.pivot;
+/** Records a trace of the main thread during the drag and prints where its time went, by event. */
+const TRACE = process.argv.includes('--trace');
 
 function arg(name: string): string | undefined {
   const i = process.argv.indexOf(name);
@@ -127,10 +133,14 @@ async function openBoard(page: Page, base: string, id: number): Promise<void> {
 }
 
 interface FrameFigures {
-  /** ms of main-thread work between one pointer move and the next, sorted */
-  busy: number[];
-  /** ms of it running script, sorted */
-  script: number[];
+  /** pointer moves sent, and the drag's wall time (ms) */
+  moves: number;
+  dragMs: number;
+  /** the renderer's main-thread task and script time over the whole drag (ms; Chromium's cumulative metrics) */
+  taskMs: number;
+  scriptMs: number;
+  /** the trace of the main thread during the drag (with `--trace`) */
+  trace: MainThreadSummary | null;
   frames: number;
   p50: number;
   p95: number;
@@ -175,7 +185,8 @@ async function measureDrag(page: Page): Promise<FrameFigures> {
   const readout = page.locator(`[data-test="readout-${DRAG.readout}"]`);
   const readoutBefore = (await readout.count()) ? await readout.innerText() : '';
 
-  // The renderer's cumulative main-thread task and script time (s), read after every pointer move.
+  // The renderer's cumulative main-thread task and script time (ms), read before and after the drag: read after
+  // every move, the reads themselves would pace the moves (each is a round trip through the renderer).
   const cdp = await page.context().newCDPSession(page);
   await cdp.send('Performance.enable');
   const mainThread = async () => {
@@ -183,32 +194,34 @@ async function measureDrag(page: Page): Promise<FrameFigures> {
     const get = (name: string) => metrics.find((m) => m.name === name)?.value ?? Number.NaN;
     return { task: get('TaskDuration') * 1000, script: get('ScriptDuration') * 1000 };
   };
-  const busy: number[] = [];
-  const script: number[] = [];
+  const trace = TRACE ? await startMainThreadTrace(cdp) : null;
 
   await page.mouse.move(start.x, start.y);
   await page.mouse.down();
   await sampleFrames(page, 0);
-  let last = await mainThread();
+  const before = await mainThread();
+  const t0 = performance.now();
   for (let i = 1; i <= DRAG_STEPS; i++) {
     const t = (i / DRAG_STEPS) * Math.PI * 2;
     // A loop forward and up and back: the instant centre and every curve change all the way.
     await page.mouse.move(start.x - 70 * Math.sin(t), start.y - 45 * (1 - Math.cos(t / 2)));
     await page.waitForTimeout(DRAG_STEP_MS);
-    const now = await mainThread();
-    busy.push(now.task - last.task);
-    script.push(now.script - last.script);
-    last = now;
   }
+  const dragMs = performance.now() - t0;
+  const after = await mainThread();
   const gaps = (await stopSampling(page)).sort((a, b) => a - b);
+  const traced = trace ? await trace.stop() : null;
   await cdp.detach();
   await page.mouse.up();
   await page.waitForTimeout(600);
   const end = await page.evaluate((pivot) => window.arcwrightBoard!.side!.pivotAt(pivot), DRAG_PIVOT);
   const readoutAfter = (await readout.count()) ? await readout.innerText() : '';
   return {
-    busy: busy.sort((a, b) => a - b),
-    script: script.sort((a, b) => a - b),
+    moves: DRAG_STEPS,
+    dragMs,
+    taskMs: after.task - before.task,
+    scriptMs: after.script - before.script,
+    trace: traced,
     frames: gaps.length,
     p50: percentile(gaps, 50),
     p95: percentile(gaps, 95),
@@ -251,9 +264,13 @@ function bundleFigures(urls: Set<string>): BundleFigures {
 interface ProfileNode {
   id: number;
   callFrame: { functionName: string; url: string; lineNumber: number };
+  children?: number[];
 }
 
-/** Starts Chromium's sampling profiler on the page; `stop` answers the 25 functions with the most self time. */
+/**
+ * Starts Chromium's sampling profiler on the page; `stop` answers the 25 functions with the most self time
+ * and the 25 with the most total time (their own and that of what they call) besides the browser's own.
+ */
 async function startProfiler(page: Page): Promise<{ stop(): Promise<string> }> {
   const cdp = await page.context().newCDPSession(page);
   await cdp.send('Profiler.enable');
@@ -262,20 +279,38 @@ async function startProfiler(page: Page): Promise<{ stop(): Promise<string> }> {
   return {
     async stop() {
       const { profile } = await cdp.send('Profiler.stop');
+      // The whole profile, for Chromium's DevTools (Performance panel, "Load profile").
+      writeFileSync(join(ROOT, 'tests/e2e/artifacts/bench-board.cpuprofile'), JSON.stringify(profile));
       const nodes = new Map<number, ProfileNode>(profile.nodes.map((n: ProfileNode) => [n.id, n]));
+      const parent = new Map<number, number>();
+      for (const n of nodes.values()) for (const c of n.children ?? []) parent.set(c, n.id);
+      const keyOf = (f: ProfileNode['callFrame']) =>
+        `${f.functionName || '(anonymous)'}  ${f.url.replace(/^.*\/assets\//, '')}:${f.lineNumber + 1}`;
       const self = new Map<string, number>();
+      const total = new Map<string, number>();
       const deltas = profile.timeDeltas ?? [];
       (profile.samples ?? []).forEach((nodeId: number, i: number) => {
-        const f = nodes.get(nodeId)?.callFrame;
-        if (!f) return;
-        const key = `${f.functionName || '(anonymous)'}  ${f.url.replace(/^.*\/assets\//, '')}:${f.lineNumber + 1}`;
-        self.set(key, (self.get(key) ?? 0) + (deltas[i + 1] ?? 0) / 1000);
+        const node = nodes.get(nodeId);
+        if (!node) return;
+        const dt = (deltas[i + 1] ?? 0) / 1000;
+        self.set(keyOf(node.callFrame), (self.get(keyOf(node.callFrame)) ?? 0) + dt);
+        // Each function on the sample's stack once (recursion counted once).
+        const seen = new Set<string>();
+        for (let id: number | undefined = nodeId; id !== undefined; id = parent.get(id)) {
+          const f = nodes.get(id)?.callFrame;
+          if (!f || !f.url) continue;
+          const key = keyOf(f);
+          if (!seen.has(key)) total.set(key, (total.get(key) ?? 0) + dt);
+          seen.add(key);
+        }
       });
-      const total = [...self.values()].reduce((a, b) => a + b, 0);
-      const top = [...self].sort((a, b) => b[1] - a[1]).slice(0, 25);
+      const all = [...self.values()].reduce((a, b) => a + b, 0);
+      const top = (m: Map<string, number>) => [...m].sort((a, b) => b[1] - a[1]).slice(0, 25);
       return [
-        `Main thread during the drag (sampling profile, ${ms(total)} in all), self time by function:`,
-        ...top.map(([k, v]) => `  ${ms(v).padStart(10)}  ${k}`),
+        `Main thread during the drag (sampling profile, ${ms(all)} in all), self time by function:`,
+        ...top(self).map(([k, v]) => `  ${ms(v).padStart(10)}  ${k}`),
+        `Total time (own and callees') by function of the page's scripts:`,
+        ...top(total).map(([k, v]) => `  ${ms(v).padStart(10)}  ${k}`),
       ].join('\n');
     },
   };
@@ -291,6 +326,24 @@ const CLOCK_STEP_MS = 0.1;
  */
 function frameVerdict(f: FrameFigures): string {
   return f.p95 <= FRAME_TARGET_MS + CLOCK_STEP_MS + 1e-6 ? 'MET' : 'NOT MET';
+}
+
+/** The trace's figures: busy time from one dispatched pointer move to the next, and where it went. */
+function traceLines(t: MainThreadSummary): string[] {
+  const per = busyPerMove(t);
+  const wall = per.map((p) => p.ms).sort((a, b) => a - b);
+  const cpu = per.map((p) => p.cpuMs).sort((a, b) => a - b);
+  const n = Math.max(1, t.moveTimes.length);
+  return [
+    `  traced: ${t.moveTimes.length} pointermove events and ${t.animationFrames} animation-frame callbacks in ` +
+      `${ms(t.spanMs)}; main thread busy ${ms(t.busyMs)} (CPU time ${ms(t.cpuMs)})`,
+    `  main thread from one pointer move to the next: median ${ms2(percentile(wall, 50))}, ` +
+      `p95 ${ms2(percentile(wall, 95))}; CPU time median ${ms2(percentile(cpu, 50))}, p95 ${ms2(percentile(cpu, 95))}`,
+    `  self time per pointer move by trace event, ms (CPU / wall):`,
+    ...t.selfByName
+      .slice(0, 16)
+      .map((e) => `    ${(e.cpuMs / n).toFixed(2).padStart(7)} / ${(e.ms / n).toFixed(2).padStart(7)}  ${e.name}`),
+  ];
 }
 
 const ms2 = (v: number) => `${v.toFixed(2)} ms`;
@@ -360,9 +413,11 @@ async function main() {
         `an idle page: ${ms2(frames.idleP95)}) ${frameVerdict(frames)}`,
       `  median ${ms2(frames.p50)}, worst ${ms(frames.max)}; dropped frames (over 25 ms): ` +
         `${frames.over} of ${frames.frames} (${((100 * frames.over) / frames.frames).toFixed(1)} %)`,
-      `  main thread per pointer move (busy between one move and the next; ${frames.busy.length} moves): ` +
-        `median ${ms2(percentile(frames.busy, 50))}, p95 ${ms2(percentile(frames.busy, 95))}; ` +
-        `of it script: median ${ms2(percentile(frames.script, 50))}, p95 ${ms2(percentile(frames.script, 95))}`,
+      `  main thread: busy ${ms(frames.taskMs)} of the drag's ${ms(frames.dragMs)} ` +
+        `(${((100 * frames.taskMs) / frames.dragMs).toFixed(0)} %; of it script ${ms(frames.scriptMs)}); ` +
+        `per pointer move (${frames.moves} moves, one every ${ms2(frames.dragMs / frames.moves)}): ` +
+        `${ms2(frames.taskMs / frames.moves)}, of it script ${ms2(frames.scriptMs / frames.moves)}`,
+      ...(frames.trace ? traceLines(frames.trace) : []),
       `  pivot moved: ${frames.moved ? 'yes' : 'NO'}; readout ${DRAG.readout} changed: ${frames.readoutChanged ? 'yes' : 'NO'}`,
       `Board route JavaScript (every script fetched to open the board, plots and worker included), gzip -9 from dist/:`,
       `  total ${kb(bundle.totalGzipKb)} gzip (${kb(bundle.totalRawKb)} raw) (target <= ${BUNDLE_TARGET_KB} KB) ` +
