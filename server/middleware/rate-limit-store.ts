@@ -1,7 +1,19 @@
+import { createHash } from 'node:crypto';
 import type { ClientRateLimitInfo, IncrementResponse, Options, Store } from 'express-rate-limit';
 import type { RateLimiterStoreAbstract } from 'rate-limiter-flexible';
 import { databaseRateCounter } from '../database';
 import { boundDatabase } from '../models';
+
+/** Longest key stored as it is (characters); the table's key column holds 255 with the limiter's name before it. */
+const KEY_MAX = 160;
+
+/**
+ * A key as stored: as it is when short, else its SHA-256 (hex). Keys carry what a request names (an e-mail
+ * address before it is validated, which may be any length), and a key too long for the column must count, not fail.
+ */
+export function storedKey(key: string): string {
+  return key.length <= KEY_MAX ? key : `sha256:${createHash('sha256').update(key).digest('hex')}`;
+}
 
 /**
  * express-rate-limit's counting done by rate-limiter-flexible in the database (table rate_limits), so the
@@ -38,23 +50,23 @@ export class DatabaseRateStore implements Store {
   }
 
   async get(key: string): Promise<ClientRateLimitInfo | undefined> {
-    const res = await this.store.get(key);
+    const res = await this.store.get(storedKey(key));
     if (!res) return undefined;
     return { totalHits: res.consumedPoints, resetTime: new Date(Date.now() + res.msBeforeNext) };
   }
 
   async increment(key: string): Promise<IncrementResponse> {
     // penalty adds a point without refusing: express-rate-limit compares the total with its limit itself.
-    const res = await this.store.penalty(key, 1);
+    const res = await this.store.penalty(storedKey(key), 1);
     return { totalHits: res.consumedPoints, resetTime: new Date(Date.now() + res.msBeforeNext) };
   }
 
   async decrement(key: string): Promise<void> {
     // Only within the window: a point given back after it ended would start the next window below zero.
-    if (await this.store.get(key)) await this.store.reward(key, 1);
+    if (await this.store.get(storedKey(key))) await this.store.reward(storedKey(key), 1);
   }
 
   async resetKey(key: string): Promise<void> {
-    await this.store.delete(key);
+    await this.store.delete(storedKey(key));
   }
 }

@@ -38,4 +38,14 @@ describe('share mails per recipient', () => {
     const other = await third.post(`/api/sketches/${id}/share`).send({ mode: 'link', email: 'quiet@example.test' });
     expect(other.status).toBe(200);
   });
+
+  it('counts an address longer than the counters can store as it is and still names the problem (400)', async () => {
+    // The recipient's count is taken before the body is checked; the key column holds 255 characters.
+    const sender = await newMember(limited.app, 'long');
+    const id = await ownSketch(sender);
+    const long = `${'a'.repeat(300)}@example.test`;
+    const res = await sender.post(`/api/sketches/${id}/share`).send({ mode: 'link', email: long });
+    expect(res.status).toBe(400);
+    expect(JSON.stringify(res.body)).toMatch(/email/i);
+  });
 });
