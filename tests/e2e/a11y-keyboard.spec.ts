@@ -2,7 +2,7 @@
  * The keyboard alone: every control below is reached with Tab and worked with keys (page.keyboard only,
  * no clicks), its effect checked on the page, with a visible focus ring on the way.
  */
-import { test, expect } from './fixtures';
+import { test, expect, inputOf } from './fixtures';
 import type { Locator, Page } from '@playwright/test';
 import { starters } from '../../shared/kinematics';
 import { $, boardReady } from './board';
@@ -113,4 +113,115 @@ test('the travel, roll and steer sliders from the keyboard', async ({ page }) =>
   await page.keyboard.press('End');
   await expect($(page, 'slider-steer-value')).toHaveText('+60.0 mm rack');
   await expect($(page, 'readout-position')).toContainText('+60.0 mm rack');
+});
+
+/** Presses a key up to MAX_TABS times until `target` has the focus; fails if it never does. */
+async function pressTo(page: Page, key: string, target: Locator): Promise<void> {
+  for (let i = 0; i < MAX_TABS; i++) {
+    if (await target.evaluate((el) => el === document.activeElement).catch(() => false)) return;
+    await page.keyboard.press(key);
+  }
+  throw new Error(`${MAX_TABS} presses of ${key} did not reach ${target}`);
+}
+
+/** The open dialog layer (Quasar's role="dialog" element) that holds `inside`. */
+const dialogHolding = (page: Page, inside: Locator) => page.getByRole('dialog').filter({ has: inside });
+
+/** Stops allowed for one round of Tab through a dialog: the largest dialog here has about twenty. */
+const MAX_DIALOG_STOPS = 40;
+
+/**
+ * Tab (or Shift+Tab) moves the focus through the dialog and, after its last stop, back to where it started,
+ * never outside it; the focus ring shows on each stop.
+ */
+async function expectTabCycle(page: Page, dialog: Locator, key: 'Tab' | 'Shift+Tab', minStops: number): Promise<void> {
+  const focused = dialog.locator(':focus');
+  await expect(focused).toHaveCount(1);
+  const start = await focused.evaluate((el) => {
+    el.setAttribute('data-focus-start', '');
+    return el.outerHTML.slice(0, 120);
+  });
+  const startLocator = page.locator('[data-focus-start]');
+  let stops = 0;
+  try {
+    for (;;) {
+      await page.keyboard.press(key);
+      stops++;
+      await expect(focused, `after ${stops} presses of ${key} from ${start} the focus is in the dialog`).toHaveCount(1);
+      if (await startLocator.evaluate((el) => el === document.activeElement)) break;
+      expect(stops, `${key} comes back to ${start}`).toBeLessThan(MAX_DIALOG_STOPS);
+    }
+  } finally {
+    await startLocator.evaluate((el) => el.removeAttribute('data-focus-start'));
+  }
+  expect(stops, `${key} steps through the dialog's controls`).toBeGreaterThanOrEqual(minStops);
+}
+
+/**
+ * An open dialog from the keyboard: the focus is on `first` (its first field or main control), Tab and
+ * Shift+Tab go round inside it, Escape closes it and the focus goes back to `opener`.
+ */
+async function expectDialogKeyboard(
+  page: Page,
+  dialog: Locator,
+  first: Locator,
+  opener: Locator,
+  minStops = 2,
+): Promise<void> {
+  await expect(dialog).toBeVisible();
+  await expect(first).toBeFocused();
+  await expectFocusRing(page);
+  await expectTabCycle(page, dialog, 'Tab', minStops);
+  await expectTabCycle(page, dialog, 'Shift+Tab', minStops);
+  await page.keyboard.press('Escape');
+  await expect(dialog).toBeHidden();
+  await expect(opener).toBeFocused();
+}
+
+/** Opens the menu of the focused button with Enter and waits until the menu has the focus (once it has faded in). */
+async function openMenu(page: Page): Promise<void> {
+  await page.keyboard.press('Enter');
+  // Quasar's menu element, around the list of items (role="menu").
+  await expect(page.locator('.q-menu:focus-within')).toHaveCount(1);
+}
+
+/** Opens the menu of the focused button, walks to `item` with the arrow keys and picks it with Enter. */
+async function menuPick(page: Page, item: Locator): Promise<void> {
+  await openMenu(page);
+  await pressTo(page, 'ArrowDown', item);
+  await expectFocusRing(page);
+  await page.keyboard.press('Enter');
+}
+
+test('a dialog from the board’s menu: the share dialog takes the focus, keeps it, and gives it back', async ({
+  page,
+}) => {
+  await page.goto('/sketches/new?starter=four-link-lateral-rod');
+  await expect(page).toHaveURL(/\/sketches\/\d+$/);
+  await boardReady(page);
+  const menu = $(page, 'board-menu');
+  await tabTo(page, menu);
+
+  // The menu: arrow keys move through its items; Escape closes it and the focus is back on its button.
+  await openMenu(page);
+  const share = $(page, 'open-share');
+  await pressTo(page, 'ArrowDown', share);
+  await page.keyboard.press('Escape');
+  await expect(share).toBeHidden();
+  await expect(menu).toBeFocused();
+
+  await menuPick(page, share);
+  const dialog = dialogHolding(page, $(page, 'share-dialog'));
+  await expectDialogKeyboard(page, dialog, $(page, 'share-create'), menu);
+
+  await menuPick(page, $(page, 'caution-menu-item'));
+  await expectDialogKeyboard(page, dialogHolding(page, $(page, 'caution-dialog')), $(page, 'caution-close'), menu, 1);
+});
+
+test('the new-sketch dialog from the keyboard: focus on its first field, kept inside, given back', async ({ page }) => {
+  const opener = $(page, 'new-sketch').first();
+  await tabTo(page, opener);
+  await page.keyboard.press('Enter');
+  const dialog = dialogHolding(page, $(page, 'starter-dialog'));
+  await expectDialogKeyboard(page, dialog, inputOf(page, 'starter-layout'), opener);
 });
