@@ -2,7 +2,8 @@
  * The board's keys: Ctrl+Z undo, Ctrl+Shift+Z or Ctrl+Y redo (⌘ on a Mac), arrows nudge the
  * selected pivots in the active view (Shift: ten times), Delete removes the selected member,
  * Escape cancels a drag or clears the selection, F fits the active view.
- * Keys typed into a field belong to the field (its own undo included).
+ * Keys typed into a field belong to the field (its own undo included), and keys pressed in a dialog or a menu
+ * over the board belong to it (an arrow there moves through its items, not the selected pivot).
  */
 import type { Ref } from 'vue';
 import { useEventListener } from '@vueuse/core';
@@ -21,6 +22,12 @@ function typingInto(target: EventTarget | null): boolean {
   return el.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(el.tagName);
 }
 
+/** Quasar's dialogs carry role="dialog"; its menus the class q-menu (their role is their list's). */
+function inPopup(target: EventTarget | null): boolean {
+  const el = target as HTMLElement | null;
+  return typeof el?.closest === 'function' && el.closest('[role="dialog"], .q-menu') !== null;
+}
+
 const ARROWS: Record<string, [number, number]> = {
   ArrowLeft: [-1, 0],
   ArrowRight: [1, 0],
@@ -32,7 +39,7 @@ export function useKeyboardBoard(activeView: Ref<ViewKind>, handlers: BoardKeyHa
   const board = useBoardStore();
 
   function onKey(e: KeyboardEvent) {
-    if (typingInto(e.target) || e.altKey) return;
+    if (typingInto(e.target) || inPopup(e.target) || e.altKey) return;
     const mod = e.ctrlKey || e.metaKey;
     const key = e.key.length === 1 ? e.key.toLowerCase() : e.key;
     if (mod && key === 'z') {

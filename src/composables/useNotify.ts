@@ -39,7 +39,10 @@ export function useNotify() {
     });
   }
 
-  /** Asks first; on OK runs `action` through `attempt`. The OK button says what it does (`ok`). */
+  /**
+   * Asks first; on OK runs `action` through `attempt`. The OK button says what it does (`ok`). A red one
+   * (the default) cannot be taken back, so the focus starts on Cancel: Enter alone must not do it.
+   */
   function confirm(
     ask: { title: string; message: string; ok: string; color?: 'negative' | 'primary' },
     action: () => Promise<unknown>,
@@ -49,6 +52,7 @@ export function useNotify() {
       message: ask.message,
       cancel: true,
       ok: { label: ask.ok, color: ask.color ?? 'negative', flat: true },
+      focus: (ask.color ?? 'negative') === 'negative' ? 'cancel' : 'ok',
     }).onOk(() => void attempt(action));
   }
 

@@ -2,7 +2,7 @@
  * axe-core on every screen, in the light and the dark theme: no serious or critical finding.
  * The screens are listed in a11yScreens.ts.
  */
-import { test, expect, type Browser, type BrowserContext, type Page } from '@playwright/test';
+import { test, expect, type APIRequestContext, type Browser, type BrowserContext, type Page } from '@playwright/test';
 import { starters } from '../../shared/kinematics';
 import { DARK_KEY } from '../../src/stores/prefs';
 import { csrf } from './api';
@@ -27,10 +27,54 @@ async function signedInState(browser: Browser, baseURL: string | undefined, who:
   return { context, page, state: await context.storageState() };
 }
 
+/** The demo class (by its name) and its assignment (the one whose title starts "Lab 3"), as the instructor sees them. */
+async function demoClass(request: APIRequestContext): Promise<{ classId: number; assignmentId: number }> {
+  const list = await request.get('/api/classes');
+  expect(list.status()).toBe(200);
+  const { items } = (await list.json()) as { items: { id: number; name: string }[] };
+  const klass = items.find((c) => c.name === 'Chassis Design 210');
+  expect(klass, 'the demo class').toBeTruthy();
+  const detail = await request.get(`/api/classes/${klass!.id}`);
+  const { assignments } = (await detail.json()) as { assignments: { id: number; title: string }[] };
+  const lab = assignments.find((a) => a.title.startsWith('Lab 3'));
+  expect(lab, 'the demo assignment').toBeTruthy();
+  return { classId: klass!.id, assignmentId: lab!.id };
+}
+
+/** Invites a new address to the class and reads the invitation's path from its mail in the outbox (as the admin). */
+async function invitation(instructor: APIRequestContext, admin: APIRequestContext, classId: number): Promise<string> {
+  const email = `lee.fennick.${Date.now()}@example.test`;
+  const sent = await instructor.post(`/api/classes/${classId}/invites`, {
+    data: { emails: email },
+    headers: { 'X-CSRF-Token': await csrf(instructor) },
+  });
+  expect(sent.status()).toBe(200);
+  let path: string | undefined;
+  await expect
+    .poll(async () => {
+      const outbox = await admin.get('/api/admin/outbox');
+      const { items } = (await outbox.json()) as { items: { to: string; text: string }[] };
+      path = items.find((m) => m.to.includes(email))?.text.match(/\/invites\/[A-Za-z0-9_%-]+/)?.[0];
+      return path;
+    }, 'the invitation mail')
+    .toBeTruthy();
+  return path!;
+}
+
 test.beforeAll(async ({ browser, baseURL }) => {
+  // Five sign-ins, each hashing a password on purpose slowly, and the sketches made: on a busy machine, minutes.
+  test.setTimeout(300_000);
   const admin = await signedInState(browser, baseURL, 'admin');
   signedIn.admin = admin.state;
+  const instructor = await signedInState(browser, baseURL, 'instructor');
+  signedIn.instructor = instructor.state;
+  const classwork = await demoClass(instructor.page.request);
+  const invitePath = await invitation(instructor.page.request, admin.page.request, classwork.classId);
+  await instructor.context.close();
   await admin.context.close();
+  const student = await signedInState(browser, baseURL, 'student');
+  signedIn.student = student.state;
+  await student.context.close();
 
   const maker = await signedInState(browser, baseURL, 'maker');
   signedIn.maker = maker.state;
@@ -47,7 +91,7 @@ test.beforeAll(async ({ browser, baseURL }) => {
     headers,
   });
   expect(share.status()).toBe(200);
-  made = { sketch, sharedToken: ((await share.json()) as { shareToken: string }).shareToken };
+  made = { sketch, sharedToken: ((await share.json()) as { shareToken: string }).shareToken, ...classwork, invitePath };
   await maker.context.close();
 });
 

@@ -5,15 +5,24 @@
 import { expect, type Page } from '@playwright/test';
 import { $ } from './board';
 
-/** Who is signed in: nobody, the demo maker (a member) or the demo admin. */
-export type Viewer = 'guest' | 'maker' | 'admin';
+/** Who is signed in: nobody, the demo maker (a member), the demo admin, the demo instructor or a demo student. */
+export type Viewer = 'guest' | 'maker' | 'admin' | 'instructor' | 'student';
 
-/** What the spec makes once before the screens are visited: sketches of the maker's and a read-only link. */
+/**
+ * What the spec makes or looks up once before the screens are visited: sketches of the maker's, a read-only link,
+ * the demo class with its assignment, and an invitation to it.
+ */
 export interface Made {
   /** a sketch of the maker's for each starter the screens show, by layout */
   sketch: Record<BoardLayout, number>;
   /** the read-only link's token of the four-link sketch */
   sharedToken: string;
+  /** the demo class (the instructor teaches it, the demo student is in it) */
+  classId: number;
+  /** the demo class's assignment ("Lab 3", handed in by the demo student) */
+  assignmentId: number;
+  /** the path of an invitation to the demo class, from its mail */
+  invitePath: string;
 }
 
 /** One layout of each family the board draws differently: solid axles, wishbones, trailing arms and leaf springs. */
@@ -182,6 +191,57 @@ export const SCREENS: Screen[] = [
     open: async (page) => {
       await page.goto('/admin/outbox');
       await expect(page.getByTestId('outbox-table')).toBeVisible();
+    },
+  },
+  {
+    name: 'classes',
+    as: 'instructor',
+    open: async (page) => {
+      await page.goto('/classes');
+      await expect($(page, 'classes-teaching')).toContainText('Chassis Design 210');
+    },
+  },
+  {
+    name: 'classes of a student',
+    as: 'student',
+    open: async (page) => {
+      await page.goto('/classes');
+      await expect($(page, 'classes-joined')).toContainText('Chassis Design 210');
+    },
+  },
+  {
+    name: 'a class',
+    as: 'instructor',
+    open: async (page, made) => {
+      await page.goto(`/classes/${made.classId}`);
+      await expect($(page, 'join-code-shown')).toBeVisible();
+      await expect($(page, 'assignments')).toContainText('Lab 3');
+    },
+  },
+  {
+    name: 'an assignment, as its instructor',
+    as: 'instructor',
+    open: async (page, made) => {
+      await page.goto(`/assignments/${made.assignmentId}`);
+      await expect($(page, 'hand-ins-table').locator('tbody tr').first()).toBeVisible();
+    },
+  },
+  {
+    name: 'an assignment, as a student',
+    as: 'student',
+    open: async (page, made) => {
+      await page.goto(`/assignments/${made.assignmentId}`);
+      await expect($(page, 'my-copy')).toBeVisible();
+      await expect($(page, 'my-feedback')).toBeVisible();
+    },
+  },
+  {
+    name: 'invitation, signed out',
+    as: 'guest',
+    open: async (page, made) => {
+      await page.goto(made.invitePath);
+      await expect($(page, 'invite-class')).toHaveText('Chassis Design 210');
+      await expect($(page, 'invite-signin')).toBeVisible();
     },
   },
   {

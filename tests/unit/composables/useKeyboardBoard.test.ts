@@ -42,4 +42,35 @@ describe('useKeyboardBoard', () => {
     expect(undo).toHaveBeenCalledTimes(1);
     expect(fitted).toEqual(['rear']);
   });
+
+  it('leaves keys pressed in a dialog or a menu over the board to them', () => {
+    const pinia = createPinia();
+    setActivePinia(pinia);
+    const board = useBoardStore();
+    const undo = vi.spyOn(board, 'undo').mockImplementation(() => undefined as never);
+    const fitted: ViewKind[] = [];
+    const Board = defineComponent(() => {
+      useKeyboardBoard(ref<ViewKind>('side'), { fit: (v) => fitted.push(v) });
+      return () => h('div');
+    });
+    const wrapper = mount(Board, { global: { plugins: [pinia] } });
+    document.body.innerHTML =
+      '<div role="dialog" aria-modal="true"><button id="in-dialog">Close</button></div>' +
+      '<div class="q-menu"><div role="menuitem" tabindex="0" id="in-menu">Share</div></div>';
+    const from = (id: string, init: KeyboardEventInit) =>
+      document.getElementById(id)!.dispatchEvent(new KeyboardEvent('keydown', { ...init, bubbles: true }));
+
+    from('in-dialog', { key: 'z', ctrlKey: true });
+    from('in-dialog', { key: 'f' });
+    from('in-menu', { key: 'f' });
+    expect(undo).not.toHaveBeenCalled();
+    expect(fitted).toEqual([]);
+    // The same keys from the page itself still reach the board.
+    press({ key: 'z', ctrlKey: true });
+    press({ key: 'f' });
+    expect(undo).toHaveBeenCalledTimes(1);
+    expect(fitted).toEqual(['side']);
+    wrapper.unmount();
+    document.body.innerHTML = '';
+  });
 });
