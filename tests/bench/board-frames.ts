@@ -319,13 +319,16 @@ async function startProfiler(page: Page): Promise<{ stop(): Promise<string> }> {
 /** ms: the page's clock steps (Chromium coarsens performance.now to 0.1 ms where the page is not cross-origin isolated). */
 const CLOCK_STEP_MS = 0.1;
 
+/** The highest reading of one frame interval on the page's clock (ms): the interval rounded up to the step, plus one step of jitter. */
+const ONE_INTERVAL_READ_MS = Math.ceil(FRAME_TARGET_MS / CLOCK_STEP_MS) * CLOCK_STEP_MS + CLOCK_STEP_MS;
+
 /**
  * The verdict on the p95. One frame interval is 16.67 ms, which that clock shows as 16.6, 16.7
  * or 16.8 ms (an idle page shows the same), so the target is read to within one clock step.
  * A slow frame shows as a gap of two intervals (33.3 ms), far outside that.
  */
 function frameVerdict(f: FrameFigures): string {
-  return f.p95 <= FRAME_TARGET_MS + CLOCK_STEP_MS + 1e-6 ? 'MET' : 'NOT MET';
+  return f.p95 <= ONE_INTERVAL_READ_MS + 1e-6 ? 'MET' : 'NOT MET';
 }
 
 /** The trace's figures: busy time from one dispatched pointer move to the next, and where it went. */
@@ -409,10 +412,12 @@ async function main() {
       `Board frame time while dragging ${DRAG_PIVOT} of the ${DRAG.name} starter ` +
         `(${DRAG_STEPS} pointer moves, ${frames.frames} frames sampled)` +
         `${withoutSweep ? ' WITHOUT the sweep (diagnostic)' : ''}:`,
-      `  p95 ${ms2(frames.p95)} (target <= ${ms(FRAME_TARGET_MS)}, read to the clock's ${CLOCK_STEP_MS} ms step; ` +
+      `  p95 ${ms2(frames.p95)} (target: one frame, ${ms(FRAME_TARGET_MS)}, which the page's ${CLOCK_STEP_MS} ms clock ` +
+        `reads as up to ${ms2(ONE_INTERVAL_READ_MS)}; ` +
         `an idle page: ${ms2(frames.idleP95)}) ${frameVerdict(frames)}`,
       `  median ${ms2(frames.p50)}, worst ${ms(frames.max)}; dropped frames (over 25 ms): ` +
-        `${frames.over} of ${frames.frames} (${((100 * frames.over) / frames.frames).toFixed(1)} %)`,
+        `${frames.over} of ${frames.frames} (${((100 * frames.over) / frames.frames).toFixed(1)} %; target under 1 %) ` +
+        (frames.over / frames.frames < 0.01 ? 'MET' : 'NOT MET'),
       `  main thread: busy ${ms(frames.taskMs)} of the drag's ${ms(frames.dragMs)} ` +
         `(${((100 * frames.taskMs) / frames.dragMs).toFixed(0)} %; of it script ${ms(frames.scriptMs)}); ` +
         `per pointer move (${frames.moves} moves, one every ${ms2(frames.dragMs / frames.moves)}): ` +
