@@ -1,12 +1,12 @@
 import { randomBytes } from 'node:crypto';
 import { Op, fn, col, type Transaction, type WhereOptions } from 'sequelize';
-import { caseInsensitiveContains, ownLiveSketch } from '../database';
+import { caseInsensitiveContains, ownLiveSketch, type LiveSketchRecord } from '../database';
 import { checkSketch, type Sketch as SketchDocument } from '../../shared/schema/sketch';
 import { downloadBaseName } from '../../shared/downloadName';
 import { ShareRecipient, Shop, Sketch, SketchRevision, User, type PublicUser } from '../models';
 import type { SheetSource } from './buildSheetPdf/document';
 import { badRequest, conflict, notFound } from '../middleware/http-error';
-import type { ListQuery, ShareBody, ShareMode } from '../../shared/schema/sketchRequests';
+import type { ListQuery, ShareBody } from '../../shared/schema/sketchRequests';
 import type {
   Page,
   RevisionDetail,
@@ -25,21 +25,8 @@ const SHARE_TOKEN_BYTES = 24;
 
 const withOwner = { model: User, as: 'owner', attributes: ['id', 'name'] };
 
-/** What a sketch's summary and detail show: a Sketch, or the row readOwnSketch reads. */
-interface SketchFields {
-  id: number;
-  ownerId: number;
-  name: string;
-  layout: string;
-  document: string;
-  version: number;
-  share: ShareMode;
-  shareToken: string | null;
-  deletedAt: Date | null;
-  createdAt: Date;
-  updatedAt: Date;
-  owner?: { name: string };
-}
+/** What a sketch's summary and detail show: a Sketch, or the row readOwnSketch reads (a live one, or any). */
+type SketchFields = Omit<LiveSketchRecord, 'deletedAt'> & { deletedAt: Date | null; owner?: { name: string } };
 
 function summaryOf(row: SketchFields, viewer: PublicUser | null): SketchSummary {
   return {
