@@ -155,11 +155,22 @@ describe('useNotify', () => {
       message: 'The link stops working.',
       cancel: true,
       ok: { label: 'Withdraw', color: 'negative', flat: true },
+      // It cannot be taken back: Enter alone must not do it.
+      focus: 'cancel',
     });
     expect(action).not.toHaveBeenCalled();
     ok!();
     await nextTick();
     expect(action).toHaveBeenCalledTimes(1);
+  });
+
+  it('starts a question on OK only when OK is not a red, final one', () => {
+    const { notify, $q } = run(() => ({ notify: useNotify(), $q: useQuasar() }));
+    const asked = vi.spyOn($q, 'dialog').mockImplementation((() => ({ onOk: () => undefined })) as never);
+    notify.confirm({ title: 'Hand in your copy?', message: 'It is frozen.', ok: 'Hand in', color: 'primary' }, () =>
+      Promise.resolve(),
+    );
+    expect(asked).toHaveBeenCalledWith(expect.objectContaining({ focus: 'ok' }));
   });
 
   it('offers Undo on a notice, and tells a failed undo', async () => {
