@@ -8,11 +8,14 @@ import { boundDatabase } from '../models';
 const KEY_MAX = 160;
 
 /**
- * A key as stored: as it is when short, else its SHA-256 (hex). Keys carry what a request names (an e-mail
- * address before it is validated, which may be any length), and a key too long for the column must count, not fail.
+ * A key as stored: as it is when short and of printable ASCII, else its SHA-256 (hex). Keys carry what a request
+ * names (an e-mail address before it is validated: any length, any characters), and a key the column cannot hold
+ * (too long, or a NUL, which PostgreSQL's text refuses) must count, not fail.
  */
 export function storedKey(key: string): string {
-  return key.length <= KEY_MAX ? key : `sha256:${createHash('sha256').update(key).digest('hex')}`;
+  return key.length <= KEY_MAX && /^[\x20-\x7e]*$/.test(key)
+    ? key
+    : `sha256:${createHash('sha256').update(key).digest('hex')}`;
 }
 
 /**

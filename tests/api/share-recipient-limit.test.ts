@@ -39,7 +39,7 @@ describe('share mails per recipient', () => {
     expect(other.status).toBe(200);
   });
 
-  it('counts an address longer than the counters can store as it is and still names the problem (400)', async () => {
+  it('counts an address the counters cannot store as it is (too long, a NUL) and still names the problem (400)', async () => {
     // The recipient's count is taken before the body is checked; the key column holds 255 characters.
     const sender = await newMember(limited.app, 'long');
     const id = await ownSketch(sender);
@@ -47,5 +47,9 @@ describe('share mails per recipient', () => {
     const res = await sender.post(`/api/sketches/${id}/share`).send({ mode: 'link', email: long });
     expect(res.status).toBe(400);
     expect(JSON.stringify(res.body)).toMatch(/email/i);
+    // A NUL, which PostgreSQL's text cannot hold, is counted too and refused by name.
+    const nul = await sender.post(`/api/sketches/${id}/share`).send({ mode: 'link', email: 'a\u0000@example.test' });
+    expect(nul.status).toBe(400);
+    expect(JSON.stringify(nul.body)).toMatch(/email/i);
   });
 });
