@@ -13,11 +13,14 @@ export const BUSY_TIMEOUT_MS = 10_000;
 /** The key of the connection that serves reads outside transactions (readsOnTheirOwnConnection). */
 const READS_KEY = 'arcwright-reads-connection';
 
-/** Statements every SQLite connection runs before its first query. */
+/**
+ * Statements every SQLite connection runs before its first query. The busy timeout comes first: switching a new
+ * file to WAL takes its lock, and two instances opening one new file at once must wait for each other, not fail.
+ */
 const CONNECTION_PRAGMAS = [
+  `PRAGMA busy_timeout = ${BUSY_TIMEOUT_MS}`,
   'PRAGMA journal_mode = WAL',
   'PRAGMA foreign_keys = ON',
-  `PRAGMA busy_timeout = ${BUSY_TIMEOUT_MS}`,
   'PRAGMA synchronous = NORMAL',
 ];
 
@@ -28,6 +31,18 @@ interface RawSqliteConnection {
 
 function runOn(connection: RawSqliteConnection, sql: string): Promise<void> {
   return new Promise((resolve, reject) => connection.run(sql, (err) => (err ? reject(err) : resolve())));
+}
+
+/** Tries a pragma again while the file is busy: SQLite answers a switch to WAL with SQLITE_BUSY at once, without waiting. */
+async function pragmaOn(connection: RawSqliteConnection, sql: string, attempts = 100): Promise<void> {
+  for (let i = 1; ; i++) {
+    try {
+      return await runOn(connection, sql);
+    } catch (err) {
+      if ((err as { code?: string }).code !== 'SQLITE_BUSY' || i >= attempts) throw err;
+      await new Promise((r) => setTimeout(r, 20));
+    }
+  }
 }
 
 /**
@@ -53,7 +68,7 @@ function applyPragmasOnEveryConnection(sequelize: Sequelize): void {
     if (!ready) {
       const forReads = options?.uuid === READS_KEY;
       ready = (async () => {
-        for (const sql of CONNECTION_PRAGMAS) await runOn(connection, sql);
+        for (const sql of CONNECTION_PRAGMAS) await pragmaOn(connection, sql);
         if (forReads) await runOn(connection, 'PRAGMA query_only = ON');
         else connection.serialize();
       })();
